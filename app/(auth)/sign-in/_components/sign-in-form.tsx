@@ -1,0 +1,41 @@
+'use client';
+
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useRouter } from 'next/navigation';
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import { TextField } from '@/app/_components/text-field';
+import { signInSchema, type SignInInput } from '@/lib/auth/schema';
+import { signInAction } from '../actions';
+
+export function SignInForm({ next }: { next: string }) {
+  const router = useRouter();
+  const [formError, setFormError] = useState<string | null>(null);
+  const { register, handleSubmit, formState } = useForm<SignInInput>({ resolver: zodResolver(signInSchema), mode: 'onTouched' });
+
+  const onSubmit = handleSubmit(async (values) => {
+    setFormError(null);
+    const res = await signInAction(values);
+    if (res.ok) {
+      router.push(next);
+      router.refresh();
+    } else {
+      setFormError(res.formError ?? 'Check the fields below.');
+    }
+  });
+
+  return (
+    <form onSubmit={onSubmit} noValidate className="mt-6 space-y-4">
+      <TextField label="E-mail" type="email" autoComplete="username" error={formState.errors.email?.message} {...register('email')} />
+      <TextField label="Password" type="password" autoComplete="current-password" error={formState.errors.password?.message} {...register('password')} />
+      {formError && (
+        <p data-testid="form-error" role="alert" className="rounded-md bg-copper-50 px-3 py-2 text-sm text-severity-danger">
+          {formError}
+        </p>
+      )}
+      <button type="submit" disabled={formState.isSubmitting} className="w-full rounded-md bg-tide-600 px-4 py-2.5 font-medium text-white hover:bg-tide-700 disabled:opacity-60">
+        {formState.isSubmitting ? 'Signing in…' : 'Sign in'}
+      </button>
+    </form>
+  );
+}

@@ -1,0 +1,24 @@
+import type { Metadata } from 'next';
+import type { ReactNode } from 'react';
+import { ClerkProvider } from '@clerk/nextjs';
+import { clerkEnabled } from '@/lib/env';
+import { plexMono, plexSans } from './fonts';
+import { Providers } from './_components/providers';
+import './globals.css';
+
+export const metadata: Metadata = {
+  title: { default: 'Dutywise', template: '%s · Dutywise' },
+  description: 'Heater duty and compressor power sizing desk for process gas equipment quotes.',
+};
+
+export default function RootLayout({ children }: { children: ReactNode }) {
+  const page = (
+    <html lang="en" className={`${plexSans.variable} ${plexMono.variable}`}>
+      <body className="min-h-screen">
+        <Providers>{children}</Providers>
+      </body>
+    </html>
+  );
+  // Clerk's provider only when Clerk is the identity: the demo and tests never load its hosted script.
+  return clerkEnabled ? <ClerkProvider>{page}</ClerkProvider> : page;
+}

@@ -1,0 +1,57 @@
+#!/usr/bin/env bash
+# `npm run demo`: everything a fresh machine needs to show Dutywise with its invented demo scenario.
+# Installs dependencies when missing, starts PostgreSQL (port 55432), migrates, seeds once, starts the
+# local Stripe and SMTP fakes and the mail worker, builds when sources changed, serves on :3000.
+set -euo pipefail
+cd "$(dirname "${BASH_SOURCE[0]}")/.."
+export NEXT_TELEMETRY_DISABLED=1 NEXT_PUBLIC_CLERK_TELEMETRY_DISABLED=1
+export DATABASE_URL="${DATABASE_URL:-postgres://postgres@127.0.0.1:55432/dutywise}"
+export MAIL_FAKE_INBOX_URL="${MAIL_FAKE_INBOX_URL:-http://127.0.0.1:12026}"
+port="${PORT:-3000}"
+
+if [ ! -f node_modules/.package-lock.json ] || [ package-lock.json -nt node_modules/.package-lock.json ]; then
+  echo "Installing dependencies (npm ci)..."
+  npm ci --no-audit --no-fund
+fi
+
+PG_DATA_DIR="$PWD/.data/pg-demo" PG_PORT=55432 bash db/postgres.sh start
+npx tsx db/migrate.mts
+npx tsx db/seed.mts
+
+pids=()
+cleanup() { for p in "${pids[@]}"; do kill "$p" 2>/dev/null || true; done; wait 2>/dev/null || true; }
+trap cleanup EXIT INT TERM
+
+mkdir -p .data
+STRIPE_FAKE_STATE="$PWD/.data/stripe-fake.json" STRIPE_WEBHOOK_URL="http://localhost:$port/api/webhooks/stripe" \
+  npx tsx mocks/start-fakes.mts > .data/fakes.log 2>&1 &
+pids+=($!)
+
+# Rebuild only when a tracked source is newer than the last build.
+if [ ! -f .next/BUILD_ID ] || [ -n "$(git ls-files -z 2>/dev/null | xargs -0 -I{} find {} -newer .next/BUILD_ID -print -quit 2>/dev/null | head -1)" ]; then
+  echo "Building the app (about a minute)..."
+  npx next build
+fi
+
+if [ -f lib/email/worker.mts ]; then
+  npx tsx lib/email/worker.mts > .data/mail-worker.log 2>&1 &
+  pids+=($!)
+fi
+
+node node_modules/next/dist/bin/next start -p "$port" &
+pids+=($!)
+
+for _ in $(seq 1 60); do curl -fs "http://localhost:$port/api/health" >/dev/null 2>&1 && break; sleep 1; done
+cat <<MSG
+
+  Dutywise is running at http://localhost:$port
+  Health:            http://localhost:$port/api/health
+  Fake mail inbox:   $MAIL_FAKE_INBOX_URL
+  Fake payments:     http://localhost:12111 (test card 4242 4242 4242 4242 succeeds, 4000 0000 0000 0002 is declined)
+
+  Demo sign-ins (password for all: dutywise-demo):
+$(npx tsx -e "import('./lib/auth/demo-users.ts').then(m=>m.demoSignIns.forEach(u=>console.log('    '+u.label.padEnd(32)+u.email)))")
+
+  Press Ctrl-C to stop (PostgreSQL keeps running; stop it with npm run db:stop).
+MSG
+wait "${pids[-1]}"

@@ -1,0 +1,62 @@
+import { sql } from 'drizzle-orm';
+import { bigserial, check, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { accounts } from './accounts';
+import { outboxStatus } from './enums';
+import { users } from './users';
+
+/** Who did what, when. Written in the same transaction as the change it records. */
+export const auditLog = pgTable(
+  'audit_log',
+  {
+    id: bigserial('id', { mode: 'number' }).primaryKey(),
+    at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
+    actorUserId: uuid('actor_user_id').references(() => users.id, { onDelete: 'set null' }),
+    actorRole: text('actor_role'),
+    action: text('action').notNull(),
+    entityType: text('entity_type').notNull(),
+    entityId: text('entity_id').notNull(),
+    accountId: uuid('account_id').references(() => accounts.id, { onDelete: 'set null' }),
+    detail: jsonb('detail'),
+  },
+  (t) => [index('audit_entity_idx').on(t.entityType, t.entityId, t.at.desc()), index('audit_account_idx').on(t.accountId, t.at.desc()), index('audit_at_idx').on(t.at.desc())],
+);
+
+/** Outgoing e-mail queue: rows are claimed with SKIP LOCKED and retried with backoff. */
+export const outbox = pgTable(
+  'outbox',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    template: text('template').notNull(),
+    toAddress: text('to_address').notNull(),
+    subject: text('subject').notNull(),
+    payload: jsonb('payload').notNull(),
+    accountId: uuid('account_id').references(() => accounts.id, { onDelete: 'set null' }),
+    entityType: text('entity_type'),
+    entityId: text('entity_id'),
+    dedupeKey: text('dedupe_key'),
+    status: outboxStatus('status').notNull().default('pending'),
+    attempts: integer('attempts').notNull().default(0),
+    nextAttemptAt: timestamp('next_attempt_at', { withTimezone: true }).notNull().defaultNow(),
+    lockedUntil: timestamp('locked_until', { withTimezone: true }),
+    lastError: text('last_error'),
+    messageId: text('message_id'),
+    sentAt: timestamp('sent_at', { withTimezone: true }),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [
+    index('outbox_due_idx').on(t.nextAttemptAt).where(sql`${t.status} = 'pending'`),
+    index('outbox_entity_idx').on(t.entityType, t.entityId),
+    uniqueIndex('outbox_dedupe_uq').on(t.dedupeKey),
+    check('outbox_attempts_nonneg', sql`${t.attempts} >= 0`),
+  ],
+);
+
+/** Fixed-window counters shared by every app instance. */
+export const rateLimits = pgTable('rate_limits', {
+  key: text('key').primaryKey(),
+  windowStart: timestamp('window_start', { withTimezone: true }).notNull(),
+  count: integer('count').notNull(),
+});
+
+export type AuditEntry = typeof auditLog.$inferSelect;
+export type OutboxRow = typeof outbox.$inferSelect;

@@ -1,0 +1,48 @@
+import { sql } from 'drizzle-orm';
+import { check, index, integer, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { accounts } from './accounts';
+import { quoteStatus } from './enums';
+import { sizings } from './sizings';
+import { users } from './users';
+
+export const quotes = pgTable(
+  'quotes',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    number: text('number').notNull(),
+    accountId: uuid('account_id').notNull().references(() => accounts.id, { onDelete: 'restrict' }),
+    title: text('title').notNull(),
+    status: quoteStatus('status').notNull().default('draft'),
+    notes: text('notes'),
+    createdByUserId: uuid('created_by_user_id').references(() => users.id, { onDelete: 'set null' }),
+    sentAt: timestamp('sent_at', { withTimezone: true }),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [
+    uniqueIndex('quotes_number_uq').on(t.number),
+    index('quotes_account_idx').on(t.accountId, t.createdAt.desc()),
+    index('quotes_status_idx').on(t.status),
+    index('quotes_title_trgm_idx').using('gin', sql`lower(${t.title}) gin_trgm_ops`),
+  ],
+);
+
+export const quoteItems = pgTable(
+  'quote_items',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    quoteId: uuid('quote_id').notNull().references(() => quotes.id, { onDelete: 'cascade' }),
+    sizingId: uuid('sizing_id').notNull().references(() => sizings.id, { onDelete: 'restrict' }),
+    quantity: integer('quantity').notNull().default(1),
+    position: integer('position').notNull().default(0),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [
+    uniqueIndex('quote_items_quote_sizing_uq').on(t.quoteId, t.sizingId),
+    index('quote_items_sizing_idx').on(t.sizingId),
+    check('quote_items_quantity_range', sql`${t.quantity} between 1 and 1000`),
+  ],
+);
+
+export type Quote = typeof quotes.$inferSelect;
+export type QuoteItem = typeof quoteItems.$inferSelect;

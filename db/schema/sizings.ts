@@ -1,0 +1,53 @@
+import { sql } from 'drizzle-orm';
+import { check, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid, type AnyPgColumn } from 'drizzle-orm/pg-core';
+import { accounts } from './accounts';
+import { service } from './enums';
+import { users } from './users';
+
+/**
+ * One saved duty point. `input` is the validated engine request and `result` the engine's answer
+ * at save time; the scalar columns beside them exist so support search and filters use indexes.
+ */
+export const sizings = pgTable(
+  'sizings',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    number: text('number').notNull(),
+    accountId: uuid('account_id').notNull().references(() => accounts.id, { onDelete: 'restrict' }),
+    title: text('title').notNull(),
+    equipmentTag: text('equipment_tag'),
+    notes: text('notes'),
+    service: service('service').notNull(),
+    gasKey: text('gas_key').notNull(),
+    gasLabel: text('gas_label').notNull(),
+    input: jsonb('input').notNull(),
+    result: jsonb('result').notNull(),
+    engineVersion: text('engine_version').notNull(),
+    // Design duty for heaters, shaft power for compressors.
+    headlineKw: doublePrecision('headline_kw').notNull(),
+    massFlowKgPerS: doublePrecision('mass_flow_kg_per_s').notNull(),
+    revision: integer('revision').notNull().default(1),
+    revisedFromId: uuid('revised_from_id').references((): AnyPgColumn => sizings.id, { onDelete: 'set null' }),
+    createdByUserId: uuid('created_by_user_id').references(() => users.id, { onDelete: 'set null' }),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+    searchText: text('search_text').generatedAlwaysAs(
+      sql`lower(coalesce(number, '') || ' ' || coalesce(title, '') || ' ' || coalesce(equipment_tag, '') || ' ' || coalesce(notes, '') || ' ' || coalesce(gas_label, ''))`,
+    ),
+  },
+  (t) => [
+    uniqueIndex('sizings_number_uq').on(t.number),
+    index('sizings_account_created_idx').on(t.accountId, t.createdAt.desc()),
+    index('sizings_created_idx').on(t.createdAt.desc()),
+    index('sizings_tag_lower_idx').on(sql`lower(${t.equipmentTag})`),
+    index('sizings_search_trgm_idx').using('gin', sql`${t.searchText} gin_trgm_ops`),
+    index('sizings_service_gas_idx').on(t.service, t.gasKey),
+    index('sizings_creator_idx').on(t.createdByUserId),
+    check('sizings_headline_finite', sql`${t.headlineKw} >= 0 and ${t.headlineKw} < 'Infinity'::float8`),
+    check('sizings_mass_flow_positive', sql`${t.massFlowKgPerS} > 0 and ${t.massFlowKgPerS} < 'Infinity'::float8`),
+    check('sizings_revision_positive', sql`${t.revision} >= 1`),
+  ],
+);
+
+export type Sizing = typeof sizings.$inferSelect;
+export type NewSizing = typeof sizings.$inferInsert;

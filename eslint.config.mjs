@@ -1,0 +1,24 @@
+import { dirname } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { FlatCompat } from '@eslint/eslintrc';
+
+const compat = new FlatCompat({ baseDirectory: dirname(fileURLToPath(import.meta.url)) });
+
+export default [
+  { ignores: ['.next/**', 'node_modules/**', '.data/**', 'db/migrations/**', 'next-env.d.ts', 'tests/e2e/.results/**'] },
+  ...compat.extends('next/core-web-vitals', 'next/typescript'),
+  {
+    rules: {
+      // Every exit from a module goes through lib/env.ts so configuration is validated once.
+      'no-restricted-properties': ['error', { object: 'process', property: 'env', message: 'Read configuration from lib/env.ts.' }],
+      '@typescript-eslint/no-explicit-any': 'error',
+      '@typescript-eslint/consistent-type-definitions': ['error', 'type'],
+      'no-console': ['error', { allow: ['warn', 'error'] }],
+    },
+  },
+  {
+    // Scripts, fakes and tests run outside Next and read their own process environment.
+    files: ['lib/env.ts', 'db/**', 'mocks/**', 'tests/**', 'drizzle.config.ts', 'next.config.ts'],
+    rules: { 'no-restricted-properties': 'off', 'no-console': 'off' },
+  },
+];

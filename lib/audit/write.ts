@@ -1,0 +1,25 @@
+import 'server-only';
+import type { Tx } from '@/db';
+import { auditLog } from '@/db/schema';
+
+export type AuditInput = {
+  actor: { id: string; role: string } | null;
+  action: string;
+  entityType: string;
+  entityId: string;
+  accountId?: string | null;
+  detail?: Record<string, unknown>;
+};
+
+/** Records an audit entry inside the caller's transaction, so the change and its record commit together. */
+export async function writeAudit(tx: Tx, entry: AuditInput): Promise<void> {
+  await tx.insert(auditLog).values({
+    actorUserId: entry.actor?.id ?? null,
+    actorRole: entry.actor?.role ?? null,
+    action: entry.action,
+    entityType: entry.entityType,
+    entityId: entry.entityId,
+    accountId: entry.accountId ?? null,
+    detail: entry.detail ?? null,
+  });
+}

@@ -1,0 +1,36 @@
+import 'server-only';
+import { auth, clerkClient } from '@clerk/nextjs/server';
+import { db } from '@/db';
+import { users } from '@/db/schema';
+import { userRoles, type UserRole } from '@/db/schema/enums';
+import { writeAudit } from '@/lib/audit/write';
+import { loadUser, type CurrentUser } from './current-user';
+
+/** Role from Clerk public metadata; anything unknown becomes a customer (least privilege). */
+export function roleFromMetadata(meta: unknown): UserRole {
+  const role = (meta as { role?: unknown } | null)?.role;
+  return typeof role === 'string' && (userRoles as readonly string[]).includes(role) ? (role as UserRole) : 'customer';
+}
+
+/** Maps the verified Clerk session to a Dutywise user, creating the row on first sign-in. */
+export async function resolveClerkUser(): Promise<CurrentUser | null> {
+  const { userId } = await auth();
+  if (!userId) return null;
+  const existing = await loadUser({ clerkUserId: userId });
+  if (existing) return existing;
+  const client = await clerkClient();
+  const remote = await client.users.getUser(userId);
+  const email = remote.primaryEmailAddress?.emailAddress ?? remote.emailAddresses[0]?.emailAddress;
+  if (!email) return null;
+  const name = [remote.firstName, remote.lastName].filter(Boolean).join(' ') || email;
+  const role = roleFromMetadata(remote.publicMetadata);
+  await db.transaction(async (tx) => {
+    const [row] = await tx
+      .insert(users)
+      .values({ email, name, role, clerkUserId: userId })
+      .onConflictDoNothing()
+      .returning({ id: users.id });
+    if (row) await writeAudit(tx, { actor: { id: row.id, role }, action: 'user.created', entityType: 'user', entityId: row.id, detail: { via: 'clerk-first-sign-in' } });
+  });
+  return loadUser({ clerkUserId: userId });
+}

@@ -1,0 +1,62 @@
+import path from 'node:path';
+import { defineConfig } from '@playwright/test';
+import { e2eBaseUrl, e2ePorts } from './e2e/ports';
+
+const repoRoot = path.join(__dirname, '..');
+const databaseUrl = process.env.DATABASE_URL ?? 'postgres://postgres@127.0.0.1:55433/dutywise_test';
+
+// The app and fakes run with test hooks on, against the database tests/run.sh prepared.
+const appEnv = {
+  DATABASE_URL: databaseUrl,
+  APP_URL: e2eBaseUrl,
+  NEXT_DIST_DIR: '.next-test',
+  NEXT_TELEMETRY_DISABLED: '1',
+  DUTYWISE_TEST_HOOKS: '1',
+  STRIPE_API_PORT: String(e2ePorts.stripe),
+  SMTP_PORT: String(e2ePorts.smtp),
+  MAIL_FAKE_INBOX_URL: `http://127.0.0.1:${e2ePorts.smtpHttp}`,
+  LOG_LEVEL: 'warn',
+};
+
+export default defineConfig({
+  testDir: './e2e',
+  outputDir: './e2e/.results',
+  fullyParallel: false,
+  workers: 1,
+  retries: 0,
+  timeout: 60_000,
+  expect: { timeout: 10_000 },
+  reporter: [['list']],
+  globalSetup: './e2e/global-setup.ts',
+  use: {
+    baseURL: e2eBaseUrl,
+    trace: 'retain-on-failure',
+    launchOptions: {
+      executablePath: '/usr/bin/chromium',
+      args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    },
+  },
+  webServer: [
+    {
+      command: 'npx tsx mocks/start-fakes.mts',
+      url: `http://127.0.0.1:${e2ePorts.smtpHttp}/health`,
+      cwd: repoRoot,
+      reuseExistingServer: false,
+      timeout: 60_000,
+      env: {
+        STRIPE_FAKE_PORT: String(e2ePorts.stripe),
+        STRIPE_WEBHOOK_URL: `${e2eBaseUrl}/api/webhooks/stripe`,
+        SMTP_FAKE_PORT: String(e2ePorts.smtp),
+        SMTP_FAKE_HTTP_PORT: String(e2ePorts.smtpHttp),
+      },
+    },
+    {
+      command: `node node_modules/next/dist/bin/next start -p ${e2ePorts.app}`,
+      url: `${e2eBaseUrl}/api/health`,
+      cwd: repoRoot,
+      reuseExistingServer: false,
+      timeout: 120_000,
+      env: appEnv,
+    },
+  ],
+});

@@ -1,0 +1,47 @@
+#!/usr/bin/env bash
+# The whole test suite, from a fresh clone: installs what is missing, starts a private PostgreSQL
+# and the local fakes, runs typecheck, lint, unit + integration tests and browser journeys, then
+# stops what it started. Exits non-zero on any failure.
+set -uo pipefail
+cd "$(dirname "${BASH_SOURCE[0]}")/.."
+export NEXT_TELEMETRY_DISABLED=1 NEXT_PUBLIC_CLERK_TELEMETRY_DISABLED=1
+
+
+step() { printf '\n\033[1m== %s\033[0m\n' "$*"; }
+fail=0
+run() { local name="$1"; shift; step "$name"; if "$@"; then echo "-- $name: ok"; else echo "-- $name: FAILED"; fail=1; fi; }
+
+step "dependencies"
+if [ ! -f node_modules/.package-lock.json ] || [ package-lock.json -nt node_modules/.package-lock.json ]; then
+  npm ci --no-audit --no-fund || exit 1
+fi
+
+# A private cluster on its own port, throw-away settings, a fresh database per run.
+export PG_DATA_DIR="$PWD/.data/pg-test" PG_PORT=55433
+bash db/postgres.sh start --throwaway --db postgres || exit 1
+psql -h 127.0.0.1 -p "$PG_PORT" -U postgres -qc 'drop database if exists dutywise_test with (force)' -c 'create database dutywise_test' postgres || exit 1
+export DATABASE_URL="postgres://postgres@127.0.0.1:$PG_PORT/dutywise_test"
+trap 'bash db/postgres.sh stop >/dev/null 2>&1' EXIT
+
+run "migrate" npx tsx db/migrate.mts
+run "typecheck" npx tsc --noEmit
+run "lint" npx eslint . --max-warnings 0
+run "unit and integration tests" npx vitest run --config tests/vitest.config.ts
+
+if [ "${SKIP_E2E:-0}" != 1 ]; then
+  if [ ! -x /usr/bin/chromium ]; then
+    step "installing Debian's chromium for browser tests"
+    if [ "$(id -u)" -eq 0 ]; then
+      apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq chromium >/dev/null || fail=1
+    else
+      echo "chromium is missing; install it with: sudo apt-get install -y chromium"; fail=1
+    fi
+  fi
+  export NEXT_DIST_DIR=.next-test
+  run "build for browser tests" npx next build
+  run "browser journeys" npx playwright test --config tests/playwright.config.ts
+fi
+
+step "summary"
+if [ "$fail" -eq 0 ]; then echo "all test steps passed"; else echo "some test steps FAILED"; fi
+exit "$fail"
