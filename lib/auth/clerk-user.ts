@@ -15,7 +15,11 @@ export function roleFromMetadata(meta: unknown): UserRole {
 /** Maps the verified Clerk session to a Dutywise user, creating the row on first sign-in. */
 export async function resolveClerkUser(): Promise<CurrentUser | null> {
   const { userId } = await auth();
-  if (!userId) return null;
+  return userId ? mapClerkUser(userId) : null;
+}
+
+/** The Dutywise user for a Clerk user id; the first time, the profile is read from Clerk's backend API. */
+export async function mapClerkUser(userId: string): Promise<CurrentUser | null> {
   const existing = await loadUser({ clerkUserId: userId });
   if (existing) return existing;
   const client = await clerkClient();

@@ -1,0 +1,68 @@
+// Seeds the invented demo scenario once. `--reset` empties every table first (test databases only).
+import { eq, sql } from 'drizzle-orm';
+import { db, pool } from '@/db';
+import { accounts, memberships, quotes, sizings, users } from '@/db/schema';
+import type { CurrentUser } from '@/lib/auth/current-user';
+import { DEMO_PASSWORD } from '@/lib/auth/demo-users';
+import { createQuote, setQuoteStatus } from '@/lib/quotes/mutations';
+import { computeForSave, insertSizing } from '@/lib/sizings/save';
+import { hashPassword } from '@/mocks/identity/passwords';
+import { seedAccounts, seedQuotes, seedSizings, seedUsers } from './seed-scenario';
+
+const reset = process.argv.includes('--reset');
+const dbName = new URL(process.env.DATABASE_URL ?? 'postgres://x@h/dutywise').pathname.slice(1);
+
+async function main() {
+  if (reset) {
+    if (!dbName.endsWith('_test')) throw new Error(`--reset refuses to empty '${dbName}': only databases named *_test`);
+    const tables = await db.execute<{ t: string }>(sql`select tablename as t from pg_tables where schemaname = 'public'`);
+    const list = tables.rows.map((r) => `"${r.t}"`).join(', ');
+    if (list) await db.execute(sql.raw(`truncate ${list} restart identity cascade`));
+  }
+  const [marker] = await db.select({ id: users.id }).from(users).where(eq(users.email, 'admin@halvard.example')).limit(1);
+  if (marker) {
+    console.log('demo data already present; nothing to seed');
+    return;
+  }
+  const passwordHash = await hashPassword(DEMO_PASSWORD);
+  const accountIds = new Map<string, string>();
+  const people = new Map<string, CurrentUser>();
+  await db.transaction(async (tx) => {
+    for (const a of seedAccounts) {
+      const { key, ...values } = a;
+      const [row] = await tx.insert(accounts).values(values).returning({ id: accounts.id });
+      accountIds.set(key, row!.id);
+    }
+    for (const u of seedUsers) {
+      const [row] = await tx.insert(users).values({ email: u.email, name: u.name, role: u.role, passwordHash }).returning({ id: users.id });
+      const accountId = u.account ? accountIds.get(u.account)! : null;
+      if (accountId) await tx.insert(memberships).values({ accountId, userId: row!.id });
+      people.set(u.email, { id: row!.id, email: u.email, name: u.name, role: u.role, accountId, unitSystem: u.email.endsWith('oakhollow.example') ? 'us' : 'si' });
+    }
+    await tx.update(users).set({ unitSystem: 'us' }).where(eq(users.email, 'dev.hartigan@oakhollow.example'));
+    for (const s of seedSizings) {
+      const accountId = accountIds.get(s.account)!;
+      await insertSizing(tx, people.get(s.by)!, { accountId, title: s.title, equipmentTag: s.tag, notes: s.notes }, computeForSave(s.input));
+    }
+  });
+  for (const qd of seedQuotes) {
+    const accountId = accountIds.get(qd.account)!;
+    const user = people.get(qd.by)!;
+    const tagged = await db.select({ id: sizings.id, tag: sizings.equipmentTag }).from(sizings).where(eq(sizings.accountId, accountId));
+    const ids = qd.lines.map((l) => tagged.find((t) => t.tag === l.tag)!.id);
+    const { id } = await createQuote(user, { accountId, title: qd.title, notes: qd.notes, sizingIds: ids });
+    for (const l of qd.lines.filter((x) => x.quantity !== 1)) {
+      const sid = tagged.find((t) => t.tag === l.tag)!.id;
+      await db.execute(sql`update quote_items set quantity = ${l.quantity} where quote_id = ${id} and sizing_id = ${sid}`);
+    }
+    if (qd.status !== 'draft') await setQuoteStatus(user, id, qd.status);
+    if (qd.status !== 'draft') await db.update(quotes).set({ sentAt: new Date() }).where(eq(quotes.id, id));
+  }
+  console.log(`seeded ${seedAccounts.length} accounts, ${seedUsers.length} users, ${seedSizings.length} sizings, ${seedQuotes.length} quotes`);
+}
+
+try {
+  await main();
+} finally {
+  await pool.end();
+}

@@ -1,0 +1,86 @@
+import 'server-only';
+import { and, asc, desc, eq, isNull, sql } from 'drizzle-orm';
+import { db } from '@/db';
+import { accounts, invitations, memberships, quotes, subscriptions, users } from '@/db/schema';
+import type { CurrentUser } from '@/lib/auth/current-user';
+import { accountScope, assertAccountAccess, NotFoundError } from '@/lib/auth/guards';
+
+export type AccountSummary = {
+  id: string;
+  name: string;
+  site: string | null;
+  memberCount: number;
+  quoteCount: number;
+  subscriptionStatus: string | null;
+};
+
+/** Accounts the user may see: every account for staff, their own for customers. */
+export async function listAccounts(user: CurrentUser): Promise<AccountSummary[]> {
+  const scope = accountScope(user);
+  return db
+    .select({
+      id: accounts.id,
+      name: accounts.name,
+      site: accounts.site,
+      memberCount: sql<number>`(select count(*)::int from ${memberships} m where m.account_id = ${accounts.id})`,
+      quoteCount: sql<number>`(select count(*)::int from ${quotes} q where q.account_id = ${accounts.id})`,
+      subscriptionStatus: sql<string | null>`(select s.status from ${subscriptions} s where s.account_id = ${accounts.id} order by s.updated_at desc limit 1)`,
+    })
+    .from(accounts)
+    .where(scope ? eq(accounts.id, scope) : undefined)
+    .orderBy(asc(accounts.name))
+    .limit(500);
+}
+
+export type AccountDetail = {
+  id: string;
+  name: string;
+  site: string | null;
+  billingContactName: string | null;
+  billingContactEmail: string | null;
+  barometricPressureKpa: number | null;
+  siteAltitudeM: number | null;
+  members: { id: string; name: string; email: string }[];
+  pendingInvitations: { id: string; email: string; expiresAt: Date }[];
+};
+
+export async function getAccount(user: CurrentUser, accountId: string): Promise<AccountDetail> {
+  assertAccountAccess(user, accountId);
+  const [row] = await db
+    .select({
+      id: accounts.id,
+      name: accounts.name,
+      site: accounts.site,
+      billingContactName: accounts.billingContactName,
+      billingContactEmail: accounts.billingContactEmail,
+      barometricPressureKpa: accounts.barometricPressureKpa,
+      siteAltitudeM: accounts.siteAltitudeM,
+    })
+    .from(accounts)
+    .where(eq(accounts.id, accountId))
+    .limit(1);
+  if (!row) throw new NotFoundError();
+  const members = await db
+    .select({ id: users.id, name: users.name, email: users.email })
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .where(eq(memberships.accountId, accountId))
+    .orderBy(asc(users.name));
+  const pendingInvitations = await db
+    .select({ id: invitations.id, email: invitations.email, expiresAt: invitations.expiresAt })
+    .from(invitations)
+    .where(and(eq(invitations.accountId, accountId), isNull(invitations.acceptedAt), sql`${invitations.expiresAt} > now()`))
+    .orderBy(desc(invitations.createdAt));
+  return { ...row, members, pendingInvitations };
+}
+
+/** Names for pickers (save-to-account, new quote). */
+export async function listAccountOptions(user: CurrentUser): Promise<{ id: string; name: string }[]> {
+  const scope = accountScope(user);
+  return db
+    .select({ id: accounts.id, name: accounts.name })
+    .from(accounts)
+    .where(scope ? eq(accounts.id, scope) : undefined)
+    .orderBy(asc(accounts.name))
+    .limit(1000);
+}

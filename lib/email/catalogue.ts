@@ -1,0 +1,37 @@
+// The e-mails Dutywise sends, their props and subject lines. Bodies are React templates in emails/.
+export type EmailProps = {
+  invitation: { accountName: string; inviterName: string; inviteUrl: string; expiresInDays: number };
+  'quote-sent': { accountName: string; quoteNumber: string; quoteTitle: string; senderName: string; quoteUrl: string; lines: { title: string; tag: string | null; headline: string; quantity: number }[] };
+  'datasheet-issued': { accountName: string; datasheetNumber: string; revision: string; sizingTitle: string; equipmentTag: string | null; datasheetUrl: string };
+  'payment-failed': { accountName: string; billingUrl: string; graceDays: number };
+  'subscription-ending': { accountName: string; periodEnd: string; billingUrl: string };
+};
+
+export type EmailTemplate = keyof EmailProps;
+
+export const emailTemplates = ['invitation', 'quote-sent', 'datasheet-issued', 'payment-failed', 'subscription-ending'] as const satisfies readonly EmailTemplate[];
+
+export function subjectFor<T extends EmailTemplate>(template: T, props: EmailProps[T]): string {
+  switch (template) {
+    case 'invitation': {
+      const p = props as EmailProps['invitation'];
+      return `You are invited to ${p.accountName} on Dutywise`;
+    }
+    case 'quote-sent': {
+      const p = props as EmailProps['quote-sent'];
+      return `Quote ${p.quoteNumber}: ${p.quoteTitle}`;
+    }
+    case 'datasheet-issued': {
+      const p = props as EmailProps['datasheet-issued'];
+      return `Datasheet ${p.datasheetNumber} rev. ${p.revision} issued`;
+    }
+    case 'payment-failed':
+      return 'Dutywise subscription payment failed';
+    case 'subscription-ending': {
+      const p = props as EmailProps['subscription-ending'];
+      return `Your Dutywise subscription ends on ${p.periodEnd}`;
+    }
+    default:
+      throw new Error(`unknown e-mail template ${String(template)}`);
+  }
+}

@@ -1,0 +1,110 @@
+import 'server-only';
+import { and, eq, inArray, sql } from 'drizzle-orm';
+import { db, type Tx } from '@/db';
+import { accounts, quoteItems, quotes, sizings } from '@/db/schema';
+import { ActionError } from '@/lib/actions/define-action';
+import { writeAudit } from '@/lib/audit/write';
+import type { CurrentUser } from '@/lib/auth/current-user';
+import { assertAccountAccess } from '@/lib/auth/guards';
+import { enqueueEmail } from '@/lib/email/enqueue';
+import { env } from '@/lib/env';
+import { nextNumber } from '@/lib/numbering/next-number';
+import { formatHeadline } from '@/lib/sizings/headline';
+import type { QuoteCreateInput } from './schema';
+
+async function lockQuote(tx: Tx, user: CurrentUser, quoteId: string) {
+  const [q] = await tx.select({ id: quotes.id, accountId: quotes.accountId, status: quotes.status, number: quotes.number, title: quotes.title }).from(quotes).where(eq(quotes.id, quoteId)).for('update').limit(1);
+  if (!q) throw new ActionError('That quote does not exist.', 404);
+  assertAccountAccess(user, q.accountId);
+  return q;
+}
+
+/** Sizings must belong to the quote's account: a line can never reach into another customer's work. */
+async function assertSizingsInAccount(tx: Tx, accountId: string, sizingIds: string[]) {
+  if (!sizingIds.length) return;
+  const found = await tx.select({ id: sizings.id }).from(sizings).where(and(inArray(sizings.id, sizingIds), eq(sizings.accountId, accountId)));
+  if (found.length !== new Set(sizingIds).size) throw new ActionError('Every line must be a sizing saved to this quote’s customer account.', 422, { sizingIds: ['Not all sizings belong to this account.'] });
+}
+
+export async function createQuote(user: CurrentUser, input: QuoteCreateInput): Promise<{ id: string; number: string }> {
+  assertAccountAccess(user, input.accountId);
+  return db.transaction(async (tx) => {
+    const [acct] = await tx.select({ id: accounts.id }).from(accounts).where(eq(accounts.id, input.accountId)).limit(1);
+    if (!acct) throw new ActionError('That customer account does not exist.', 404, { accountId: ['Unknown account.'] });
+    await assertSizingsInAccount(tx, input.accountId, input.sizingIds);
+    const number = await nextNumber(tx, 'quote');
+    const [q] = await tx.insert(quotes).values({ number, accountId: input.accountId, title: input.title, notes: input.notes, createdByUserId: user.id }).returning({ id: quotes.id });
+    if (!q) throw new Error('quote insert returned no row');
+    if (input.sizingIds.length) {
+      await tx.insert(quoteItems).values(input.sizingIds.map((sizingId, position) => ({ quoteId: q.id, sizingId, position, quantity: 1 })));
+    }
+    await writeAudit(tx, { actor: user, action: 'quote.created', entityType: 'quote', entityId: q.id, accountId: input.accountId, detail: { number, lines: input.sizingIds.length } });
+    return { id: q.id, number };
+  });
+}
+
+export async function addQuoteItem(user: CurrentUser, quoteId: string, sizingId: string, quantity: number, txIn?: Tx): Promise<void> {
+  const work = async (tx: Tx) => {
+    const q = await lockQuote(tx, user, quoteId);
+    if (q.status !== 'draft') throw new ActionError(`Quote ${q.number} is ${q.status}; only draft quotes take new lines.`, 409);
+    await assertSizingsInAccount(tx, q.accountId, [sizingId]);
+    const [{ pos } = { pos: 0 }] = await tx.select({ pos: sql<number>`coalesce(max(${quoteItems.position}) + 1, 0)::int` }).from(quoteItems).where(eq(quoteItems.quoteId, quoteId));
+    await tx
+      .insert(quoteItems)
+      .values({ quoteId, sizingId, quantity, position: pos })
+      .onConflictDoUpdate({ target: [quoteItems.quoteId, quoteItems.sizingId], set: { quantity } });
+    await writeAudit(tx, { actor: user, action: 'quote.line_added', entityType: 'quote', entityId: quoteId, accountId: q.accountId, detail: { sizingId, quantity } });
+  };
+  if (txIn) await work(txIn);
+  else await db.transaction(work);
+}
+
+export async function removeQuoteItem(user: CurrentUser, quoteId: string, itemId: string): Promise<void> {
+  await db.transaction(async (tx) => {
+    const q = await lockQuote(tx, user, quoteId);
+    if (q.status !== 'draft') throw new ActionError(`Quote ${q.number} is ${q.status}; lines are fixed.`, 409);
+    const res = await tx.delete(quoteItems).where(and(eq(quoteItems.id, itemId), eq(quoteItems.quoteId, quoteId))).returning({ id: quoteItems.id });
+    if (!res[0]) throw new ActionError('That line is not on this quote.', 404);
+    await writeAudit(tx, { actor: user, action: 'quote.line_removed', entityType: 'quote', entityId: quoteId, accountId: q.accountId, detail: { itemId } });
+  });
+}
+
+export async function setQuoteStatus(user: CurrentUser, quoteId: string, status: 'draft' | 'sent' | 'won' | 'lost'): Promise<void> {
+  await db.transaction(async (tx) => {
+    const q = await lockQuote(tx, user, quoteId);
+    await tx.update(quotes).set({ status, updatedAt: new Date() }).where(eq(quotes.id, quoteId));
+    await writeAudit(tx, { actor: user, action: 'quote.status_changed', entityType: 'quote', entityId: quoteId, accountId: q.accountId, detail: { from: q.status, to: status } });
+  });
+}
+
+/** Marks the quote sent and queues the e-mail to the account's billing contact, atomically. */
+export async function sendQuote(user: CurrentUser, quoteId: string): Promise<{ to: string }> {
+  return db.transaction(async (tx) => {
+    const q = await lockQuote(tx, user, quoteId);
+    const [acct] = await tx.select({ name: accounts.name, email: accounts.billingContactEmail }).from(accounts).where(eq(accounts.id, q.accountId)).limit(1);
+    if (!acct?.email) throw new ActionError('The customer account has no billing contact e-mail; add one on the account page first.', 422);
+    const lines = await tx
+      .select({ title: sizings.title, tag: sizings.equipmentTag, service: sizings.service, headlineKw: sizings.headlineKw, quantity: quoteItems.quantity })
+      .from(quoteItems)
+      .innerJoin(sizings, eq(sizings.id, quoteItems.sizingId))
+      .where(eq(quoteItems.quoteId, quoteId));
+    if (!lines.length) throw new ActionError('Add at least one sizing before sending the quote.', 422);
+    await tx.update(quotes).set({ status: 'sent', sentAt: new Date(), updatedAt: new Date() }).where(eq(quotes.id, quoteId));
+    await enqueueEmail(tx, {
+      template: 'quote-sent',
+      to: acct.email,
+      accountId: q.accountId,
+      entity: { type: 'quote', id: quoteId },
+      props: {
+        accountName: acct.name,
+        quoteNumber: q.number,
+        quoteTitle: q.title,
+        senderName: user.name,
+        quoteUrl: `${env.APP_URL}/quotes/${quoteId}`,
+        lines: lines.map((l) => ({ title: l.title, tag: l.tag, headline: formatHeadline(l.service, l.headlineKw), quantity: l.quantity })),
+      },
+    });
+    await writeAudit(tx, { actor: user, action: 'quote.sent', entityType: 'quote', entityId: quoteId, accountId: q.accountId, detail: { to: acct.email } });
+    return { to: acct.email };
+  });
+}

@@ -1,0 +1,78 @@
+import 'server-only';
+import { and, desc, eq, type SQL } from 'drizzle-orm';
+import { db } from '@/db';
+import { accounts, sizings, users } from '@/db/schema';
+import type { CurrentUser } from '@/lib/auth/current-user';
+import { accountScope, assertAccountAccess, NotFoundError } from '@/lib/auth/guards';
+
+export type SizingSummary = {
+  id: string;
+  number: string;
+  title: string;
+  equipmentTag: string | null;
+  service: 'heater' | 'compressor';
+  gasLabel: string;
+  headlineKw: number;
+  accountId: string;
+  accountName: string;
+  createdAt: Date;
+};
+
+const summaryColumns = {
+  id: sizings.id,
+  number: sizings.number,
+  title: sizings.title,
+  equipmentTag: sizings.equipmentTag,
+  service: sizings.service,
+  gasLabel: sizings.gasLabel,
+  headlineKw: sizings.headlineKw,
+  accountId: sizings.accountId,
+  accountName: accounts.name,
+  createdAt: sizings.createdAt,
+};
+
+export async function listSizings(user: CurrentUser, filter: { accountId?: string; limit?: number } = {}): Promise<SizingSummary[]> {
+  const scope = accountScope(user);
+  const conds: SQL[] = [];
+  if (scope) conds.push(eq(sizings.accountId, scope));
+  if (filter.accountId) conds.push(eq(sizings.accountId, filter.accountId));
+  return db
+    .select(summaryColumns)
+    .from(sizings)
+    .innerJoin(accounts, eq(accounts.id, sizings.accountId))
+    .where(conds.length ? and(...conds) : undefined)
+    .orderBy(desc(sizings.createdAt))
+    .limit(Math.min(filter.limit ?? 200, 500));
+}
+
+export type SizingDetail = SizingSummary & {
+  notes: string | null;
+  input: unknown;
+  result: unknown;
+  engineVersion: string;
+  revision: number;
+  revisedFromId: string | null;
+  createdByName: string | null;
+};
+
+export async function getSizing(user: CurrentUser, sizingId: string): Promise<SizingDetail> {
+  const [row] = await db
+    .select({
+      ...summaryColumns,
+      notes: sizings.notes,
+      input: sizings.input,
+      result: sizings.result,
+      engineVersion: sizings.engineVersion,
+      revision: sizings.revision,
+      revisedFromId: sizings.revisedFromId,
+      createdByName: users.name,
+    })
+    .from(sizings)
+    .innerJoin(accounts, eq(accounts.id, sizings.accountId))
+    .leftJoin(users, eq(users.id, sizings.createdByUserId))
+    .where(eq(sizings.id, sizingId))
+    .limit(1);
+  if (!row) throw new NotFoundError();
+  assertAccountAccess(user, row.accountId);
+  return row;
+}

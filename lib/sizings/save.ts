@@ -1,0 +1,82 @@
+import 'server-only';
+import { eq } from 'drizzle-orm';
+import { db, type Tx } from '@/db';
+import { accounts, sizings } from '@/db/schema';
+import { ActionError } from '@/lib/actions/define-action';
+import { writeAudit } from '@/lib/audit/write';
+import type { CurrentUser } from '@/lib/auth/current-user';
+import { assertAccountAccess } from '@/lib/auth/guards';
+import { can } from '@/lib/auth/roles';
+import { nextNumber } from '@/lib/numbering/next-number';
+import { addQuoteItem } from '@/lib/quotes/mutations';
+import { calculate, ENGINE_VERSION, SizingInputError, type SizingResult } from '@/lib/sizing';
+import { gasKeyAndLabel } from './gas-label';
+import type { SizingMeta } from './schema';
+
+/** The engine's answer reduced to the scalar columns that lists, filters and search use. */
+export function headlineOf(result: SizingResult): number {
+  return result.service === 'heater' ? result.heater.designDutyKw : result.compressor.shaftPowerKw;
+}
+
+/** Runs the engine and stores input and result together; refuses input the engine refuses. */
+export function computeForSave(input: unknown): { input: unknown; result: SizingResult } {
+  try {
+    return { input, result: calculate(input) };
+  } catch (err) {
+    if (err instanceof SizingInputError) {
+      const fieldErrors: Record<string, string[]> = {};
+      for (const i of err.issues) (fieldErrors[`input.${i.path}`] ??= []).push(i.message);
+      throw new ActionError('The sizing input is not valid; nothing was saved.', 400, fieldErrors);
+    }
+    throw err;
+  }
+}
+
+export async function insertSizing(tx: Tx, user: CurrentUser, meta: SizingMeta, computed: { input: unknown; result: SizingResult }, revision = 1) {
+  const number = await nextNumber(tx, 'sizing');
+  const gas = gasKeyAndLabel((computed.input as { gas?: unknown }).gas);
+  const [row] = await tx
+    .insert(sizings)
+    .values({
+      number,
+      accountId: meta.accountId,
+      title: meta.title,
+      equipmentTag: meta.equipmentTag,
+      notes: meta.notes,
+      service: computed.result.service,
+      gasKey: gas.key,
+      gasLabel: gas.label,
+      input: computed.input,
+      result: computed.result,
+      engineVersion: ENGINE_VERSION,
+      headlineKw: headlineOf(computed.result),
+      massFlowKgPerS: computed.result.massFlowKgPerS,
+      revision,
+      revisedFromId: meta.revisedFromId,
+      createdByUserId: user.id,
+    })
+    .returning({ id: sizings.id, number: sizings.number });
+  if (!row) throw new Error('sizing insert returned no row');
+  return row;
+}
+
+/** Saves a sizing to an account (and optionally a draft quote) in one transaction with its audit entry. */
+export async function saveSizing(user: CurrentUser, meta: SizingMeta, rawInput: unknown): Promise<{ id: string; number: string }> {
+  assertAccountAccess(user, meta.accountId);
+  if (meta.quoteId && !can(user.role, 'quote:manage')) throw new ActionError('Only vendor staff add sizings to quotes.', 403);
+  const computed = computeForSave(rawInput);
+  return db.transaction(async (tx) => {
+    const [acct] = await tx.select({ id: accounts.id }).from(accounts).where(eq(accounts.id, meta.accountId)).limit(1);
+    if (!acct) throw new ActionError('That customer account does not exist.', 404, { accountId: ['Unknown account.'] });
+    let revision = 1;
+    if (meta.revisedFromId) {
+      const [prev] = await tx.select({ accountId: sizings.accountId, revision: sizings.revision }).from(sizings).where(eq(sizings.id, meta.revisedFromId)).limit(1);
+      if (!prev || prev.accountId !== meta.accountId) throw new ActionError('The sizing being revised belongs to another account.', 422);
+      revision = prev.revision + 1;
+    }
+    const row = await insertSizing(tx, user, meta, computed, revision);
+    if (meta.quoteId) await addQuoteItem(user, meta.quoteId, row.id, 1, tx);
+    await writeAudit(tx, { actor: user, action: meta.revisedFromId ? 'sizing.revised' : 'sizing.created', entityType: 'sizing', entityId: row.id, accountId: meta.accountId, detail: { number: row.number, quoteId: meta.quoteId ?? null } });
+    return row;
+  });
+}
