@@ -1,4 +1,12 @@
 import type { NextConfig } from 'next';
+import { clerkFrontendApiFrom, securityHeaders } from './lib/security/headers';
+
+const appUrl = process.env.APP_URL ?? 'http://localhost:3000';
+const headerOptions = {
+  production: process.env.NODE_ENV === 'production',
+  https: appUrl.startsWith('https://'),
+  clerkFrontendApi: process.env.CLERK_SECRET_KEY ? clerkFrontendApiFrom(process.env.NEXT_PUBLIC_CLERK_PUBLISHABLE_KEY) : null,
+};
 
 const nextConfig: NextConfig = {
   // Tests build into their own folder so they never overwrite the demo's build.
@@ -7,6 +15,9 @@ const nextConfig: NextConfig = {
   reactStrictMode: true,
   // The local fakes and the database are separate processes; nothing here downloads at build time.
   serverExternalPackages: ['pg', 'pino', 'nodemailer', '@react-pdf/renderer', 'bcryptjs'],
+  async headers() {
+    return [{ source: '/:path*', headers: securityHeaders(headerOptions) }];
+  },
   eslint: { dirs: ['app', 'lib', 'db', 'emails', 'mocks', 'tests'] },
 };
 

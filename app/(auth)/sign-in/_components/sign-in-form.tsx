@@ -6,7 +6,6 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { TextField } from '@/app/_components/text-field';
 import { signInSchema, type SignInInput } from '@/lib/auth/schema';
-import { signInAction } from '../actions';
 
 export function SignInForm({ next }: { next: string }) {
   const router = useRouter();
@@ -15,13 +14,14 @@ export function SignInForm({ next }: { next: string }) {
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
-    const res = await signInAction(values);
-    if (res.ok) {
+    const res = await fetch('/api/auth/sign-in', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(values) }).catch(() => null);
+    if (res?.ok) {
       router.push(next);
       router.refresh();
-    } else {
-      setFormError(res.formError ?? 'Check the fields below.');
+      return;
     }
+    const body = (await res?.json().catch(() => null)) as { errors?: { message: string }[] } | null;
+    setFormError(body?.errors?.[0]?.message ?? 'Dutywise could not be reached; check your connection and try again.');
   });
 
   return (

@@ -1,0 +1,46 @@
+// Response security headers for every route. Kept free of framework imports so next.config.ts can use it.
+
+export type HeaderOptions = { production: boolean; https: boolean; clerkFrontendApi?: string | null };
+
+/** The Content-Security-Policy the app works under; Clerk's frontend host is allowed only when Clerk is on. */
+export function contentSecurityPolicy(opts: HeaderOptions): string {
+  const clerk = opts.clerkFrontendApi ? ` https://${opts.clerkFrontendApi}` : '';
+  // Next's App Router streams inline bootstrap scripts, so scripts need 'unsafe-inline' unless every
+  // page is rendered with a nonce; 'unsafe-eval' is only needed by the development server.
+  const script = `script-src 'self' 'unsafe-inline'${opts.production ? '' : " 'unsafe-eval'"}${clerk}`;
+  return [
+    "default-src 'self'",
+    script,
+    "style-src 'self' 'unsafe-inline'",
+    "img-src 'self' data: blob:" + (clerk ? ' https://img.clerk.com' : ''),
+    "font-src 'self' data:",
+    `connect-src 'self'${clerk}`,
+    `frame-src 'self'${clerk}`,
+    "worker-src 'self' blob:",
+    "object-src 'none'",
+    "base-uri 'self'",
+    "form-action 'self'",
+    "frame-ancestors 'none'",
+  ].join('; ');
+}
+
+export function securityHeaders(opts: HeaderOptions): { key: string; value: string }[] {
+  const headers = [
+    { key: 'Content-Security-Policy', value: contentSecurityPolicy(opts) },
+    { key: 'X-Content-Type-Options', value: 'nosniff' },
+    { key: 'Referrer-Policy', value: 'strict-origin-when-cross-origin' },
+    { key: 'X-Frame-Options', value: 'DENY' },
+    { key: 'Permissions-Policy', value: 'camera=(), microphone=(), geolocation=(), payment=()' },
+    { key: 'Cross-Origin-Opener-Policy', value: 'same-origin' },
+  ];
+  if (opts.production && opts.https) headers.push({ key: 'Strict-Transport-Security', value: 'max-age=63072000; includeSubDomains' });
+  return headers;
+}
+
+/** Clerk's frontend API host is the base64 text of the publishable key after its prefix, less the trailing '$'. */
+export function clerkFrontendApiFrom(publishableKey: string | undefined): string | null {
+  const m = publishableKey?.match(/^pk_(test|live)_(.+)$/);
+  if (!m?.[2]) return null;
+  const host = Buffer.from(m[2], 'base64').toString('utf8').replace(/\$$/, '');
+  return /^[a-z0-9.-]+$/i.test(host) ? host : null;
+}
