@@ -4,6 +4,7 @@ import { db } from '@/db';
 import { auditLog, outbox, quoteItems } from '@/db/schema';
 import { getAccount, listAccounts } from '@/lib/accounts/queries';
 import { createAccount, inviteMember, acceptInvitation } from '@/lib/accounts/mutations';
+import { accountInputSchema } from '@/lib/accounts/schema';
 import { NotFoundError } from '@/lib/auth/guards';
 import { createQuote, addQuoteItem, sendQuote } from '@/lib/quotes/mutations';
 import { getQuote, listQuotes } from '@/lib/quotes/queries';
@@ -31,7 +32,7 @@ describe('customer accounts are scoped', () => {
 
   it('creating an account writes its audit entry in the same transaction', async () => {
     const engineer = await makeUser('sales_engineer');
-    const { id } = await createAccount(engineer, { name: 'Audit Check Ltd', barometricPressureKpa: 99.1 });
+    const { id } = await createAccount(engineer, accountInputSchema.parse({ name: 'Audit Check Ltd', barometricPressureKpa: '99.1' }));
     const rows = await db.select().from(auditLog).where(eq(auditLog.entityId, id));
     expect(rows.map((r) => r.action)).toEqual(['account.created']);
     expect(rows[0]?.actorUserId).toBe(engineer.id);

@@ -1,0 +1,63 @@
+import 'server-only';
+import { eq, sql } from 'drizzle-orm';
+import type Stripe from 'stripe';
+import type { Tx } from '@/db';
+import { accounts, subscriptions } from '@/db/schema';
+import { writeAudit } from '@/lib/audit/write';
+
+/** Period end moved onto subscription items in recent API versions; older payloads keep it on the subscription. */
+export function periodEndOf(sub: Stripe.Subscription): Date | null {
+  const item = sub.items?.data?.[0] as { current_period_end?: number } | undefined;
+  const legacy = (sub as unknown as { current_period_end?: number }).current_period_end;
+  const secs = item?.current_period_end ?? legacy;
+  return typeof secs === 'number' ? new Date(secs * 1000) : null;
+}
+
+/** Finds the Dutywise account for a subscription: its metadata first, then the stored customer id. */
+export async function accountIdFor(tx: Tx, sub: Stripe.Subscription, hint?: string | null): Promise<string | null> {
+  const candidate = hint ?? sub.metadata?.accountId ?? null;
+  if (candidate && /^[0-9a-f-]{36}$/i.test(candidate)) {
+    const [a] = await tx.select({ id: accounts.id }).from(accounts).where(eq(accounts.id, candidate)).limit(1);
+    if (a) return a.id;
+  }
+  const customer = typeof sub.customer === 'string' ? sub.customer : sub.customer?.id;
+  if (!customer) return null;
+  const [a] = await tx.select({ id: accounts.id }).from(accounts).where(eq(accounts.stripeCustomerId, customer)).limit(1);
+  return a?.id ?? null;
+}
+
+/**
+ * Stores the subscription as the payment service reports it now. Callers pass the freshly retrieved
+ * object, so whichever event arrives first or last, the stored row ends in the service's current state.
+ */
+export async function storeSubscription(tx: Tx, accountId: string, sub: Stripe.Subscription, eventCreated: number): Promise<{ previousStatus: string | null }> {
+  const customer = typeof sub.customer === 'string' ? sub.customer : (sub.customer?.id ?? null);
+  const [prev] = await tx.select({ status: subscriptions.status }).from(subscriptions).where(eq(subscriptions.stripeSubscriptionId, sub.id)).limit(1);
+  const values = {
+    accountId,
+    stripeCustomerId: customer,
+    stripeSubscriptionId: sub.id,
+    status: sub.status,
+    priceId: sub.items?.data?.[0]?.price?.id ?? null,
+    currentPeriodEnd: periodEndOf(sub),
+    cancelAtPeriodEnd: Boolean(sub.cancel_at_period_end),
+    lastEventCreated: eventCreated,
+    updatedAt: new Date(),
+  };
+  await tx
+    .insert(subscriptions)
+    .values({ ...values, pastDueSince: sub.status === 'past_due' ? new Date() : null })
+    .onConflictDoUpdate({
+      target: subscriptions.stripeSubscriptionId,
+      set: {
+        ...values,
+        lastEventCreated: sql`greatest(${subscriptions.lastEventCreated}, ${eventCreated})`,
+        // Grace is counted from the first failure, not from each retry's event.
+        pastDueSince: sub.status === 'past_due' ? sql`coalesce(${subscriptions.pastDueSince}, now())` : null,
+      },
+    });
+  if (prev?.status !== sub.status) {
+    await writeAudit(tx, { actor: null, action: 'billing.subscription_status', entityType: 'account', entityId: accountId, accountId, detail: { subscription: sub.id, from: prev?.status ?? null, to: sub.status } });
+  }
+  return { previousStatus: prev?.status ?? null };
+}
