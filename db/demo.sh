@@ -16,7 +16,7 @@ fi
 
 PG_DATA_DIR="$PWD/.data/pg-demo" PG_PORT=55432 bash db/postgres.sh start
 npx tsx db/migrate.mts
-npx tsx --require ./db/script-preload.cjs db/seed.mts
+npx tsx --require ./db/script-preload.cjs db/seed.ts
 
 pids=()
 cleanup() { for p in "${pids[@]}"; do kill "$p" 2>/dev/null || true; done; wait 2>/dev/null || true; }

@@ -42,7 +42,7 @@ async function main() {
     await tx.update(users).set({ unitSystem: 'us' }).where(eq(users.email, 'dev.hartigan@oakhollow.example'));
     for (const s of seedSizings) {
       const accountId = accountIds.get(s.account)!;
-      await insertSizing(tx, people.get(s.by)!, { accountId, title: s.title, equipmentTag: s.tag, notes: s.notes }, computeForSave(s.input));
+      await insertSizing(tx, people.get(s.by)!, { accountId, quoteId: undefined, title: s.title, equipmentTag: s.tag, notes: s.notes }, computeForSave(s.input));
     }
   });
   for (const qd of seedQuotes) {
@@ -61,8 +61,9 @@ async function main() {
   console.log(`seeded ${seedAccounts.length} accounts, ${seedUsers.length} users, ${seedSizings.length} sizings, ${seedQuotes.length} quotes`);
 }
 
-try {
-  await main();
-} finally {
-  await pool.end();
-}
+main()
+  .catch((err) => {
+    console.error(err);
+    process.exitCode = 1;
+  })
+  .finally(() => pool.end());

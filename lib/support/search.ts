@@ -1,0 +1,102 @@
+import 'server-only';
+import { sql, type SQL } from 'drizzle-orm';
+import { db } from '@/db';
+import type { CurrentUser } from '@/lib/auth/current-user';
+import { accountScope } from '@/lib/auth/guards';
+import type { SupportSearch } from './schema';
+
+export type SupportHit = {
+  id: string;
+  number: string;
+  title: string;
+  equipmentTag: string | null;
+  service: 'heater' | 'compressor';
+  gasLabel: string;
+  headlineKw: number;
+  accountId: string;
+  accountName: string;
+  createdAt: string;
+  createdByName: string | null;
+  datasheetNumber: string | null;
+  quoteNumbers: string[];
+};
+
+export type SupportResults = { hits: SupportHit[]; total: number; totalIsEstimate: boolean; page: number; pageSize: number };
+
+const COUNT_CAP = 10_000;
+
+function escapeLike(s: string): string {
+  return s.replace(/[%_\\]/g, (c) => `\\${c}`);
+}
+
+/** Text match over sizings, their account, datasheet and quote numbers; partial and typo-tolerant (trigram word similarity). */
+function textCondition(q: string): SQL {
+  const lower = q.toLowerCase();
+  const like = `%${escapeLike(lower)}%`;
+  const prefix = `${escapeLike(q.toUpperCase())}%`;
+  return sql`(
+    s.search_text like ${like}
+    or ${lower} <% s.search_text
+    or s.account_id in (select a2.id from accounts a2 where a2.name ilike ${like} or ${lower} <% lower(a2.name))
+    or s.id in (select d.sizing_id from datasheets d where d.number like ${prefix})
+    or s.id in (select qi.sizing_id from quote_items qi join quotes q2 on q2.id = qi.quote_id where q2.number like ${prefix} or ${lower} <% lower(q2.title))
+  )`;
+}
+
+function conditions(user: CurrentUser, f: SupportSearch): SQL[] {
+  const c: SQL[] = [];
+  const scope = accountScope(user);
+  if (scope) c.push(sql`s.account_id = ${scope}`);
+  if (f.accountId) c.push(sql`s.account_id = ${f.accountId}`);
+  if (f.q) c.push(textCondition(f.q));
+  if (f.service) c.push(sql`s.service = ${f.service}`);
+  if (f.gas) c.push(sql`s.gas_key = ${f.gas}`);
+  if (f.minKw !== undefined) c.push(sql`s.headline_kw >= ${f.minKw}`);
+  if (f.maxKw !== undefined) c.push(sql`s.headline_kw <= ${f.maxKw}`);
+  if (f.from) c.push(sql`s.created_at >= ${f.from}::date`);
+  if (f.to) c.push(sql`s.created_at < (${f.to}::date + 1)`);
+  if (f.creator) c.push(sql`s.created_by_user_id = ${f.creator}`);
+  if (f.quoteStatus) c.push(sql`s.id in (select qi.sizing_id from quote_items qi join quotes q3 on q3.id = qi.quote_id where q3.status = ${f.quoteStatus})`);
+  return c;
+}
+
+function orderBy(f: SupportSearch): SQL {
+  switch (f.sort) {
+    case 'oldest':
+      return sql`s.created_at asc, s.id`;
+    case 'largest':
+      return sql`s.headline_kw desc, s.id`;
+    case 'smallest':
+      return sql`s.headline_kw asc, s.id`;
+    case 'relevance':
+      return f.q ? sql`word_similarity(${f.q.toLowerCase()}, s.search_text) desc, s.created_at desc` : sql`s.created_at desc, s.id`;
+    default:
+      return sql`s.created_at desc, s.id`;
+  }
+}
+
+/** One page of matching sizings with the numbers support is asked about, plus a (capped) total. */
+export async function searchSizings(user: CurrentUser, f: SupportSearch): Promise<SupportResults> {
+  const conds = conditions(user, f);
+  const where = conds.length ? sql`where ${sql.join(conds, sql` and `)}` : sql``;
+  const offset = (f.page - 1) * f.pageSize;
+  return db.transaction(async (tx) => {
+    // A looser threshold than the default 0.6 so one or two wrong letters in a tag still match.
+    await tx.execute(sql`set local pg_trgm.word_similarity_threshold = 0.45`);
+    const rows = await tx.execute<SupportHit>(sql`
+      select s.id, s.number, s.title, s.equipment_tag as "equipmentTag", s.service, s.gas_label as "gasLabel",
+             s.headline_kw as "headlineKw", s.account_id as "accountId", a.name as "accountName",
+             to_char(s.created_at at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS"Z"') as "createdAt", u.name as "createdByName",
+             (select d.number from datasheets d where d.sizing_id = s.id) as "datasheetNumber",
+             coalesce((select array_agg(q.number order by q.number) from quote_items qi join quotes q on q.id = qi.quote_id where qi.sizing_id = s.id), '{}') as "quoteNumbers"
+      from sizings s
+      join accounts a on a.id = s.account_id
+      left join users u on u.id = s.created_by_user_id
+      ${where}
+      order by ${orderBy(f)}
+      limit ${f.pageSize} offset ${offset}`);
+    const counted = await tx.execute<{ n: number }>(sql`select count(*)::int as n from (select 1 from sizings s ${where} limit ${COUNT_CAP + 1}) t`);
+    const n = counted.rows[0]?.n ?? 0;
+    return { hits: rows.rows, total: Math.min(n, COUNT_CAP), totalIsEstimate: n > COUNT_CAP, page: f.page, pageSize: f.pageSize };
+  });
+}
