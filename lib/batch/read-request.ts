@@ -1,0 +1,43 @@
+import 'server-only';
+import { z } from 'zod';
+import { ActionError } from '@/lib/actions/define-action';
+import { BATCH_MAX_ROWS, parseBatchCsv, type ParsedSheet } from './evaluate';
+import { checkUpload, looksLikeText } from './upload-limits';
+
+const cellsSchema = z.array(z.record(z.string().max(40), z.string().max(400))).max(BATCH_MAX_ROWS);
+
+export type BatchUpload = { sheet: ParsedSheet; file: { name: string; type: string; bytes: Buffer } };
+
+/** Reads the multipart batch request: the original CSV, and optionally the user's edited rows (JSON). */
+export async function readBatchRequest(req: Request): Promise<BatchUpload> {
+  const length = Number(req.headers.get('content-length') ?? '0');
+  if (length > 6 * 1024 * 1024) throw new ActionError('The upload is larger than the 2 MiB limit.', 413);
+  let form: FormData;
+  try {
+    form = await req.formData();
+  } catch {
+    throw new ActionError('Send the CSV as multipart/form-data with a "file" field.', 400);
+  }
+  const file = form.get('file');
+  if (!(file instanceof File)) throw new ActionError('Attach the CSV file in the "file" field.', 400);
+  const check = checkUpload(file);
+  if (!check.ok) throw new ActionError(check.message, check.status);
+  const bytes = Buffer.from(await file.arrayBuffer());
+  if (!looksLikeText(bytes)) throw new ActionError('The file is not UTF-8 text; save the spreadsheet as "CSV UTF-8".', 415);
+  const edited = form.get('rows');
+  let sheet = parseBatchCsv(bytes.toString('utf8'));
+  if (typeof edited === 'string' && edited.length) {
+    const parsed = cellsSchema.safeParse(safeJson(edited));
+    if (!parsed.success) throw new ActionError('The edited rows are not in the expected shape.', 400);
+    sheet = { rows: parsed.data, problems: sheet.problems.filter((p) => !/no duty points/.test(p)) };
+  }
+  return { sheet, file: { name: file.name.slice(0, 200), type: file.type || 'text/csv', bytes } };
+}
+
+function safeJson(text: string): unknown {
+  try {
+    return JSON.parse(text);
+  } catch {
+    return null;
+  }
+}

@@ -1,0 +1,23 @@
+// What a batch upload may be: a CSV of at most 2 MiB. Anything else is refused before it is read.
+export const BATCH_MAX_BYTES = 2 * 1024 * 1024;
+const allowedTypes = new Set(['text/csv', 'application/csv', 'text/plain', 'application/vnd.ms-excel', '']);
+
+export type UploadCheck = { ok: true } | { ok: false; status: 413 | 415 | 400; message: string };
+
+export function checkUpload(file: { name: string; type: string; size: number }): UploadCheck {
+  if (file.size === 0) return { ok: false, status: 400, message: 'The file is empty.' };
+  if (file.size > BATCH_MAX_BYTES) return { ok: false, status: 413, message: `The file is ${(file.size / 1048576).toFixed(1)} MiB; the limit is 2 MiB.` };
+  if (!/\.csv$/i.test(file.name) || !allowedTypes.has(file.type)) return { ok: false, status: 415, message: 'Upload a .csv file (save the spreadsheet as CSV UTF-8).' };
+  return { ok: true };
+}
+
+/** Bytes that are not text (NUL, or invalid UTF-8) mean a binary file renamed to .csv. */
+export function looksLikeText(bytes: Uint8Array): boolean {
+  if (bytes.includes(0)) return false;
+  try {
+    new TextDecoder('utf-8', { fatal: true }).decode(bytes);
+    return true;
+  } catch {
+    return false;
+  }
+}

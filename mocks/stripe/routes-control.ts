@@ -1,0 +1,53 @@
+import { noSuch } from './api-error';
+import type { FakeContext } from './context';
+import { json, type Route, route } from './http-util';
+import { requireSubscription, withExpand } from './lookup';
+import type { EventRecord } from './records';
+import { renderSubscription } from './render-billing';
+import { advancePeriodEnd, failPayment } from './subscription-actions';
+
+/** An event's identity and delivery state, without its payload, for /_control/events. */
+export function eventSummary(event: EventRecord) {
+  const object = event.object;
+  return { id: event.id, type: event.type, created: event.created, objectId: object.id ?? null, delivery: { ...event.delivery } };
+}
+
+/** Resets the delivery record and queues the same event (same id) again. */
+export function resendEvent(ctx: FakeContext, id: string): EventRecord {
+  const event = ctx.store.findEvent(id);
+  if (!event) throw noSuch('event', id);
+  event.delivery.status = 'pending';
+  ctx.store.save();
+  ctx.sender.enqueue(event.id);
+  return event;
+}
+
+/** Test and demo controls; the hosted service has no equivalent, so they live under /_control/. */
+export function controlRoutes(ctx: FakeContext, onReset: () => void): Route[] {
+  const subscriptionReply = (id: string) => json(withExpand(ctx, renderSubscription(ctx, requireSubscription(ctx, id)), []));
+  return [
+    route('GET', '/_control/health', () =>
+      json({ ok: true, service: 'stripe-fake', subscriptions: Object.keys(ctx.store.state.subscriptions).length, events: ctx.store.state.events.length }),
+    ),
+    route('GET', '/_control/events', ({ url }) => {
+      const type = url.searchParams.get('type');
+      const events = ctx.store.state.events.filter((event) => !type || event.type === type);
+      return json({ data: events.map(eventSummary) });
+    }),
+    route('POST', '/_control/events/:id/resend', ({ params }) => json(eventSummary(resendEvent(ctx, params[0] ?? '')))),
+    route('POST', '/_control/subscriptions/:id/advance-period-end', ({ params }) => {
+      const id = params[0] ?? '';
+      advancePeriodEnd(ctx, requireSubscription(ctx, id));
+      return subscriptionReply(id);
+    }),
+    route('POST', '/_control/subscriptions/:id/fail-payment', ({ params }) => {
+      const id = params[0] ?? '';
+      failPayment(ctx, requireSubscription(ctx, id));
+      return subscriptionReply(id);
+    }),
+    route('POST', '/_control/reset', () => {
+      onReset();
+      return json({ ok: true });
+    }),
+  ];
+}
