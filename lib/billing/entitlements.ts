@@ -17,7 +17,8 @@ type SubscriptionState = { status: string; currentPeriodEnd: Date | null; cancel
 
 /**
  * Entitlement from stored status and period end: active or trialing unlocks; past due keeps access for
- * BILLING_GRACE_DAYS from the first failed payment; cancelled keeps access until the paid period ends.
+ * BILLING_GRACE_DAYS from the first failed payment; a cancellation at period end keeps access until that
+ * period ends; a cancelled (ended) subscription unlocks nothing.
  */
 export function entitlementFrom(sub: SubscriptionState | null, now = new Date(), graceDays = env.BILLING_GRACE_DAYS): Entitlement {
   const base = { status: sub?.status ?? null, periodEnd: sub?.currentPeriodEnd?.toISOString() ?? null, cancelAtPeriodEnd: sub?.cancelAtPeriodEnd ?? false, graceEndsAt: null };
@@ -25,13 +26,12 @@ export function entitlementFrom(sub: SubscriptionState | null, now = new Date(),
   // A cancellation takes effect at period end even if the final event has not arrived yet.
   const periodOver = sub.currentPeriodEnd !== null && sub.currentPeriodEnd <= now;
   if ((sub.status === 'active' || sub.status === 'trialing') && sub.cancelAtPeriodEnd && periodOver) return { ...base, unlocked: false, reason: 'lapsed' };
-  if (sub.status === 'active' || sub.status === 'trialing') return { ...base, unlocked: true, reason: 'active' };
+  if (sub.status === 'active' || sub.status === 'trialing') return { ...base, unlocked: true, reason: sub.cancelAtPeriodEnd ? 'period-remaining' : 'active' };
   if (sub.status === 'past_due') {
     const since = sub.pastDueSince ?? now;
     const graceEnd = new Date(since.getTime() + graceDays * 86_400_000);
     return { ...base, unlocked: now < graceEnd, reason: now < graceEnd ? 'grace' : 'lapsed', graceEndsAt: graceEnd.toISOString() };
   }
-  if (sub.status === 'canceled' && sub.currentPeriodEnd && sub.currentPeriodEnd > now) return { ...base, unlocked: true, reason: 'period-remaining' };
   return { ...base, unlocked: false, reason: 'lapsed' };
 }
 

@@ -9,7 +9,7 @@ import { openPortalAction, startCheckoutAction } from '../actions';
 const statusText: Record<Entitlement['reason'], string> = {
   active: 'Active: datasheets are unlocked.',
   grace: 'Payment failed: datasheets stay unlocked during the grace period. Update your payment method.',
-  'period-remaining': 'Cancelled: datasheets stay unlocked until the paid period ends.',
+  'period-remaining': 'Cancelled at period end: datasheets stay unlocked until the paid period ends.',
   none: 'No subscription yet: datasheets are locked.',
   lapsed: 'Subscription ended: datasheets are locked.',
 };
