@@ -16,6 +16,9 @@ const appEnv = {
   SMTP_PORT: String(e2ePorts.smtp),
   MAIL_FAKE_INBOX_URL: `http://127.0.0.1:${e2ePorts.smtpHttp}`,
   LOG_LEVEL: 'warn',
+  // Journeys sign in many times from one address; the limits themselves are tested in integration.
+  RATE_LIMIT_SIGN_IN_PER_MIN: '10000',
+  RATE_LIMIT_CALCULATE_PER_MIN: '100000',
 };
 
 export default defineConfig({
