@@ -33,10 +33,9 @@ if [ ! -f .next/BUILD_ID ] || [ -n "$(git ls-files -z 2>/dev/null | xargs -0 -I{
   npx next build
 fi
 
-if [ -f lib/email/worker.mts ]; then
-  npx tsx lib/email/worker.mts > .data/mail-worker.log 2>&1 &
-  pids+=($!)
-fi
+# The mail worker sends what the app queues in the outbox (retrying while SMTP is down).
+node --require ./db/script-preload.cjs --import tsx lib/email/worker.mts > .data/mail-worker.log 2>&1 &
+pids+=($!)
 
 node node_modules/next/dist/bin/next start -p "$port" &
 pids+=($!)

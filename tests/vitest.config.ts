@@ -6,6 +6,8 @@ const root = fileURLToPath(new URL('..', import.meta.url));
 // Unit tests are pure; integration tests talk to the PostgreSQL that tests/run.sh starts.
 export default defineConfig({
   root,
+  // Templates and PDF documents are .tsx; tsconfig keeps JSX for Next, so tests transform it here.
+  oxc: { jsx: { runtime: 'automatic', importSource: 'react' } },
   resolve: { alias: { '@': root.replace(/\/$/, '') } },
   test: {
     include: ['tests/unit/**/*.test.ts', 'tests/integration/**/*.test.ts'],

@@ -6,7 +6,7 @@ import { checkUpload, looksLikeText } from './upload-limits';
 
 const cellsSchema = z.array(z.record(z.string().max(40), z.string().max(400))).max(BATCH_MAX_ROWS);
 
-export type BatchUpload = { sheet: ParsedSheet; file: { name: string; type: string; bytes: Buffer } };
+export type BatchUpload = { sheet: ParsedSheet; file: { name: string; type: string; bytes: Buffer }; target: string | null };
 
 /** Reads the multipart batch request: the original CSV, and optionally the user's edited rows (JSON). */
 export async function readBatchRequest(req: Request): Promise<BatchUpload> {
@@ -31,7 +31,8 @@ export async function readBatchRequest(req: Request): Promise<BatchUpload> {
     if (!parsed.success) throw new ActionError('The edited rows are not in the expected shape.', 400);
     sheet = { rows: parsed.data, problems: sheet.problems.filter((p) => !/no duty points/.test(p)) };
   }
-  return { sheet, file: { name: file.name.slice(0, 200), type: file.type || 'text/csv', bytes } };
+  const target = form.get('target');
+  return { sheet, file: { name: file.name.slice(0, 200), type: file.type || 'text/csv', bytes }, target: typeof target === 'string' ? target : null };
 }
 
 function safeJson(text: string): unknown {

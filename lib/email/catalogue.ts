@@ -1,4 +1,5 @@
 // The e-mails Dutywise sends, their props and subject lines. Bodies are React templates in emails/.
+// Fields ending in Url are absolute, or app paths such as /billing that rendering resolves against APP_URL.
 export type EmailProps = {
   invitation: { accountName: string; inviterName: string; inviteUrl: string; expiresInDays: number };
   'quote-sent': { accountName: string; quoteNumber: string; quoteTitle: string; senderName: string; quoteUrl: string; lines: { title: string; tag: string | null; headline: string; quantity: number }[] };

@@ -1,7 +1,10 @@
 import 'server-only';
+import { sql } from 'drizzle-orm';
 import type { Tx } from '@/db';
 import { outbox } from '@/db/schema';
+import { logger } from '@/lib/log/logger';
 import { subjectFor, type EmailProps, type EmailTemplate } from './catalogue';
+import { parseEmailProps, parseRecipient } from './props-schema';
 
 export type EnqueueInput<T extends EmailTemplate> = {
   template: T;
@@ -13,22 +16,54 @@ export type EnqueueInput<T extends EmailTemplate> = {
   dedupeKey?: string;
 };
 
+/** The channel the mail worker LISTENs on; a NOTIFY inside a transaction is delivered at commit. */
+export const outboxChannel = 'dutywise_outbox';
+
+function problemWith<T extends EmailTemplate>(input: EnqueueInput<T>): string | null {
+  try {
+    parseRecipient(input.to);
+    parseEmailProps(input.template, input.props);
+    return null;
+  } catch (error) {
+    return error instanceof Error ? error.message : String(error);
+  }
+}
+
+function safeSubject<T extends EmailTemplate>(input: EnqueueInput<T>): string {
+  try {
+    return subjectFor(input.template, input.props);
+  } catch {
+    return `(${String(input.template)} e-mail)`;
+  }
+}
+
 /**
  * Queues a message in the caller's transaction: the mail exists exactly when the change that caused
  * it commits. The worker renders and sends it, retrying while SMTP is down.
+ *
+ * A recipient or props that could never be sent do not fail the caller's change (a webhook or an
+ * issue must not roll back over a mistyped address): the row is stored dead, with the field and the
+ * reason in last_error, where the support look-up shows it.
  */
 export async function enqueueEmail<T extends EmailTemplate>(tx: Tx, input: EnqueueInput<T>): Promise<void> {
+  const problem = problemWith(input);
   await tx
     .insert(outbox)
     .values({
       template: input.template,
-      toAddress: input.to,
-      subject: subjectFor(input.template, input.props),
+      toAddress: String(input.to).trim(),
+      subject: problem ? safeSubject(input) : subjectFor(input.template, input.props),
       payload: input.props,
       accountId: input.accountId ?? null,
       entityType: input.entity?.type ?? null,
       entityId: input.entity?.id ?? null,
       dedupeKey: input.dedupeKey ?? null,
+      ...(problem ? { status: 'dead' as const, lastError: `not sent: ${problem}` } : {}),
     })
     .onConflictDoNothing();
+  if (problem) {
+    logger.error({ component: 'outbox', template: input.template, entity: input.entity, err: problem }, 'e-mail cannot be sent; stored as dead');
+    return;
+  }
+  await tx.execute(sql`select pg_notify(${outboxChannel}, '')`);
 }

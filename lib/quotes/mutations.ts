@@ -26,9 +26,9 @@ async function assertSizingsInAccount(tx: Tx, accountId: string, sizingIds: stri
   if (found.length !== new Set(sizingIds).size) throw new ActionError('Every line must be a sizing saved to this quote’s customer account.', 422, { sizingIds: ['Not all sizings belong to this account.'] });
 }
 
-export async function createQuote(user: CurrentUser, input: QuoteCreateInput): Promise<{ id: string; number: string }> {
+export async function createQuote(user: CurrentUser, input: QuoteCreateInput, txIn?: Tx): Promise<{ id: string; number: string }> {
   assertAccountAccess(user, input.accountId);
-  return db.transaction(async (tx) => {
+  const work = async (tx: Tx) => {
     const [acct] = await tx.select({ id: accounts.id }).from(accounts).where(eq(accounts.id, input.accountId)).limit(1);
     if (!acct) throw new ActionError('That customer account does not exist.', 404, { accountId: ['Unknown account.'] });
     await assertSizingsInAccount(tx, input.accountId, input.sizingIds);
@@ -40,7 +40,8 @@ export async function createQuote(user: CurrentUser, input: QuoteCreateInput): P
     }
     await writeAudit(tx, { actor: user, action: 'quote.created', entityType: 'quote', entityId: q.id, accountId: input.accountId, detail: { number, lines: input.sizingIds.length } });
     return { id: q.id, number };
-  });
+  };
+  return txIn ? work(txIn) : db.transaction(work);
 }
 
 export async function addQuoteItem(user: CurrentUser, quoteId: string, sizingId: string, quantity: number, txIn?: Tx): Promise<void> {

@@ -1,0 +1,38 @@
+/** @jsxRuntime automatic */
+/** @jsxImportSource react */
+import type { EmailProps } from '@/lib/email/catalogue';
+import { ActionButton, FactList, MailLayout, Para, PreliminaryNotice } from './_layout';
+
+type Props = EmailProps['datasheet-issued'];
+
+/** A datasheet revision was issued: its number, revision and where to download it. */
+export function DatasheetIssuedEmail({ accountName, datasheetNumber, revision, sizingTitle, equipmentTag, datasheetUrl }: Props) {
+  const facts = [
+    { label: 'Datasheet', value: datasheetNumber },
+    { label: 'Revision', value: revision },
+    { label: 'Sizing', value: sizingTitle },
+    ...(equipmentTag ? [{ label: 'Equipment tag', value: equipmentTag }] : []),
+  ];
+  return (
+    <MailLayout preview={`Datasheet ${datasheetNumber} rev. ${revision} is ready`} footerNote={`Sent to ${accountName} because a datasheet was issued on its account.`}>
+      <Para>Hello,</Para>
+      <Para>
+        Datasheet <strong>{datasheetNumber}</strong> revision <strong>{revision}</strong> has been issued for {accountName}. An issued revision never changes;
+        any later change comes out as a new revision.
+      </Para>
+      <FactList facts={facts} />
+      <ActionButton href={datasheetUrl}>Open the datasheet</ActionButton>
+      <PreliminaryNotice />
+    </MailLayout>
+  );
+}
+
+// Invented example for previews only.
+export const datasheetIssuedPreview: Props = {
+  accountName: 'Harrowgate Fuel Terminal',
+  datasheetNumber: 'DS-2025-0107',
+  revision: 'B',
+  sizingTitle: 'Fuel gas preheater, train 2',
+  equipmentTag: 'E-2204',
+  datasheetUrl: 'http://localhost:3000/datasheets/preview',
+};

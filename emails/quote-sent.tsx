@@ -1,0 +1,51 @@
+/** @jsxRuntime automatic */
+/** @jsxImportSource react */
+import { Section, Text } from '@react-email/components';
+import type { EmailProps } from '@/lib/email/catalogue';
+import { ActionButton, FactList, MailLayout, mailColours, Para, PreliminaryNotice } from './_layout';
+
+type Props = EmailProps['quote-sent'];
+
+const lineStyle = { borderTop: `1px solid ${mailColours.line}`, color: mailColours.ink, fontSize: 14, lineHeight: '20px', margin: 0, padding: '8px 0' } as const;
+
+/** A sales engineer sends a quote: what is in it and where to read it in full. */
+export function QuoteSentEmail({ accountName, quoteNumber, quoteTitle, senderName, quoteUrl, lines }: Props) {
+  return (
+    <MailLayout preview={`Quote ${quoteNumber} for ${accountName}: ${quoteTitle}`} footerNote={`Sent by ${senderName} to ${accountName}. Reply to this mail to reach them.`}>
+      <Para>Hello,</Para>
+      <Para>
+        {senderName} has sent {accountName} quote <strong>{quoteNumber}</strong>, “{quoteTitle}”.
+      </Para>
+      <FactList facts={[{ label: 'Quote', value: quoteNumber }, { label: 'Title', value: quoteTitle }, { label: 'Items', value: String(lines.length) }]} />
+      {lines.length > 0 && (
+        <Section style={{ margin: '0 0 14px' }}>
+          {lines.map((l, i) => (
+            <Text key={`${i}-${l.title}`} style={lineStyle}>
+              <strong>
+                {l.quantity} × {l.title}
+              </strong>
+              {l.tag ? ` (${l.tag})` : ''}
+              <br />
+              <span style={{ color: mailColours.inkSoft }}>{l.headline}</span>
+            </Text>
+          ))}
+        </Section>
+      )}
+      <ActionButton href={quoteUrl}>Open the quote</ActionButton>
+      <PreliminaryNotice />
+    </MailLayout>
+  );
+}
+
+// Invented example for previews only.
+export const quoteSentPreview: Props = {
+  accountName: 'Harrowgate Fuel Terminal',
+  quoteNumber: 'Q-2025-0042',
+  quoteTitle: 'Fuel gas preheat and booster, train 2',
+  senderName: 'Mina Okafor',
+  quoteUrl: 'http://localhost:3000/quotes/preview',
+  lines: [
+    { title: 'Fuel gas preheater', tag: 'E-2204', headline: '412 kW duty', quantity: 1 },
+    { title: 'Fuel gas booster', tag: 'K-2210A/B', headline: '186 kW shaft power', quantity: 2 },
+  ],
+};

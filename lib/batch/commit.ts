@@ -1,0 +1,59 @@
+import 'server-only';
+import { randomUUID } from 'node:crypto';
+import { db, type Tx } from '@/db';
+import { uploads } from '@/db/schema';
+import { ActionError } from '@/lib/actions/define-action';
+import { writeAudit } from '@/lib/audit/write';
+import type { CurrentUser } from '@/lib/auth/current-user';
+import { assertAccountAccess } from '@/lib/auth/guards';
+import { can } from '@/lib/auth/roles';
+import { accountKey, getBlobStore } from '@/lib/blob';
+import { addQuoteItem, createQuote } from '@/lib/quotes/mutations';
+import { insertSizing } from '@/lib/sizings/save';
+import { evaluateSheet, type BatchRow } from './evaluate';
+import type { BatchCells } from './row-to-request';
+
+export type BatchTarget = { accountId: string; quoteId?: string; newQuoteTitle?: string };
+export type BatchSaved = { saved: number; skipped: number; uploadId: string; quoteId: string | null; quoteNumber: string | null };
+
+async function writeRows(tx: Tx, user: CurrentUser, target: BatchTarget, sized: BatchRow[]) {
+  let quote: { id: string; number: string } | null = null;
+  if (target.newQuoteTitle) quote = await createQuote(user, { accountId: target.accountId, title: target.newQuoteTitle, sizingIds: [] }, tx);
+  const quoteId = quote?.id ?? target.quoteId ?? null;
+  for (const row of sized) {
+    const meta = { accountId: target.accountId, quoteId: undefined, title: row.meta.title, equipmentTag: row.meta.equipmentTag || undefined, notes: row.meta.notes || undefined };
+    const saved = await insertSizing(tx, user, meta, { input: row.input, result: row.result! });
+    if (quoteId) await addQuoteItem(user, quoteId, saved.id, 1, tx);
+  }
+  return { quoteId, quoteNumber: quote?.number ?? null };
+}
+
+/**
+ * Saves the sheet's sized rows, the original upload and (for vendor staff) the quote they go on, all or nothing.
+ * Rows are sized again here: the browser's preview is never trusted.
+ */
+export async function saveBatch(user: CurrentUser, target: BatchTarget, cells: BatchCells[], file: { name: string; type: string; bytes: Buffer }): Promise<BatchSaved> {
+  assertAccountAccess(user, target.accountId);
+  if ((target.quoteId || target.newQuoteTitle) && !can(user.role, 'quote:manage')) throw new ActionError('Only vendor staff put batch rows on a quote.', 403);
+  if (target.newQuoteTitle && (target.newQuoteTitle.length < 3 || target.newQuoteTitle.length > 160)) throw new ActionError('The quote title needs 3 to 160 characters.', 400, { newQuoteTitle: ['3 to 160 characters'] });
+  const rows = evaluateSheet(cells);
+  const sized = rows.filter((r) => r.result && r.input);
+  if (!sized.length) throw new ActionError('No row of the sheet could be sized; fix the problems and check again.', 422);
+  const store = getBlobStore();
+  const uploadId = randomUUID();
+  const key = accountKey(target.accountId, 'uploads', `${uploadId}.csv`);
+  if (!store.transactional) await store.put(key, file.bytes, 'text/csv');
+  try {
+    const out = await db.transaction(async (tx) => {
+      if (store.transactional) await store.put(key, file.bytes, 'text/csv', tx);
+      await tx.insert(uploads).values({ id: uploadId, accountId: target.accountId, uploadedByUserId: user.id, fileName: file.name, contentType: 'text/csv', byteSize: file.bytes.byteLength, blobKey: key, rowCount: rows.length });
+      const written = await writeRows(tx, user, target, sized);
+      await writeAudit(tx, { actor: user, action: 'batch.saved', entityType: 'upload', entityId: uploadId, accountId: target.accountId, detail: { rows: rows.length, saved: sized.length, quoteId: written.quoteId } });
+      return written;
+    });
+    return { saved: sized.length, skipped: rows.length - sized.length, uploadId, ...out };
+  } catch (err) {
+    if (!store.transactional) await store.delete(key).catch(() => undefined);
+    throw err;
+  }
+}

@@ -1,0 +1,58 @@
+import 'server-only';
+import { and, desc, eq, sql } from 'drizzle-orm';
+import { db } from '@/db';
+import { outbox } from '@/db/schema';
+
+export type EmailLogEntry = {
+  id: string;
+  to: string;
+  subject: string;
+  status: 'pending' | 'sent' | 'dead';
+  attempts: number;
+  createdAt: Date;
+  sentAt: Date | null;
+  nextAttemptAt: Date | null;
+  lastError: string | null;
+};
+
+/**
+ * The mail sent about one thing (a quote, a datasheet, an invitation), newest first, for the support
+ * look-up. Callers authorise first: this reads across accounts.
+ */
+export async function listEmailsFor(entityType: string, entityId: string): Promise<EmailLogEntry[]> {
+  const rows = await db
+    .select({
+      id: outbox.id,
+      to: outbox.toAddress,
+      subject: outbox.subject,
+      status: outbox.status,
+      attempts: outbox.attempts,
+      createdAt: outbox.createdAt,
+      sentAt: outbox.sentAt,
+      nextAttemptAt: outbox.nextAttemptAt,
+      lastError: outbox.lastError,
+    })
+    .from(outbox)
+    .where(and(eq(outbox.entityType, entityType), eq(outbox.entityId, entityId)))
+    .orderBy(desc(outbox.createdAt))
+    .limit(100);
+  // A retry time means something only while the mail is still waiting.
+  return rows.map((r) => ({ ...r, nextAttemptAt: r.status === 'pending' ? r.nextAttemptAt : null }));
+}
+
+export type OutboxBacklog = { pending: number; dead: number; oldestPendingAgeS: number | null };
+
+/** Queue health for the readiness check: how much mail waits, how long the oldest has waited, how much was given up. */
+export async function outboxBacklog(): Promise<OutboxBacklog> {
+  const res = await db.execute<{ pending: string; dead: string; oldest_age_s: string | null }>(sql`
+    select count(*) filter (where status = 'pending') as pending,
+           count(*) filter (where status = 'dead') as dead,
+           extract(epoch from now() - min(created_at) filter (where status = 'pending')) as oldest_age_s
+    from outbox where status <> 'sent'`);
+  const row = res.rows[0];
+  return {
+    pending: Number(row?.pending ?? 0),
+    dead: Number(row?.dead ?? 0),
+    oldestPendingAgeS: row?.oldest_age_s == null ? null : Math.max(0, Math.round(Number(row.oldest_age_s))),
+  };
+}
