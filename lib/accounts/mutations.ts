@@ -31,7 +31,9 @@ export async function createAccount(user: CurrentUser, input: AccountInput): Pro
 export async function updateAccount(user: CurrentUser, accountId: string, input: AccountInput): Promise<void> {
   assertAccountAccess(user, accountId);
   await db.transaction(async (tx) => {
-    const res = await tx.update(accounts).set({ ...input, updatedAt: new Date() }).where(eq(accounts.id, accountId)).returning({ id: accounts.id });
+    // An emptied field is cleared: undefined would leave the old value in place.
+    const values = { name: input.name, site: input.site ?? null, billingContactName: input.billingContactName ?? null, billingContactEmail: input.billingContactEmail ?? null, barometricPressureKpa: input.barometricPressureKpa ?? null, siteAltitudeM: input.siteAltitudeM ?? null };
+    const res = await tx.update(accounts).set({ ...values, updatedAt: new Date() }).where(eq(accounts.id, accountId)).returning({ id: accounts.id });
     if (!res[0]) throw new ActionError('That account no longer exists.', 404);
     await writeAudit(tx, { actor: user, action: 'account.updated', entityType: 'account', entityId: accountId, accountId, detail: { fields: Object.keys(input) } });
   });

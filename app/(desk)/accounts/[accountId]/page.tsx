@@ -1,0 +1,73 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { EmptyState } from '@/app/_components/empty-state';
+import { PageBody, PageHeader, Section } from '@/app/_components/page-header';
+import { orNotFound, uuidOrNotFound } from '@/app/_components/route-guards';
+import { buttonLinkClass } from '@/app/_components/submit-button';
+import { getAccount, type AccountDetail } from '@/lib/accounts/queries';
+import { requirePageUser } from '@/lib/auth/guards';
+import { can } from '@/lib/auth/roles';
+import { listQuotes } from '@/lib/quotes/queries';
+import { listSizings } from '@/lib/sizings/queries';
+import { QuotesTable } from '../../quotes/_components/quotes-table';
+import { SizingsTable } from '../../sizings/_components/sizings-table';
+import { AccountForm } from '../_components/account-form';
+import { AccountDetails } from './_components/account-details';
+import { MembersPanel } from './_components/members-panel';
+
+export const metadata: Metadata = { title: 'Customer account' };
+
+function formValues(a: AccountDetail) {
+  return {
+    name: a.name,
+    site: a.site ?? '',
+    billingContactName: a.billingContactName ?? '',
+    billingContactEmail: a.billingContactEmail ?? '',
+    barometricPressureKpa: a.barometricPressureKpa === null ? '' : String(a.barometricPressureKpa),
+    siteAltitudeM: a.siteAltitudeM === null ? '' : String(a.siteAltitudeM),
+  };
+}
+
+export default async function AccountPage({ params }: { params: Promise<{ accountId: string }> }) {
+  const { accountId: raw } = await params;
+  const user = await requirePageUser(`/accounts/${raw}`, 'account:read');
+  const accountId = uuidOrNotFound(raw);
+  const account = await orNotFound(getAccount(user, accountId));
+  const mayManage = can(user.role, 'account:manage');
+  const mayQuote = can(user.role, 'quote:manage');
+  const [quotes, sizings] = await Promise.all([
+    can(user.role, 'quote:read') ? listQuotes(user, { accountId }) : Promise.resolve([]),
+    can(user.role, 'sizing:read') ? listSizings(user, { accountId, limit: 100 }) : Promise.resolve([]),
+  ]);
+
+  return (
+    <PageBody>
+      <PageHeader
+        eyebrow={<Link href="/accounts" className="underline">Customer accounts</Link>}
+        title={account.name}
+        description={account.site ?? undefined}
+        actions={mayQuote && <Link href={`/quotes/new?accountId=${account.id}`} className={buttonLinkClass}>New quote for this account</Link>}
+      />
+      <Section title="Details" id="details">
+        <AccountDetails account={account} />
+        {mayManage && (
+          <details className="mt-4 rounded-md border border-paper-line p-3">
+            <summary className="cursor-pointer text-sm font-medium text-tide-600">Edit details</summary>
+            <div className="mt-4">
+              <AccountForm mode={{ kind: 'edit', accountId: account.id }} initial={formValues(account)} />
+            </div>
+          </details>
+        )}
+      </Section>
+      <Section title="People" id="people">
+        <MembersPanel account={account} mayInvite={can(user.role, 'member:invite')} />
+      </Section>
+      <Section title="Quotes" id="quotes">
+        <QuotesTable quotes={quotes} hideAccount empty={<EmptyState title="No quotes for this account yet" />} />
+      </Section>
+      <Section title="Saved sizings" id="sizings">
+        <SizingsTable sizings={sizings} hideAccount empty={<EmptyState title="No sizings saved to this account yet">Size a heater or compressor and save it here.</EmptyState>} />
+      </Section>
+    </PageBody>
+  );
+}

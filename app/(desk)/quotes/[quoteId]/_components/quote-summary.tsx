@@ -1,0 +1,37 @@
+import type { ReactNode } from 'react';
+import Link from 'next/link';
+import { tableLinkClass } from '@/app/_components/data-table';
+import { formatDateTime } from '@/app/_components/format';
+import { QuoteStatusBadge } from '@/app/_components/status-badge';
+import type { QuoteDetail } from '@/lib/quotes/queries';
+
+/** The quote's identity, customer account and history as a definition list. */
+export function QuoteSummary({ quote, linkAccount }: { quote: QuoteDetail; linkAccount: boolean }) {
+  const rows: [string, ReactNode][] = [
+    ['Quote number', <span key="n" className="font-mono" data-testid="quote-number">{quote.number}</span>],
+    ['Status', <QuoteStatusBadge key="s" status={quote.status} />],
+    ['Customer account', linkAccount ? <Link key="a" href={`/accounts/${quote.accountId}`} className={tableLinkClass}>{quote.accountName}</Link> : quote.accountName],
+    ['Billing contact', quote.billingContactEmail ?? '—'],
+    ['Prepared by', quote.createdByName ?? '—'],
+    ['Created', formatDateTime(quote.createdAt)],
+    ['Sent', formatDateTime(quote.sentAt)],
+  ];
+  return (
+    <div className="space-y-4">
+      <dl className="grid gap-x-6 gap-y-2 text-sm sm:grid-cols-[max-content_1fr]">
+        {rows.map(([k, v]) => (
+          <div key={k} className="contents">
+            <dt className="text-ink-muted">{k}</dt>
+            <dd className="tabular text-ink">{v}</dd>
+          </div>
+        ))}
+      </dl>
+      {quote.notes && (
+        <div>
+          <h3 className="text-label uppercase tracking-wide text-ink-muted">Notes</h3>
+          <p className="mt-1 whitespace-pre-wrap text-sm text-ink">{quote.notes}</p>
+        </div>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,36 @@
+'use server';
+
+import { revalidatePath } from 'next/cache';
+import { defineAction } from '@/lib/actions/define-action';
+import { addQuoteItem, removeQuoteItem, sendQuote, setQuoteStatus } from '@/lib/quotes/mutations';
+import { quoteIdSchema, quoteItemRemoveSchema, quoteItemSchema, quoteStatusSchema } from '@/lib/quotes/schema';
+
+function refresh(quoteId: string) {
+  revalidatePath('/quotes');
+  revalidatePath(`/quotes/${quoteId}`);
+}
+
+export const addQuoteLineAction = defineAction({ permission: 'quote:manage', schema: quoteItemSchema, name: 'quote.line_add' }, async (input, user) => {
+  await addQuoteItem(user, input.quoteId, input.sizingId, input.quantity);
+  refresh(input.quoteId);
+  return { quoteId: input.quoteId };
+});
+
+export const removeQuoteLineAction = defineAction({ permission: 'quote:manage', schema: quoteItemRemoveSchema, name: 'quote.line_remove' }, async (input, user) => {
+  await removeQuoteItem(user, input.quoteId, input.itemId);
+  refresh(input.quoteId);
+  return { quoteId: input.quoteId };
+});
+
+export const setQuoteStatusAction = defineAction({ permission: 'quote:manage', schema: quoteStatusSchema, name: 'quote.status' }, async (input, user) => {
+  await setQuoteStatus(user, input.quoteId, input.status);
+  refresh(input.quoteId);
+  return { status: input.status };
+});
+
+/** Marks the quote sent and queues the e-mail to the account's billing contact; answers with the address. */
+export const sendQuoteAction = defineAction({ permission: 'quote:manage', schema: quoteIdSchema, name: 'quote.send' }, async (input, user) => {
+  const { to } = await sendQuote(user, input.quoteId);
+  refresh(input.quoteId);
+  return { to };
+});

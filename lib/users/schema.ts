@@ -1,0 +1,22 @@
+import { z } from 'zod';
+import type { UserRole } from '@/lib/auth/roles';
+
+// Listed here rather than imported from the database enum so this schema stays light in the browser;
+// the Record type fails to compile if a role is added to the enum and not here.
+const roleSet: Record<UserRole, true> = { sales_engineer: true, customer: true, support: true, admin: true };
+const userRoles = Object.keys(roleSet) as [UserRole, ...UserRole[]];
+
+/** Roles an admin can move a person between; customers belong to an account and keep their role. */
+export const staffRoleValues = ['sales_engineer', 'support', 'admin'] as const;
+
+export const userRoleChangeSchema = z.object({
+  userId: z.uuid({ message: 'Choose a user.' }),
+  role: z.enum(userRoles, { message: `Role must be one of: ${userRoles.join(', ')}.` }),
+});
+export type UserRoleChangeInput = z.output<typeof userRoleChangeSchema>;
+
+export const userDisableSchema = z.object({
+  userId: z.uuid({ message: 'Choose a user.' }),
+  disabled: z.boolean({ message: 'Say whether the user is disabled (true) or enabled (false).' }),
+});
+export type UserDisableInput = z.output<typeof userDisableSchema>;
