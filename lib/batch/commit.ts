@@ -8,8 +8,8 @@ import type { CurrentUser } from '@/lib/auth/current-user';
 import { assertAccountAccess } from '@/lib/auth/guards';
 import { can } from '@/lib/auth/roles';
 import { accountKey, getBlobStore } from '@/lib/blob';
-import { addQuoteItem, createQuote } from '@/lib/quotes/mutations';
-import { insertSizing } from '@/lib/sizings/save';
+import { addQuoteItems, createQuote } from '@/lib/quotes/mutations';
+import { insertSizings } from '@/lib/sizings/save';
 import { evaluateSheet, type BatchRow } from './evaluate';
 import type { BatchCells } from './row-to-request';
 
@@ -20,12 +20,16 @@ async function writeRows(tx: Tx, user: CurrentUser, target: BatchTarget, sized: 
   let quote: { id: string; number: string } | null = null;
   if (target.newQuoteTitle) quote = await createQuote(user, { accountId: target.accountId, title: target.newQuoteTitle, sizingIds: [] }, tx);
   const quoteId = quote?.id ?? target.quoteId ?? null;
-  for (const row of sized) {
-    const meta = { accountId: target.accountId, quoteId: undefined, title: row.meta.title, equipmentTag: row.meta.equipmentTag || undefined, notes: row.meta.notes || undefined };
-    const saved = await insertSizing(tx, user, meta, { input: row.input, result: row.result! });
-    if (quoteId) await addQuoteItem(user, quoteId, saved.id, 1, tx);
-  }
-  return { quoteId, quoteNumber: quote?.number ?? null };
+  const saved = await insertSizings(
+    tx,
+    user,
+    sized.map((row) => ({
+      meta: { accountId: target.accountId, quoteId: undefined, title: row.meta.title, equipmentTag: row.meta.equipmentTag || undefined, notes: row.meta.notes || undefined },
+      computed: { input: row.input, result: row.result! },
+    })),
+  );
+  if (quoteId) await addQuoteItems(tx, user, quoteId, saved.map((s) => s.id));
+  return { quoteId, quoteNumber: quote?.number ?? null, numbers: saved.map((s) => s.number) };
 }
 
 /**
@@ -48,8 +52,8 @@ export async function saveBatch(user: CurrentUser, target: BatchTarget, cells: B
       if (store.transactional) await store.put(key, file.bytes, 'text/csv', tx);
       await tx.insert(uploads).values({ id: uploadId, accountId: target.accountId, uploadedByUserId: user.id, fileName: file.name, contentType: 'text/csv', byteSize: file.bytes.byteLength, blobKey: key, rowCount: rows.length });
       const written = await writeRows(tx, user, target, sized);
-      await writeAudit(tx, { actor: user, action: 'batch.saved', entityType: 'upload', entityId: uploadId, accountId: target.accountId, detail: { rows: rows.length, saved: sized.length, quoteId: written.quoteId } });
-      return written;
+      await writeAudit(tx, { actor: user, action: 'batch.saved', entityType: 'upload', entityId: uploadId, accountId: target.accountId, detail: { rows: rows.length, saved: sized.length, quoteId: written.quoteId, sizings: written.numbers } });
+      return { quoteId: written.quoteId, quoteNumber: written.quoteNumber };
     });
     return { saved: sized.length, skipped: rows.length - sized.length, uploadId, ...out };
   } catch (err) {

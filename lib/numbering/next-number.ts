@@ -12,10 +12,19 @@ const formats = {
 
 export type NumberKind = keyof typeof formats;
 
-export async function nextNumber(tx: Tx, kind: NumberKind): Promise<string> {
+function format(kind: NumberKind, n: string): string {
   const f = formats[kind];
-  const res = await tx.execute<{ n: string }>(sql`select nextval(${f.seq}::regclass)::text as n`);
-  const n = res.rows[0]?.n ?? '0';
   const yy = String(new Date().getUTCFullYear() % 100).padStart(2, '0');
   return `${f.prefix}${yy}-${n.padStart(f.width, '0')}`;
+}
+
+export async function nextNumber(tx: Tx, kind: NumberKind): Promise<string> {
+  const res = await tx.execute<{ n: string }>(sql`select nextval(${formats[kind].seq}::regclass)::text as n`);
+  return format(kind, res.rows[0]?.n ?? '0');
+}
+
+/** `count` numbers in one round trip, for batch saves. */
+export async function nextNumbers(tx: Tx, kind: NumberKind, count: number): Promise<string[]> {
+  const res = await tx.execute<{ n: string }>(sql`select nextval(${formats[kind].seq}::regclass)::text as n from generate_series(1, ${count})`);
+  return res.rows.map((r) => format(kind, r.n));
 }

@@ -60,6 +60,18 @@ export async function addQuoteItem(user: CurrentUser, quoteId: string, sizingId:
   else await db.transaction(work);
 }
 
+/** Appends many sizings of the quote's account as lines (batch saves), in the caller's transaction. */
+export async function addQuoteItems(tx: Tx, user: CurrentUser, quoteId: string, sizingIds: string[]): Promise<void> {
+  const q = await lockQuote(tx, user, quoteId);
+  if (q.status !== 'draft') throw new ActionError(`Quote ${q.number} is ${q.status}; only draft quotes take new lines.`, 409);
+  await assertSizingsInAccount(tx, q.accountId, sizingIds);
+  const [{ pos } = { pos: 0 }] = await tx.select({ pos: sql<number>`coalesce(max(${quoteItems.position}) + 1, 0)::int` }).from(quoteItems).where(eq(quoteItems.quoteId, quoteId));
+  for (let i = 0; i < sizingIds.length; i += 1000) {
+    await tx.insert(quoteItems).values(sizingIds.slice(i, i + 1000).map((sizingId, j) => ({ quoteId, sizingId, quantity: 1, position: pos + i + j }))).onConflictDoNothing();
+  }
+  await writeAudit(tx, { actor: user, action: 'quote.lines_added', entityType: 'quote', entityId: quoteId, accountId: q.accountId, detail: { count: sizingIds.length } });
+}
+
 export async function removeQuoteItem(user: CurrentUser, quoteId: string, itemId: string): Promise<void> {
   await db.transaction(async (tx) => {
     const q = await lockQuote(tx, user, quoteId);

@@ -7,7 +7,7 @@ import { writeAudit } from '@/lib/audit/write';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { assertAccountAccess } from '@/lib/auth/guards';
 import { can } from '@/lib/auth/roles';
-import { nextNumber } from '@/lib/numbering/next-number';
+import { nextNumber, nextNumbers } from '@/lib/numbering/next-number';
 import { addQuoteItem } from '@/lib/quotes/mutations';
 import { calculate, ENGINE_VERSION, SizingInputError, type SizingResult } from '@/lib/sizing';
 import { gasKeyAndLabel } from './gas-label';
@@ -32,12 +32,11 @@ export function computeForSave(input: unknown): { input: unknown; result: Sizing
   }
 }
 
-export async function insertSizing(tx: Tx, user: CurrentUser, meta: SizingMeta, computed: { input: unknown; result: SizingResult }, revision = 1) {
-  const number = await nextNumber(tx, 'sizing');
+type Computed = { input: unknown; result: SizingResult };
+
+function sizingValues(user: CurrentUser, meta: SizingMeta, computed: Computed, number: string, revision: number) {
   const gas = gasKeyAndLabel((computed.input as { gas?: unknown }).gas);
-  const [row] = await tx
-    .insert(sizings)
-    .values({
+  return {
       number,
       accountId: meta.accountId,
       title: meta.title,
@@ -54,10 +53,25 @@ export async function insertSizing(tx: Tx, user: CurrentUser, meta: SizingMeta, 
       revision,
       revisedFromId: meta.revisedFromId,
       createdByUserId: user.id,
-    })
-    .returning({ id: sizings.id, number: sizings.number });
+  };
+}
+
+export async function insertSizing(tx: Tx, user: CurrentUser, meta: SizingMeta, computed: Computed, revision = 1) {
+  const number = await nextNumber(tx, 'sizing');
+  const [row] = await tx.insert(sizings).values(sizingValues(user, meta, computed, number, revision)).returning({ id: sizings.id, number: sizings.number });
   if (!row) throw new Error('sizing insert returned no row');
   return row;
+}
+
+/** Many sizings in a few statements (batch saves): numbers in one round trip, rows in chunks. */
+export async function insertSizings(tx: Tx, user: CurrentUser, items: { meta: SizingMeta; computed: Computed }[]) {
+  const numbers = await nextNumbers(tx, 'sizing', items.length);
+  const out: { id: string; number: string }[] = [];
+  for (let i = 0; i < items.length; i += 500) {
+    const chunk = items.slice(i, i + 500).map((it, j) => sizingValues(user, it.meta, it.computed, numbers[i + j]!, 1));
+    out.push(...(await tx.insert(sizings).values(chunk).returning({ id: sizings.id, number: sizings.number })));
+  }
+  return out;
 }
 
 /** Saves a sizing to an account (and optionally a draft quote) in one transaction with its audit entry. */

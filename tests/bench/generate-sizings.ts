@@ -63,11 +63,14 @@ async function main() {
       cols.flow!.push(res.massFlowKgPerS);
       cols.created!.push(new Date(Date.now() - rnd() * 5 * 365 * 86_400_000).toISOString());
     }
-    await db.execute(sql`
-      insert into sizings (number, account_id, title, equipment_tag, service, gas_key, gas_label, input, result, engine_version, headline_kw, mass_flow_kg_per_s, created_by_user_id, created_at)
-      select u.number, u.account, u.title, u.tag, u.service::service, u.gas, u.gas, u.input::jsonb, u.result::jsonb, 'bench', u.kw, u.flow, ${creator!.id}, u.created::timestamptz
-      from unnest(${cols.number}::text[], ${cols.account}::uuid[], ${cols.title}::text[], ${cols.tag}::text[], ${cols.service}::text[], ${cols.gasKey}::text[], ${cols.input}::text[], ${cols.result}::text[], ${cols.kw}::float8[], ${cols.flow}::float8[], ${cols.created}::text[])
-        as u(number, account, title, tag, service, gas, input, result, kw, flow, created)`);
+    // pg sends each JavaScript array as one PostgreSQL array parameter; unnest turns them back into rows.
+    await pool.query(
+      `insert into sizings (number, account_id, title, equipment_tag, service, gas_key, gas_label, input, result, engine_version, headline_kw, mass_flow_kg_per_s, created_by_user_id, created_at)
+       select u.number, u.account, u.title, u.tag, u.service::service, u.gas, u.gas, u.input::jsonb, u.result::jsonb, 'bench', u.kw, u.flow, $12, u.created::timestamptz
+       from unnest($1::text[], $2::uuid[], $3::text[], $4::text[], $5::text[], $6::text[], $7::text[], $8::text[], $9::float8[], $10::float8[], $11::text[])
+         as u(number, account, title, tag, service, gas, input, result, kw, flow, created)`,
+      [cols.number, cols.account, cols.title, cols.tag, cols.service, cols.gasKey, cols.input, cols.result, cols.kw, cols.flow, cols.created, creator!.id],
+    );
     if ((done / BATCH) % 10 === 0) console.log(`${done + BATCH} rows, ${((Date.now() - started) / 1000).toFixed(0)} s`);
   }
   await db.execute(sql`analyze sizings`);
