@@ -1,6 +1,7 @@
 import { clerkMiddleware } from '@clerk/nextjs/server';
 import { NextResponse, type NextFetchEvent, type NextRequest } from 'next/server';
 import { clerkEnabled, env } from '@/lib/env';
+import { databaseUp } from '@/lib/ops/db-status';
 import { LOCAL_SESSION_COOKIE, verifyLocalSession } from '@/mocks/identity/session-token';
 
 // Coarse gate only: every page, action and handler checks the user and role again on the server.
@@ -17,6 +18,22 @@ function withRequestId(req: NextRequest): NextResponse {
   const res = NextResponse.next({ request: { headers } });
   res.headers.set('x-request-id', requestId);
   return res;
+}
+
+// Pages that read the database; their requests get an immediate 503 page while it is unreachable.
+function needsDatabase(pathname: string): boolean {
+  return isProtected(pathname) || pathname === '/size' || pathname.startsWith('/invite/') || pathname === '/sign-up';
+}
+
+const unavailablePage = `<!doctype html><html lang="en"><head><meta charset="utf-8"><title>Dutywise is unavailable</title></head>
+<body style="font-family:system-ui,sans-serif;max-width:36rem;margin:4rem auto;padding:0 1rem;color:#1c232b;background:#f6f4ef">
+<h1>Dutywise cannot reach its database</h1><p>Nothing you saved is lost. The desk will answer again as soon as the database is back; try again in a minute.</p>
+</body></html>`;
+
+async function unavailable(req: NextRequest): Promise<NextResponse | null> {
+  if (req.method !== 'GET' || !needsDatabase(req.nextUrl.pathname) || req.headers.get('rsc')) return null;
+  if (await databaseUp()) return null;
+  return new NextResponse(unavailablePage, { status: 503, headers: { 'content-type': 'text/html; charset=utf-8', 'retry-after': '10', 'cache-control': 'no-store' } });
 }
 
 function toSignIn(req: NextRequest): NextResponse {
@@ -48,7 +65,9 @@ const clerkGate = clerkEnabled
     )
   : null;
 
-export default function middleware(req: NextRequest, event: NextFetchEvent) {
+export default async function middleware(req: NextRequest, event: NextFetchEvent) {
+  const down = await unavailable(req);
+  if (down) return down;
   return clerkGate ? clerkGate(req, event) : localGate(req);
 }
 
