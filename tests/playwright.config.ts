@@ -61,5 +61,14 @@ export default defineConfig({
       timeout: 120_000,
       env: appEnv,
     },
+    {
+      // A second instance on the same database and build: nothing may be processed twice.
+      command: `node node_modules/next/dist/bin/next start -p ${e2ePorts.secondApp}`,
+      url: `http://localhost:${e2ePorts.secondApp}/api/health`,
+      cwd: repoRoot,
+      reuseExistingServer: false,
+      timeout: 120_000,
+      env: { ...appEnv, APP_URL: `http://localhost:${e2ePorts.secondApp}` },
+    },
   ],
 });

@@ -38,6 +38,9 @@ if [ "${SKIP_E2E:-0}" != 1 ]; then
     fi
   fi
   export NEXT_DIST_DIR=.next-test
+  # Canary secrets (tests/e2e/support/canaries.ts): the bundle scan proves none reaches the browser.
+  export SESSION_SECRET=canary-session-secret-7f31c9a2d4e6b8f0a1c3e5d7 STRIPE_SECRET_KEY=sk_test_canary_5b9e1d3f7a2c4e6f
+  export STRIPE_WEBHOOK_SECRET=whsec_canary_8d2f4a6c1e3b5d7f SMTP_PASSWORD=canary-smtp-password-3e5a7c9b
   run "build for browser tests" npx next build
   run "browser journeys" npx playwright test --config tests/playwright.config.ts
 fi
