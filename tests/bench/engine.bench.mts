@@ -103,18 +103,23 @@ for (let i = 0; i < 10_000; i++) {
     });
   }
 }
-const batchCpu0 = cpuSeconds();
-const batchWall0 = performance.now();
-let refused = 0;
-for (const row of rows) {
-  try {
-    sink += calculate(row).massFlowKgPerS;
-  } catch {
-    refused++;
+function runBatch(): { cpu: number; wall: number; refused: number } {
+  const cpu0 = cpuSeconds();
+  const wall0 = performance.now();
+  let refused = 0;
+  for (const row of rows) {
+    try {
+      sink += calculate(row).massFlowKgPerS;
+    } catch {
+      refused++;
+    }
   }
+  return { cpu: cpuSeconds() - cpu0, wall: (performance.now() - wall0) / 1000, refused };
 }
-const batchSeconds = cpuSeconds() - batchCpu0;
-const batchWallSeconds = (performance.now() - batchWall0) / 1000;
+// The first pass includes compiling the code paths the earlier loops did not reach (humid air, steam,
+// polytropic conversion...), as a fresh server would; the second is the steady state.
+const coldBatch = runBatch();
+const warmBatch = runBatch();
 
 const table: Row[] = [
   { name: 'heater sizing, core (sizeHeater)', value: heaterRate.cpu, wall: heaterRate.wall, unit: '/s', target: 1_000_000, higherIsBetter: true },
@@ -122,7 +127,8 @@ const table: Row[] = [
   { name: 'calculate() validated, heater', value: heaterCalcRate.cpu, wall: heaterCalcRate.wall, unit: '/s', target: 50_000, higherIsBetter: true },
   { name: 'calculate() validated, 3-stage compressor mixture', value: compressorCalcRate.cpu, wall: compressorCalcRate.wall, unit: '/s', target: 50_000, higherIsBetter: true },
   { name: 'calculateCore() typed heater (no zod)', value: coreCalcRate.cpu, wall: coreCalcRate.wall, unit: '/s', target: 50_000, higherIsBetter: true },
-  { name: `10,000-row mixed batch via calculate() (${refused} refused)`, value: batchSeconds, wall: batchWallSeconds, unit: ' s', target: 1, higherIsBetter: false },
+  { name: `10,000-row mixed batch via calculate(), first pass (${coldBatch.refused} refused)`, value: coldBatch.cpu, wall: coldBatch.wall, unit: ' s', target: 1, higherIsBetter: false },
+  { name: '10,000-row mixed batch via calculate(), second pass', value: warmBatch.cpu, wall: warmBatch.wall, unit: ' s', target: 1, higherIsBetter: false },
 ];
 
 const fmt = (v: number, unit: string) => (unit === ' s' ? v.toFixed(3) : Math.round(v).toLocaleString('en-US')) + unit;

@@ -51,7 +51,7 @@ describe('PostgreSQL stopped mid-run', () => {
     const page = () => middleware(new NextRequest('http://localhost/quotes'), {} as NextFetchEvent);
     let pageStatus = 0;
     for (let i = 0; i < 40 && pageStatus !== 503; i++) {
-      pageStatus = (await page()).status;
+      pageStatus = (await page())!.status;
       if (pageStatus !== 503) await new Promise((r) => setTimeout(r, 200));
     }
     expect(pageStatus).toBe(503);
@@ -66,7 +66,7 @@ describe('PostgreSQL stopped mid-run', () => {
     // and pages are served again (here: the sign-in redirect for a signed-out visitor)
     let after = 503;
     for (let i = 0; i < 40 && after === 503; i++) {
-      after = (await page()).status;
+      after = (await page())!.status;
       if (after === 503) await new Promise((r) => setTimeout(r, 200));
     }
     expect(after).toBe(307);

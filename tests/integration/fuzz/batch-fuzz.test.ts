@@ -59,7 +59,7 @@ describe('batch upload under hostile input', () => {
   it('stores no row from a sheet whose rows all fail', async () => {
     await fc.assert(
       fc.asyncProperty(fc.array(row, { minLength: 1, maxLength: 4 }), async (rows) => {
-        const broken = rows.map((r) => ({ ...r, service: 'boiler' }));
+        const broken = rows.map((r): Record<string, string> => ({ ...r, service: 'boiler' }));
         const text = Papa.unparse({ fields: batchColumnNames, data: broken.map((r) => batchColumnNames.map((c) => r[c] ?? '')) });
         const res = await commit(form(text, 'enquiry.csv', { target: JSON.stringify({ accountId }) }), { params: Promise.resolve({}) });
         expect(res.status).toBeGreaterThanOrEqual(400);

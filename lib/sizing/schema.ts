@@ -1,0 +1,153 @@
+import { z } from 'zod';
+import { checkComposition } from '../thermo/composition';
+import { findPreset, PRESET_IDS } from '../thermo/presets';
+import { ASHRAE_MAX_TEMPERATURE_K, ASHRAE_MIN_TEMPERATURE_K } from '../thermo/water-saturation';
+import { ABSOLUTE_PRESSURE_UNITS, FLOW_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS } from '../units/unit-strings';
+import { DEFAULT_MECHANICAL_EFFICIENCY } from './compressor';
+import { numberField, quantityField, temperatureField } from './schema-fields';
+
+/** Ranges the schema enforces; the form shows the same figures. */
+export const LIMITS = {
+  heatLossPercent: { min: 0, max: 50 },
+  designMarginPercent: { min: 0, max: 100 },
+  interstagePressureDropPercent: { min: 0, max: 10 },
+  stages: { min: 1, max: 6 },
+  k: { min: 1, max: 1.8 },
+  cpJPerKgK: { min: 100, max: 20_000 },
+  voltageV: { min: 100, max: 35_000 },
+  heaterRatingKw: { min: 0, max: 100_000 },
+  siteAltitudeM: { min: -500, max: 6000 },
+} as const;
+
+type IssueList = { code: 'custom'; path: string[]; message: string; input: unknown }[];
+
+function addIssue(issues: unknown[], input: unknown, path: string[], message: string): void {
+  (issues as IssueList).push({ code: 'custom', path, message, input });
+}
+
+const efficiency = (hint: string) =>
+  numberField({ min: 0, minExclusive: true, max: 1, hint: `a fraction, e.g. 0.8 for 80 %; ${hint}` });
+
+const temperature = temperatureField(TEMPERATURE_UNITS);
+const pressure = quantityField(PRESSURE_UNITS, 'pressure');
+
+const supply = z.strictObject({
+  voltageV: numberField({ ...LIMITS.voltageV, unit: 'V', hint: 'line-to-line for three-phase' }),
+  phases: z.union([z.literal(1), z.literal(3), z.literal('1'), z.literal('3')], { error: 'phases must be 1 or 3' })
+    .transform((p) => (Number(p) === 1 ? 1 : 3) as 1 | 3),
+});
+
+const gas = z
+  .strictObject({
+    preset: z.string({ error: 'preset must be a string' }).optional(),
+    components: z.record(z.string(), numberField({ min: 0, max: 1 })).optional(),
+    basis: z.enum(['mole', 'mass'], { error: 'basis must be "mole" or "mass"' }).optional(),
+    relativeHumidityPercent: numberField({ min: 0, max: 100, unit: '%' }).optional(),
+    dewPoint: temperatureField(TEMPERATURE_UNITS, ASHRAE_MIN_TEMPERATURE_K, ASHRAE_MAX_TEMPERATURE_K, 'the ASHRAE saturation-pressure range').optional(),
+  })
+  .check((ctx) => {
+    const g = ctx.value;
+    const push = addIssue.bind(null, ctx.issues, g);
+    if ((g.preset === undefined) === (g.components === undefined)) {
+      push([], 'give either "preset" or "components", not both and not neither');
+      return;
+    }
+    const humid = g.preset !== undefined && findPreset(g.preset)?.id === 'humid-air';
+    if (g.preset !== undefined && !findPreset(g.preset)) {
+      push(['preset'], `unknown gas preset "${g.preset}" (allowed: ${PRESET_IDS.join(', ')})`);
+    }
+    if (humid && (g.relativeHumidityPercent === undefined) === (g.dewPoint === undefined)) {
+      push(['relativeHumidityPercent'], 'humid air needs exactly one of relativeHumidityPercent or dewPoint');
+    }
+    if (!humid) {
+      if (g.relativeHumidityPercent !== undefined) push(['relativeHumidityPercent'], 'only used with preset "humid-air"');
+      if (g.dewPoint !== undefined) push(['dewPoint'], 'only used with preset "humid-air"');
+    }
+    if (g.basis !== undefined && g.components === undefined) push(['basis'], 'only used with "components"');
+    if (g.components !== undefined) {
+      const check = checkComposition(g.components, g.basis ?? 'mole');
+      if (!check.ok) for (const issue of check.issues) push(['components', ...(issue.path ? [issue.path] : [])], issue.message);
+    }
+  });
+
+const common = {
+  gas,
+  flow: quantityField(FLOW_UNITS, 'flow', { min: 0, minExclusive: true }),
+  inlet: z.strictObject({ temperature, pressure }),
+  site: z
+    .strictObject({
+      barometricPressure: quantityField(ABSOLUTE_PRESSURE_UNITS, 'absolute pressure', { min: 0, minExclusive: true }).optional(),
+      altitudeM: numberField({ ...LIMITS.siteAltitudeM, unit: 'm' }).optional(),
+    })
+    .check((ctx) => {
+      if (ctx.value.barometricPressure !== undefined && ctx.value.altitudeM !== undefined) {
+        ctx.issues.push({ code: 'custom', path: ['altitudeM'], message: 'give barometricPressure or altitudeM, not both', input: ctx.value });
+      }
+    })
+    .optional(),
+};
+
+const heater = z.strictObject({
+  service: z.literal('heater'),
+  ...common,
+  outletTemperature: temperature,
+  heatLossPercent: numberField({ ...LIMITS.heatLossPercent, unit: '%' }).default(0),
+  designMarginPercent: numberField({ ...LIMITS.designMarginPercent, unit: '%' }).default(0),
+  supply: supply.optional(),
+  heaterRatingsKw: z
+    .array(numberField({ ...LIMITS.heaterRatingKw, minExclusive: true, unit: 'kW' }), { error: 'must be a list of ratings in kW' })
+    .min(1, { error: 'give at least one rating' })
+    .max(500, { error: 'at most 500 ratings' })
+    .optional(),
+});
+
+const compressor = z
+  .strictObject({
+    service: z.literal('compressor'),
+    ...common,
+    dischargePressure: pressure,
+    isentropicEfficiency: efficiency('isentropic (adiabatic) efficiency per stage').optional(),
+    polytropicEfficiency: efficiency('polytropic efficiency per stage').optional(),
+    stages: numberField({ ...LIMITS.stages, integer: true }).default(1),
+    intercoolerOutletTemperature: temperature.optional(),
+    aftercoolerOutletTemperature: temperature.optional(),
+    interstagePressureDropPercent: numberField({ ...LIMITS.interstagePressureDropPercent, unit: '%' }).default(0),
+    mechanicalEfficiency: efficiency('mechanical (bearings, seals, gear)').default(DEFAULT_MECHANICAL_EFFICIENCY),
+    method: z.enum(['constant-k', 'variable-cp'], { error: 'method must be "constant-k" or "variable-cp"' }).default('variable-cp'),
+    dischargeTemperatureLimit: temperature.optional(),
+    k: numberField({ ...LIMITS.k, minExclusive: true, hint: 'ratio of specific heats override' }).optional(),
+    cpJPerKgK: numberField({ ...LIMITS.cpJPerKgK, unit: 'J/(kg K)' }).optional(),
+    motorEfficiency: efficiency('motor efficiency at this load').optional(),
+    motorPowerFactor: efficiency('motor power factor at this load').optional(),
+    supply: supply.optional(),
+  })
+  .check((ctx) => {
+    const c = ctx.value;
+    const both = c.isentropicEfficiency !== undefined && c.polytropicEfficiency !== undefined;
+    const neither = c.isentropicEfficiency === undefined && c.polytropicEfficiency === undefined;
+    if (neither || both) {
+      ctx.issues.push({
+        code: 'custom',
+        path: [both ? 'polytropicEfficiency' : 'isentropicEfficiency'],
+        message: 'give exactly one of isentropicEfficiency or polytropicEfficiency (a fraction above 0 and at most 1)',
+        input: c,
+      });
+    }
+  });
+
+/** The whole calculate request; shared by the form resolver and the API. */
+export const sizingRequestSchema = z.discriminatedUnion('service', [heater, compressor], {
+  error: 'service must be "heater" or "compressor"',
+});
+
+export const heaterRequestSchema = heater;
+export const compressorRequestSchema = compressor;
+
+/** What a client sends (numbers may be strings). */
+export type SizingRequest = z.input<typeof sizingRequestSchema>;
+/** A validated request: numbers coerced, units canonical, defaults filled. */
+export type SizingInput = z.output<typeof sizingRequestSchema>;
+export type HeaterInput = z.output<typeof heater>;
+export type CompressorInput = z.output<typeof compressor>;
+export type GasInput = z.output<typeof gas>;
+export type QuantityInput<U extends string = string> = { value: number; unit: U };
