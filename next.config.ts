@@ -18,7 +18,9 @@ const nextConfig: NextConfig = {
   async headers() {
     return [{ source: '/:path*', headers: securityHeaders(headerOptions) }];
   },
-  eslint: { dirs: ['app', 'lib', 'db', 'emails', 'mocks', 'tests'] },
+  // Type checking and lint are their own steps of `npm test` (and CI); the build does not repeat them.
+  typescript: { ignoreBuildErrors: true },
+  eslint: { ignoreDuringBuilds: true, dirs: ['app', 'lib', 'db', 'emails', 'mocks', 'tests'] },
 };
 
 export default nextConfig;

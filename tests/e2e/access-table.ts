@@ -43,6 +43,7 @@ export const accessTable: AccessRow[] = [
   { file: 'app/api/ready/route.ts', path: '/api/ready', expect: all(200) },
   { file: 'app/api/auth/sign-in/route.ts', path: '/api/auth/sign-in', method: 'POST', body: { email: 'nobody@nowhere.example', password: 'x' }, expect: all(401) },
   { file: 'app/api/v1/calculate/route.ts', path: '/api/v1/calculate', method: 'POST', body: { service: 'heater' }, expect: all(400) },
+  { file: 'app/api/v1/openapi/route.ts', path: '/api/v1/openapi', expect: all(200) },
   { file: 'app/api/v1/batch/template/route.ts', path: '/api/v1/batch/template', expect: all(200) },
   { file: 'app/api/v1/batch/preview/route.ts', path: '/api/v1/batch/preview', method: 'POST', expect: { anon: 401, sales_engineer: 400, customer: 400, support: 403, admin: 400 } },
   { file: 'app/api/v1/batch/commit/route.ts', path: '/api/v1/batch/commit', method: 'POST', expect: { anon: 401, sales_engineer: 400, customer: 400, support: 403, admin: 400 } },
