@@ -25,5 +25,6 @@ export const actionTable: Record<string, ActionAccess> = {
   'app/(desk)/quotes/[quoteId]/actions.ts#sendQuoteAction': { allowed: staffWrite },
   'app/(desk)/size/actions.ts#saveSizingAction': { allowed: ['sales_engineer', 'customer', 'admin'] },
   'app/(desk)/size/actions.ts#setUnitSystemAction': { allowed: everyone },
+  'app/(desk)/sizings/[sizingId]/actions.ts#resendDatasheetEmailAction': { allowed: ['support', 'admin'] },
   'app/(desk)/datasheets/actions.ts#issueDatasheetAction': { allowed: ['sales_engineer', 'customer', 'admin'] },
 };

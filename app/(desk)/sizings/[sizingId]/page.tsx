@@ -4,7 +4,14 @@ import { PageBody, PageHeader, Section } from '@/app/_components/page-header';
 import { orNotFound, uuidOrNotFound } from '@/app/_components/route-guards';
 import { requirePageUser } from '@/lib/auth/guards';
 import { isStaff } from '@/lib/auth/roles';
+import { can } from '@/lib/auth/roles';
+import { downloadAccess, listDatasheets } from '@/lib/datasheets/queries';
 import { getSizing } from '@/lib/sizings/queries';
+import { auditLookup } from '@/lib/support/audit-lookup';
+import { sizingEmails, sizingTrail } from '@/lib/support/sizing-record';
+import { IssueDatasheetButton } from '../../datasheets/_components/issue-datasheet-button';
+import { AuditTrail, EmailLog, RevisionList } from './_components/record-sections';
+import { ResendButton } from './_components/resend-button';
 import { KeyValueTable } from '../_components/key-value-table';
 import { PreliminaryNote } from '../_components/preliminary-note';
 import { SizingMeta } from '../_components/sizing-meta';
@@ -16,6 +23,9 @@ export default async function SizingPage({ params }: { params: Promise<{ sizingI
   const user = await requirePageUser(`/sizings/${raw}`, 'sizing:read');
   const sizingId = uuidOrNotFound(raw);
   const sizing = await orNotFound(getSizing(user, sizingId));
+  const [datasheetList, access, emails, trail] = await Promise.all([listDatasheets(user, { sizingId }), downloadAccess(user), sizingEmails(user, sizingId), sizingTrail(user, sizingId)]);
+  const datasheet = datasheetList[0];
+  if (user.role === 'support') await auditLookup(user, 'sizing.viewed', 'sizing', sizingId, { number: sizing.number }, sizing.accountId);
   return (
     <PageBody>
       <PageHeader eyebrow={<Link href="/sizings" className="underline">Sizings</Link>} title={sizing.title} description={`Sizing ${sizing.number} for ${sizing.accountName}`} />
@@ -23,6 +33,28 @@ export default async function SizingPage({ params }: { params: Promise<{ sizingI
       <Section title="Summary" id="summary">
         <SizingMeta sizing={sizing} linkAccount={isStaff(user.role) || user.accountId === sizing.accountId} />
       </Section>
+      <Section title="Work with it" id="actions">
+        <div className="flex flex-wrap items-center gap-4 text-sm">
+          <Link className="text-tide-700 underline" href={`/size?sizing=${sizing.id}`}>Open in the desk</Link>
+          {can(user.role, 'sizing:save') && <Link className="text-tide-700 underline" href={`/size?sizing=${sizing.id}&revise=1`}>Revise</Link>}
+          {can(user.role, 'sizing:save') && <Link className="text-tide-700 underline" href={`/size?sizing=${sizing.id}&duplicate=1`}>Duplicate</Link>}
+        </div>
+        {can(user.role, 'datasheet:issue') && <div className="mt-3"><IssueDatasheetButton sizingId={sizing.id} latestRevision={datasheet?.revisions.at(-1)?.revision ?? null} /></div>}
+      </Section>
+      <Section title="Datasheet revisions" id="datasheet">
+        <RevisionList datasheet={datasheet} canDownload={access.unlocked} />
+        {can(user.role, 'support:search') && datasheet && <div className="mt-3"><ResendButton sizingId={sizing.id} /></div>}
+      </Section>
+      {emails && (
+        <Section title="E-mails sent" id="emails">
+          <EmailLog emails={emails} />
+        </Section>
+      )}
+      {trail && (
+        <Section title="Audit trail" id="audit">
+          <AuditTrail entries={trail} />
+        </Section>
+      )}
       <div className="grid gap-6 xl:grid-cols-2">
         <Section title="Saved input" id="input">
           <KeyValueTable caption="Saved input" data={sizing.input} testId="sizing-input" />

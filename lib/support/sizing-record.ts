@@ -1,0 +1,32 @@
+import 'server-only';
+import { and, desc, eq, or } from 'drizzle-orm';
+import { db } from '@/db';
+import { auditLog, datasheets, users } from '@/db/schema';
+import type { CurrentUser } from '@/lib/auth/current-user';
+import { can } from '@/lib/auth/roles';
+import { listEmailsFor, type EmailLogEntry } from '@/lib/email/queries';
+
+export type TrailEntry = { id: number; at: Date; action: string; actorName: string | null; actorRole: string | null; detail: unknown };
+
+/** A sizing's audit trail, including its datasheet's entries (support and admin only). */
+export async function sizingTrail(user: CurrentUser, sizingId: string): Promise<TrailEntry[] | null> {
+  if (!can(user.role, 'audit:read')) return null;
+  const [ds] = await db.select({ id: datasheets.id }).from(datasheets).where(eq(datasheets.sizingId, sizingId)).limit(1);
+  const match = ds
+    ? or(and(eq(auditLog.entityType, 'sizing'), eq(auditLog.entityId, sizingId)), and(eq(auditLog.entityType, 'datasheet'), eq(auditLog.entityId, ds.id)))
+    : and(eq(auditLog.entityType, 'sizing'), eq(auditLog.entityId, sizingId));
+  return db
+    .select({ id: auditLog.id, at: auditLog.at, action: auditLog.action, actorName: users.name, actorRole: auditLog.actorRole, detail: auditLog.detail })
+    .from(auditLog)
+    .leftJoin(users, eq(users.id, auditLog.actorUserId))
+    .where(match)
+    .orderBy(desc(auditLog.at))
+    .limit(200);
+}
+
+/** E-mails sent about the sizing's datasheet (support and admin only). */
+export async function sizingEmails(user: CurrentUser, sizingId: string): Promise<EmailLogEntry[] | null> {
+  if (!can(user.role, 'audit:read')) return null;
+  const [ds] = await db.select({ id: datasheets.id }).from(datasheets).where(eq(datasheets.sizingId, sizingId)).limit(1);
+  return ds ? listEmailsFor('datasheet', ds.id) : [];
+}
