@@ -1,0 +1,64 @@
+import 'server-only';
+import { eq } from 'drizzle-orm';
+import { z } from 'zod';
+import { db } from '@/db';
+import { datasheetRevisions, datasheets } from '@/db/schema';
+import { writeAudit } from '@/lib/audit/write';
+import type { CurrentUser } from '@/lib/auth/current-user';
+import { AuthError } from '@/lib/auth/guards';
+import { can, isStaff } from '@/lib/auth/roles';
+import { getEntitlement } from '@/lib/billing/entitlements';
+import { getBlobStore, sha256Hex, type BlobStore } from '@/lib/blob';
+import { logger } from '@/lib/log/logger';
+
+export type DownloadOutcome =
+  | { status: 'ok'; bytes: Buffer; fileName: string; sha256: string; number: string; revision: string }
+  | { status: 'locked'; message: string }
+  | { status: 'not-found' };
+
+export const LOCKED_MESSAGE = 'Datasheets for this account unlock with an active subscription. Subscribe on the billing page (/billing) to download them.';
+
+/** Stored bytes that are missing or no longer match their recorded SHA-256: never served. */
+export class DatasheetIntegrityError extends Error {
+  constructor(message: string) {
+    super(message);
+    this.name = 'DatasheetIntegrityError';
+  }
+}
+
+/** '<number>-rev<letter>.pdf', the name a download is saved under. */
+export function downloadFileName(number: string, revision: string): string {
+  return `${number}-rev${revision}.pdf`;
+}
+
+/**
+ * One revision's bytes after authorisation: staff always; customers only for their own account (any
+ * other id answers not-found) and only while entitled ('locked' otherwise). Each served download is audited.
+ */
+export async function getRevisionDownload(user: CurrentUser, revisionId: string, opts: { store?: BlobStore } = {}): Promise<DownloadOutcome> {
+  if (!can(user.role, 'datasheet:read')) throw new AuthError(403, 'Your role does not allow reading datasheets.');
+  if (!z.uuid().safeParse(revisionId).success) return { status: 'not-found' };
+  const [row] = await db
+    .select({ id: datasheetRevisions.id, revision: datasheetRevisions.revision, blobKey: datasheetRevisions.blobKey, sha256: datasheetRevisions.sha256, number: datasheets.number, accountId: datasheets.accountId })
+    .from(datasheetRevisions)
+    .innerJoin(datasheets, eq(datasheets.id, datasheetRevisions.datasheetId))
+    .where(eq(datasheetRevisions.id, revisionId))
+    .limit(1);
+  if (!row) return { status: 'not-found' };
+  if (!isStaff(user.role)) {
+    if (user.accountId !== row.accountId) return { status: 'not-found' };
+    if (!(await getEntitlement(row.accountId)).unlocked) return { status: 'locked', message: LOCKED_MESSAGE };
+  }
+  const blob = await (opts.store ?? getBlobStore()).get(row.blobKey);
+  if (!blob || sha256Hex(blob.bytes) !== row.sha256) {
+    logger.error({ revisionId: row.id, blobKey: row.blobKey, found: Boolean(blob) }, 'issued datasheet bytes missing or altered');
+    throw new DatasheetIntegrityError(`The stored file of ${row.number} rev. ${row.revision} is missing or does not match its recorded SHA-256.`);
+  }
+  await db.transaction(async (tx) => {
+    await writeAudit(tx, {
+      actor: user, action: 'datasheet.downloaded', entityType: 'datasheet_revision', entityId: row.id, accountId: row.accountId,
+      detail: { number: row.number, revision: row.revision, sha256: row.sha256 },
+    });
+  });
+  return { status: 'ok', bytes: blob.bytes, fileName: downloadFileName(row.number, row.revision), sha256: row.sha256, number: row.number, revision: row.revision };
+}

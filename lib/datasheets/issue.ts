@@ -1,0 +1,39 @@
+import 'server-only';
+import { ActionError, fieldErrorsOf } from '@/lib/actions/define-action';
+import type { CurrentUser } from '@/lib/auth/current-user';
+import { AuthError } from '@/lib/auth/guards';
+import { can } from '@/lib/auth/roles';
+import { getBlobStore, type BlobStore } from '@/lib/blob';
+import { getSizing } from '@/lib/sizings/queries';
+import { commitIssue, type BeforeCommit, type IssuedRevision } from './issue-commit';
+import { engineResultOf, loadIssueAccount, planIssue } from './issue-plan';
+import { renderDatasheetPdf } from './render';
+import { issueDatasheetSchema } from './schema';
+
+export type { IssuedRevision } from './issue-commit';
+
+export type IssueOptions = { store?: BlobStore; beforeCommit?: BeforeCommit };
+
+const ATTEMPTS = 3;
+
+/**
+ * Issues the next revision of a sizing's datasheet ('A' on first issue, with a new number): renders the
+ * PDF outside the transaction, then stores bytes, revision row, audit entry and the customer's e-mail
+ * in one transaction. Concurrent issues of one sizing are serialised and each gets its own letter.
+ */
+export async function issueDatasheet(user: CurrentUser, input: { sizingId: string; note?: string }, opts: IssueOptions = {}): Promise<IssuedRevision> {
+  if (!can(user.role, 'datasheet:issue')) throw new AuthError(403, 'Your role does not allow issuing datasheets.');
+  const parsed = issueDatasheetSchema.safeParse(input);
+  if (!parsed.success) throw new ActionError('The datasheet request is not valid.', 400, fieldErrorsOf(parsed.error));
+  const sizing = await getSizing(user, parsed.data.sizingId);
+  engineResultOf(sizing);
+  const account = await loadIssueAccount(sizing.accountId);
+  const store = opts.store ?? getBlobStore();
+  for (let attempt = 0; attempt < ATTEMPTS; attempt++) {
+    const plan = await planIssue(user, sizing, account, parsed.data.note ?? null);
+    const bytes = await renderDatasheetPdf(plan.snapshot);
+    const issued = await commitIssue(plan, bytes, store, opts.beforeCommit);
+    if (issued) return issued;
+  }
+  throw new ActionError('Other revisions of this datasheet were being issued at the same moment; reload the page and try again.', 409);
+}

@@ -1,0 +1,36 @@
+import type { SizingResult } from '@/lib/sizing';
+
+/** One line of the revision table. */
+export type RevisionEntry = { revision: string; issuedAt: string; note: string | null; issuedByName: string | null };
+
+/**
+ * Everything a revision was rendered from, stored with it: re-rendering the snapshot gives the same
+ * document, and a later change to the sizing or account never alters what was issued.
+ */
+export type DatasheetSnapshot = {
+  schemaVersion: 1;
+  datasheet: { number: string; revision: string; issuedAt: string; note: string | null; issuedByName: string };
+  account: { id: string; name: string; site: string | null };
+  sizing: {
+    id: string;
+    number: string;
+    title: string;
+    equipmentTag: string | null;
+    service: 'heater' | 'compressor';
+    gasLabel: string;
+    notes: string | null;
+    engineVersion: string;
+    revision: number;
+    createdAt: string;
+  };
+  input: unknown;
+  result: SizingResult;
+  /** Every revision up to and including this one, in issue order. */
+  revisions: RevisionEntry[];
+};
+
+/** The service line printed under the title. */
+export function serviceLabel(s: DatasheetSnapshot): string {
+  const kind = s.result.service === 'heater' ? 'Electric process gas heater' : 'Process gas compressor';
+  return `${kind}, ${s.result.gas.label}`;
+}
