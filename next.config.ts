@@ -15,6 +15,8 @@ const nextConfig: NextConfig = {
   reactStrictMode: true,
   // The local fakes and the database are separate processes; nothing here downloads at build time.
   serverExternalPackages: ['pg', 'pino', 'nodemailer', '@react-pdf/renderer', 'bcryptjs'],
+  // The datasheet fonts are read from disk at render time; ship them with any traced deployment.
+  outputFileTracingIncludes: { '/**': ['./lib/datasheets/fonts/**'] },
   async headers() {
     return [{ source: '/:path*', headers: securityHeaders(headerOptions) }];
   },

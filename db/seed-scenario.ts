@@ -62,3 +62,10 @@ export const seedQuotes: SeedQuote[] = [
   { account: 'greyfen', title: 'CHP gas train', status: 'draft', by: 'tobias.rennick@halvard.example', lines: [{ tag: 'K-201', quantity: 1 }, { tag: 'E-210', quantity: 1 }] },
   { account: 'oakhollow', title: 'Furnace hall B utilities', status: 'won', by: 'ines.marlow@halvard.example', lines: [{ tag: 'EH-410', quantity: 1 }, { tag: 'K-420', quantity: 1 }] },
 ];
+
+/** Datasheets issued in the scenario: tag, issuer and a note per revision (one entry per revision). */
+export const seedDatasheets: { tag: string; by: string; notes: string[] }[] = [
+  { tag: 'EH-301', by: 'ines.marlow@halvard.example', notes: ['Issued for quotation', 'Heat-loss allowance confirmed with the customer'] },
+  { tag: 'K-201', by: 'tobias.rennick@halvard.example', notes: ['Issued for quotation'] },
+  { tag: 'EH-410', by: 'ines.marlow@halvard.example', notes: ['Issued for order'] },
+];

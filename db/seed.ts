@@ -7,7 +7,8 @@ import { DEMO_PASSWORD } from '@/lib/auth/demo-users';
 import { createQuote, setQuoteStatus } from '@/lib/quotes/mutations';
 import { computeForSave, insertSizing } from '@/lib/sizings/save';
 import { hashPassword } from '@/mocks/identity/passwords';
-import { seedAccounts, seedQuotes, seedSizings, seedUsers } from './seed-scenario';
+import { issueDatasheet } from '@/lib/datasheets/issue';
+import { seedAccounts, seedDatasheets, seedQuotes, seedSizings, seedUsers } from './seed-scenario';
 
 const reset = process.argv.includes('--reset');
 const dbName = new URL(process.env.DATABASE_URL ?? 'postgres://x@h/dutywise').pathname.slice(1);
@@ -58,7 +59,11 @@ async function main() {
     if (qd.status !== 'draft') await setQuoteStatus(user, id, qd.status);
     if (qd.status !== 'draft') await db.update(quotes).set({ sentAt: new Date() }).where(eq(quotes.id, id));
   }
-  console.log(`seeded ${seedAccounts.length} accounts, ${seedUsers.length} users, ${seedSizings.length} sizings, ${seedQuotes.length} quotes`);
+  for (const d of seedDatasheets) {
+    const [row] = await db.select({ id: sizings.id }).from(sizings).where(eq(sizings.equipmentTag, d.tag)).limit(1);
+    for (const note of d.notes) await issueDatasheet(people.get(d.by)!, { sizingId: row!.id, note });
+  }
+  console.log(`seeded ${seedAccounts.length} accounts, ${seedUsers.length} users, ${seedSizings.length} sizings, ${seedQuotes.length} quotes, ${seedDatasheets.length} datasheets`);
 }
 
 main()

@@ -8,6 +8,8 @@ import type { PoolClient } from 'pg';
 import { pool } from '@/db';
 import { logger } from '@/lib/log/logger';
 import { drainOutbox } from './drain';
+import { sweepOrphanBlobs } from '@/lib/blob/sweep';
+import { env } from '@/lib/env';
 import { outboxChannel } from './enqueue';
 
 const { values } = parseArgs({ options: { 'interval-ms': { type: 'string', default: '2000' }, limit: { type: 'string', default: '20' }, once: { type: 'boolean', default: false }, 'only-to': { type: 'string' } } });
@@ -70,8 +72,20 @@ function stop(signal: string) {
 process.on('SIGTERM', () => stop('SIGTERM'));
 process.on('SIGINT', () => stop('SIGINT'));
 
+// The worker also removes datasheet and upload objects a crashed issue left in an S3 bucket (the
+// PostgreSQL store is transactional and leaves none); every ten minutes is plenty.
+const SWEEP_EVERY_MS = 10 * 60_000;
+let lastSweep = 0;
+async function sweepIfDue() {
+  if (env.BLOB_STORE !== 's3' || Date.now() - lastSweep < SWEEP_EVERY_MS) return;
+  lastSweep = Date.now();
+  const report = await sweepOrphanBlobs().catch((err: unknown) => log.warn({ err: String(err) }, 'blob sweep failed'));
+  if (report && report.deleted.length) log.info({ deleted: report.deleted.length }, 'orphan blobs removed');
+}
+
 log.info({ intervalMs, limit, toAddressLike }, 'mail worker started');
 while (!stopping) {
+  await sweepIfDue();
   notified = false;
   let full = false;
   try {

@@ -9,11 +9,11 @@ const company = `Brackwater Maltings ${suffix}`;
 const customerEmail = `rhona.dale.${suffix}@brackwater.example`;
 
 function enquiryCsv(): Buffer {
-  const rows = [
+  const rows: Record<string, string>[] = [
     { service: 'heater', title: 'Kiln air heater', equipment_tag: `BW-EH-${suffix}`, gas: 'air', flow_value: '3500', flow_unit: 'kg/h', inlet_temperature_value: '12', inlet_temperature_unit: 'degC', inlet_pressure_value: '0.5', inlet_pressure_unit: 'barg', outlet_temperature_value: '95', outlet_temperature_unit: 'degC', heat_loss_percent: '5', design_margin_percent: '10', supply_voltage_v: '400', supply_phases: '3' },
     { service: 'compressor', title: 'CO2 recovery compressor', equipment_tag: `BW-K-${suffix}`, gas: 'carbon-dioxide', flow_value: '300', flow_unit: 'kg/h', inlet_temperature_value: '20', inlet_temperature_unit: 'degC', inlet_pressure_value: '1.05', inlet_pressure_unit: 'bar', discharge_pressure_value: '18', discharge_pressure_unit: 'bar', stages: '2', isentropic_efficiency: '0.75', intercooler_outlet_temperature_value: '30', intercooler_outlet_temperature_unit: 'degC' },
   ];
-  return Buffer.from(Papa.unparse({ fields: batchColumnNames, data: rows.map((r) => batchColumnNames.map((c) => (r as Record<string, string>)[c] ?? '')) }));
+  return Buffer.from(Papa.unparse({ fields: batchColumnNames, data: rows.map((r) => batchColumnNames.map((c) => r[c] ?? '')) }));
 }
 
 test('a sales engineer opens an account and quotes two sizings; the customer sees exactly that; support finds it; another customer cannot', async ({ browser }) => {
