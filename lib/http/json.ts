@@ -7,7 +7,13 @@ export type ApiFieldError = { path: string; message: string };
 export async function readJsonBody(req: Request, maxBytes: number): Promise<{ ok: true; value: unknown } | { ok: false; response: Response }> {
   const declared = Number(req.headers.get('content-length') ?? '0');
   if (declared > maxBytes) return { ok: false, response: tooLarge(maxBytes) };
-  const text = await req.text();
+  let text: string;
+  try {
+    text = await req.text();
+  } catch {
+    // A client that gives up mid-body (a superseded request) sent nothing usable.
+    return { ok: false, response: Response.json({ errors: [{ path: '', message: 'The request body could not be read completely.' }] }, { status: 400 }) };
+  }
   if (Buffer.byteLength(text) > maxBytes) return { ok: false, response: tooLarge(maxBytes) };
   try {
     return { ok: true, value: JSON.parse(text) };

@@ -9,8 +9,11 @@ let last = { up: true, at: 0 };
 let pending: Promise<boolean> | null = null;
 
 function ping(): Promise<boolean> {
-  pool ??= new Pool({ connectionString: env.DATABASE_URL, max: 1, connectionTimeoutMillis: 1_500, idleTimeoutMillis: 10_000 });
-  pool.on('error', () => undefined);
+  if (!pool) {
+    pool = new Pool({ connectionString: env.DATABASE_URL, max: 1, connectionTimeoutMillis: 1_500, idleTimeoutMillis: 10_000 });
+    // An idle connection dropped by a stopped server must not crash the process; the next ping reports it.
+    pool.on('error', () => undefined);
+  }
   return pool
     .query('select 1')
     .then(() => true)

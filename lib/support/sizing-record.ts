@@ -1,7 +1,7 @@
 import 'server-only';
-import { and, desc, eq, or } from 'drizzle-orm';
+import { and, desc, eq, inArray, or } from 'drizzle-orm';
 import { db } from '@/db';
-import { auditLog, datasheets, users } from '@/db/schema';
+import { auditLog, datasheetRevisions, datasheets, users } from '@/db/schema';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { can } from '@/lib/auth/roles';
 import { listEmailsFor, type EmailLogEntry } from '@/lib/email/queries';
@@ -12,9 +12,12 @@ export type TrailEntry = { id: number; at: Date; action: string; actorName: stri
 export async function sizingTrail(user: CurrentUser, sizingId: string): Promise<TrailEntry[] | null> {
   if (!can(user.role, 'audit:read')) return null;
   const [ds] = await db.select({ id: datasheets.id }).from(datasheets).where(eq(datasheets.sizingId, sizingId)).limit(1);
+  const revisionIds = ds ? (await db.select({ id: datasheetRevisions.id }).from(datasheetRevisions).where(eq(datasheetRevisions.datasheetId, ds.id))).map((r) => r.id) : [];
+  const ofSizing = and(eq(auditLog.entityType, 'sizing'), eq(auditLog.entityId, sizingId));
+  // Issues and downloads are recorded against the datasheet or its revisions.
   const match = ds
-    ? or(and(eq(auditLog.entityType, 'sizing'), eq(auditLog.entityId, sizingId)), and(eq(auditLog.entityType, 'datasheet'), eq(auditLog.entityId, ds.id)))
-    : and(eq(auditLog.entityType, 'sizing'), eq(auditLog.entityId, sizingId));
+    ? or(ofSizing, and(eq(auditLog.entityType, 'datasheet'), eq(auditLog.entityId, ds.id)), revisionIds.length ? and(eq(auditLog.entityType, 'datasheet_revision'), inArray(auditLog.entityId, revisionIds)) : undefined)
+    : ofSizing;
   return db
     .select({ id: auditLog.id, at: auditLog.at, action: auditLog.action, actorName: users.name, actorRole: auditLog.actorRole, detail: auditLog.detail })
     .from(auditLog)

@@ -185,6 +185,15 @@ test.describe('sizing desk', () => {
     await fillHeater(page, siHeater);
     await expectHeaterFigures(page, heaterRequest(siHeater));
     await fullShot(page, 'desk-heater-1440.png');
+    // "Copy summary" puts the engine's figures and the preliminary statement on the clipboard.
+    await page.context().grantPermissions(['clipboard-read', 'clipboard-write']);
+    await page.getByTestId('copy-summary').click();
+    await expect(page.getByTestId('copy-summary-status')).toHaveText('Copied.');
+    const summary = await page.evaluate(() => navigator.clipboard.readText());
+    const r = calculate(heaterRequest(siHeater));
+    if (r.service !== 'heater') throw new Error('heater expected');
+    expect(summary).toContain(`Design heater duty: ${formatKw(r.heater.designDutyKw)} kW`);
+    expect(summary).toContain(r.warnings.find((w) => w.code === 'preliminary')?.message ?? 'preliminary');
   });
 
   test('heater in US customary units shows the engine figures', async ({ page }) => {
@@ -201,6 +210,13 @@ test.describe('sizing desk', () => {
     await fillCompressor(page, usCompressor);
     await expectCompressorFigures(page, compressorRequest(usCompressor), 'us');
     await fullShot(page, 'desk-compressor-1024.png');
+    // The share link reopens the same inputs, and so the same figures.
+    const link = await page.getByTestId('share-link').inputValue();
+    expect(new URL(link).pathname).toBe('/size');
+    await openDesk(page, link);
+    await expect(page.getByTestId('desk-notices')).toContainText('shared link');
+    await expect(page.getByTestId('field-flow-unit')).toHaveValue('SCFM');
+    await expectCompressorFigures(page, compressorRequest(usCompressor), 'us');
   });
 
   test('three-stage nitrogen compressor in SI units', async ({ page }) => {

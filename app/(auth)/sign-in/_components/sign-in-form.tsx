@@ -25,7 +25,8 @@ export function SignInForm({ next }: { next: string }) {
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="mt-6 space-y-4">
+    // method and action keep credentials out of the URL if the form is submitted before it is interactive.
+    <form onSubmit={onSubmit} method="post" action="/api/auth/sign-in" noValidate className="mt-6 space-y-4">
       <TextField label="E-mail" type="email" autoComplete="username" error={formState.errors.email?.message} {...register('email')} />
       <TextField label="Password" type="password" autoComplete="current-password" error={formState.errors.password?.message} {...register('password')} />
       {formError && (

@@ -1,0 +1,30 @@
+'use client';
+
+import { createContext, useContext, type MutableRefObject } from 'react';
+import type { AccountSite } from '@/lib/desk/account-types';
+import type { ExactValues } from '@/lib/desk/switch-system';
+import type { FieldKey } from '@/lib/desk/field-paths';
+import type { DeskService } from '@/lib/desk/form-types';
+import type { UnitSystem } from '@/lib/desk/unit-systems';
+
+export type DeskContextValue = {
+  system: UnitSystem;
+  service: DeskService;
+  /** Message per field: the schema's as you type, else the calculator's for the current input. */
+  errors: Partial<Record<FieldKey, string>>;
+  /** Unrounded values behind converted fields, so switching back returns what was typed. */
+  exact: MutableRefObject<ExactValues>;
+  accounts: readonly AccountSite[];
+  barometricSource: string;
+};
+
+const DeskContext = createContext<DeskContextValue | null>(null);
+
+export const DeskProvider = DeskContext.Provider;
+
+/** The desk's shared state for fields and panels. */
+export function useDesk(): DeskContextValue {
+  const value = useContext(DeskContext);
+  if (!value) throw new Error('useDesk outside the sizing desk');
+  return value;
+}

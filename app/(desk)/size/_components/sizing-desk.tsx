@@ -1,0 +1,99 @@
+'use client';
+
+import { useEffect, useMemo, useRef, useState } from 'react';
+import { FormProvider, useForm } from 'react-hook-form';
+import type { AccountSite, QuoteOption, ReopenedSizing } from '@/lib/desk/account-types';
+import { defaultValues } from '@/lib/desk/defaults';
+import { groupIssues } from '@/lib/desk/field-paths';
+import type { DeskValues } from '@/lib/desk/form-types';
+import { deskResolver } from '@/lib/desk/resolver';
+import { sharePath } from '@/lib/desk/share-link';
+import type { ExactValues } from '@/lib/desk/switch-system';
+import type { UnitSystem } from '@/lib/desk/unit-systems';
+import { validateDesk } from '@/lib/desk/validate';
+import { DeskProvider } from './desk-context';
+import { DeskHeader } from './desk-header';
+import { DeskForm } from './desk-form';
+import { ResultDetails } from './result-details';
+import { ResultPanel } from './result-panel';
+import { SavePanel } from './save-panel';
+import { ShareActions } from './share-actions';
+import { SignInInvite } from './sign-in-invite';
+import { UnitSystemToggle } from './unit-system-toggle';
+import { useBarometricSource } from './use-barometric-source';
+import { useLiveResult } from './use-live-result';
+import { useUnitSystem } from './use-unit-system';
+
+export type Viewer = { signedIn: boolean; roleLabel: string | null; canSave: boolean; canQuote: boolean; customerAccountId: string | null };
+
+type Props = {
+  initialValues: DeskValues;
+  system: UnitSystem;
+  viewer: Viewer;
+  accounts: AccountSite[];
+  quotes: QuoteOption[];
+  reopened: ReopenedSizing | null;
+  notices: string[];
+};
+
+/** The sizing desk: the guided form on the left, the live result beside it, the breakdown below. */
+export function SizingDesk({ initialValues, system: initialSystem, viewer, accounts, quotes, reopened, notices }: Props) {
+  const form = useForm<DeskValues>({ defaultValues: initialValues, resolver: deskResolver, mode: 'onChange' });
+  const exact = useRef<ExactValues>({});
+  // Browser tests wait for this before typing, so no keystroke lands before React is listening.
+  const [hydrated, setHydrated] = useState(false);
+  useEffect(() => setHydrated(true), []);
+  const values = form.watch();
+  const snapshot = JSON.stringify(values);
+  // eslint-disable-next-line react-hooks/exhaustive-deps -- keyed on the serialised values, not the object identity
+  const validation = useMemo(() => validateDesk(values), [snapshot]);
+  const live = useLiveResult(validation.ok ? validation.key : null);
+  const units = useUnitSystem(initialSystem, viewer.signedIn, form, exact);
+  const barometricSource = useBarometricSource(values, accounts);
+  const server = live.failure?.kind === 'input' ? groupIssues(live.failure.issues, values.service) : null;
+  const errors = validation.ok ? (server?.fields ?? {}) : validation.issues.fields;
+  const issues = validation.ok ? server : validation.issues;
+  const fresh = live.state === 'ready';
+  const accent = values.service === 'heater' ? 'copper' : 'tide';
+  const startOver = () => {
+    const fresh = defaultValues(units.system);
+    form.reset({ ...fresh, accountId: values.accountId, site: values.site });
+    exact.current = {};
+  };
+  return (
+    <FormProvider {...form}>
+      <DeskProvider value={{ system: units.system, service: values.service, errors, exact, accounts, barometricSource }}>
+        <main data-testid="sizing-desk" data-hydrated={hydrated} className="mx-auto w-full max-w-[96rem] px-4 py-5 md:px-6 xl:px-8">
+          <DeskHeader toggle={<UnitSystemToggle system={units.system} onChange={units.change} note={units.note} />} onNew={startOver} notices={notices} />
+          <div className="mt-4 grid items-start gap-6 lg:grid-cols-[minmax(0,1fr)_20rem] xl:grid-cols-[minmax(0,1fr)_28rem]">
+            <DeskForm
+              errors={errors}
+              ready={validation.ok}
+              input={validation.ok ? validation.input : null}
+              issues={validation.ok ? null : validation.issues}
+              accent={accent}
+              accountChoice={viewer.canSave ? (viewer.customerAccountId ? 'fixed' : 'pick') : 'none'}
+              fixedAccountName={accounts.find((a) => a.id === viewer.customerAccountId)?.name ?? null}
+            />
+            <aside aria-label="Result and actions" className="space-y-4 lg:sticky lg:top-3 lg:max-h-[calc(100vh-1.5rem)] lg:overflow-y-auto lg:pb-2 print:static print:max-h-none">
+              <ResultPanel live={live} issues={issues} system={units.system} />
+              {viewer.canSave ? (
+                <SavePanel input={fresh ? live.input : null} accountId={values.accountId} accounts={accounts} quotes={quotes} canQuote={viewer.canQuote} reopened={reopened} />
+              ) : viewer.signedIn ? (
+                <p className="rounded-panel border border-paper-line bg-paper-raised p-panel text-sm text-ink-soft" data-testid="save-not-allowed">
+                  Your role ({viewer.roleLabel}) can size and look up sizings; saving is for sales engineers and customers.
+                </p>
+              ) : (
+                <SignInInvite nextPath={validation.ok ? sharePath(validation.input) : '/size'} />
+              )}
+              <ShareActions input={validation.ok ? validation.input : null} result={fresh ? live.result : null} system={units.system} />
+            </aside>
+          </div>
+          {live.result && live.input && (live.state === 'ready' || live.state === 'recomputing') && (
+            <ResultDetails result={live.result} input={live.input} system={units.system} stale={live.state === 'recomputing'} />
+          )}
+        </main>
+      </DeskProvider>
+    </FormProvider>
+  );
+}

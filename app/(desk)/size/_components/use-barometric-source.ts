@@ -1,0 +1,15 @@
+'use client';
+
+import type { AccountSite } from '@/lib/desk/account-types';
+import { barometricPaOf } from '@/lib/desk/flow-context';
+import type { DeskValues } from '@/lib/desk/form-types';
+import { sitePressureOf } from '@/lib/desk/site-pressure';
+
+/** Where the site barometric pressure on the form comes from, in words. */
+export function useBarometricSource(values: DeskValues, accounts: readonly AccountSite[]): string {
+  const account = accounts.find((a) => a.id === values.accountId);
+  const expected = sitePressureOf(account);
+  const edited = Math.abs(barometricPaOf(values) / 1000 - expected.kpa) > 0.0005;
+  if (edited) return 'entered for this sizing';
+  return account ? `${account.name}: ${expected.source}` : expected.source;
+}

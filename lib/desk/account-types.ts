@@ -1,0 +1,19 @@
+/** A customer account as the desk's picker needs it: its name and site conditions. */
+export type AccountSite = { id: string; name: string; barometricPressureKpa: number | null; siteAltitudeM: number | null };
+
+/** A draft quote a sizing can be added to. */
+export type QuoteOption = { id: string; number: string; title: string; accountId: string };
+
+/** A saved sizing reopened on the desk. */
+export type ReopenedSizing = {
+  id: string;
+  number: string;
+  title: string;
+  equipmentTag: string | null;
+  notes: string | null;
+  accountId: string;
+  accountName: string;
+  revision: number;
+  /** True for "revise" (saving records revisedFromId), false for "duplicate". */
+  revise: boolean;
+};

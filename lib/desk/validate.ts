@@ -1,0 +1,17 @@
+import { issuesFromZod, sizingRequestSchema, type SizingInput, type SizingRequest } from '@/lib/sizing';
+import { groupIssues, type DeskIssues } from './field-paths';
+import type { DeskValues } from './form-types';
+import { toRequest } from './to-request';
+
+export type DeskValidation =
+  | { ok: true; request: SizingRequest; input: SizingInput; key: string }
+  | { ok: false; request: SizingRequest; issues: DeskIssues };
+
+/** Runs the engine's own schema over the form: the normalised input and its cache key, or every issue by field. */
+export function validateDesk(values: DeskValues): DeskValidation {
+  const request = toRequest(values);
+  const parsed = sizingRequestSchema.safeParse(request);
+  if (!parsed.success) return { ok: false, request, issues: groupIssues(issuesFromZod(parsed.error), values.service) };
+  // Numbers coerced, units canonical, defaults filled: equal inputs give equal keys whatever was typed.
+  return { ok: true, request, input: parsed.data, key: JSON.stringify(parsed.data) };
+}
