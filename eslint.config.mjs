@@ -4,8 +4,8 @@ import { FlatCompat } from '@eslint/eslintrc';
 
 const compat = new FlatCompat({ baseDirectory: dirname(fileURLToPath(import.meta.url)) });
 
-export default [
-  { ignores: ['.next/**', 'node_modules/**', '.data/**', 'db/migrations/**', 'next-env.d.ts', 'tests/e2e/.results/**'] },
+const config = [
+  { ignores: ['.next/**', '.next-*/**', '.scratch/**', 'node_modules/**', '.data/**', 'db/migrations/**', 'next-env.d.ts', 'tests/e2e/.results/**'] },
   ...compat.extends('next/core-web-vitals', 'next/typescript'),
   {
     rules: {
@@ -17,8 +17,15 @@ export default [
     },
   },
   {
+    // A CommonJS preload for Node scripts: require is the only way it can be written.
+    files: ['**/*.cjs'],
+    rules: { '@typescript-eslint/no-require-imports': 'off' },
+  },
+  {
     // Scripts, fakes and tests run outside Next and read their own process environment.
     files: ['lib/env.ts', 'db/**', 'mocks/**', 'tests/**', 'drizzle.config.ts', 'next.config.ts'],
     rules: { 'no-restricted-properties': 'off', 'no-console': 'off' },
   },
 ];
+
+export default config;
