@@ -9,7 +9,8 @@ export NEXT_TELEMETRY_DISABLED=1 NEXT_PUBLIC_CLERK_TELEMETRY_DISABLED=1
 
 step() { printf '\n\033[1m== %s\033[0m\n' "$*"; }
 fail=0
-run() { local name="$1"; shift; step "$name"; if "$@"; then echo "-- $name: ok"; else echo "-- $name: FAILED"; fail=1; fi; }
+log="$(mktemp)"
+run() { local name="$1"; shift; step "$name"; if "$@" 2>&1 | tee -a "$log"; then echo "-- $name: ok"; else echo "-- $name: FAILED"; fail=1; fi; }
 
 step "dependencies"
 if [ ! -f node_modules/.package-lock.json ] || [ package-lock.json -nt node_modules/.package-lock.json ]; then
@@ -46,5 +47,15 @@ if [ "${SKIP_E2E:-0}" != 1 ]; then
 fi
 
 step "summary"
+# Test counts from vitest ("Tests  N passed | M failed") and Playwright ("N passed", "M failed").
+plain=$(sed 's/\x1b\[[0-9;]*m//g' "$log")
+v_pass=$(grep -E '^ +Tests +' <<<"$plain" | grep -oE '[0-9]+ passed' | grep -oE '[0-9]+' | tail -1)
+v_fail=$(grep -E '^ +Tests +' <<<"$plain" | grep -oE '[0-9]+ failed' | grep -oE '[0-9]+' | tail -1)
+p_pass=$(grep -E '^ +[0-9]+ passed \(' <<<"$plain" | grep -oE '^ +[0-9]+' | tail -1)
+p_fail=$(grep -E '^ +[0-9]+ failed$' <<<"$plain" | grep -oE '[0-9]+' | tail -1)
+passed=$(( ${v_pass:-0} + ${p_pass:-0} )); failed=$(( ${v_fail:-0} + ${p_fail:-0} ))
+rm -f "$log"
+if [ "$fail" -ne 0 ] && [ "$failed" -eq 0 ]; then failed=1; fi
 if [ "$fail" -eq 0 ]; then echo "all test steps passed"; else echo "some test steps FAILED"; fi
+echo "tests: $passed passed, $failed failed"
 exit "$fail"
