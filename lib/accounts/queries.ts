@@ -74,11 +74,11 @@ export async function getAccount(user: CurrentUser, accountId: string): Promise<
   return { ...row, members, pendingInvitations };
 }
 
-/** Names for pickers (save-to-account, new quote). */
-export async function listAccountOptions(user: CurrentUser): Promise<{ id: string; name: string }[]> {
+/** Names for pickers (save-to-account, new quote), with each site's barometric pressure or altitude for the desk. */
+export async function listAccountOptions(user: CurrentUser): Promise<{ id: string; name: string; barometricPressureKpa: number | null; siteAltitudeM: number | null }[]> {
   const scope = accountScope(user);
   return db
-    .select({ id: accounts.id, name: accounts.name })
+    .select({ id: accounts.id, name: accounts.name, barometricPressureKpa: accounts.barometricPressureKpa, siteAltitudeM: accounts.siteAltitudeM })
     .from(accounts)
     .where(scope ? eq(accounts.id, scope) : undefined)
     .orderBy(asc(accounts.name))

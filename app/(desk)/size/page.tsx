@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import { firstParam, type SearchParams } from '@/app/_components/route-guards';
-import { listAccountSites } from '@/lib/desk/account-sites';
+import { listAccountOptions } from '@/lib/accounts/queries';
 import { defaultValues } from '@/lib/desk/defaults';
 import { valuesFromInput } from '@/lib/desk/from-request';
 import { sitePressureOf } from '@/lib/desk/site-pressure';
@@ -20,7 +20,7 @@ export default async function SizePage({ searchParams }: { searchParams: SearchP
   const canSave = !!user && can(user.role, 'sizing:save');
   const canQuote = !!user && can(user.role, 'quote:manage');
   const [accounts, quotes, start] = await Promise.all([
-    user && canSave ? listAccountSites(user) : Promise.resolve([]),
+    user && canSave ? listAccountOptions(user) : Promise.resolve([]),
     user && canQuote ? listOpenQuotes(user) : Promise.resolve([]),
     loadDeskStart(user, { sizing: firstParam(sp.sizing), revise: firstParam(sp.revise), i: firstParam(sp.i) }),
   ]);
