@@ -41,6 +41,9 @@ export const sizings = pgTable(
     index('sizings_created_idx').on(t.createdAt.desc()),
     index('sizings_tag_lower_idx').on(sql`lower(${t.equipmentTag})`),
     index('sizings_search_trgm_idx').using('gin', sql`${t.searchText} gin_trgm_ops`),
+    // Typo-tolerant look-up compares short fields, not the whole search text: far fewer candidates.
+    index('sizings_tag_trgm_idx').using('gin', sql`lower(${t.equipmentTag}) gin_trgm_ops`),
+    index('sizings_title_trgm_idx').using('gin', sql`lower(${t.title}) gin_trgm_ops`),
     index('sizings_service_gas_idx').on(t.service, t.gasKey),
     index('sizings_creator_idx').on(t.createdByUserId),
     check('sizings_headline_finite', sql`${t.headlineKw} >= 0 and ${t.headlineKw} < 'Infinity'::float8`),

@@ -23,32 +23,45 @@ export type SupportHit = {
 
 export type SupportResults = { hits: SupportHit[]; total: number; totalIsEstimate: boolean; page: number; pageSize: number };
 
-const COUNT_CAP = 10_000;
+const COUNT_CAP = 1_000;
 
 function escapeLike(s: string): string {
   return s.replace(/[%_\\]/g, (c) => `\\${c}`);
 }
 
-/** Text match over sizings, their account, datasheet and quote numbers; partial and typo-tolerant (trigram word similarity). */
-function textCondition(q: string): SQL {
+/**
+ * Text match over sizings, their account, datasheet and quote numbers. The precise form (substring and
+ * number prefix) runs first; only when it finds almost nothing is the typo-tolerant form used, which
+ * compares the query with the short fields (tag, title, customer, quote title) by trigram similarity.
+ * Each branch is its own SELECT in a union so it uses its own index: OR-ing them makes PostgreSQL scan
+ * every sizing.
+ */
+function textCondition(q: string, fuzzy: boolean): SQL {
   const lower = q.toLowerCase();
   const like = `%${escapeLike(lower)}%`;
   const prefix = `${escapeLike(q.toUpperCase())}%`;
-  return sql`(
-    s.search_text like ${like}
-    or ${lower} <% s.search_text
-    or s.account_id in (select a2.id from accounts a2 where a2.name ilike ${like} or ${lower} <% lower(a2.name))
-    or s.id in (select d.sizing_id from datasheets d where d.number like ${prefix})
-    or s.id in (select qi.sizing_id from quote_items qi join quotes q2 on q2.id = qi.quote_id where q2.number like ${prefix} or ${lower} <% lower(q2.title))
+  const typo = fuzzy
+    ? sql`
+    union select t.id from sizings t where lower(t.equipment_tag) % ${lower}
+    union select t.id from sizings t where ${lower} <% lower(t.title)
+    union select t.id from sizings t where t.account_id in (select a3.id from accounts a3 where ${lower} <% lower(a3.name))
+    union select qi.sizing_id from quote_items qi join quotes q3 on q3.id = qi.quote_id where ${lower} <% lower(q3.title)`
+    : sql``;
+  return sql`s.id in (
+    select t.id from sizings t where t.search_text like ${like}
+    union select t.id from sizings t where t.account_id in (select a2.id from accounts a2 where a2.name ilike ${like})
+    union select d.sizing_id from datasheets d where d.number like ${prefix}
+    union select qi.sizing_id from quote_items qi join quotes q2 on q2.id = qi.quote_id where q2.number like ${prefix} or lower(q2.title) like ${like}
+    ${typo}
   )`;
 }
 
-function conditions(user: CurrentUser, f: SupportSearch): SQL[] {
+function conditions(user: CurrentUser, f: SupportSearch, fuzzy: boolean): SQL[] {
   const c: SQL[] = [];
   const scope = accountScope(user);
   if (scope) c.push(sql`s.account_id = ${scope}`);
   if (f.accountId) c.push(sql`s.account_id = ${f.accountId}`);
-  if (f.q) c.push(textCondition(f.q));
+  if (f.q) c.push(textCondition(f.q, fuzzy));
   if (f.service) c.push(sql`s.service = ${f.service}`);
   if (f.gas) c.push(sql`s.gas_key = ${f.gas}`);
   if (f.minKw !== undefined) c.push(sql`s.headline_kw >= ${f.minKw}`);
@@ -69,20 +82,32 @@ function orderBy(f: SupportSearch): SQL {
     case 'smallest':
       return sql`s.headline_kw asc, s.id`;
     case 'relevance':
-      return f.q ? sql`word_similarity(${f.q.toLowerCase()}, s.search_text) desc, s.created_at desc` : sql`s.created_at desc, s.id`;
+      return f.q ? sql`similarity(${f.q.toLowerCase()}, s.search_text) desc, s.created_at desc` : sql`s.created_at desc, s.id`;
     default:
       return sql`s.created_at desc, s.id`;
   }
 }
 
 /** One page of matching sizings with the numbers support is asked about, plus a (capped) total. */
+const whereOf = (conds: SQL[]) => (conds.length ? sql`where ${sql.join(conds, sql` and `)}` : sql``);
+// Fewer precise hits than this and the look-up also tries close spellings.
+const FUZZY_BELOW = 5;
+
 export async function searchSizings(user: CurrentUser, f: SupportSearch): Promise<SupportResults> {
-  const conds = conditions(user, f);
-  const where = conds.length ? sql`where ${sql.join(conds, sql` and `)}` : sql``;
   const offset = (f.page - 1) * f.pageSize;
   return db.transaction(async (tx) => {
-    // A looser threshold than the default 0.6 so one or two wrong letters in a tag still match.
-    await tx.execute(sql`set local pg_trgm.word_similarity_threshold = 0.45`);
+    // Looser thresholds than the defaults (0.3 / 0.6) so one or two wrong characters in a tag still match.
+    await tx.execute(sql`set local pg_trgm.similarity_threshold = 0.4`);
+    await tx.execute(sql`set local pg_trgm.word_similarity_threshold = 0.5`);
+    // Short interactive queries: compiling them (JIT) costs more than it saves.
+    await tx.execute(sql`set local jit = off`);
+    const count = async (where: SQL) => (await tx.execute<{ n: number }>(sql`select count(*)::int as n from (select 1 from sizings s ${where} limit ${COUNT_CAP + 1}) t`)).rows[0]?.n ?? 0;
+    let where = whereOf(conditions(user, f, false));
+    let n = await count(where);
+    if (f.q && n < FUZZY_BELOW && f.q.length >= 3) {
+      where = whereOf(conditions(user, f, true));
+      n = await count(where);
+    }
     const rows = await tx.execute<SupportHit>(sql`
       select s.id, s.number, s.title, s.equipment_tag as "equipmentTag", s.service, s.gas_label as "gasLabel",
              s.headline_kw as "headlineKw", s.account_id as "accountId", a.name as "accountName",
@@ -95,8 +120,6 @@ export async function searchSizings(user: CurrentUser, f: SupportSearch): Promis
       ${where}
       order by ${orderBy(f)}
       limit ${f.pageSize} offset ${offset}`);
-    const counted = await tx.execute<{ n: number }>(sql`select count(*)::int as n from (select 1 from sizings s ${where} limit ${COUNT_CAP + 1}) t`);
-    const n = counted.rows[0]?.n ?? 0;
     return { hits: rows.rows, total: Math.min(n, COUNT_CAP), totalIsEstimate: n > COUNT_CAP, page: f.page, pageSize: f.pageSize };
   });
 }

@@ -1,0 +1,2 @@
+CREATE INDEX "sizings_tag_trgm_idx" ON "sizings" USING gin (lower("equipment_tag") gin_trgm_ops);--> statement-breakpoint
+CREATE INDEX "sizings_title_trgm_idx" ON "sizings" USING gin (lower("title") gin_trgm_ops);
