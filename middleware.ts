@@ -71,7 +71,9 @@ export default async function middleware(req: NextRequest, event: NextFetchEvent
   return clerkGate ? clerkGate(req, event) : localGate(req);
 }
 
+// Public machine endpoints that need no identity (the calculate API, health, payment events) skip the
+// middleware: it costs more than the calculation itself under load, and each handler checks what it needs.
 export const config = {
   runtime: 'nodejs',
-  matcher: ['/((?!_next/static|_next/image|favicon.ico|.*\\.(?:png|svg|ico|woff2?)$).*)'],
+  matcher: ['/((?!_next/static|_next/image|favicon.ico|api/v1/calculate|api/v1/openapi|api/v1/batch/template|api/health|api/ready|api/webhooks/|.*\\.(?:png|svg|ico|woff2?)$).*)'],
 };
