@@ -49,7 +49,7 @@ cat <<MSG
   Fake payments:     http://localhost:12111 (test card 4242 4242 4242 4242 succeeds, 4000 0000 0000 0002 is declined)
 
   Demo sign-ins (password for all: dutywise-demo):
-$(npx tsx -e "import('./lib/auth/demo-users.ts').then(m=>m.demoSignIns.forEach(u=>console.log('    '+u.label.padEnd(32)+u.email)))")
+$(npx tsx -e "import('./lib/auth/demo-users.ts').then(m=>(m.demoSignIns ?? m.default.demoSignIns).forEach(u=>console.log('    '+u.label.padEnd(32)+u.email)))")
 
   Press Ctrl-C to stop (PostgreSQL keeps running; stop it with npm run db:stop).
 MSG
