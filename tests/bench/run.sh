@@ -14,7 +14,8 @@ fail=0
 npx tsx db/migrate.mts || exit 1
 node_script db/seed.ts || exit 1
 
-echo "== engine (one core)";         npx tsx tests/bench/engine.bench.mts || fail=1
+engine_out="$(mktemp)"
+echo "== engine (one core)";         npx tsx tests/bench/engine.bench.mts | tee "$engine_out" || fail=1
 echo "== datasheets";                node_script tests/bench/datasheet.bench.ts || fail=1
 echo "== batch";                     node_script tests/bench/batch.bench.ts || fail=1
 echo "== data for search (${BENCH_ROWS:-1000000} rows; first run takes a few minutes)"
@@ -32,5 +33,7 @@ if [ "${BENCH_SKIP_LOAD:-0}" != 1 ]; then
   npx tsx tests/bench/load.bench.ts || fail=1
   for p in "${pids[@]}"; do kill "$p" 2>/dev/null; done
 fi
+{ echo; echo "## Sizing engine (one core)"; echo; echo '```'; cat "$engine_out"; echo '```'; } >> tests/bench/RESULTS.md
+rm -f "$engine_out"
 echo; cat tests/bench/RESULTS.md
 exit "$fail"
