@@ -8,7 +8,3 @@ export const plans: readonly Plan[] = [
   { key: 'monthly', name: 'Desk monthly', priceLabel: '€290 / month', interval: 'month', blurb: 'Run your own sizings and download every datasheet issued to your account. Cancel any time.' },
   { key: 'annual', name: 'Desk annual', priceLabel: '€2,900 / year', interval: 'year', blurb: 'The same desk for a year, two months free.' },
 ];
-
-export function isPlanKey(value: unknown): value is PlanKey {
-  return value === 'monthly' || value === 'annual';
-}

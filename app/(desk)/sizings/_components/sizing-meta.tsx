@@ -1,4 +1,5 @@
 import Link from 'next/link';
+import { FactList } from '@/app/_components/fact-list';
 import type { ReactNode } from 'react';
 import { tableLinkClass } from '@/app/_components/data-table';
 import { formatDateTime } from '@/app/_components/format';
@@ -20,22 +21,5 @@ export function SizingMeta({ sizing, linkAccount }: { sizing: SizingDetail; link
     ['Created', formatDateTime(sizing.createdAt)],
     ['Engine version', <span key="e" className="font-mono">{sizing.engineVersion}</span>],
   ];
-  return (
-    <div className="space-y-4">
-      <dl className="grid gap-x-6 gap-y-2 text-sm sm:grid-cols-[max-content_1fr]" data-testid="sizing-meta">
-        {rows.map(([k, v]) => (
-          <div key={k} className="contents">
-            <dt className="text-ink-muted">{k}</dt>
-            <dd className="tabular text-ink">{v}</dd>
-          </div>
-        ))}
-      </dl>
-      {sizing.notes && (
-        <div>
-          <h3 className="text-label uppercase tracking-wide text-ink-muted">Notes</h3>
-          <p className="mt-1 whitespace-pre-wrap text-sm text-ink">{sizing.notes}</p>
-        </div>
-      )}
-    </div>
-  );
+  return <FactList rows={rows} testId="sizing-meta" notes={sizing.notes} />;
 }

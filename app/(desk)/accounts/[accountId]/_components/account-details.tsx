@@ -1,4 +1,5 @@
 import type { AccountDetail } from '@/lib/accounts/queries';
+import { FactList } from '@/app/_components/fact-list';
 
 function siteAtmosphere(a: AccountDetail): string {
   if (a.barometricPressureKpa !== null) return `${a.barometricPressureKpa} kPa barometric`;
@@ -15,14 +16,5 @@ export function AccountDetails({ account }: { account: AccountDetail }) {
     ['Billing contact e-mail', account.billingContactEmail ?? 'None: quotes cannot be sent until one is added'],
     ['Site atmosphere', siteAtmosphere(account)],
   ];
-  return (
-    <dl className="grid gap-x-6 gap-y-2 text-sm sm:grid-cols-[max-content_1fr]" data-testid="account-details">
-      {rows.map(([k, v]) => (
-        <div key={k} className="contents">
-          <dt className="text-ink-muted">{k}</dt>
-          <dd className="tabular text-ink">{v}</dd>
-        </div>
-      ))}
-    </dl>
-  );
+  return <FactList rows={rows} testId="account-details" />;
 }

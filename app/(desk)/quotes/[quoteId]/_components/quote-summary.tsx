@@ -1,4 +1,5 @@
 import type { ReactNode } from 'react';
+import { FactList } from '@/app/_components/fact-list';
 import Link from 'next/link';
 import { tableLinkClass } from '@/app/_components/data-table';
 import { formatDateTime } from '@/app/_components/format';
@@ -16,22 +17,5 @@ export function QuoteSummary({ quote, linkAccount }: { quote: QuoteDetail; linkA
     ['Created', formatDateTime(quote.createdAt)],
     ['Sent', formatDateTime(quote.sentAt)],
   ];
-  return (
-    <div className="space-y-4">
-      <dl className="grid gap-x-6 gap-y-2 text-sm sm:grid-cols-[max-content_1fr]">
-        {rows.map(([k, v]) => (
-          <div key={k} className="contents">
-            <dt className="text-ink-muted">{k}</dt>
-            <dd className="tabular text-ink">{v}</dd>
-          </div>
-        ))}
-      </dl>
-      {quote.notes && (
-        <div>
-          <h3 className="text-label uppercase tracking-wide text-ink-muted">Notes</h3>
-          <p className="mt-1 whitespace-pre-wrap text-sm text-ink">{quote.notes}</p>
-        </div>
-      )}
-    </div>
-  );
+  return <FactList rows={rows} notes={quote.notes} />;
 }
