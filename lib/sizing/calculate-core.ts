@@ -13,7 +13,7 @@ import { SizingInputError, type SizingIssue } from './input-error';
 import { DEFAULT_HEATER_RATINGS_KW } from './ratings';
 import { resolveCommon, resolvePressurePa, resolveTemperatureK, type ResolvedCommon } from './resolve';
 import type { CompressorResult, HeaterResult, SizingResult } from './result-types';
-import type { CompressorInput, HeaterInput, SizingInput } from './schema';
+import { LIMITS, type CompressorInput, type HeaterInput, type SizingInput } from './schema';
 import { compressorWarnings, heaterWarnings } from './warnings';
 
 // Imports used per call, re-bound to module constants once: under tsx's CommonJS output every use of an
@@ -105,9 +105,7 @@ function compressorCase(input: CompressorInput, common: ResolvedCommon, issues: 
     ? temperatureToK(input.dischargeTemperatureLimit.value, input.dischargeTemperatureLimit.unit)
     : hydrogenRich ? HYDROGEN_DISCHARGE_LIMIT_K : DEFAULT_DISCHARGE_LIMIT_K;
   const r = common.gas.gasConstantJPerKgK;
-  if (input.cpJPerKgK !== undefined && !(input.cpJPerKgK > r)) {
-    issues.push({ path: 'cpJPerKgK', message: `cp must exceed this gas's R = ${r.toFixed(2)} J/(kg K) (cv = cp - R > 0)` });
-  }
+  checkPropertyOverrides(input.k, input.cpJPerKgK, r, issues);
   const eta = [input.isentropicEfficiency, input.polytropicEfficiency].filter((e) => e !== undefined);
   if (eta.length !== 1 || !eta.every((e) => e > 0 && e <= 1)) {
     issues.push({ path: 'isentropicEfficiency', message: 'give exactly one of isentropicEfficiency or polytropicEfficiency, above 0 and at most 1' });
@@ -182,5 +180,24 @@ export function calculateCore(input: SizingInput): SizingResult {
     // Only typed input that bypassed the schema can carry a unit string outside the lists.
     if (err instanceof UnitError) throw new SizingInputError([{ path: '', message: err.message }]);
     throw err;
+  }
+}
+
+// An ideal gas has cp - cv = R, so cp alone fixes k = cp / (cp - R); a k and cp given together must agree
+// with the gas's R. The tolerance leaves room for figures rounded on a data sheet, not for another gas.
+const OVERRIDE_R_TOLERANCE = 0.05;
+
+function checkPropertyOverrides(k: number | undefined, cp: number | undefined, r: number, issues: SizingIssue[]): void {
+  if (cp === undefined) return;
+  const kMax = LIMITS.k.max;
+  const cpMin = (r * kMax) / (kMax - 1);
+  if (!(cp >= cpMin)) {
+    issues.push({ path: 'cpJPerKgK', message: `cp must be at least ${cpMin.toFixed(1)} J/(kg K) for this gas (R = ${r.toFixed(2)} J/(kg K)): a lower cp implies k = cp/(cp - R) above ${kMax}` });
+    return;
+  }
+  if (k === undefined) return;
+  const impliedR = (cp * (k - 1)) / k;
+  if (Math.abs(impliedR - r) > OVERRIDE_R_TOLERANCE * r) {
+    issues.push({ path: 'cpJPerKgK', message: `k ${k} and cp ${cp} J/(kg K) imply R = cp (k - 1)/k = ${impliedR.toFixed(1)} J/(kg K), but this gas has R = ${r.toFixed(2)} J/(kg K) (cp - cv = R); give one of them, or a pair within ${OVERRIDE_R_TOLERANCE * 100} %` });
   }
 }
