@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { SizingInputError, calculate, type SizingIssue } from '@/lib/sizing';
+import { SizingInputError, calculate, type CompressorResult, type SizingIssue } from '@/lib/sizing';
 import { compressorRequest, heaterRequest, q } from './requests';
 
 function issuesOf(input: unknown): SizingIssue[] {
@@ -114,12 +114,12 @@ describe('refused input names the field, why, and the allowed range', () => {
     const low = issuesOf(compressorRequest({ cpJPerKgK: 300 }));
     expect(low).toEqual([{ path: 'cpJPerKgK', message: expect.stringMatching(/at least 645\.\d J\/\(kg K\).*k = cp\/\(cp - R\) above 1\.8/) }]);
     expect(paths(compressorRequest({ cpJPerKgK: 640 }))).toEqual(['cpJPerKgK']);
-    expect(calculate(compressorRequest({ cpJPerKgK: 650 })).compressor?.constantK.stages[0]?.k).toBeCloseTo(650 / (650 - 287.05), 2);
+    expect((calculate(compressorRequest({ cpJPerKgK: 650 })) as CompressorResult).compressor.constantK.stages[0]?.k).toBeCloseTo(650 / (650 - 287.05), 2);
   });
 
   // Air table figures cp 1.005 kJ/(kg K), k 1.400 (standard thermodynamics texts [mem]) agree with R to 0.03 %.
   it('k and cp given together must agree with the gas constant', () => {
-    expect(calculate(compressorRequest({ k: 1.4, cpJPerKgK: 1005 })).compressor?.constantK.stages[0]?.k).toBe(1.4);
+    expect((calculate(compressorRequest({ k: 1.4, cpJPerKgK: 1005 })) as CompressorResult).compressor.constantK.stages[0]?.k).toBe(1.4);
     const clash = issuesOf(compressorRequest({ k: 1.667, cpJPerKgK: 1005 }));
     expect(clash).toEqual([{ path: 'cpJPerKgK', message: expect.stringMatching(/imply R = .* 402\.1 J\/\(kg K\).*R = 287\.05/) }]);
   });
