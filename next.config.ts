@@ -1,5 +1,5 @@
 import type { NextConfig } from 'next';
-import { clerkFrontendApiFrom, securityHeaders } from './lib/security/headers';
+import { apiSecurityHeaders, clerkFrontendApiFrom, securityHeaders } from './lib/security/headers';
 
 const appUrl = process.env.APP_URL ?? 'http://localhost:3000';
 const headerOptions = {
@@ -18,7 +18,10 @@ const nextConfig: NextConfig = {
   // The datasheet fonts are read from disk at render time; ship them with any traced deployment.
   outputFileTracingIncludes: { '/**': ['./lib/datasheets/fonts/**'] },
   async headers() {
-    return [{ source: '/:path*', headers: securityHeaders(headerOptions) }];
+    return [
+      { source: '/api/:path*', headers: apiSecurityHeaders(headerOptions) },
+      { source: '/:path((?!api/).*)', headers: securityHeaders(headerOptions) },
+    ];
   },
   // Type checking and lint are their own steps of `npm test` (and CI); the build does not repeat them.
   typescript: { ignoreBuildErrors: true },

@@ -25,6 +25,18 @@ test('responses carry the security headers', async ({ request }) => {
   expect(h['x-powered-by']).toBeUndefined();
 });
 
+test('API answers carry the strict API policy and the common headers; pages keep the page policy', async ({ request }) => {
+  const api = await request.get('/api/v1/openapi');
+  const h = api.headers();
+  expect(h['content-security-policy']).toBe("default-src 'none'; frame-ancestors 'none'");
+  expect(h['x-content-type-options']).toBe('nosniff');
+  expect(h['x-frame-options']).toBe('DENY');
+  expect(h['referrer-policy']).toBe('strict-origin-when-cross-origin');
+  const page = await request.get('/size');
+  expect(page.headers()['content-security-policy']).toContain("script-src 'self'");
+  expect(page.headers()['content-security-policy']).not.toContain("default-src 'none'");
+});
+
 test('the session cookie is http-only and SameSite', async ({ request }) => {
   const res = await request.post('/api/auth/sign-in', { data: signInFor.support });
   expect(res.status()).toBe(200);
