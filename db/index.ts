@@ -13,8 +13,10 @@ export const pool =
   new Pool({
     connectionString: env.DATABASE_URL,
     max: env.DATABASE_POOL_MAX,
-    // Fail fast when the server is down so requests answer 503 instead of hanging.
-    connectionTimeoutMillis: 2_000,
+    // A stopped server refuses at once, so requests answer 503 without waiting for this. The limit bounds the
+    // wait for a free client (under a burst, requests queue here rather than fail) and for a server that
+    // never answers; 10 s stays inside a browser's or load balancer's patience.
+    connectionTimeoutMillis: 10_000,
     idleTimeoutMillis: 30_000,
     statement_timeout: 15_000,
   });
