@@ -36,7 +36,7 @@ function escapeLike(s: string): string {
  * Each branch is its own SELECT in a union so it uses its own index: OR-ing them makes PostgreSQL scan
  * every sizing.
  */
-function textCondition(q: string, fuzzy: boolean): SQL {
+function matchingIds(q: string, fuzzy: boolean): SQL {
   const lower = q.toLowerCase();
   const like = `%${escapeLike(lower)}%`;
   const prefix = `${escapeLike(q.toUpperCase())}%`;
@@ -47,13 +47,12 @@ function textCondition(q: string, fuzzy: boolean): SQL {
     union select t.id from sizings t where t.account_id in (select a3.id from accounts a3 where ${lower} <% lower(a3.name))
     union select qi.sizing_id from quote_items qi join quotes q3 on q3.id = qi.quote_id where ${lower} <% lower(q3.title)`
     : sql``;
-  return sql`s.id in (
+  return sql`
     select t.id from sizings t where t.search_text like ${like}
     union select t.id from sizings t where t.account_id in (select a2.id from accounts a2 where a2.name ilike ${like})
     union select d.sizing_id from datasheets d where d.number like ${prefix}
     union select qi.sizing_id from quote_items qi join quotes q2 on q2.id = qi.quote_id where q2.number like ${prefix} or lower(q2.title) like ${like}
-    ${typo}
-  )`;
+    ${typo}`;
 }
 
 function conditions(user: CurrentUser, f: SupportSearch, fuzzy: boolean): SQL[] {
@@ -61,7 +60,7 @@ function conditions(user: CurrentUser, f: SupportSearch, fuzzy: boolean): SQL[] 
   const scope = accountScope(user);
   if (scope) c.push(sql`s.account_id = ${scope}`);
   if (f.accountId) c.push(sql`s.account_id = ${f.accountId}`);
-  if (f.q) c.push(textCondition(f.q, fuzzy));
+  if (f.q) c.push(sql`s.id in (${matchingIds(f.q, fuzzy)})`);
   if (f.service) c.push(sql`s.service = ${f.service}`);
   if (f.gas) c.push(sql`s.gas_key = ${f.gas}`);
   if (f.minKw !== undefined) c.push(sql`s.headline_kw >= ${f.minKw}`);
@@ -96,18 +95,23 @@ const FUZZY_BELOW = 5;
 export async function searchSizings(user: CurrentUser, f: SupportSearch): Promise<SupportResults> {
   const offset = (f.page - 1) * f.pageSize;
   return db.transaction(async (tx) => {
-    // Looser thresholds than the defaults (0.3 / 0.6) so one or two wrong characters in a tag still match.
-    await tx.execute(sql`set local pg_trgm.similarity_threshold = 0.4`);
-    await tx.execute(sql`set local pg_trgm.word_similarity_threshold = 0.5`);
-    // Short interactive queries: compiling them (JIT) costs more than it saves.
-    await tx.execute(sql`set local jit = off`);
-    const count = async (where: SQL) => (await tx.execute<{ n: number }>(sql`select count(*)::int as n from (select 1 from sizings s ${where} limit ${COUNT_CAP + 1}) t`)).rows[0]?.n ?? 0;
-    let where = whereOf(conditions(user, f, false));
-    let n = await count(where);
+    // Looser trigram thresholds than the defaults (0.3 / 0.6) so one or two wrong characters in a tag still
+    // match; no JIT, which costs short interactive queries more than it saves. One round trip for all three.
+    await tx.execute(sql`select set_config('pg_trgm.similarity_threshold', '0.4', true),
+      set_config('pg_trgm.word_similarity_threshold', '0.5', true), set_config('jit', 'off', true)`);
+    const count = async (fuzzy: boolean) => {
+      const conds = conditions(user, f, fuzzy);
+      // A text query alone: its id set is the answer, so count it without probing every sizing it names.
+      const from = f.q && conds.length === 1 ? sql`(${matchingIds(f.q, fuzzy)} limit ${COUNT_CAP + 1})` : sql`(select 1 from sizings s ${whereOf(conds)} limit ${COUNT_CAP + 1})`;
+      return (await tx.execute<{ n: number }>(sql`select count(*)::int as n from ${from} t`)).rows[0]?.n ?? 0;
+    };
+    let fuzzy = false;
+    let n = await count(fuzzy);
     if (f.q && n < FUZZY_BELOW && f.q.length >= 3) {
-      where = whereOf(conditions(user, f, true));
-      n = await count(where);
+      fuzzy = true;
+      n = await count(fuzzy);
     }
+    const where = whereOf(conditions(user, f, fuzzy));
     const rows = await tx.execute<SupportHit>(sql`
       select s.id, s.number, s.title, s.equipment_tag as "equipmentTag", s.service, s.gas_label as "gasLabel",
              s.headline_kw as "headlineKw", s.account_id as "accountId", a.name as "accountName",
