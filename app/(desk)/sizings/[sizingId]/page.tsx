@@ -7,11 +7,13 @@ import { isStaff } from '@/lib/auth/roles';
 import { can } from '@/lib/auth/roles';
 import { downloadAccess, listDatasheets } from '@/lib/datasheets/queries';
 import { getSizing } from '@/lib/sizings/queries';
+import { readStoredSizing } from '@/lib/sizings/stored-result';
 import { auditLookup } from '@/lib/support/audit-lookup';
 import { sizingEmails, sizingTrail } from '@/lib/support/sizing-record';
 import { IssueDatasheetButton } from '../../datasheets/_components/issue-datasheet-button';
 import { AuditTrail, EmailLog, RevisionList } from './_components/record-sections';
 import { ResendButton } from './_components/resend-button';
+import { ResultDetails } from '../../size/_components/result-details';
 import { KeyValueTable } from '../_components/key-value-table';
 import { PreliminaryNote } from '../_components/preliminary-note';
 import { SizingMeta } from '../_components/sizing-meta';
@@ -25,6 +27,7 @@ export default async function SizingPage({ params }: { params: Promise<{ sizingI
   const sizing = await orNotFound(getSizing(user, sizingId));
   const [datasheetList, access, emails, trail] = await Promise.all([listDatasheets(user, { sizingId }), downloadAccess(user), sizingEmails(user, sizingId), sizingTrail(user, sizingId)]);
   const datasheet = datasheetList[0];
+  const stored = readStoredSizing(sizing.input, sizing.result);
   if (user.role === 'support') await auditLookup(user, 'sizing.viewed', 'sizing', sizingId, { number: sizing.number }, sizing.accountId);
   return (
     <PageBody>
@@ -55,14 +58,23 @@ export default async function SizingPage({ params }: { params: Promise<{ sizingI
           <AuditTrail entries={trail} />
         </Section>
       )}
-      <div className="grid gap-6 xl:grid-cols-2">
-        <Section title="Saved input" id="input">
-          <KeyValueTable caption="Saved input" data={sizing.input} testId="sizing-input" />
-        </Section>
-        <Section title="Result at save time" id="result">
-          <KeyValueTable caption="Result" data={sizing.result} testId="sizing-result" />
-        </Section>
-      </div>
+      {stored && (
+        <section aria-labelledby="result-breakdown">
+          <h2 id="result-breakdown" className="text-lg font-semibold text-ink">Result at save time</h2>
+          <ResultDetails result={stored.result} input={stored.input} system={user.unitSystem} stale={false} />
+        </section>
+      )}
+      <details className="group" open={!stored}>
+        <summary className="cursor-pointer text-sm font-medium text-ink-soft">Every saved input and figure, as stored</summary>
+        <div className="mt-3 grid gap-6 xl:grid-cols-2">
+          <Section title="Saved input" id="input">
+            <KeyValueTable caption="Saved input" data={sizing.input} testId="sizing-input" />
+          </Section>
+          <Section title="Stored result" id="result">
+            <KeyValueTable caption="Result" data={sizing.result} testId="sizing-result" />
+          </Section>
+        </div>
+      </details>
     </PageBody>
   );
 }
