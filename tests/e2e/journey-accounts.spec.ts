@@ -3,6 +3,7 @@ import { expect, test } from '@playwright/test';
 import { batchColumnNames } from '../../lib/batch/columns';
 import { query, signInFor } from './support/scenario';
 import { signIn } from './support/sign-in';
+import { formatHeadline } from '@/lib/sizings/headline';
 
 const suffix = Date.now().toString(36);
 const company = `Brackwater Maltings ${suffix}`;
@@ -63,6 +64,9 @@ test('a sales engineer opens an account and quotes two sizings; the customer see
   await customer.goto(`/quotes/${quote!.id}`);
   await expect(customer.getByText('Kiln air heater')).toBeVisible();
   await expect(customer.getByText('CO2 recovery compressor')).toBeVisible();
+  const [heater] = await query<{ kw: number }>("select s.headline_kw as kw from sizings s join quote_items qi on qi.sizing_id = s.id where qi.quote_id = $1 and s.service = 'heater'", [quote!.id]);
+  await expect(customer.getByTestId('quote-totals')).toContainText(`heaters, 1 unit: ${formatHeadline('heater', Number(heater!.kw))}`);
+  await expect(customer.getByTestId('quote-totals')).toContainText('compressors, 1 unit:');
 
   // 4. support finds it from part of the customer's name
   const supportCtx = await browser.newContext();

@@ -3,6 +3,7 @@ import { DataTable, tableLinkClass, type Column } from '@/app/_components/data-t
 import { EmptyState } from '@/app/_components/empty-state';
 import { ServiceBadge } from '@/app/_components/status-badge';
 import type { QuoteLine } from '@/lib/quotes/queries';
+import { quoteTotals } from '@/lib/quotes/totals';
 import { formatHeadline } from '@/lib/sizings/headline';
 import { RemoveLineButton } from './remove-line-button';
 
@@ -20,7 +21,12 @@ export function QuoteLines({ quoteId, lines, editable }: { quoteId: string; line
   if (editable) {
     columns.push({ key: 'remove', header: 'Remove', cell: (l) => <RemoveLineButton quoteId={quoteId} itemId={l.itemId} label={`${l.sizingNumber} ${l.title}`} /> });
   }
+  const totals = quoteTotals(lines);
+  const parts = (['heater', 'compressor'] as const)
+    .filter((service) => totals[service].units > 0)
+    .map((service) => `${service === 'heater' ? 'heaters' : 'compressors'}, ${totals[service].units} ${totals[service].units === 1 ? 'unit' : 'units'}: ${formatHeadline(service, totals[service].kw)}`);
   return (
+    <>
     <DataTable
       caption="Quote lines"
       columns={columns}
@@ -29,5 +35,11 @@ export function QuoteLines({ quoteId, lines, editable }: { quoteId: string; line
       testId="quote-lines"
       empty={<EmptyState title="No lines on this quote yet">{editable ? 'Add a saved sizing of this account below.' : null}</EmptyState>}
     />
+    {parts.length > 0 && (
+      <p className="mt-3 text-sm text-ink" data-testid="quote-totals">
+        <span className="font-medium">Quoted quantities in total</span>: {parts.join('; ')}.
+      </p>
+    )}
+    </>
   );
 }
