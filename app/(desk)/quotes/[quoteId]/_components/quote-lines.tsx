@@ -27,19 +27,19 @@ export function QuoteLines({ quoteId, lines, editable }: { quoteId: string; line
     .map((service) => `${service === 'heater' ? 'heaters' : 'compressors'}, ${totals[service].units} ${totals[service].units === 1 ? 'unit' : 'units'}: ${formatHeadline(service, totals[service].kw)}`);
   return (
     <>
-    <DataTable
-      caption="Quote lines"
-      columns={columns}
-      rows={lines}
-      rowKey={(l) => l.itemId}
-      testId="quote-lines"
-      empty={<EmptyState title="No lines on this quote yet">{editable ? 'Add a saved sizing of this account below.' : null}</EmptyState>}
-    />
-    {parts.length > 0 && (
-      <p className="mt-3 text-sm text-ink" data-testid="quote-totals">
-        <span className="font-medium">Quoted quantities in total</span>: {parts.join('; ')}.
-      </p>
-    )}
+      <DataTable
+        caption="Quote lines"
+        columns={columns}
+        rows={lines}
+        rowKey={(l) => l.itemId}
+        testId="quote-lines"
+        empty={<EmptyState title="No lines on this quote yet">{editable ? 'Add a saved sizing of this account below.' : null}</EmptyState>}
+      />
+      {parts.length > 0 && (
+        <p className="mt-3 text-sm text-ink" data-testid="quote-totals">
+          <span className="font-medium">Quoted quantities in total</span>: {parts.join('; ')}.
+        </p>
+      )}
     </>
   );
 }
