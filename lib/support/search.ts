@@ -99,19 +99,18 @@ export async function searchSizings(user: CurrentUser, f: SupportSearch): Promis
     // match; no JIT, which costs short interactive queries more than it saves. One round trip for all three.
     await tx.execute(sql`select set_config('pg_trgm.similarity_threshold', '0.4', true),
       set_config('pg_trgm.word_similarity_threshold', '0.5', true), set_config('jit', 'off', true)`);
-    const count = async (fuzzy: boolean) => {
-      const conds = conditions(user, f, fuzzy);
+    const count = async (conds: SQL[], fuzzy: boolean) => {
       // A text query alone: its id set is the answer, so count it without probing every sizing it names.
       const from = f.q && conds.length === 1 ? sql`(${matchingIds(f.q, fuzzy)} limit ${COUNT_CAP + 1})` : sql`(select 1 from sizings s ${whereOf(conds)} limit ${COUNT_CAP + 1})`;
       return (await tx.execute<{ n: number }>(sql`select count(*)::int as n from ${from} t`)).rows[0]?.n ?? 0;
     };
-    let fuzzy = false;
-    let n = await count(fuzzy);
+    let conds = conditions(user, f, false);
+    let n = await count(conds, false);
     if (f.q && n < FUZZY_BELOW && f.q.length >= 3) {
-      fuzzy = true;
-      n = await count(fuzzy);
+      conds = conditions(user, f, true);
+      n = await count(conds, true);
     }
-    const where = whereOf(conditions(user, f, fuzzy));
+    const where = whereOf(conds);
     const rows = await tx.execute<SupportHit>(sql`
       select s.id, s.number, s.title, s.equipment_tag as "equipmentTag", s.service, s.gas_label as "gasLabel",
              s.headline_kw as "headlineKw", s.account_id as "accountId", a.name as "accountName",
