@@ -1,6 +1,7 @@
 import { dirname } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { FlatCompat } from '@eslint/eslintrc';
+import prettier from 'eslint-config-prettier';
 
 const compat = new FlatCompat({ baseDirectory: dirname(fileURLToPath(import.meta.url)) });
 
@@ -21,6 +22,8 @@ const config = [
     files: ['**/*.cjs'],
     rules: { '@typescript-eslint/no-require-imports': 'off' },
   },
+  // Layout is Prettier's job (npm run format); lint keeps to correctness.
+  prettier,
   {
     // Scripts, fakes and tests run outside Next and read their own process environment.
     files: ['lib/env.ts', 'db/**', 'mocks/**', 'tests/**', 'drizzle.config.ts', 'next.config.ts'],
