@@ -6,12 +6,26 @@ import prettier from 'eslint-config-prettier';
 const compat = new FlatCompat({ baseDirectory: dirname(fileURLToPath(import.meta.url)) });
 
 const config = [
-  { ignores: ['.next/**', '.next-*/**', '.scratch/**', 'node_modules/**', '.data/**', 'db/migrations/**', 'next-env.d.ts', 'tests/e2e/.results/**'] },
+  {
+    ignores: [
+      '.next/**',
+      '.next-*/**',
+      '.scratch/**',
+      'node_modules/**',
+      '.data/**',
+      'db/migrations/**',
+      'next-env.d.ts',
+      'tests/e2e/.results/**',
+    ],
+  },
   ...compat.extends('next/core-web-vitals', 'next/typescript'),
   {
     rules: {
       // Every exit from a module goes through lib/env.ts so configuration is validated once.
-      'no-restricted-properties': ['error', { object: 'process', property: 'env', message: 'Read configuration from lib/env.ts.' }],
+      'no-restricted-properties': [
+        'error',
+        { object: 'process', property: 'env', message: 'Read configuration from lib/env.ts.' },
+      ],
       '@typescript-eslint/no-explicit-any': 'error',
       '@typescript-eslint/consistent-type-definitions': ['error', 'type'],
       'no-console': ['error', { allow: ['warn', 'error'] }],

@@ -5,7 +5,18 @@ import { databaseUp } from '@/lib/ops/db-status';
 import { LOCAL_SESSION_COOKIE, verifyLocalSession } from '@/mocks/identity/session-token';
 
 // Coarse gate only: every page, action and handler checks the user and role again on the server.
-const protectedPrefixes = ['/quotes', '/accounts', '/sizings', '/datasheets', '/support', '/billing', '/admin', '/batch', '/settings', '/mail'];
+const protectedPrefixes = [
+  '/quotes',
+  '/accounts',
+  '/sizings',
+  '/datasheets',
+  '/support',
+  '/billing',
+  '/admin',
+  '/batch',
+  '/settings',
+  '/mail',
+];
 
 function isProtected(pathname: string): boolean {
   return protectedPrefixes.some((p) => pathname === p || pathname.startsWith(`${p}/`));
@@ -33,7 +44,10 @@ const unavailablePage = `<!doctype html><html lang="en"><head><meta charset="utf
 async function unavailable(req: NextRequest): Promise<NextResponse | null> {
   if (req.method !== 'GET' || !needsDatabase(req.nextUrl.pathname) || req.headers.get('rsc')) return null;
   if (await databaseUp()) return null;
-  return new NextResponse(unavailablePage, { status: 503, headers: { 'content-type': 'text/html; charset=utf-8', 'retry-after': '10', 'cache-control': 'no-store' } });
+  return new NextResponse(unavailablePage, {
+    status: 503,
+    headers: { 'content-type': 'text/html; charset=utf-8', 'retry-after': '10', 'cache-control': 'no-store' },
+  });
 }
 
 function toSignIn(req: NextRequest): NextResponse {
@@ -75,5 +89,7 @@ export default async function middleware(req: NextRequest, event: NextFetchEvent
 // middleware: it costs more than the calculation itself under load, and each handler checks what it needs.
 export const config = {
   runtime: 'nodejs',
-  matcher: ['/((?!_next/static|_next/image|favicon.ico|api/v1/calculate|api/v1/openapi|api/v1/batch/template|api/health|api/ready|api/webhooks/|.*\\.(?:png|svg|ico|woff2?)$).*)'],
+  matcher: [
+    '/((?!_next/static|_next/image|favicon.ico|api/v1/calculate|api/v1/openapi|api/v1/batch/template|api/health|api/ready|api/webhooks/|.*\\.(?:png|svg|ico|woff2?)$).*)',
+  ],
 };

@@ -5,7 +5,9 @@ const appUrl = process.env.APP_URL ?? 'http://localhost:3000';
 const headerOptions = {
   production: process.env.NODE_ENV === 'production',
   https: appUrl.startsWith('https://'),
-  clerkFrontendApi: process.env.CLERK_SECRET_KEY ? clerkFrontendApiFrom(process.env.NEXT_PUBLIC_CLERK_PUBLISHABLE_KEY) : null,
+  clerkFrontendApi: process.env.CLERK_SECRET_KEY
+    ? clerkFrontendApiFrom(process.env.NEXT_PUBLIC_CLERK_PUBLISHABLE_KEY)
+    : null,
 };
 
 const nextConfig: NextConfig = {

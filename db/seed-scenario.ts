@@ -3,13 +3,48 @@
 import type { UserRole } from './schema/enums';
 
 export type SeedUser = { email: string; name: string; role: UserRole; account?: string };
-export type SeedSizing = { account: string; title: string; tag: string; notes?: string; by: string; input: Record<string, unknown> };
-export type SeedQuote = { account: string; title: string; status: 'draft' | 'sent' | 'won' | 'lost'; by: string; lines: { tag: string; quantity: number }[]; notes?: string };
+export type SeedSizing = {
+  account: string;
+  title: string;
+  tag: string;
+  notes?: string;
+  by: string;
+  input: Record<string, unknown>;
+};
+export type SeedQuote = {
+  account: string;
+  title: string;
+  status: 'draft' | 'sent' | 'won' | 'lost';
+  by: string;
+  lines: { tag: string; quantity: number }[];
+  notes?: string;
+};
 
 export const seedAccounts = [
-  { key: 'tarnside', name: 'Tarnside Polymers', site: 'Tarnside Works, compounding line 3', billingContactName: 'Olu Bennet', billingContactEmail: 'olu.bennet@tarnside.example', barometricPressureKpa: 100.8 },
-  { key: 'greyfen', name: 'Greyfen Biogas', site: 'Greyfen anaerobic digestion plant', billingContactName: 'Marta Quill', billingContactEmail: 'marta.quill@greyfen.example', siteAltitudeM: 240 },
-  { key: 'oakhollow', name: 'Oakhollow Glassworks', site: 'Oakhollow furnace hall B', billingContactName: 'Dev Hartigan', billingContactEmail: 'dev.hartigan@oakhollow.example', barometricPressureKpa: 101.325 },
+  {
+    key: 'tarnside',
+    name: 'Tarnside Polymers',
+    site: 'Tarnside Works, compounding line 3',
+    billingContactName: 'Olu Bennet',
+    billingContactEmail: 'olu.bennet@tarnside.example',
+    barometricPressureKpa: 100.8,
+  },
+  {
+    key: 'greyfen',
+    name: 'Greyfen Biogas',
+    site: 'Greyfen anaerobic digestion plant',
+    billingContactName: 'Marta Quill',
+    billingContactEmail: 'marta.quill@greyfen.example',
+    siteAltitudeM: 240,
+  },
+  {
+    key: 'oakhollow',
+    name: 'Oakhollow Glassworks',
+    site: 'Oakhollow furnace hall B',
+    billingContactName: 'Dev Hartigan',
+    billingContactEmail: 'dev.hartigan@oakhollow.example',
+    barometricPressureKpa: 101.325,
+  },
 ] as const;
 
 export const seedUsers: SeedUser[] = [
@@ -26,46 +61,165 @@ const q = (value: number, unit: string) => ({ value, unit });
 
 export const seedSizings: SeedSizing[] = [
   {
-    account: 'tarnside', title: 'Pellet dryer air heater', tag: 'EH-301', by: 'ines.marlow@halvard.example',
+    account: 'tarnside',
+    title: 'Pellet dryer air heater',
+    tag: 'EH-301',
+    by: 'ines.marlow@halvard.example',
     notes: 'Enquiry 14 Feb: dryer inlet air, 3 barg header.',
-    input: { service: 'heater', gas: { preset: 'air' }, flow: q(2000, 'kg/h'), inlet: { temperature: q(15, 'degC'), pressure: q(3, 'barg') }, outletTemperature: q(320, 'degC'), heatLossPercent: 5, designMarginPercent: 10, supply: { voltageV: 400, phases: 3 } },
+    input: {
+      service: 'heater',
+      gas: { preset: 'air' },
+      flow: q(2000, 'kg/h'),
+      inlet: { temperature: q(15, 'degC'), pressure: q(3, 'barg') },
+      outletTemperature: q(320, 'degC'),
+      heatLossPercent: 5,
+      designMarginPercent: 10,
+      supply: { voltageV: 400, phases: 3 },
+    },
   },
   {
-    account: 'tarnside', title: 'Nitrogen purge heater', tag: 'EH-305', by: 'ines.marlow@halvard.example',
-    input: { service: 'heater', gas: { preset: 'nitrogen' }, flow: q(1000, 'kg/h'), inlet: { temperature: q(20, 'degC'), pressure: q(500, 'kPa') }, outletTemperature: q(300, 'degC'), heatLossPercent: 3, designMarginPercent: 15, supply: { voltageV: 400, phases: 3 } },
+    account: 'tarnside',
+    title: 'Nitrogen purge heater',
+    tag: 'EH-305',
+    by: 'ines.marlow@halvard.example',
+    input: {
+      service: 'heater',
+      gas: { preset: 'nitrogen' },
+      flow: q(1000, 'kg/h'),
+      inlet: { temperature: q(20, 'degC'), pressure: q(500, 'kPa') },
+      outletTemperature: q(300, 'degC'),
+      heatLossPercent: 3,
+      designMarginPercent: 15,
+      supply: { voltageV: 400, phases: 3 },
+    },
   },
   {
-    account: 'tarnside', title: 'Conveying air compressor', tag: 'K-110', by: 'tobias.rennick@halvard.example',
-    input: { service: 'compressor', gas: { preset: 'air' }, flow: q(1200, 'Nm3/h'), inlet: { temperature: q(25, 'degC'), pressure: q(101.325, 'kPa') }, dischargePressure: q(8, 'barg'), isentropicEfficiency: 0.78, stages: 2, intercoolerOutletTemperature: q(35, 'degC'), method: 'variable-cp' },
+    account: 'tarnside',
+    title: 'Conveying air compressor',
+    tag: 'K-110',
+    by: 'tobias.rennick@halvard.example',
+    input: {
+      service: 'compressor',
+      gas: { preset: 'air' },
+      flow: q(1200, 'Nm3/h'),
+      inlet: { temperature: q(25, 'degC'), pressure: q(101.325, 'kPa') },
+      dischargePressure: q(8, 'barg'),
+      isentropicEfficiency: 0.78,
+      stages: 2,
+      intercoolerOutletTemperature: q(35, 'degC'),
+      method: 'variable-cp',
+    },
   },
   {
-    account: 'greyfen', title: 'Biogas booster to CHP', tag: 'K-201', by: 'tobias.rennick@halvard.example',
+    account: 'greyfen',
+    title: 'Biogas booster to CHP',
+    tag: 'K-201',
+    by: 'tobias.rennick@halvard.example',
     notes: 'Raw biogas after H2S removal; composition from site analysis.',
-    input: { service: 'compressor', gas: { components: { CH4: 0.6, CO2: 0.38, N2: 0.02 } }, flow: q(450, 'Nm3/h'), inlet: { temperature: q(30, 'degC'), pressure: q(1.02, 'bar') }, dischargePressure: q(6, 'bar'), polytropicEfficiency: 0.8, stages: 2, intercoolerOutletTemperature: q(40, 'degC'), method: 'variable-cp' },
+    input: {
+      service: 'compressor',
+      gas: { components: { CH4: 0.6, CO2: 0.38, N2: 0.02 } },
+      flow: q(450, 'Nm3/h'),
+      inlet: { temperature: q(30, 'degC'), pressure: q(1.02, 'bar') },
+      dischargePressure: q(6, 'bar'),
+      polytropicEfficiency: 0.8,
+      stages: 2,
+      intercoolerOutletTemperature: q(40, 'degC'),
+      method: 'variable-cp',
+    },
   },
   {
-    account: 'greyfen', title: 'Digester gas dew-point heater', tag: 'E-210', by: 'tobias.rennick@halvard.example',
-    input: { service: 'heater', gas: { components: { CH4: 0.6, CO2: 0.38, N2: 0.02 } }, flow: q(450, 'Nm3/h'), inlet: { temperature: q(8, 'degC'), pressure: q(120, 'kPa') }, outletTemperature: q(25, 'degC'), heatLossPercent: 5, designMarginPercent: 20, supply: { voltageV: 230, phases: 1 } },
+    account: 'greyfen',
+    title: 'Digester gas dew-point heater',
+    tag: 'E-210',
+    by: 'tobias.rennick@halvard.example',
+    input: {
+      service: 'heater',
+      gas: { components: { CH4: 0.6, CO2: 0.38, N2: 0.02 } },
+      flow: q(450, 'Nm3/h'),
+      inlet: { temperature: q(8, 'degC'), pressure: q(120, 'kPa') },
+      outletTemperature: q(25, 'degC'),
+      heatLossPercent: 5,
+      designMarginPercent: 20,
+      supply: { voltageV: 230, phases: 1 },
+    },
   },
   {
-    account: 'oakhollow', title: 'Combustion air preheater', tag: 'EH-410', by: 'ines.marlow@halvard.example',
-    input: { service: 'heater', gas: { preset: 'humid-air', relativeHumidityPercent: 60 }, flow: q(5400, 'SCFM'), inlet: { temperature: q(59, 'degF'), pressure: q(14.696, 'psia') }, outletTemperature: q(750, 'degF'), heatLossPercent: 4, designMarginPercent: 10, supply: { voltageV: 480, phases: 3 } },
+    account: 'oakhollow',
+    title: 'Combustion air preheater',
+    tag: 'EH-410',
+    by: 'ines.marlow@halvard.example',
+    input: {
+      service: 'heater',
+      gas: { preset: 'humid-air', relativeHumidityPercent: 60 },
+      flow: q(5400, 'SCFM'),
+      inlet: { temperature: q(59, 'degF'), pressure: q(14.696, 'psia') },
+      outletTemperature: q(750, 'degF'),
+      heatLossPercent: 4,
+      designMarginPercent: 10,
+      supply: { voltageV: 480, phases: 3 },
+    },
   },
   {
-    account: 'oakhollow', title: 'Nitrogen backfill compressor', tag: 'K-420', by: 'ines.marlow@halvard.example',
-    input: { service: 'compressor', gas: { preset: 'nitrogen' }, flow: q(1500, 'Nm3/h'), inlet: { temperature: q(20, 'degC'), pressure: q(1, 'bar') }, dischargePressure: q(30, 'bar'), isentropicEfficiency: 0.8, stages: 3, intercoolerOutletTemperature: q(35, 'degC'), interstagePressureDropPercent: 1.5, method: 'variable-cp' },
+    account: 'oakhollow',
+    title: 'Nitrogen backfill compressor',
+    tag: 'K-420',
+    by: 'ines.marlow@halvard.example',
+    input: {
+      service: 'compressor',
+      gas: { preset: 'nitrogen' },
+      flow: q(1500, 'Nm3/h'),
+      inlet: { temperature: q(20, 'degC'), pressure: q(1, 'bar') },
+      dischargePressure: q(30, 'bar'),
+      isentropicEfficiency: 0.8,
+      stages: 3,
+      intercoolerOutletTemperature: q(35, 'degC'),
+      interstagePressureDropPercent: 1.5,
+      method: 'variable-cp',
+    },
   },
 ];
 
 export const seedQuotes: SeedQuote[] = [
-  { account: 'tarnside', title: 'Line 3 dryer and purge heaters', status: 'sent', by: 'ines.marlow@halvard.example', lines: [{ tag: 'EH-301', quantity: 1 }, { tag: 'EH-305', quantity: 2 }] },
-  { account: 'greyfen', title: 'CHP gas train', status: 'draft', by: 'tobias.rennick@halvard.example', lines: [{ tag: 'K-201', quantity: 1 }, { tag: 'E-210', quantity: 1 }] },
-  { account: 'oakhollow', title: 'Furnace hall B utilities', status: 'won', by: 'ines.marlow@halvard.example', lines: [{ tag: 'EH-410', quantity: 1 }, { tag: 'K-420', quantity: 1 }] },
+  {
+    account: 'tarnside',
+    title: 'Line 3 dryer and purge heaters',
+    status: 'sent',
+    by: 'ines.marlow@halvard.example',
+    lines: [
+      { tag: 'EH-301', quantity: 1 },
+      { tag: 'EH-305', quantity: 2 },
+    ],
+  },
+  {
+    account: 'greyfen',
+    title: 'CHP gas train',
+    status: 'draft',
+    by: 'tobias.rennick@halvard.example',
+    lines: [
+      { tag: 'K-201', quantity: 1 },
+      { tag: 'E-210', quantity: 1 },
+    ],
+  },
+  {
+    account: 'oakhollow',
+    title: 'Furnace hall B utilities',
+    status: 'won',
+    by: 'ines.marlow@halvard.example',
+    lines: [
+      { tag: 'EH-410', quantity: 1 },
+      { tag: 'K-420', quantity: 1 },
+    ],
+  },
 ];
 
 /** Datasheets issued in the scenario: tag, issuer and a note per revision (one entry per revision). */
 export const seedDatasheets: { tag: string; by: string; notes: string[] }[] = [
-  { tag: 'EH-301', by: 'ines.marlow@halvard.example', notes: ['Issued for quotation', 'Heat-loss allowance confirmed with the customer'] },
+  {
+    tag: 'EH-301',
+    by: 'ines.marlow@halvard.example',
+    notes: ['Issued for quotation', 'Heat-loss allowance confirmed with the customer'],
+  },
   { tag: 'K-201', by: 'tobias.rennick@halvard.example', notes: ['Issued for quotation'] },
   { tag: 'EH-410', by: 'ines.marlow@halvard.example', notes: ['Issued for order'] },
 ];

@@ -16,11 +16,17 @@ const dbName = new URL(process.env.DATABASE_URL ?? 'postgres://x@h/dutywise').pa
 async function main() {
   if (reset) {
     if (!dbName.endsWith('_test')) throw new Error(`--reset refuses to empty '${dbName}': only databases named *_test`);
-    const tables = await db.execute<{ t: string }>(sql`select tablename as t from pg_tables where schemaname = 'public'`);
+    const tables = await db.execute<{ t: string }>(
+      sql`select tablename as t from pg_tables where schemaname = 'public'`,
+    );
     const list = tables.rows.map((r) => `"${r.t}"`).join(', ');
     if (list) await db.execute(sql.raw(`truncate ${list} restart identity cascade`));
   }
-  const [marker] = await db.select({ id: users.id }).from(users).where(eq(users.email, 'admin@halvard.example')).limit(1);
+  const [marker] = await db
+    .select({ id: users.id })
+    .from(users)
+    .where(eq(users.email, 'admin@halvard.example'))
+    .limit(1);
   if (marker) {
     console.log('demo data already present; nothing to seed');
     return;
@@ -35,26 +41,46 @@ async function main() {
       accountIds.set(key, row!.id);
     }
     for (const u of seedUsers) {
-      const [row] = await tx.insert(users).values({ email: u.email, name: u.name, role: u.role, passwordHash }).returning({ id: users.id });
+      const [row] = await tx
+        .insert(users)
+        .values({ email: u.email, name: u.name, role: u.role, passwordHash })
+        .returning({ id: users.id });
       const accountId = u.account ? accountIds.get(u.account)! : null;
       if (accountId) await tx.insert(memberships).values({ accountId, userId: row!.id });
-      people.set(u.email, { id: row!.id, email: u.email, name: u.name, role: u.role, accountId, unitSystem: u.email.endsWith('oakhollow.example') ? 'us' : 'si' });
+      people.set(u.email, {
+        id: row!.id,
+        email: u.email,
+        name: u.name,
+        role: u.role,
+        accountId,
+        unitSystem: u.email.endsWith('oakhollow.example') ? 'us' : 'si',
+      });
     }
     await tx.update(users).set({ unitSystem: 'us' }).where(eq(users.email, 'dev.hartigan@oakhollow.example'));
     for (const s of seedSizings) {
       const accountId = accountIds.get(s.account)!;
-      await insertSizing(tx, people.get(s.by)!, { accountId, quoteId: undefined, title: s.title, equipmentTag: s.tag, notes: s.notes }, computeForSave(s.input));
+      await insertSizing(
+        tx,
+        people.get(s.by)!,
+        { accountId, quoteId: undefined, title: s.title, equipmentTag: s.tag, notes: s.notes },
+        computeForSave(s.input),
+      );
     }
   });
   for (const qd of seedQuotes) {
     const accountId = accountIds.get(qd.account)!;
     const user = people.get(qd.by)!;
-    const tagged = await db.select({ id: sizings.id, tag: sizings.equipmentTag }).from(sizings).where(eq(sizings.accountId, accountId));
+    const tagged = await db
+      .select({ id: sizings.id, tag: sizings.equipmentTag })
+      .from(sizings)
+      .where(eq(sizings.accountId, accountId));
     const ids = qd.lines.map((l) => tagged.find((t) => t.tag === l.tag)!.id);
     const { id } = await createQuote(user, { accountId, title: qd.title, notes: qd.notes, sizingIds: ids });
     for (const l of qd.lines.filter((x) => x.quantity !== 1)) {
       const sid = tagged.find((t) => t.tag === l.tag)!.id;
-      await db.execute(sql`update quote_items set quantity = ${l.quantity} where quote_id = ${id} and sizing_id = ${sid}`);
+      await db.execute(
+        sql`update quote_items set quantity = ${l.quantity} where quote_id = ${id} and sizing_id = ${sid}`,
+      );
     }
     if (qd.status !== 'draft') await setQuoteStatus(user, id, qd.status);
     if (qd.status !== 'draft') await db.update(quotes).set({ sentAt: new Date() }).where(eq(quotes.id, id));
@@ -63,7 +89,9 @@ async function main() {
     const [row] = await db.select({ id: sizings.id }).from(sizings).where(eq(sizings.equipmentTag, d.tag)).limit(1);
     for (const note of d.notes) await issueDatasheet(people.get(d.by)!, { sizingId: row!.id, note });
   }
-  console.log(`seeded ${seedAccounts.length} accounts, ${seedUsers.length} users, ${seedSizings.length} sizings, ${seedQuotes.length} quotes, ${seedDatasheets.length} datasheets`);
+  console.log(
+    `seeded ${seedAccounts.length} accounts, ${seedUsers.length} users, ${seedSizings.length} sizings, ${seedQuotes.length} quotes, ${seedDatasheets.length} datasheets`,
+  );
 }
 
 main()

@@ -18,13 +18,50 @@ export const mailColours = {
 
 const fontStack = "'IBM Plex Sans', 'Segoe UI', Helvetica, Arial, sans-serif";
 
-const body: CSSProperties = { backgroundColor: mailColours.paper, color: mailColours.ink, fontFamily: fontStack, margin: 0, padding: '24px 0' };
-const sheet: CSSProperties = { backgroundColor: mailColours.sheet, border: `1px solid ${mailColours.line}`, borderRadius: 6, maxWidth: 560, padding: '0 28px 24px' };
-const wordmark: CSSProperties = { borderBottom: `3px solid ${mailColours.copper}`, color: mailColours.ink, fontSize: 18, fontWeight: 700, letterSpacing: '0.04em', margin: '0 0 20px', padding: '20px 0 10px' };
+const body: CSSProperties = {
+  backgroundColor: mailColours.paper,
+  color: mailColours.ink,
+  fontFamily: fontStack,
+  margin: 0,
+  padding: '24px 0',
+};
+const sheet: CSSProperties = {
+  backgroundColor: mailColours.sheet,
+  border: `1px solid ${mailColours.line}`,
+  borderRadius: 6,
+  maxWidth: 560,
+  padding: '0 28px 24px',
+};
+const wordmark: CSSProperties = {
+  borderBottom: `3px solid ${mailColours.copper}`,
+  color: mailColours.ink,
+  fontSize: 18,
+  fontWeight: 700,
+  letterSpacing: '0.04em',
+  margin: '0 0 20px',
+  padding: '20px 0 10px',
+};
 const paragraph: CSSProperties = { color: mailColours.ink, fontSize: 15, lineHeight: '22px', margin: '0 0 14px' };
 const small: CSSProperties = { color: mailColours.inkSoft, fontSize: 12, lineHeight: '18px', margin: '0 0 6px' };
-const button: CSSProperties = { backgroundColor: mailColours.teal, borderRadius: 4, color: '#ffffff', display: 'inline-block', fontSize: 15, fontWeight: 600, padding: '11px 20px', textDecoration: 'none' };
-const notice: CSSProperties = { backgroundColor: mailColours.paper, borderLeft: `3px solid ${mailColours.copper}`, color: mailColours.ink, fontSize: 13, lineHeight: '19px', margin: '18px 0', padding: '10px 14px' };
+const button: CSSProperties = {
+  backgroundColor: mailColours.teal,
+  borderRadius: 4,
+  color: '#ffffff',
+  display: 'inline-block',
+  fontSize: 15,
+  fontWeight: 600,
+  padding: '11px 20px',
+  textDecoration: 'none',
+};
+const notice: CSSProperties = {
+  backgroundColor: mailColours.paper,
+  borderLeft: `3px solid ${mailColours.copper}`,
+  color: mailColours.ink,
+  fontSize: 13,
+  lineHeight: '19px',
+  margin: '18px 0',
+  padding: '10px 14px',
+};
 
 type LayoutProps = { preview: string; children: ReactNode; footerNote?: string };
 

@@ -6,7 +6,14 @@ import { ActionButton, FactList, MailLayout, Para, PreliminaryNotice } from './_
 type Props = EmailProps['datasheet-issued'];
 
 /** A datasheet revision was issued: its number, revision and where to download it. */
-export function DatasheetIssuedEmail({ accountName, datasheetNumber, revision, sizingTitle, equipmentTag, datasheetUrl }: Props) {
+export function DatasheetIssuedEmail({
+  accountName,
+  datasheetNumber,
+  revision,
+  sizingTitle,
+  equipmentTag,
+  datasheetUrl,
+}: Props) {
   const facts = [
     { label: 'Datasheet', value: datasheetNumber },
     { label: 'Revision', value: revision },
@@ -14,11 +21,14 @@ export function DatasheetIssuedEmail({ accountName, datasheetNumber, revision, s
     ...(equipmentTag ? [{ label: 'Equipment tag', value: equipmentTag }] : []),
   ];
   return (
-    <MailLayout preview={`Datasheet ${datasheetNumber} rev. ${revision} is ready`} footerNote={`Sent to ${accountName} because a datasheet was issued on its account.`}>
+    <MailLayout
+      preview={`Datasheet ${datasheetNumber} rev. ${revision} is ready`}
+      footerNote={`Sent to ${accountName} because a datasheet was issued on its account.`}
+    >
       <Para>Hello,</Para>
       <Para>
-        Datasheet <strong>{datasheetNumber}</strong> revision <strong>{revision}</strong> has been issued for {accountName}. An issued revision never changes;
-        any later change comes out as a new revision.
+        Datasheet <strong>{datasheetNumber}</strong> revision <strong>{revision}</strong> has been issued for{' '}
+        {accountName}. An issued revision never changes; any later change comes out as a new revision.
       </Para>
       <FactList facts={facts} />
       <ActionButton href={datasheetUrl}>Open the datasheet</ActionButton>

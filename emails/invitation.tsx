@@ -9,15 +9,26 @@ type Props = EmailProps['invitation'];
 export function InvitationEmail({ accountName, inviterName, inviteUrl, expiresInDays }: Props) {
   const days = `${expiresInDays} day${expiresInDays === 1 ? '' : 's'}`;
   return (
-    <MailLayout preview={`${inviterName} invited you to ${accountName} on Dutywise`} footerNote="If you were not expecting this invitation you can ignore it; nothing is set up until you accept.">
+    <MailLayout
+      preview={`${inviterName} invited you to ${accountName} on Dutywise`}
+      footerNote="If you were not expecting this invitation you can ignore it; nothing is set up until you accept."
+    >
       <Para>Hello,</Para>
       <Para>
-        {inviterName} has invited you to join <strong>{accountName}</strong> on Dutywise, where your team keeps its heater and compressor sizings, quotes and
-        datasheets.
+        {inviterName} has invited you to join <strong>{accountName}</strong> on Dutywise, where your team keeps its
+        heater and compressor sizings, quotes and datasheets.
       </Para>
-      <FactList facts={[{ label: 'Account', value: accountName }, { label: 'Invited by', value: inviterName }, { label: 'Link valid for', value: days }]} />
+      <FactList
+        facts={[
+          { label: 'Account', value: accountName },
+          { label: 'Invited by', value: inviterName },
+          { label: 'Link valid for', value: days },
+        ]}
+      />
       <ActionButton href={inviteUrl}>Accept the invitation</ActionButton>
-      <Para>The link works once and expires in {days}. After that, ask {inviterName} to send a new one.</Para>
+      <Para>
+        The link works once and expires in {days}. After that, ask {inviterName} to send a new one.
+      </Para>
     </MailLayout>
   );
 }

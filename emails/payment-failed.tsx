@@ -9,13 +9,19 @@ type Props = EmailProps['payment-failed'];
 export function PaymentFailedEmail({ accountName, billingUrl, graceDays }: Props) {
   const grace = `${graceDays} day${graceDays === 1 ? '' : 's'}`;
   return (
-    <MailLayout preview={`The latest Dutywise payment for ${accountName} did not go through`} footerNote={`Sent to the billing contact for ${accountName}.`}>
+    <MailLayout
+      preview={`The latest Dutywise payment for ${accountName} did not go through`}
+      footerNote={`Sent to the billing contact for ${accountName}.`}
+    >
       <Para>Hello,</Para>
       <Para>
         The latest subscription payment for <strong>{accountName}</strong> was declined.
       </Para>
       {graceDays > 0 ? (
-        <Para>Datasheet downloads stay open for {grace} while the payment is sorted out. After that they are locked until a payment succeeds.</Para>
+        <Para>
+          Datasheet downloads stay open for {grace} while the payment is sorted out. After that they are locked until a
+          payment succeeds.
+        </Para>
       ) : (
         <Para>Datasheet downloads are locked until a payment succeeds.</Para>
       )}

@@ -6,17 +6,33 @@ import { ActionButton, FactList, MailLayout, mailColours, Para, PreliminaryNotic
 
 type Props = EmailProps['quote-sent'];
 
-const lineStyle = { borderTop: `1px solid ${mailColours.line}`, color: mailColours.ink, fontSize: 14, lineHeight: '20px', margin: 0, padding: '8px 0' } as const;
+const lineStyle = {
+  borderTop: `1px solid ${mailColours.line}`,
+  color: mailColours.ink,
+  fontSize: 14,
+  lineHeight: '20px',
+  margin: 0,
+  padding: '8px 0',
+} as const;
 
 /** A sales engineer sends a quote: what is in it and where to read it in full. */
 export function QuoteSentEmail({ accountName, quoteNumber, quoteTitle, senderName, quoteUrl, lines }: Props) {
   return (
-    <MailLayout preview={`Quote ${quoteNumber} for ${accountName}: ${quoteTitle}`} footerNote={`Sent by ${senderName} to ${accountName}. Reply to this mail to reach them.`}>
+    <MailLayout
+      preview={`Quote ${quoteNumber} for ${accountName}: ${quoteTitle}`}
+      footerNote={`Sent by ${senderName} to ${accountName}. Reply to this mail to reach them.`}
+    >
       <Para>Hello,</Para>
       <Para>
         {senderName} has sent {accountName} quote <strong>{quoteNumber}</strong>, “{quoteTitle}”.
       </Para>
-      <FactList facts={[{ label: 'Quote', value: quoteNumber }, { label: 'Title', value: quoteTitle }, { label: 'Items', value: String(lines.length) }]} />
+      <FactList
+        facts={[
+          { label: 'Quote', value: quoteNumber },
+          { label: 'Title', value: quoteTitle },
+          { label: 'Items', value: String(lines.length) },
+        ]}
+      />
       {lines.length > 0 && (
         <Section style={{ margin: '0 0 14px' }}>
           {lines.map((l, i) => (

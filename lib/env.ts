@@ -3,9 +3,7 @@ import { z } from 'zod';
 
 // The one place that reads process.env. Every default points at the local server or fake
 // that `npm run demo` and `npm test` start, so nothing needs a .env file to run.
-const bool = z
-  .enum(['true', 'false', '1', '0'])
-  .transform((v) => v === 'true' || v === '1');
+const bool = z.enum(['true', 'false', '1', '0']).transform((v) => v === 'true' || v === '1');
 
 export const env = createEnv({
   server: {
@@ -17,7 +15,12 @@ export const env = createEnv({
 
     // Local identity (used whenever Clerk keys are absent).
     SESSION_SECRET: z.string().min(32).default('dutywise-local-session-secret-change-me-0001'),
-    SESSION_TTL_HOURS: z.coerce.number().int().min(1).max(24 * 30).default(12),
+    SESSION_TTL_HOURS: z.coerce
+      .number()
+      .int()
+      .min(1)
+      .max(24 * 30)
+      .default(12),
     COOKIE_SECURE: bool.optional(),
 
     // Clerk (production identity). Selected only when both keys are present.

@@ -5,7 +5,11 @@ import type { FieldErrors } from '@/lib/actions/define-action';
  * Puts a server action's field errors next to the matching inputs; returns the messages that have no
  * input on this form so the caller can show them with the form error instead of dropping them.
  */
-export function applyFieldErrors<T extends FieldValues>(setError: UseFormSetError<T>, fieldErrors: FieldErrors, fields: readonly string[]): string[] {
+export function applyFieldErrors<T extends FieldValues>(
+  setError: UseFormSetError<T>,
+  fieldErrors: FieldErrors,
+  fields: readonly string[],
+): string[] {
   const unplaced: string[] = [];
   for (const [key, messages] of Object.entries(fieldErrors)) {
     const message = messages.join(' ');

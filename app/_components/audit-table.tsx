@@ -27,7 +27,15 @@ const columns: Column<AuditRow>[] = [
   {
     key: 'actor',
     header: 'Who',
-    cell: (r) => (r.actorUserId ? <span>{r.actorName ?? r.actorEmail ?? 'deleted user'}<span className="block text-hint text-ink-muted">{roleText(r.actorRole)}</span></span> : <span className="text-ink-muted">system</span>),
+    cell: (r) =>
+      r.actorUserId ? (
+        <span>
+          {r.actorName ?? r.actorEmail ?? 'deleted user'}
+          <span className="block text-hint text-ink-muted">{roleText(r.actorRole)}</span>
+        </span>
+      ) : (
+        <span className="text-ink-muted">system</span>
+      ),
   },
   { key: 'action', header: 'Action', cell: (r) => <span className="font-mono">{r.action}</span> },
   {
@@ -37,16 +45,41 @@ const columns: Column<AuditRow>[] = [
       const page = entityPages[r.entityType];
       return (
         <span className="font-mono text-hint">
-          <Link href={`/support/audit?entityType=${encodeURIComponent(r.entityType)}&entityId=${encodeURIComponent(r.entityId)}`} className={tableLinkClass} title="Show this entity's history">
+          <Link
+            href={`/support/audit?entityType=${encodeURIComponent(r.entityType)}&entityId=${encodeURIComponent(r.entityId)}`}
+            className={tableLinkClass}
+            title="Show this entity's history"
+          >
             {r.entityType}
           </Link>{' '}
-          {page ? <Link href={page(r.entityId)} className="break-all underline">{r.entityId}</Link> : <span className="break-all">{r.entityId}</span>}
+          {page ? (
+            <Link href={page(r.entityId)} className="break-all underline">
+              {r.entityId}
+            </Link>
+          ) : (
+            <span className="break-all">{r.entityId}</span>
+          )}
         </span>
       );
     },
   },
-  { key: 'account', header: 'Customer account', cell: (r) => (r.accountId ? <Link href={`/accounts/${r.accountId}`} className={tableLinkClass}>{r.accountName ?? r.accountId}</Link> : '—') },
-  { key: 'detail', header: 'Detail', cell: (r) => <span className="break-all font-mono text-hint text-ink-soft">{detailText(r.detail)}</span> },
+  {
+    key: 'account',
+    header: 'Customer account',
+    cell: (r) =>
+      r.accountId ? (
+        <Link href={`/accounts/${r.accountId}`} className={tableLinkClass}>
+          {r.accountName ?? r.accountId}
+        </Link>
+      ) : (
+        '—'
+      ),
+  },
+  {
+    key: 'detail',
+    header: 'Detail',
+    cell: (r) => <span className="break-all font-mono text-hint text-ink-soft">{detailText(r.detail)}</span>,
+  },
 ];
 
 /** The audit trail, newest first. */

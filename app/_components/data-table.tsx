@@ -51,4 +51,5 @@ export function DataTable<T>({ caption, columns, rows, rowKey, empty, testId }: 
 }
 
 /** The link style used inside tables and detail lists. */
-export const tableLinkClass = 'font-medium text-tide-600 underline decoration-tide-100 underline-offset-2 hover:decoration-tide-600';
+export const tableLinkClass =
+  'font-medium text-tide-600 underline decoration-tide-100 underline-offset-2 hover:decoration-tide-600';

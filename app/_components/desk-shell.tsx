@@ -18,7 +18,10 @@ export function DeskShell({ user, children }: { user: CurrentUser | null; childr
         <ul className="flex flex-row flex-wrap gap-1 md:flex-col">
           {items.map((i) => (
             <li key={i.href}>
-              <Link href={i.href} className="block rounded-md px-3 py-2 text-sm hover:bg-ink-soft focus-visible:bg-ink-soft">
+              <Link
+                href={i.href}
+                className="block rounded-md px-3 py-2 text-sm hover:bg-ink-soft focus-visible:bg-ink-soft"
+              >
                 {i.label}
               </Link>
             </li>
@@ -27,14 +30,20 @@ export function DeskShell({ user, children }: { user: CurrentUser | null; childr
         <div className="mt-auto border-t border-ink-soft px-2 pt-4 text-sm">
           {user ? (
             <>
-              <p className="font-medium" data-testid="signed-in-as">{user.name}</p>
+              <p className="font-medium" data-testid="signed-in-as">
+                {user.name}
+              </p>
               <p className="text-paper-line">{roleLabels[user.role]}</p>
               <form action={signOutAction} className="mt-2">
-                <button type="submit" className="text-copper-100 underline">Sign out</button>
+                <button type="submit" className="text-copper-100 underline">
+                  Sign out
+                </button>
               </form>
             </>
           ) : (
-            <Link href="/sign-in" className="text-copper-100 underline">Sign in to save sizings</Link>
+            <Link href="/sign-in" className="text-copper-100 underline">
+              Sign in to save sizings
+            </Link>
           )}
         </div>
       </nav>

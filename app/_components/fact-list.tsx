@@ -1,7 +1,15 @@
 import type { ReactNode } from 'react';
 
 /** Label/value pairs as a definition list, with an optional free-text notes block below. */
-export function FactList({ rows, notes, testId }: { rows: readonly (readonly [string, ReactNode])[]; notes?: string | null; testId?: string }) {
+export function FactList({
+  rows,
+  notes,
+  testId,
+}: {
+  rows: readonly (readonly [string, ReactNode])[];
+  notes?: string | null;
+  testId?: string;
+}) {
   const list = (
     <dl className="grid gap-x-6 gap-y-2 text-sm sm:grid-cols-[max-content_1fr]" data-testid={testId}>
       {rows.map(([k, v]) => (

@@ -22,11 +22,26 @@ export function PageBody({ children }: { children: ReactNode }) {
 }
 
 /** A titled panel within a page. */
-export function Section({ title, id, actions, children }: { title: string; id: string; actions?: ReactNode; children: ReactNode }) {
+export function Section({
+  title,
+  id,
+  actions,
+  children,
+}: {
+  title: string;
+  id: string;
+  actions?: ReactNode;
+  children: ReactNode;
+}) {
   return (
-    <section aria-labelledby={id} className="rounded-panel border border-paper-line bg-paper-raised p-panel shadow-panel">
+    <section
+      aria-labelledby={id}
+      className="rounded-panel border border-paper-line bg-paper-raised p-panel shadow-panel"
+    >
       <div className="mb-3 flex flex-wrap items-center justify-between gap-2">
-        <h2 id={id} className="text-lg font-semibold text-ink">{title}</h2>
+        <h2 id={id} className="text-lg font-semibold text-ink">
+          {title}
+        </h2>
         {actions}
       </div>
       {children}

@@ -6,7 +6,8 @@ import { useState, type ReactNode } from 'react';
 /** Client-side data fetching for the whole app. */
 export function Providers({ children }: { children: ReactNode }) {
   const [client] = useState(
-    () => new QueryClient({ defaultOptions: { queries: { staleTime: 30_000, retry: 1, refetchOnWindowFocus: false } } }),
+    () =>
+      new QueryClient({ defaultOptions: { queries: { staleTime: 30_000, retry: 1, refetchOnWindowFocus: false } } }),
   );
   return <QueryClientProvider client={client}>{children}</QueryClientProvider>;
 }

@@ -12,9 +12,20 @@ const tones: Record<BadgeTone, string> = {
 };
 
 /** A small labelled status chip; the word carries the meaning, the colour only supports it. */
-export function StatusBadge({ tone = 'neutral', children, testId }: { tone?: BadgeTone; children: ReactNode; testId?: string }) {
+export function StatusBadge({
+  tone = 'neutral',
+  children,
+  testId,
+}: {
+  tone?: BadgeTone;
+  children: ReactNode;
+  testId?: string;
+}) {
   return (
-    <span data-testid={testId} className={`inline-flex items-center rounded-full border px-2 py-0.5 text-hint font-medium whitespace-nowrap ${tones[tone]}`}>
+    <span
+      data-testid={testId}
+      className={`inline-flex items-center rounded-full border px-2 py-0.5 text-hint font-medium whitespace-nowrap ${tones[tone]}`}
+    >
       {children}
     </span>
   );
@@ -50,5 +61,9 @@ export function SubscriptionBadge({ status }: { status: string | null }) {
 
 /** Heater duties take the copper accent, compressor power the teal. */
 export function ServiceBadge({ service }: { service: 'heater' | 'compressor' }) {
-  return <StatusBadge tone={service === 'heater' ? 'heat' : 'info'}>{service === 'heater' ? 'Heater' : 'Compressor'}</StatusBadge>;
+  return (
+    <StatusBadge tone={service === 'heater' ? 'heat' : 'info'}>
+      {service === 'heater' ? 'Heater' : 'Compressor'}
+    </StatusBadge>
+  );
 }

@@ -10,7 +10,16 @@ const variants: Record<Variant, string> = {
 };
 
 /** A button that says what it is doing while the server works, and cannot be pressed twice. */
-export function SubmitButton({ pending, pendingLabel, variant = 'primary', className = '', children, type = 'submit', disabled, ...rest }: Props) {
+export function SubmitButton({
+  pending,
+  pendingLabel,
+  variant = 'primary',
+  className = '',
+  children,
+  type = 'submit',
+  disabled,
+  ...rest
+}: Props) {
   return (
     <button
       type={type}
@@ -25,4 +34,5 @@ export function SubmitButton({ pending, pendingLabel, variant = 'primary', class
 }
 
 /** Link styled as a button, for "New …" entry points in page headers. */
-export const buttonLinkClass = 'inline-flex items-center rounded-md bg-tide-600 px-4 py-2 text-sm font-medium text-white hover:bg-tide-700';
+export const buttonLinkClass =
+  'inline-flex items-center rounded-md bg-tide-600 px-4 py-2 text-sm font-medium text-white hover:bg-tide-700';

@@ -1,5 +1,15 @@
 import { sql } from 'drizzle-orm';
-import { check, doublePrecision, index, pgTable, primaryKey, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import {
+  check,
+  doublePrecision,
+  index,
+  pgTable,
+  primaryKey,
+  text,
+  timestamp,
+  uniqueIndex,
+  uuid,
+} from 'drizzle-orm/pg-core';
 import { users } from './users';
 
 /** A customer account: the company a vendor sizes equipment for, and the unit that subscribes. */
@@ -22,7 +32,10 @@ export const accounts = pgTable(
   (t) => [
     index('accounts_name_trgm_idx').using('gin', sql`${t.name} gin_trgm_ops`),
     uniqueIndex('accounts_stripe_customer_uq').on(t.stripeCustomerId),
-    check('accounts_baro_range', sql`${t.barometricPressureKpa} is null or ${t.barometricPressureKpa} between 50 and 110`),
+    check(
+      'accounts_baro_range',
+      sql`${t.barometricPressureKpa} is null or ${t.barometricPressureKpa} between 50 and 110`,
+    ),
     check('accounts_altitude_range', sql`${t.siteAltitudeM} is null or ${t.siteAltitudeM} between -500 and 6000`),
   ],
 );
@@ -31,8 +44,12 @@ export const accounts = pgTable(
 export const memberships = pgTable(
   'memberships',
   {
-    accountId: uuid('account_id').notNull().references(() => accounts.id, { onDelete: 'cascade' }),
-    userId: uuid('user_id').notNull().references(() => users.id, { onDelete: 'cascade' }),
+    accountId: uuid('account_id')
+      .notNull()
+      .references(() => accounts.id, { onDelete: 'cascade' }),
+    userId: uuid('user_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [primaryKey({ columns: [t.accountId, t.userId] }), uniqueIndex('memberships_user_uq').on(t.userId)],
@@ -42,7 +59,9 @@ export const invitations = pgTable(
   'invitations',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    accountId: uuid('account_id').notNull().references(() => accounts.id, { onDelete: 'cascade' }),
+    accountId: uuid('account_id')
+      .notNull()
+      .references(() => accounts.id, { onDelete: 'cascade' }),
     email: text('email').notNull(),
     tokenHash: text('token_hash').notNull(),
     invitedByUserId: uuid('invited_by_user_id').references(() => users.id, { onDelete: 'set null' }),

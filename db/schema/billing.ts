@@ -6,7 +6,9 @@ export const subscriptions = pgTable(
   'subscriptions',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    accountId: uuid('account_id').notNull().references(() => accounts.id, { onDelete: 'cascade' }),
+    accountId: uuid('account_id')
+      .notNull()
+      .references(() => accounts.id, { onDelete: 'cascade' }),
     stripeCustomerId: text('stripe_customer_id'),
     stripeSubscriptionId: text('stripe_subscription_id').notNull(),
     status: text('status').notNull(),
@@ -18,7 +20,10 @@ export const subscriptions = pgTable(
     lastEventCreated: bigint('last_event_created', { mode: 'number' }).notNull().default(0),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [uniqueIndex('subscriptions_stripe_id_uq').on(t.stripeSubscriptionId), index('subscriptions_account_idx').on(t.accountId)],
+  (t) => [
+    uniqueIndex('subscriptions_stripe_id_uq').on(t.stripeSubscriptionId),
+    index('subscriptions_account_idx').on(t.accountId),
+  ],
 );
 
 export const webhookEvents = pgTable('webhook_events', {

@@ -1,5 +1,16 @@
 import { sql } from 'drizzle-orm';
-import { check, customType, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import {
+  check,
+  customType,
+  index,
+  integer,
+  jsonb,
+  pgTable,
+  text,
+  timestamp,
+  uniqueIndex,
+  uuid,
+} from 'drizzle-orm/pg-core';
 import { accounts } from './accounts';
 import { sizings } from './sizings';
 import { users } from './users';
@@ -11,8 +22,12 @@ export const datasheets = pgTable(
   {
     id: uuid('id').primaryKey().defaultRandom(),
     number: text('number').notNull(),
-    accountId: uuid('account_id').notNull().references(() => accounts.id, { onDelete: 'restrict' }),
-    sizingId: uuid('sizing_id').notNull().references(() => sizings.id, { onDelete: 'restrict' }),
+    accountId: uuid('account_id')
+      .notNull()
+      .references(() => accounts.id, { onDelete: 'restrict' }),
+    sizingId: uuid('sizing_id')
+      .notNull()
+      .references(() => sizings.id, { onDelete: 'restrict' }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [
@@ -27,7 +42,9 @@ export const datasheetRevisions = pgTable(
   'datasheet_revisions',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    datasheetId: uuid('datasheet_id').notNull().references(() => datasheets.id, { onDelete: 'restrict' }),
+    datasheetId: uuid('datasheet_id')
+      .notNull()
+      .references(() => datasheets.id, { onDelete: 'restrict' }),
     revision: text('revision').notNull(),
     snapshot: jsonb('snapshot').notNull(),
     blobKey: text('blob_key').notNull(),
@@ -50,21 +67,28 @@ export const blobs = pgTable(
   'blobs',
   {
     key: text('key').primaryKey(),
-    accountId: uuid('account_id').notNull().references(() => accounts.id, { onDelete: 'restrict' }),
+    accountId: uuid('account_id')
+      .notNull()
+      .references(() => accounts.id, { onDelete: 'restrict' }),
     contentType: text('content_type').notNull(),
     byteSize: integer('byte_size').notNull(),
     sha256: text('sha256').notNull(),
     data: bytea('data').notNull(),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index('blobs_account_idx').on(t.accountId), check('blobs_key_namespaced', sql`${t.key} like 'accounts/' || ${t.accountId}::text || '/%'`)],
+  (t) => [
+    index('blobs_account_idx').on(t.accountId),
+    check('blobs_key_namespaced', sql`${t.key} like 'accounts/' || ${t.accountId}::text || '/%'`),
+  ],
 );
 
 export const uploads = pgTable(
   'uploads',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    accountId: uuid('account_id').notNull().references(() => accounts.id, { onDelete: 'restrict' }),
+    accountId: uuid('account_id')
+      .notNull()
+      .references(() => accounts.id, { onDelete: 'restrict' }),
     uploadedByUserId: uuid('uploaded_by_user_id').references(() => users.id, { onDelete: 'set null' }),
     fileName: text('file_name').notNull(),
     contentType: text('content_type').notNull(),
@@ -73,7 +97,10 @@ export const uploads = pgTable(
     rowCount: integer('row_count').notNull(),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index('uploads_account_idx').on(t.accountId, t.createdAt.desc()), check('uploads_size_limit', sql`${t.byteSize} between 1 and 5242880`)],
+  (t) => [
+    index('uploads_account_idx').on(t.accountId, t.createdAt.desc()),
+    check('uploads_size_limit', sql`${t.byteSize} between 1 and 5242880`),
+  ],
 );
 
 export type Datasheet = typeof datasheets.$inferSelect;

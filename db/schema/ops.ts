@@ -1,5 +1,16 @@
 import { sql } from 'drizzle-orm';
-import { bigserial, check, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import {
+  bigserial,
+  check,
+  index,
+  integer,
+  jsonb,
+  pgTable,
+  text,
+  timestamp,
+  uniqueIndex,
+  uuid,
+} from 'drizzle-orm/pg-core';
 import { accounts } from './accounts';
 import { outboxStatus } from './enums';
 import { users } from './users';
@@ -18,7 +29,11 @@ export const auditLog = pgTable(
     accountId: uuid('account_id').references(() => accounts.id, { onDelete: 'set null' }),
     detail: jsonb('detail'),
   },
-  (t) => [index('audit_entity_idx').on(t.entityType, t.entityId, t.at.desc()), index('audit_account_idx').on(t.accountId, t.at.desc()), index('audit_at_idx').on(t.at.desc())],
+  (t) => [
+    index('audit_entity_idx').on(t.entityType, t.entityId, t.at.desc()),
+    index('audit_account_idx').on(t.accountId, t.at.desc()),
+    index('audit_at_idx').on(t.at.desc()),
+  ],
 );
 
 /** Outgoing e-mail queue: rows are claimed with SKIP LOCKED and retried with backoff. */
@@ -44,7 +59,9 @@ export const outbox = pgTable(
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [
-    index('outbox_due_idx').on(t.nextAttemptAt).where(sql`${t.status} = 'pending'`),
+    index('outbox_due_idx')
+      .on(t.nextAttemptAt)
+      .where(sql`${t.status} = 'pending'`),
     index('outbox_entity_idx').on(t.entityType, t.entityId),
     uniqueIndex('outbox_dedupe_uq').on(t.dedupeKey),
     check('outbox_attempts_nonneg', sql`${t.attempts} >= 0`),

@@ -10,7 +10,9 @@ export const quotes = pgTable(
   {
     id: uuid('id').primaryKey().defaultRandom(),
     number: text('number').notNull(),
-    accountId: uuid('account_id').notNull().references(() => accounts.id, { onDelete: 'restrict' }),
+    accountId: uuid('account_id')
+      .notNull()
+      .references(() => accounts.id, { onDelete: 'restrict' }),
     title: text('title').notNull(),
     status: quoteStatus('status').notNull().default('draft'),
     notes: text('notes'),
@@ -31,8 +33,12 @@ export const quoteItems = pgTable(
   'quote_items',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    quoteId: uuid('quote_id').notNull().references(() => quotes.id, { onDelete: 'cascade' }),
-    sizingId: uuid('sizing_id').notNull().references(() => sizings.id, { onDelete: 'restrict' }),
+    quoteId: uuid('quote_id')
+      .notNull()
+      .references(() => quotes.id, { onDelete: 'cascade' }),
+    sizingId: uuid('sizing_id')
+      .notNull()
+      .references(() => sizings.id, { onDelete: 'restrict' }),
     quantity: integer('quantity').notNull().default(1),
     position: integer('position').notNull().default(0),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),

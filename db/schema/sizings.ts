@@ -1,5 +1,17 @@
 import { sql } from 'drizzle-orm';
-import { check, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid, type AnyPgColumn } from 'drizzle-orm/pg-core';
+import {
+  check,
+  doublePrecision,
+  index,
+  integer,
+  jsonb,
+  pgTable,
+  text,
+  timestamp,
+  uniqueIndex,
+  uuid,
+  type AnyPgColumn,
+} from 'drizzle-orm/pg-core';
 import { accounts } from './accounts';
 import { service } from './enums';
 import { users } from './users';
@@ -13,7 +25,9 @@ export const sizings = pgTable(
   {
     id: uuid('id').primaryKey().defaultRandom(),
     number: text('number').notNull(),
-    accountId: uuid('account_id').notNull().references(() => accounts.id, { onDelete: 'restrict' }),
+    accountId: uuid('account_id')
+      .notNull()
+      .references(() => accounts.id, { onDelete: 'restrict' }),
     title: text('title').notNull(),
     equipmentTag: text('equipment_tag'),
     notes: text('notes'),

@@ -21,9 +21,19 @@ export function hashToken(token: string): string {
 /** Creates a customer account for a prospect (staff) and audits it in the same transaction. */
 export async function createAccount(user: CurrentUser, input: AccountInput): Promise<{ id: string }> {
   return db.transaction(async (tx) => {
-    const [row] = await tx.insert(accounts).values({ ...input, createdByUserId: user.id }).returning({ id: accounts.id });
+    const [row] = await tx
+      .insert(accounts)
+      .values({ ...input, createdByUserId: user.id })
+      .returning({ id: accounts.id });
     if (!row) throw new Error('account insert returned no row');
-    await writeAudit(tx, { actor: user, action: 'account.created', entityType: 'account', entityId: row.id, accountId: row.id, detail: { name: input.name } });
+    await writeAudit(tx, {
+      actor: user,
+      action: 'account.created',
+      entityType: 'account',
+      entityId: row.id,
+      accountId: row.id,
+      detail: { name: input.name },
+    });
     return row;
   });
 }
@@ -32,10 +42,28 @@ export async function updateAccount(user: CurrentUser, accountId: string, input:
   assertAccountAccess(user, accountId);
   await db.transaction(async (tx) => {
     // An emptied field is cleared: undefined would leave the old value in place.
-    const values = { name: input.name, site: input.site ?? null, billingContactName: input.billingContactName ?? null, billingContactEmail: input.billingContactEmail ?? null, barometricPressureKpa: input.barometricPressureKpa ?? null, siteAltitudeM: input.siteAltitudeM ?? null };
-    const res = await tx.update(accounts).set({ ...values, updatedAt: new Date() }).where(eq(accounts.id, accountId)).returning({ id: accounts.id });
+    const values = {
+      name: input.name,
+      site: input.site ?? null,
+      billingContactName: input.billingContactName ?? null,
+      billingContactEmail: input.billingContactEmail ?? null,
+      barometricPressureKpa: input.barometricPressureKpa ?? null,
+      siteAltitudeM: input.siteAltitudeM ?? null,
+    };
+    const res = await tx
+      .update(accounts)
+      .set({ ...values, updatedAt: new Date() })
+      .where(eq(accounts.id, accountId))
+      .returning({ id: accounts.id });
     if (!res[0]) throw new ActionError('That account no longer exists.', 404);
-    await writeAudit(tx, { actor: user, action: 'account.updated', entityType: 'account', entityId: accountId, accountId, detail: { fields: Object.keys(input) } });
+    await writeAudit(tx, {
+      actor: user,
+      action: 'account.updated',
+      entityType: 'account',
+      entityId: accountId,
+      accountId,
+      detail: { fields: Object.keys(input) },
+    });
   });
 }
 
@@ -45,14 +73,31 @@ export async function inviteMember(user: CurrentUser, input: InviteInput): Promi
   const token = randomBytes(24).toString('base64url');
   const inviteUrl = `${env.APP_URL}/invite/${token}`;
   await db.transaction(async (tx) => {
-    const [acct] = await tx.select({ name: accounts.name }).from(accounts).where(eq(accounts.id, input.accountId)).limit(1);
+    const [acct] = await tx
+      .select({ name: accounts.name })
+      .from(accounts)
+      .where(eq(accounts.id, input.accountId))
+      .limit(1);
     if (!acct) throw new ActionError('That account no longer exists.', 404);
     const [inv] = await tx
       .insert(invitations)
-      .values({ accountId: input.accountId, email: input.email, tokenHash: hashToken(token), invitedByUserId: user.id, expiresAt: new Date(Date.now() + INVITE_DAYS * 86_400_000) })
+      .values({
+        accountId: input.accountId,
+        email: input.email,
+        tokenHash: hashToken(token),
+        invitedByUserId: user.id,
+        expiresAt: new Date(Date.now() + INVITE_DAYS * 86_400_000),
+      })
       .returning({ id: invitations.id });
     if (!inv) throw new Error('invitation insert returned no row');
-    await writeAudit(tx, { actor: user, action: 'member.invited', entityType: 'account', entityId: input.accountId, accountId: input.accountId, detail: { email: input.email } });
+    await writeAudit(tx, {
+      actor: user,
+      action: 'member.invited',
+      entityType: 'account',
+      entityId: input.accountId,
+      accountId: input.accountId,
+      detail: { email: input.email },
+    });
     await enqueueEmail(tx, {
       template: 'invitation',
       to: input.email,
@@ -65,42 +110,95 @@ export async function inviteMember(user: CurrentUser, input: InviteInput): Promi
 }
 
 /** Turns an invitation into a customer user of that account (local identity). */
-export async function acceptInvitation(token: string, name: string, password: string): Promise<{ userId: string; role: 'customer' }> {
+export async function acceptInvitation(
+  token: string,
+  name: string,
+  password: string,
+): Promise<{ userId: string; role: 'customer' }> {
   const passwordHash = await hashPassword(password);
   return db.transaction(async (tx) => {
     const [inv] = await tx
       .select({ id: invitations.id, accountId: invitations.accountId, email: invitations.email })
       .from(invitations)
-      .where(and(eq(invitations.tokenHash, hashToken(token)), isNull(invitations.acceptedAt), sql`${invitations.expiresAt} > now()`))
+      .where(
+        and(
+          eq(invitations.tokenHash, hashToken(token)),
+          isNull(invitations.acceptedAt),
+          sql`${invitations.expiresAt} > now()`,
+        ),
+      )
       .for('update')
       .limit(1);
     if (!inv) throw new ActionError('This invitation is not valid any more. Ask for a new one.', 410);
-    const [taken] = await tx.select({ id: users.id }).from(users).where(eq(sql`lower(${users.email})`, inv.email.toLowerCase())).limit(1);
+    const [taken] = await tx
+      .select({ id: users.id })
+      .from(users)
+      .where(eq(sql`lower(${users.email})`, inv.email.toLowerCase()))
+      .limit(1);
     if (taken) throw new ActionError('A Dutywise user with this e-mail already exists; sign in instead.', 409);
-    const [u] = await tx.insert(users).values({ email: inv.email, name, role: 'customer', passwordHash }).returning({ id: users.id });
+    const [u] = await tx
+      .insert(users)
+      .values({ email: inv.email, name, role: 'customer', passwordHash })
+      .returning({ id: users.id });
     if (!u) throw new Error('user insert returned no row');
     await tx.insert(memberships).values({ accountId: inv.accountId, userId: u.id });
     await tx.update(invitations).set({ acceptedAt: new Date() }).where(eq(invitations.id, inv.id));
-    await writeAudit(tx, { actor: { id: u.id, role: 'customer' }, action: 'member.joined', entityType: 'account', entityId: inv.accountId, accountId: inv.accountId, detail: { email: inv.email } });
+    await writeAudit(tx, {
+      actor: { id: u.id, role: 'customer' },
+      action: 'member.joined',
+      entityType: 'account',
+      entityId: inv.accountId,
+      accountId: inv.accountId,
+      detail: { email: inv.email },
+    });
     return { userId: u.id, role: 'customer' as const };
   });
 }
 
 /** Self-serve sign-up: a customer user and their own account in one transaction. */
-export async function signUpCustomer(input: { name: string; email: string; password: string; company: string; site?: string }) {
+export async function signUpCustomer(input: {
+  name: string;
+  email: string;
+  password: string;
+  company: string;
+  site?: string;
+}) {
   const passwordHash = await hashPassword(input.password);
   return db.transaction(async (tx) => {
-    const [taken] = await tx.select({ id: users.id }).from(users).where(eq(sql`lower(${users.email})`, input.email.toLowerCase())).limit(1);
-    if (taken) throw new ActionError('A Dutywise user with this e-mail already exists; sign in instead.', 409, { email: ['Already registered.'] });
-    const [u] = await tx.insert(users).values({ email: input.email, name: input.name, role: 'customer', passwordHash }).returning({ id: users.id });
+    const [taken] = await tx
+      .select({ id: users.id })
+      .from(users)
+      .where(eq(sql`lower(${users.email})`, input.email.toLowerCase()))
+      .limit(1);
+    if (taken)
+      throw new ActionError('A Dutywise user with this e-mail already exists; sign in instead.', 409, {
+        email: ['Already registered.'],
+      });
+    const [u] = await tx
+      .insert(users)
+      .values({ email: input.email, name: input.name, role: 'customer', passwordHash })
+      .returning({ id: users.id });
     if (!u) throw new Error('user insert returned no row');
     const [a] = await tx
       .insert(accounts)
-      .values({ name: input.company, site: input.site, billingContactName: input.name, billingContactEmail: input.email, createdByUserId: u.id })
+      .values({
+        name: input.company,
+        site: input.site,
+        billingContactName: input.name,
+        billingContactEmail: input.email,
+        createdByUserId: u.id,
+      })
       .returning({ id: accounts.id });
     if (!a) throw new Error('account insert returned no row');
     await tx.insert(memberships).values({ accountId: a.id, userId: u.id });
-    await writeAudit(tx, { actor: { id: u.id, role: 'customer' }, action: 'account.signed_up', entityType: 'account', entityId: a.id, accountId: a.id, detail: { company: input.company } });
+    await writeAudit(tx, {
+      actor: { id: u.id, role: 'customer' },
+      action: 'account.signed_up',
+      entityType: 'account',
+      entityId: a.id,
+      accountId: a.id,
+      detail: { company: input.company },
+    });
     return { userId: u.id, accountId: a.id, role: 'customer' as const };
   });
 }

@@ -24,7 +24,9 @@ export async function listAccounts(user: CurrentUser): Promise<AccountSummary[]>
       site: accounts.site,
       memberCount: sql<number>`(select count(*)::int from ${memberships} m where m.account_id = ${accounts.id})`,
       quoteCount: sql<number>`(select count(*)::int from ${quotes} q where q.account_id = ${accounts.id})`,
-      subscriptionStatus: sql<string | null>`(select s.status from ${subscriptions} s where s.account_id = ${accounts.id} order by s.updated_at desc limit 1)`,
+      subscriptionStatus: sql<
+        string | null
+      >`(select s.status from ${subscriptions} s where s.account_id = ${accounts.id} order by s.updated_at desc limit 1)`,
     })
     .from(accounts)
     .where(scope ? eq(accounts.id, scope) : undefined)
@@ -69,16 +71,25 @@ export async function getAccount(user: CurrentUser, accountId: string): Promise<
   const pendingInvitations = await db
     .select({ id: invitations.id, email: invitations.email, expiresAt: invitations.expiresAt })
     .from(invitations)
-    .where(and(eq(invitations.accountId, accountId), isNull(invitations.acceptedAt), sql`${invitations.expiresAt} > now()`))
+    .where(
+      and(eq(invitations.accountId, accountId), isNull(invitations.acceptedAt), sql`${invitations.expiresAt} > now()`),
+    )
     .orderBy(desc(invitations.createdAt));
   return { ...row, members, pendingInvitations };
 }
 
 /** Names for pickers (save-to-account, new quote), with each site's barometric pressure or altitude for the desk. */
-export async function listAccountOptions(user: CurrentUser): Promise<{ id: string; name: string; barometricPressureKpa: number | null; siteAltitudeM: number | null }[]> {
+export async function listAccountOptions(
+  user: CurrentUser,
+): Promise<{ id: string; name: string; barometricPressureKpa: number | null; siteAltitudeM: number | null }[]> {
   const scope = accountScope(user);
   return db
-    .select({ id: accounts.id, name: accounts.name, barometricPressureKpa: accounts.barometricPressureKpa, siteAltitudeM: accounts.siteAltitudeM })
+    .select({
+      id: accounts.id,
+      name: accounts.name,
+      barometricPressureKpa: accounts.barometricPressureKpa,
+      siteAltitudeM: accounts.siteAltitudeM,
+    })
     .from(accounts)
     .where(scope ? eq(accounts.id, scope) : undefined)
     .orderBy(asc(accounts.name))

@@ -21,7 +21,11 @@ const optionalNumber = (min: number, max: number, what: string) =>
 
 /** A customer account as sales engineers create it for a prospect. */
 export const accountInputSchema = z.object({
-  name: z.string().trim().min(2, { message: 'Company name needs 2 to 120 characters.' }).max(120, { message: 'Company name needs 2 to 120 characters.' }),
+  name: z
+    .string()
+    .trim()
+    .min(2, { message: 'Company name needs 2 to 120 characters.' })
+    .max(120, { message: 'Company name needs 2 to 120 characters.' }),
   site: optionalText(160),
   billingContactName: optionalText(120),
   billingContactEmail: z

@@ -7,8 +7,7 @@ import { logger } from '@/lib/log/logger';
 
 export type FieldErrors = Record<string, string[]>;
 export type ActionResult<T> =
-  | { ok: true; data: T }
-  | { ok: false; fieldErrors: FieldErrors; formError: string | null; status: number };
+  { ok: true; data: T } | { ok: false; fieldErrors: FieldErrors; formError: string | null; status: number };
 
 /** An expected failure inside a handler (conflict, payment needed...): returned, not thrown. */
 export class ActionError extends Error {
@@ -43,16 +42,27 @@ export function defineAction<S extends z.ZodType, T>(
       const user = await requireUser(opts.permission);
       const parsed = opts.schema.safeParse(raw);
       if (!parsed.success) {
-        return { ok: false, fieldErrors: fieldErrorsOf(parsed.error), formError: 'Some fields need attention.', status: 400 };
+        return {
+          ok: false,
+          fieldErrors: fieldErrorsOf(parsed.error),
+          formError: 'Some fields need attention.',
+          status: 400,
+        };
       }
       return { ok: true, data: await handler(parsed.data, user) };
     } catch (err) {
       if (err instanceof AuthError || err instanceof NotFoundError) {
         return { ok: false, fieldErrors: {}, formError: err.message, status: err.status };
       }
-      if (err instanceof ActionError) return { ok: false, fieldErrors: err.fieldErrors, formError: err.message, status: err.status };
+      if (err instanceof ActionError)
+        return { ok: false, fieldErrors: err.fieldErrors, formError: err.message, status: err.status };
       logger.error({ err, action: opts.name }, 'server action failed');
-      return { ok: false, fieldErrors: {}, formError: 'Something went wrong on our side; nothing was saved. Try again.', status: 500 };
+      return {
+        ok: false,
+        fieldErrors: {},
+        formError: 'Something went wrong on our side; nothing was saved. Try again.',
+        status: 500,
+      };
     }
   };
 }

@@ -34,7 +34,14 @@ export async function mapClerkUser(userId: string): Promise<CurrentUser | null> 
       .values({ email, name, role, clerkUserId: userId })
       .onConflictDoNothing()
       .returning({ id: users.id });
-    if (row) await writeAudit(tx, { actor: { id: row.id, role }, action: 'user.created', entityType: 'user', entityId: row.id, detail: { via: 'clerk-first-sign-in' } });
+    if (row)
+      await writeAudit(tx, {
+        actor: { id: row.id, role },
+        action: 'user.created',
+        entityType: 'user',
+        entityId: row.id,
+        detail: { via: 'clerk-first-sign-in' },
+      });
   });
   return loadUser({ clerkUserId: userId });
 }

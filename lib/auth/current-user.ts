@@ -37,7 +37,14 @@ export async function loadUser(where: { id: string } | { clerkUserId: string }):
     .limit(1);
   const row = rows[0];
   if (!row || row.disabledAt) return null;
-  return { id: row.id, email: row.email, name: row.name, role: row.role, unitSystem: row.unitSystem, accountId: row.accountId ?? null };
+  return {
+    id: row.id,
+    email: row.email,
+    name: row.name,
+    role: row.role,
+    unitSystem: row.unitSystem,
+    accountId: row.accountId ?? null,
+  };
 }
 
 async function localUser(): Promise<CurrentUser | null> {

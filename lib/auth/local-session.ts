@@ -26,7 +26,13 @@ function cookieSecure(): boolean {
 export async function startLocalSession(userId: string, role: string): Promise<void> {
   const ttl = env.SESSION_TTL_HOURS * 3600;
   const token = await signLocalSession(userId, role, env.SESSION_SECRET, ttl);
-  (await cookies()).set(LOCAL_SESSION_COOKIE, token, { httpOnly: true, sameSite: 'lax', secure: cookieSecure(), path: '/', maxAge: ttl });
+  (await cookies()).set(LOCAL_SESSION_COOKIE, token, {
+    httpOnly: true,
+    sameSite: 'lax',
+    secure: cookieSecure(),
+    path: '/',
+    maxAge: ttl,
+  });
 }
 
 export async function endLocalSession(): Promise<void> {

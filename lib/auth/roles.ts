@@ -30,10 +30,45 @@ export type Permission =
 
 // Support looks up anything but changes no engineering; admins manage people and roles.
 const grants: Record<UserRole, readonly Permission[]> = {
-  sales_engineer: ['sizing:save', 'sizing:read', 'quote:manage', 'quote:read', 'account:manage', 'account:read', 'member:invite', 'datasheet:issue', 'datasheet:read', 'batch:upload'],
-  customer: ['sizing:save', 'sizing:read', 'quote:read', 'account:read', 'member:invite', 'datasheet:issue', 'datasheet:read', 'billing:manage', 'batch:upload'],
+  sales_engineer: [
+    'sizing:save',
+    'sizing:read',
+    'quote:manage',
+    'quote:read',
+    'account:manage',
+    'account:read',
+    'member:invite',
+    'datasheet:issue',
+    'datasheet:read',
+    'batch:upload',
+  ],
+  customer: [
+    'sizing:save',
+    'sizing:read',
+    'quote:read',
+    'account:read',
+    'member:invite',
+    'datasheet:issue',
+    'datasheet:read',
+    'billing:manage',
+    'batch:upload',
+  ],
   support: ['sizing:read', 'quote:read', 'account:read', 'datasheet:read', 'support:search', 'audit:read'],
-  admin: ['sizing:save', 'sizing:read', 'quote:manage', 'quote:read', 'account:manage', 'account:read', 'member:invite', 'datasheet:issue', 'datasheet:read', 'support:search', 'audit:read', 'users:manage', 'batch:upload'],
+  admin: [
+    'sizing:save',
+    'sizing:read',
+    'quote:manage',
+    'quote:read',
+    'account:manage',
+    'account:read',
+    'member:invite',
+    'datasheet:issue',
+    'datasheet:read',
+    'support:search',
+    'audit:read',
+    'users:manage',
+    'batch:upload',
+  ],
 };
 
 export function can(role: UserRole, permission: Permission): boolean {

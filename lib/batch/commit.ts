@@ -14,21 +14,40 @@ import { evaluateSheet, type BatchRow } from './evaluate';
 import type { BatchCells } from './row-to-request';
 
 export type BatchTarget = { accountId: string; quoteId?: string; newQuoteTitle?: string };
-export type BatchSaved = { saved: number; skipped: number; uploadId: string; quoteId: string | null; quoteNumber: string | null };
+export type BatchSaved = {
+  saved: number;
+  skipped: number;
+  uploadId: string;
+  quoteId: string | null;
+  quoteNumber: string | null;
+};
 
 async function writeRows(tx: Tx, user: CurrentUser, target: BatchTarget, sized: BatchRow[]) {
   let quote: { id: string; number: string } | null = null;
-  if (target.newQuoteTitle) quote = await createQuote(user, { accountId: target.accountId, title: target.newQuoteTitle, sizingIds: [] }, tx);
+  if (target.newQuoteTitle)
+    quote = await createQuote(user, { accountId: target.accountId, title: target.newQuoteTitle, sizingIds: [] }, tx);
   const quoteId = quote?.id ?? target.quoteId ?? null;
   const saved = await insertSizings(
     tx,
     user,
     sized.map((row) => ({
-      meta: { accountId: target.accountId, quoteId: undefined, title: row.meta.title, equipmentTag: row.meta.equipmentTag || undefined, notes: row.meta.notes || undefined },
+      meta: {
+        accountId: target.accountId,
+        quoteId: undefined,
+        title: row.meta.title,
+        equipmentTag: row.meta.equipmentTag || undefined,
+        notes: row.meta.notes || undefined,
+      },
       computed: { input: row.input, result: row.result! },
     })),
   );
-  if (quoteId) await addQuoteItems(tx, user, quoteId, saved.map((s) => s.id));
+  if (quoteId)
+    await addQuoteItems(
+      tx,
+      user,
+      quoteId,
+      saved.map((s) => s.id),
+    );
   return { quoteId, quoteNumber: quote?.number ?? null, numbers: saved.map((s) => s.number) };
 }
 
@@ -36,13 +55,23 @@ async function writeRows(tx: Tx, user: CurrentUser, target: BatchTarget, sized: 
  * Saves the sheet's sized rows, the original upload and (for vendor staff) the quote they go on, all or nothing.
  * Rows are sized again here: the browser's preview is never trusted.
  */
-export async function saveBatch(user: CurrentUser, target: BatchTarget, cells: BatchCells[], file: { name: string; type: string; bytes: Buffer }): Promise<BatchSaved> {
+export async function saveBatch(
+  user: CurrentUser,
+  target: BatchTarget,
+  cells: BatchCells[],
+  file: { name: string; type: string; bytes: Buffer },
+): Promise<BatchSaved> {
   assertAccountAccess(user, target.accountId);
-  if ((target.quoteId || target.newQuoteTitle) && !can(user.role, 'quote:manage')) throw new ActionError('Only vendor staff put batch rows on a quote.', 403);
-  if (target.newQuoteTitle && (target.newQuoteTitle.length < 3 || target.newQuoteTitle.length > 160)) throw new ActionError('The quote title needs 3 to 160 characters.', 400, { newQuoteTitle: ['3 to 160 characters'] });
+  if ((target.quoteId || target.newQuoteTitle) && !can(user.role, 'quote:manage'))
+    throw new ActionError('Only vendor staff put batch rows on a quote.', 403);
+  if (target.newQuoteTitle && (target.newQuoteTitle.length < 3 || target.newQuoteTitle.length > 160))
+    throw new ActionError('The quote title needs 3 to 160 characters.', 400, {
+      newQuoteTitle: ['3 to 160 characters'],
+    });
   const rows = evaluateSheet(cells);
   const sized = rows.filter((r) => r.result && r.input);
-  if (!sized.length) throw new ActionError('No row of the sheet could be sized; fix the problems and check again.', 422);
+  if (!sized.length)
+    throw new ActionError('No row of the sheet could be sized; fix the problems and check again.', 422);
   const store = getBlobStore();
   const uploadId = randomUUID();
   const key = accountKey(target.accountId, 'uploads', `${uploadId}.csv`);
@@ -50,9 +79,27 @@ export async function saveBatch(user: CurrentUser, target: BatchTarget, cells: B
   try {
     const out = await db.transaction(async (tx) => {
       if (store.transactional) await store.put(key, file.bytes, 'text/csv', tx);
-      await tx.insert(uploads).values({ id: uploadId, accountId: target.accountId, uploadedByUserId: user.id, fileName: file.name, contentType: 'text/csv', byteSize: file.bytes.byteLength, blobKey: key, rowCount: rows.length });
+      await tx
+        .insert(uploads)
+        .values({
+          id: uploadId,
+          accountId: target.accountId,
+          uploadedByUserId: user.id,
+          fileName: file.name,
+          contentType: 'text/csv',
+          byteSize: file.bytes.byteLength,
+          blobKey: key,
+          rowCount: rows.length,
+        });
       const written = await writeRows(tx, user, target, sized);
-      await writeAudit(tx, { actor: user, action: 'batch.saved', entityType: 'upload', entityId: uploadId, accountId: target.accountId, detail: { rows: rows.length, saved: sized.length, quoteId: written.quoteId, sizings: written.numbers } });
+      await writeAudit(tx, {
+        actor: user,
+        action: 'batch.saved',
+        entityType: 'upload',
+        entityId: uploadId,
+        accountId: target.accountId,
+        detail: { rows: rows.length, saved: sized.length, quoteId: written.quoteId, sizings: written.numbers },
+      });
       return { quoteId: written.quoteId, quoteNumber: written.quoteNumber };
     });
     return { saved: sized.length, skipped: rows.length - sized.length, uploadId, ...out };

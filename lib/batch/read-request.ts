@@ -6,7 +6,11 @@ import { checkUpload, looksLikeText } from './upload-limits';
 
 const cellsSchema = z.array(z.record(z.string().max(40), z.string().max(400))).max(BATCH_MAX_ROWS);
 
-export type BatchUpload = { sheet: ParsedSheet; file: { name: string; type: string; bytes: Buffer }; target: string | null };
+export type BatchUpload = {
+  sheet: ParsedSheet;
+  file: { name: string; type: string; bytes: Buffer };
+  target: string | null;
+};
 
 /** Reads the multipart batch request: the original CSV, and optionally the user's edited rows (JSON). */
 export async function readBatchRequest(req: Request): Promise<BatchUpload> {
@@ -23,7 +27,8 @@ export async function readBatchRequest(req: Request): Promise<BatchUpload> {
   const check = checkUpload(file);
   if (!check.ok) throw new ActionError(check.message, check.status);
   const bytes = Buffer.from(await file.arrayBuffer());
-  if (!looksLikeText(bytes)) throw new ActionError('The file is not UTF-8 text; save the spreadsheet as "CSV UTF-8".', 415);
+  if (!looksLikeText(bytes))
+    throw new ActionError('The file is not UTF-8 text; save the spreadsheet as "CSV UTF-8".', 415);
   const edited = form.get('rows');
   let sheet = parseBatchCsv(bytes.toString('utf8'));
   if (typeof edited === 'string' && edited.length) {
@@ -32,7 +37,11 @@ export async function readBatchRequest(req: Request): Promise<BatchUpload> {
     sheet = { rows: parsed.data, problems: sheet.problems.filter((p) => !/no duty points/.test(p)) };
   }
   const target = form.get('target');
-  return { sheet, file: { name: file.name.slice(0, 200), type: file.type || 'text/csv', bytes }, target: typeof target === 'string' ? target : null };
+  return {
+    sheet,
+    file: { name: file.name.slice(0, 200), type: file.type || 'text/csv', bytes },
+    target: typeof target === 'string' ? target : null,
+  };
 }
 
 function safeJson(text: string): unknown {

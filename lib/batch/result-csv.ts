@@ -1,11 +1,28 @@
 import { toCsv } from '@/lib/csv/write';
 import type { BatchRow } from './evaluate';
 
-const r = (n: number | null | undefined, digits = 3) => (n === null || n === undefined || !Number.isFinite(n) ? '' : Number(n.toFixed(digits)));
+const r = (n: number | null | undefined, digits = 3) =>
+  n === null || n === undefined || !Number.isFinite(n) ? '' : Number(n.toFixed(digits));
 
 export const resultColumns = [
-  'row', 'status', 'title', 'equipment_tag', 'service', 'mass_flow_kg_per_s', 'absorbed_duty_kw', 'average_cp_duty_kw', 'design_duty_kw', 'selected_rating_kw',
-  'current_a', 'gas_power_kw', 'shaft_power_kw', 'motor_iec_kw', 'motor_nema_hp', 'max_discharge_temperature_c', 'intercooler_duty_kw', 'problems',
+  'row',
+  'status',
+  'title',
+  'equipment_tag',
+  'service',
+  'mass_flow_kg_per_s',
+  'absorbed_duty_kw',
+  'average_cp_duty_kw',
+  'design_duty_kw',
+  'selected_rating_kw',
+  'current_a',
+  'gas_power_kw',
+  'shaft_power_kw',
+  'motor_iec_kw',
+  'motor_nema_hp',
+  'max_discharge_temperature_c',
+  'intercooler_duty_kw',
+  'problems',
 ];
 
 /** One line per batch row with the engine's figures, or the row's problems. */
@@ -18,10 +35,23 @@ export function batchResultCsv(rows: BatchRow[]): string {
       const c = res?.service === 'compressor' ? res.compressor : null;
       const basis = c ? (c.basis === 'constant-k' ? c.constantK : c.variableCp) : null;
       return [
-        b.row, res ? 'sized' : 'error', b.meta.title ?? '', b.meta.equipmentTag ?? '', res?.service ?? b.cells.service ?? '', r(res?.massFlowKgPerS, 5),
-        r(h?.absorbedDutyKw), r(h?.averageCpDutyKw), r(h?.designDutyKw), r(h?.selectedRatingKw ?? null), r(h?.electrical.currentA, 1),
-        r(c?.gasPowerKw), r(c?.shaftPowerKw), r(c?.motor.iecKw ?? null), r(c?.motor.nemaHp ?? null),
-        r(basis ? Math.max(...basis.stages.map((s) => s.dischargeTemperatureC)) : null, 1), r(basis?.totalIntercoolerDutyKw),
+        b.row,
+        res ? 'sized' : 'error',
+        b.meta.title ?? '',
+        b.meta.equipmentTag ?? '',
+        res?.service ?? b.cells.service ?? '',
+        r(res?.massFlowKgPerS, 5),
+        r(h?.absorbedDutyKw),
+        r(h?.averageCpDutyKw),
+        r(h?.designDutyKw),
+        r(h?.selectedRatingKw ?? null),
+        r(h?.electrical.currentA, 1),
+        r(c?.gasPowerKw),
+        r(c?.shaftPowerKw),
+        r(c?.motor.iecKw ?? null),
+        r(c?.motor.nemaHp ?? null),
+        r(basis ? Math.max(...basis.stages.map((s) => s.dischargeTemperatureC)) : null, 1),
+        r(basis?.totalIntercoolerDutyKw),
         b.problems.map((p) => `${p.column}: ${p.message}`).join('; '),
       ];
     }),

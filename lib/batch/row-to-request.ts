@@ -3,7 +3,22 @@ import { batchColumns } from './columns';
 export type BatchCells = Record<string, string>;
 export type RowProblem = { column: string; message: string };
 
-const numeric = new Set(['flow.value', 'inlet.temperature.value', 'inlet.pressure.value', 'outletTemperature.value', 'dischargePressure.value', 'intercoolerOutletTemperature.value', 'heatLossPercent', 'designMarginPercent', 'stages', 'isentropicEfficiency', 'polytropicEfficiency', 'supply.voltageV', 'supply.phases', 'gas.relativeHumidityPercent']);
+const numeric = new Set([
+  'flow.value',
+  'inlet.temperature.value',
+  'inlet.pressure.value',
+  'outletTemperature.value',
+  'dischargePressure.value',
+  'intercoolerOutletTemperature.value',
+  'heatLossPercent',
+  'designMarginPercent',
+  'stages',
+  'isentropicEfficiency',
+  'polytropicEfficiency',
+  'supply.voltageV',
+  'supply.phases',
+  'gas.relativeHumidityPercent',
+]);
 
 function setPath(target: Record<string, unknown>, path: string, value: unknown) {
   const parts = path.split('.');
@@ -23,7 +38,10 @@ function parseGas(text: string, problems: RowProblem[]): Record<string, unknown>
   if (!t) return undefined;
   if (!t.includes(':')) return { preset: t.toLowerCase() };
   const components: Record<string, number> = {};
-  for (const part of t.split(/[;|]/).map((p) => p.trim()).filter(Boolean)) {
+  for (const part of t
+    .split(/[;|]/)
+    .map((p) => p.trim())
+    .filter(Boolean)) {
     const [name, frac] = part.split(':').map((s) => s.trim());
     const n = parseNumber(frac ?? '');
     if (!name || n === null) problems.push({ column: 'gas', message: `"${part}" is not NAME:fraction (e.g. CH4:0.9)` });
@@ -33,7 +51,11 @@ function parseGas(text: string, problems: RowProblem[]): Record<string, unknown>
 }
 
 /** One CSV row as an engine request plus its save metadata; cell-level problems (text in a number) are reported here. */
-export function rowToRequest(cells: BatchCells): { request: Record<string, unknown>; meta: { title: string; equipmentTag?: string; notes?: string }; problems: RowProblem[] } {
+export function rowToRequest(cells: BatchCells): {
+  request: Record<string, unknown>;
+  meta: { title: string; equipmentTag?: string; notes?: string };
+  problems: RowProblem[];
+} {
   const problems: RowProblem[] = [];
   const request: Record<string, unknown> = {};
   const meta: Record<string, unknown> = {};
@@ -52,15 +74,30 @@ export function rowToRequest(cells: BatchCells): { request: Record<string, unkno
       }
       setPath(request, col.path, n);
     } else {
-      setPath(request, col.path, col.name === 'service' || col.name === 'method' || col.name === 'gas_basis' ? raw.toLowerCase() : raw);
+      setPath(
+        request,
+        col.path,
+        col.name === 'service' || col.name === 'method' || col.name === 'gas_basis' ? raw.toLowerCase() : raw,
+      );
     }
   }
   const gas = parseGas(cells.gas ?? '', problems);
   if (gas) request.gas = { ...((request.gas as object) ?? {}), ...gas };
-  for (const [value, unit] of [['flow', 'flow'], ['inlet.temperature', 'inlet_temperature'], ['inlet.pressure', 'inlet_pressure'], ['outletTemperature', 'outlet_temperature'], ['dischargePressure', 'discharge_pressure'], ['intercoolerOutletTemperature', 'intercooler_outlet_temperature']] as const) {
+  for (const [value, unit] of [
+    ['flow', 'flow'],
+    ['inlet.temperature', 'inlet_temperature'],
+    ['inlet.pressure', 'inlet_pressure'],
+    ['outletTemperature', 'outlet_temperature'],
+    ['dischargePressure', 'discharge_pressure'],
+    ['intercoolerOutletTemperature', 'intercooler_outlet_temperature'],
+  ] as const) {
     const hasValue = (cells[`${unit}_value`] ?? '').trim() !== '';
     const hasUnit = (cells[`${unit}_unit`] ?? '').trim() !== '';
-    if (hasValue && !hasUnit) problems.push({ column: `${unit}_unit`, message: `give the unit for ${unit.replace(/_/g, ' ')} (the value ${cells[`${unit}_value`]} has none)` });
+    if (hasValue && !hasUnit)
+      problems.push({
+        column: `${unit}_unit`,
+        message: `give the unit for ${unit.replace(/_/g, ' ')} (the value ${cells[`${unit}_value`]} has none)`,
+      });
     void value;
   }
   return { request, meta: meta as { title: string; equipmentTag?: string; notes?: string }, problems };

@@ -5,5 +5,9 @@ import { batchColumnNames, batchColumns } from './columns';
 export function batchTemplateCsv(): string {
   const hints = batchColumns.map((c) => `# ${c.hint}`);
   hints[0] = `# ${batchColumns[0]?.hint ?? ''} (rows starting with # are ignored)`;
-  return toCsv(batchColumnNames, [hints, batchColumns.map((c) => c.example.heater), batchColumns.map((c) => c.example.compressor)]).replace(/'#/g, '#');
+  return toCsv(batchColumnNames, [
+    hints,
+    batchColumns.map((c) => c.example.heater),
+    batchColumns.map((c) => c.example.compressor),
+  ]).replace(/'#/g, '#');
 }

@@ -6,8 +6,14 @@ export type UploadCheck = { ok: true } | { ok: false; status: 413 | 415 | 400; m
 
 export function checkUpload(file: { name: string; type: string; size: number }): UploadCheck {
   if (file.size === 0) return { ok: false, status: 400, message: 'The file is empty.' };
-  if (file.size > BATCH_MAX_BYTES) return { ok: false, status: 413, message: `The file is ${(file.size / 1048576).toFixed(1)} MiB; the limit is 2 MiB.` };
-  if (!/\.csv$/i.test(file.name) || !allowedTypes.has(file.type)) return { ok: false, status: 415, message: 'Upload a .csv file (save the spreadsheet as CSV UTF-8).' };
+  if (file.size > BATCH_MAX_BYTES)
+    return {
+      ok: false,
+      status: 413,
+      message: `The file is ${(file.size / 1048576).toFixed(1)} MiB; the limit is 2 MiB.`,
+    };
+  if (!/\.csv$/i.test(file.name) || !allowedTypes.has(file.type))
+    return { ok: false, status: 415, message: 'Upload a .csv file (save the spreadsheet as CSV UTF-8).' };
   return { ok: true };
 }
 

@@ -10,12 +10,18 @@ import { logger } from '@/lib/log/logger';
 import type { PlanKey } from './plans';
 import { isUnreachable, priceIdFor, stripe } from './stripe-client';
 
-const unavailable = () => new ActionError('Payments are unavailable right now; nothing was charged. Please try again in a few minutes.', 503);
+const unavailable = () =>
+  new ActionError('Payments are unavailable right now; nothing was charged. Please try again in a few minutes.', 503);
 
 async function accountOf(user: CurrentUser) {
   if (!user.accountId) throw new ActionError('Only a customer account can subscribe.', 403);
   const [acct] = await db
-    .select({ id: accounts.id, name: accounts.name, email: accounts.billingContactEmail, stripeCustomerId: accounts.stripeCustomerId })
+    .select({
+      id: accounts.id,
+      name: accounts.name,
+      email: accounts.billingContactEmail,
+      stripeCustomerId: accounts.stripeCustomerId,
+    })
     .from(accounts)
     .where(eq(accounts.id, user.accountId))
     .limit(1);
@@ -26,10 +32,20 @@ async function accountOf(user: CurrentUser) {
 /** The account's payment-service customer id, created on first checkout and stored only once it exists. */
 async function ensureCustomer(user: CurrentUser, acct: Awaited<ReturnType<typeof accountOf>>): Promise<string> {
   if (acct.stripeCustomerId) return acct.stripeCustomerId;
-  const customer = await stripe().customers.create({ name: acct.name, email: acct.email ?? user.email, metadata: { accountId: acct.id } }, { idempotencyKey: `customer-${acct.id}` });
+  const customer = await stripe().customers.create(
+    { name: acct.name, email: acct.email ?? user.email, metadata: { accountId: acct.id } },
+    { idempotencyKey: `customer-${acct.id}` },
+  );
   await db.transaction(async (tx) => {
     await tx.update(accounts).set({ stripeCustomerId: customer.id }).where(eq(accounts.id, acct.id));
-    await writeAudit(tx, { actor: user, action: 'billing.customer_created', entityType: 'account', entityId: acct.id, accountId: acct.id, detail: { customer: customer.id } });
+    await writeAudit(tx, {
+      actor: user,
+      action: 'billing.customer_created',
+      entityType: 'account',
+      entityId: acct.id,
+      accountId: acct.id,
+      detail: { customer: customer.id },
+    });
   });
   return customer.id;
 }
@@ -55,7 +71,10 @@ export async function startCheckout(user: CurrentUser, plan: PlanKey): Promise<{
     if (err instanceof ActionError) throw err;
     logger.warn({ err: (err as Error).message, accountId: acct.id }, 'checkout could not be created');
     if (isUnreachable(err)) throw unavailable();
-    throw new ActionError('The payment service refused the request; nothing was charged. Contact support if this persists.', 502);
+    throw new ActionError(
+      'The payment service refused the request; nothing was charged. Contact support if this persists.',
+      502,
+    );
   }
 }
 
@@ -64,7 +83,10 @@ export async function openBillingPortal(user: CurrentUser): Promise<{ url: strin
   const acct = await accountOf(user);
   if (!acct.stripeCustomerId) throw new ActionError('There is no subscription to manage yet.', 409);
   try {
-    const portal = await stripe().billingPortal.sessions.create({ customer: acct.stripeCustomerId, return_url: `${env.APP_URL}/billing` });
+    const portal = await stripe().billingPortal.sessions.create({
+      customer: acct.stripeCustomerId,
+      return_url: `${env.APP_URL}/billing`,
+    });
     return { url: portal.url };
   } catch (err) {
     logger.warn({ err: (err as Error).message, accountId: acct.id }, 'portal session failed');

@@ -13,24 +13,45 @@ export type Entitlement = {
   graceEndsAt: string | null;
 };
 
-type SubscriptionState = { status: string; currentPeriodEnd: Date | null; cancelAtPeriodEnd: boolean; pastDueSince: Date | null };
+type SubscriptionState = {
+  status: string;
+  currentPeriodEnd: Date | null;
+  cancelAtPeriodEnd: boolean;
+  pastDueSince: Date | null;
+};
 
 /**
  * Entitlement from stored status and period end: active or trialing unlocks; past due keeps access for
  * BILLING_GRACE_DAYS from the first failed payment; a cancellation at period end keeps access until that
  * period ends; a cancelled (ended) subscription unlocks nothing.
  */
-export function entitlementFrom(sub: SubscriptionState | null, now = new Date(), graceDays = env.BILLING_GRACE_DAYS): Entitlement {
-  const base = { status: sub?.status ?? null, periodEnd: sub?.currentPeriodEnd?.toISOString() ?? null, cancelAtPeriodEnd: sub?.cancelAtPeriodEnd ?? false, graceEndsAt: null };
+export function entitlementFrom(
+  sub: SubscriptionState | null,
+  now = new Date(),
+  graceDays = env.BILLING_GRACE_DAYS,
+): Entitlement {
+  const base = {
+    status: sub?.status ?? null,
+    periodEnd: sub?.currentPeriodEnd?.toISOString() ?? null,
+    cancelAtPeriodEnd: sub?.cancelAtPeriodEnd ?? false,
+    graceEndsAt: null,
+  };
   if (!sub) return { ...base, unlocked: false, reason: 'none' };
   // A cancellation takes effect at period end even if the final event has not arrived yet.
   const periodOver = sub.currentPeriodEnd !== null && sub.currentPeriodEnd <= now;
-  if ((sub.status === 'active' || sub.status === 'trialing') && sub.cancelAtPeriodEnd && periodOver) return { ...base, unlocked: false, reason: 'lapsed' };
-  if (sub.status === 'active' || sub.status === 'trialing') return { ...base, unlocked: true, reason: sub.cancelAtPeriodEnd ? 'period-remaining' : 'active' };
+  if ((sub.status === 'active' || sub.status === 'trialing') && sub.cancelAtPeriodEnd && periodOver)
+    return { ...base, unlocked: false, reason: 'lapsed' };
+  if (sub.status === 'active' || sub.status === 'trialing')
+    return { ...base, unlocked: true, reason: sub.cancelAtPeriodEnd ? 'period-remaining' : 'active' };
   if (sub.status === 'past_due') {
     const since = sub.pastDueSince ?? now;
     const graceEnd = new Date(since.getTime() + graceDays * 86_400_000);
-    return { ...base, unlocked: now < graceEnd, reason: now < graceEnd ? 'grace' : 'lapsed', graceEndsAt: graceEnd.toISOString() };
+    return {
+      ...base,
+      unlocked: now < graceEnd,
+      reason: now < graceEnd ? 'grace' : 'lapsed',
+      graceEndsAt: graceEnd.toISOString(),
+    };
   }
   return { ...base, unlocked: false, reason: 'lapsed' };
 }
@@ -38,7 +59,12 @@ export function entitlementFrom(sub: SubscriptionState | null, now = new Date(),
 /** The account's current entitlement, from its most recently updated subscription. */
 export async function getEntitlement(accountId: string): Promise<Entitlement> {
   const [sub] = await db
-    .select({ status: subscriptions.status, currentPeriodEnd: subscriptions.currentPeriodEnd, cancelAtPeriodEnd: subscriptions.cancelAtPeriodEnd, pastDueSince: subscriptions.pastDueSince })
+    .select({
+      status: subscriptions.status,
+      currentPeriodEnd: subscriptions.currentPeriodEnd,
+      cancelAtPeriodEnd: subscriptions.cancelAtPeriodEnd,
+      pastDueSince: subscriptions.pastDueSince,
+    })
     .from(subscriptions)
     .where(eq(subscriptions.accountId, accountId))
     .orderBy(desc(subscriptions.updatedAt))

@@ -5,6 +5,18 @@ export type PlanKey = 'monthly' | 'annual';
 export type Plan = { key: PlanKey; name: string; priceLabel: string; interval: 'month' | 'year'; blurb: string };
 
 export const plans: readonly Plan[] = [
-  { key: 'monthly', name: 'Desk monthly', priceLabel: '€290 / month', interval: 'month', blurb: 'Run your own sizings and download every datasheet issued to your account. Cancel any time.' },
-  { key: 'annual', name: 'Desk annual', priceLabel: '€2,900 / year', interval: 'year', blurb: 'The same desk for a year, two months free.' },
+  {
+    key: 'monthly',
+    name: 'Desk monthly',
+    priceLabel: '€290 / month',
+    interval: 'month',
+    blurb: 'Run your own sizings and download every datasheet issued to your account. Cancel any time.',
+  },
+  {
+    key: 'annual',
+    name: 'Desk annual',
+    priceLabel: '€2,900 / year',
+    interval: 'year',
+    blurb: 'The same desk for a year, two months free.',
+  },
 ];

@@ -27,5 +27,8 @@ export function priceIdFor(plan: 'monthly' | 'annual'): string {
 
 /** True for failures to reach the payment service at all (as opposed to a refused request). */
 export function isUnreachable(err: unknown): boolean {
-  return err instanceof Stripe.errors.StripeConnectionError || err instanceof Stripe.errors.StripeAPIError && (err.statusCode ?? 500) >= 500;
+  return (
+    err instanceof Stripe.errors.StripeConnectionError ||
+    (err instanceof Stripe.errors.StripeAPIError && (err.statusCode ?? 500) >= 500)
+  );
 }

@@ -22,7 +22,11 @@ export async function accountIdFor(tx: Tx, sub: Stripe.Subscription, hint?: stri
   }
   const customer = typeof sub.customer === 'string' ? sub.customer : sub.customer?.id;
   if (!customer) return null;
-  const [a] = await tx.select({ id: accounts.id }).from(accounts).where(eq(accounts.stripeCustomerId, customer)).limit(1);
+  const [a] = await tx
+    .select({ id: accounts.id })
+    .from(accounts)
+    .where(eq(accounts.stripeCustomerId, customer))
+    .limit(1);
   return a?.id ?? null;
 }
 
@@ -30,9 +34,18 @@ export async function accountIdFor(tx: Tx, sub: Stripe.Subscription, hint?: stri
  * Stores the subscription as the payment service reports it now. Callers pass the freshly retrieved
  * object, so whichever event arrives first or last, the stored row ends in the service's current state.
  */
-export async function storeSubscription(tx: Tx, accountId: string, sub: Stripe.Subscription, eventCreated: number): Promise<{ previousStatus: string | null }> {
+export async function storeSubscription(
+  tx: Tx,
+  accountId: string,
+  sub: Stripe.Subscription,
+  eventCreated: number,
+): Promise<{ previousStatus: string | null }> {
   const customer = typeof sub.customer === 'string' ? sub.customer : (sub.customer?.id ?? null);
-  const [prev] = await tx.select({ status: subscriptions.status }).from(subscriptions).where(eq(subscriptions.stripeSubscriptionId, sub.id)).limit(1);
+  const [prev] = await tx
+    .select({ status: subscriptions.status })
+    .from(subscriptions)
+    .where(eq(subscriptions.stripeSubscriptionId, sub.id))
+    .limit(1);
   const values = {
     accountId,
     stripeCustomerId: customer,
@@ -57,7 +70,14 @@ export async function storeSubscription(tx: Tx, accountId: string, sub: Stripe.S
       },
     });
   if (prev?.status !== sub.status) {
-    await writeAudit(tx, { actor: null, action: 'billing.subscription_status', entityType: 'account', entityId: accountId, accountId, detail: { subscription: sub.id, from: prev?.status ?? null, to: sub.status } });
+    await writeAudit(tx, {
+      actor: null,
+      action: 'billing.subscription_status',
+      entityType: 'account',
+      entityId: accountId,
+      accountId,
+      detail: { subscription: sub.id, from: prev?.status ?? null, to: sub.status },
+    });
   }
   return { previousStatus: prev?.status ?? null };
 }

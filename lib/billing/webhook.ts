@@ -25,9 +25,13 @@ export function isHandled(type: string): type is Handled {
 function subscriptionIdOf(event: Stripe.Event): string | null {
   const obj = event.data.object as unknown as Record<string, unknown>;
   if (event.type.startsWith('customer.subscription.')) return String(obj.id);
-  if (event.type === 'checkout.session.completed') return typeof obj.subscription === 'string' ? obj.subscription : ((obj.subscription as { id?: string } | null)?.id ?? null);
+  if (event.type === 'checkout.session.completed')
+    return typeof obj.subscription === 'string'
+      ? obj.subscription
+      : ((obj.subscription as { id?: string } | null)?.id ?? null);
   // Invoices name their subscription at the top level in older versions, under parent details in newer ones.
-  const parent = (obj.parent as { subscription_details?: { subscription?: string } } | undefined)?.subscription_details?.subscription;
+  const parent = (obj.parent as { subscription_details?: { subscription?: string } } | undefined)?.subscription_details
+    ?.subscription;
   return parent ?? (typeof obj.subscription === 'string' ? obj.subscription : null);
 }
 
@@ -40,24 +44,51 @@ export async function applyStripeEvent(event: Stripe.Event): Promise<'applied' |
   const subId = subscriptionIdOf(event);
   // Read the subscription's current state outside the transaction: out-of-order events all converge on it.
   const sub = subId ? await stripe().subscriptions.retrieve(subId) : null;
-  const hint = event.type === 'checkout.session.completed' ? ((event.data.object as Stripe.Checkout.Session).client_reference_id ?? null) : null;
+  const hint =
+    event.type === 'checkout.session.completed'
+      ? ((event.data.object as Stripe.Checkout.Session).client_reference_id ?? null)
+      : null;
   return db.transaction(async (tx) => {
-    const inserted = await tx.insert(webhookEvents).values({ id: event.id, source: 'stripe', type: event.type }).onConflictDoNothing().returning({ id: webhookEvents.id });
+    const inserted = await tx
+      .insert(webhookEvents)
+      .values({ id: event.id, source: 'stripe', type: event.type })
+      .onConflictDoNothing()
+      .returning({ id: webhookEvents.id });
     if (!inserted.length) return 'duplicate';
     if (!sub) return 'applied';
     const accountId = await accountIdFor(tx, sub, hint);
     if (!accountId) throw new Error(`no Dutywise account for subscription ${sub.id}`);
     const { previousStatus } = await storeSubscription(tx, accountId, sub, event.created);
-    const [acct] = await tx.select({ name: accounts.name, email: accounts.billingContactEmail }).from(accounts).where(eq(accounts.id, accountId)).limit(1);
+    const [acct] = await tx
+      .select({ name: accounts.name, email: accounts.billingContactEmail })
+      .from(accounts)
+      .where(eq(accounts.id, accountId))
+      .limit(1);
     const to = acct?.email;
     if (to && event.type === 'invoice.payment_failed') {
       const invoiceId = (event.data.object as { id?: string }).id ?? event.id;
-      await enqueueEmail(tx, { template: 'payment-failed', to, accountId, dedupeKey: `payment-failed:${invoiceId}`, props: { accountName: acct.name, billingUrl: `${env.APP_URL}/billing`, graceDays: env.BILLING_GRACE_DAYS } });
+      await enqueueEmail(tx, {
+        template: 'payment-failed',
+        to,
+        accountId,
+        dedupeKey: `payment-failed:${invoiceId}`,
+        props: { accountName: acct.name, billingUrl: `${env.APP_URL}/billing`, graceDays: env.BILLING_GRACE_DAYS },
+      });
     }
     if (to && sub.cancel_at_period_end && sub.status !== 'canceled') {
       const end = periodEndOf(sub);
       if (end) {
-        await enqueueEmail(tx, { template: 'subscription-ending', to, accountId, dedupeKey: `ending:${sub.id}:${end.getTime()}`, props: { accountName: acct.name, periodEnd: end.toISOString().slice(0, 10), billingUrl: `${env.APP_URL}/billing` } });
+        await enqueueEmail(tx, {
+          template: 'subscription-ending',
+          to,
+          accountId,
+          dedupeKey: `ending:${sub.id}:${end.getTime()}`,
+          props: {
+            accountName: acct.name,
+            periodEnd: end.toISOString().slice(0, 10),
+            billingUrl: `${env.APP_URL}/billing`,
+          },
+        });
       }
     }
     void previousStatus;

@@ -19,10 +19,16 @@ export function createPostgresBlobStore(): BlobStore {
     async put(key: string, bytes: Uint8Array, contentType: string, tx?: Tx) {
       const accountId = accountIdOfKey(key);
       const data = Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength);
-      await (tx ?? db).insert(blobs).values({ key, accountId, contentType, byteSize: data.byteLength, sha256: sha256Hex(data), data });
+      await (tx ?? db)
+        .insert(blobs)
+        .values({ key, accountId, contentType, byteSize: data.byteLength, sha256: sha256Hex(data), data });
     },
     async get(key: string): Promise<StoredBlob | null> {
-      const [row] = await db.select({ data: blobs.data, contentType: blobs.contentType, byteSize: blobs.byteSize }).from(blobs).where(eq(blobs.key, key)).limit(1);
+      const [row] = await db
+        .select({ data: blobs.data, contentType: blobs.contentType, byteSize: blobs.byteSize })
+        .from(blobs)
+        .where(eq(blobs.key, key))
+        .limit(1);
       return row ? { bytes: row.data, contentType: row.contentType, byteSize: row.byteSize } : null;
     },
     async delete(key: string) {

@@ -1,6 +1,12 @@
 import 'server-only';
 import {
-  DeleteObjectCommand, GetObjectCommand, HeadObjectCommand, ListObjectsV2Command, PutObjectCommand, S3Client, S3ServiceException,
+  DeleteObjectCommand,
+  GetObjectCommand,
+  HeadObjectCommand,
+  ListObjectsV2Command,
+  PutObjectCommand,
+  S3Client,
+  S3ServiceException,
 } from '@aws-sdk/client-s3';
 import { sha256Hex } from './hash';
 import { accountIdOfKey } from './key';
@@ -23,7 +29,10 @@ function isNotFound(err: unknown): boolean {
 
 /** Builds the SDK client: path-style addressing and checksums only where required, which S3-compatible servers accept. */
 export function makeS3Client(config: S3StoreConfig): S3Client {
-  const credentials = config.accessKeyId && config.secretAccessKey ? { accessKeyId: config.accessKeyId, secretAccessKey: config.secretAccessKey } : undefined;
+  const credentials =
+    config.accessKeyId && config.secretAccessKey
+      ? { accessKeyId: config.accessKeyId, secretAccessKey: config.secretAccessKey }
+      : undefined;
   return new S3Client({
     region: config.region,
     endpoint: config.endpoint,
@@ -46,7 +55,16 @@ export function createS3BlobStore(config: S3StoreConfig, client: S3Client = make
     transactional: false,
     async put(key: string, bytes: Uint8Array, contentType: string) {
       accountIdOfKey(key);
-      await client.send(new PutObjectCommand({ Bucket, Key: key, Body: bytes, ContentType: contentType, ContentLength: bytes.byteLength, Metadata: { sha256: sha256Hex(bytes) } }));
+      await client.send(
+        new PutObjectCommand({
+          Bucket,
+          Key: key,
+          Body: bytes,
+          ContentType: contentType,
+          ContentLength: bytes.byteLength,
+          Metadata: { sha256: sha256Hex(bytes) },
+        }),
+      );
     },
     async get(key: string): Promise<StoredBlob | null> {
       try {
@@ -76,7 +94,8 @@ export function createS3BlobStore(config: S3StoreConfig, client: S3Client = make
       let token: string | undefined;
       do {
         const res = await client.send(new ListObjectsV2Command({ Bucket, Prefix: prefix, ContinuationToken: token }));
-        for (const o of res.Contents ?? []) if (o.Key) out.push({ key: o.Key, lastModified: o.LastModified ?? new Date(0) });
+        for (const o of res.Contents ?? [])
+          if (o.Key) out.push({ key: o.Key, lastModified: o.LastModified ?? new Date(0) });
         token = res.IsTruncated ? res.NextContinuationToken : undefined;
       } while (token);
       return out;

@@ -6,7 +6,13 @@ import type { BlobStore } from './types';
 
 /** The S3 settings from the environment. */
 export function s3ConfigFromEnv(): S3StoreConfig {
-  return { bucket: env.S3_BUCKET, region: env.S3_REGION, endpoint: env.S3_ENDPOINT, accessKeyId: env.S3_ACCESS_KEY_ID, secretAccessKey: env.S3_SECRET_ACCESS_KEY };
+  return {
+    bucket: env.S3_BUCKET,
+    region: env.S3_REGION,
+    endpoint: env.S3_ENDPOINT,
+    accessKeyId: env.S3_ACCESS_KEY_ID,
+    secretAccessKey: env.S3_SECRET_ACCESS_KEY,
+  };
 }
 
 let configured: BlobStore | null = null;

@@ -22,7 +22,10 @@ async function referencedKeys(keys: string[]): Promise<Set<string>> {
   for (let i = 0; i < keys.length; i += BATCH) {
     const batch = keys.slice(i, i + BATCH);
     const [revs, ups] = await Promise.all([
-      db.select({ key: datasheetRevisions.blobKey }).from(datasheetRevisions).where(inArray(datasheetRevisions.blobKey, batch)),
+      db
+        .select({ key: datasheetRevisions.blobKey })
+        .from(datasheetRevisions)
+        .where(inArray(datasheetRevisions.blobKey, batch)),
       db.select({ key: uploads.blobKey }).from(uploads).where(inArray(uploads.blobKey, batch)),
     ]);
     for (const r of [...revs, ...ups]) found.add(r.key);
@@ -36,7 +39,8 @@ async function referencedKeys(keys: string[]): Promise<Set<string>> {
  */
 export async function sweepOrphanBlobs(opts: SweepOptions = {}): Promise<SweepReport> {
   const minutes = opts.olderThanMinutes ?? 30;
-  if (!(Number.isFinite(minutes) && minutes >= 1)) throw new RangeError(`olderThanMinutes must be at least 1 (got ${minutes})`);
+  if (!(Number.isFinite(minutes) && minutes >= 1))
+    throw new RangeError(`olderThanMinutes must be at least 1 (got ${minutes})`);
   const store = opts.store ?? getBlobStore();
   const cutoff = (opts.now ?? new Date()).getTime() - minutes * 60_000;
   const listed = await store.list('accounts/');

@@ -13,5 +13,8 @@ export function neutraliseCell(value: unknown): string | number {
 
 /** CSV text with a header row; every text cell neutralised. */
 export function toCsv(columns: string[], rows: unknown[][]): string {
-  return Papa.unparse({ fields: columns.map((c) => String(neutraliseCell(c))), data: rows.map((r) => r.map(neutraliseCell)) }, { newline: '\r\n' });
+  return Papa.unparse(
+    { fields: columns.map((c) => String(neutraliseCell(c))), data: rows.map((r) => r.map(neutraliseCell)) },
+    { newline: '\r\n' },
+  );
 }

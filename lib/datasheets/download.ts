@@ -16,7 +16,8 @@ export type DownloadOutcome =
   | { status: 'locked'; message: string }
   | { status: 'not-found' };
 
-export const LOCKED_MESSAGE = 'Datasheets for this account unlock with an active subscription. Subscribe on the billing page (/billing) to download them.';
+export const LOCKED_MESSAGE =
+  'Datasheets for this account unlock with an active subscription. Subscribe on the billing page (/billing) to download them.';
 
 /** Stored bytes that are missing or no longer match their recorded SHA-256: never served. */
 export class DatasheetIntegrityError extends Error {
@@ -35,11 +36,22 @@ export function downloadFileName(number: string, revision: string): string {
  * One revision's bytes after authorisation: staff always; customers only for their own account (any
  * other id answers not-found) and only while entitled ('locked' otherwise). Each served download is audited.
  */
-export async function getRevisionDownload(user: CurrentUser, revisionId: string, opts: { store?: BlobStore } = {}): Promise<DownloadOutcome> {
+export async function getRevisionDownload(
+  user: CurrentUser,
+  revisionId: string,
+  opts: { store?: BlobStore } = {},
+): Promise<DownloadOutcome> {
   if (!can(user.role, 'datasheet:read')) throw new AuthError(403, 'Your role does not allow reading datasheets.');
   if (!z.uuid().safeParse(revisionId).success) return { status: 'not-found' };
   const [row] = await db
-    .select({ id: datasheetRevisions.id, revision: datasheetRevisions.revision, blobKey: datasheetRevisions.blobKey, sha256: datasheetRevisions.sha256, number: datasheets.number, accountId: datasheets.accountId })
+    .select({
+      id: datasheetRevisions.id,
+      revision: datasheetRevisions.revision,
+      blobKey: datasheetRevisions.blobKey,
+      sha256: datasheetRevisions.sha256,
+      number: datasheets.number,
+      accountId: datasheets.accountId,
+    })
     .from(datasheetRevisions)
     .innerJoin(datasheets, eq(datasheets.id, datasheetRevisions.datasheetId))
     .where(eq(datasheetRevisions.id, revisionId))
@@ -51,14 +63,30 @@ export async function getRevisionDownload(user: CurrentUser, revisionId: string,
   }
   const blob = await (opts.store ?? getBlobStore()).get(row.blobKey);
   if (!blob || sha256Hex(blob.bytes) !== row.sha256) {
-    logger.error({ revisionId: row.id, blobKey: row.blobKey, found: Boolean(blob) }, 'issued datasheet bytes missing or altered');
-    throw new DatasheetIntegrityError(`The stored file of ${row.number} rev. ${row.revision} is missing or does not match its recorded SHA-256.`);
+    logger.error(
+      { revisionId: row.id, blobKey: row.blobKey, found: Boolean(blob) },
+      'issued datasheet bytes missing or altered',
+    );
+    throw new DatasheetIntegrityError(
+      `The stored file of ${row.number} rev. ${row.revision} is missing or does not match its recorded SHA-256.`,
+    );
   }
   await db.transaction(async (tx) => {
     await writeAudit(tx, {
-      actor: user, action: 'datasheet.downloaded', entityType: 'datasheet_revision', entityId: row.id, accountId: row.accountId,
+      actor: user,
+      action: 'datasheet.downloaded',
+      entityType: 'datasheet_revision',
+      entityId: row.id,
+      accountId: row.accountId,
       detail: { number: row.number, revision: row.revision, sha256: row.sha256 },
     });
   });
-  return { status: 'ok', bytes: blob.bytes, fileName: downloadFileName(row.number, row.revision), sha256: row.sha256, number: row.number, revision: row.revision };
+  return {
+    status: 'ok',
+    bytes: blob.bytes,
+    fileName: downloadFileName(row.number, row.revision),
+    sha256: row.sha256,
+    number: row.number,
+    revision: row.revision,
+  };
 }

@@ -17,8 +17,16 @@ export type EnteredConditions = {
 };
 
 const none: EnteredConditions = {
-  flow: null, inletTemperature: null, inletPressure: null, outletTemperature: null, dischargePressure: null,
-  intercoolerOutletTemperature: null, barometricPressure: null, siteAltitudeM: null, isentropicEfficiency: null, polytropicEfficiency: null,
+  flow: null,
+  inletTemperature: null,
+  inletPressure: null,
+  outletTemperature: null,
+  dischargePressure: null,
+  intercoolerOutletTemperature: null,
+  barometricPressure: null,
+  siteAltitudeM: null,
+  isentropicEfficiency: null,
+  polytropicEfficiency: null,
 };
 
 /**

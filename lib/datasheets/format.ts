@@ -6,7 +6,12 @@ function formatter(decimals: number): Intl.NumberFormat {
   let f = cache.get(decimals);
   if (!f) {
     // signDisplay 'negative' keeps a rounded -0.0 from printing as "-0.0".
-    f = new Intl.NumberFormat('en-US', { minimumFractionDigits: decimals, maximumFractionDigits: decimals, useGrouping: true, signDisplay: 'negative' });
+    f = new Intl.NumberFormat('en-US', {
+      minimumFractionDigits: decimals,
+      maximumFractionDigits: decimals,
+      useGrouping: true,
+      signDisplay: 'negative',
+    });
     cache.set(decimals, f);
   }
   return f;
@@ -38,7 +43,12 @@ export const formatKpa = (kpa: number) => `${formatFigure(kpa)} kPa abs`;
 export const formatAmps = (a: number) => `${formatFixed(a, 1)} A`;
 
 const UNIT_LABELS: Record<string, string> = {
-  degC: '°C', degF: '°F', degR: '°R', 'm3/h': 'm³/h', 'Nm3/h': 'Nm³/h', 'Sm3/h': 'Sm³/h',
+  degC: '°C',
+  degF: '°F',
+  degR: '°R',
+  'm3/h': 'm³/h',
+  'Nm3/h': 'Nm³/h',
+  'Sm3/h': 'Sm³/h',
 };
 
 /** How a canonical unit string is printed (°C for degC, Nm³/h for Nm3/h). */

@@ -29,14 +29,20 @@ export type BeforeCommit = (tx: Tx, written: IssuedRevision) => Promise<void>;
 class StalePlan extends Error {}
 
 function isRevisionConflict(err: unknown): boolean {
-  const e = (err as { cause?: { code?: string; constraint?: string } } | null)?.cause ?? (err as { code?: string; constraint?: string } | null);
+  const e =
+    (err as { cause?: { code?: string; constraint?: string } } | null)?.cause ??
+    (err as { code?: string; constraint?: string } | null);
   return e?.code === '23505' && e.constraint === 'datasheet_revisions_uq';
 }
 
 // The datasheet row, locked FOR UPDATE so concurrent issues of one sizing queue here, or created now.
 async function lockDatasheet(tx: Tx, plan: IssuePlan): Promise<string> {
   if (plan.datasheetId) {
-    const [row] = await tx.select({ id: datasheets.id }).from(datasheets).where(eq(datasheets.id, plan.datasheetId)).for('update');
+    const [row] = await tx
+      .select({ id: datasheets.id })
+      .from(datasheets)
+      .where(eq(datasheets.id, plan.datasheetId))
+      .for('update');
     if (!row) throw new StalePlan();
     return row.id;
   }
@@ -61,7 +67,9 @@ async function latestLetter(tx: Tx, datasheetId: string): Promise<string | null>
 
 async function removeQuietly(store: BlobStore, key: string): Promise<void> {
   // If this fails too, sweepOrphanBlobs removes the object later; the issue itself already failed cleanly.
-  await store.delete(key).catch((err: unknown) => logger.error({ err, key }, 'could not delete the blob of a failed datasheet issue'));
+  await store
+    .delete(key)
+    .catch((err: unknown) => logger.error({ err, key }, 'could not delete the blob of a failed datasheet issue'));
 }
 
 /**
@@ -69,7 +77,12 @@ async function removeQuietly(store: BlobStore, key: string): Promise<void> {
  * other store uploads first under a unique key and has the object deleted when the transaction fails.
  * Returns null when the plan went stale (another revision was issued meanwhile): nothing is left behind.
  */
-export async function commitIssue(plan: IssuePlan, bytes: Buffer, store: BlobStore, beforeCommit?: BeforeCommit): Promise<IssuedRevision | null> {
+export async function commitIssue(
+  plan: IssuePlan,
+  bytes: Buffer,
+  store: BlobStore,
+  beforeCommit?: BeforeCommit,
+): Promise<IssuedRevision | null> {
   const blobKey = accountKey(plan.account.id, 'datasheets', plan.number, `${plan.revision}-${randomUUID()}.pdf`);
   const sha256 = sha256Hex(bytes);
   if (!store.transactional) await store.put(blobKey, bytes, PDF_CONTENT_TYPE);
@@ -80,19 +93,56 @@ export async function commitIssue(plan: IssuePlan, bytes: Buffer, store: BlobSto
       if (store.transactional) await store.put(blobKey, bytes, PDF_CONTENT_TYPE, tx);
       const [rev] = await tx
         .insert(datasheetRevisions)
-        .values({ datasheetId, revision: plan.revision, snapshot: plan.snapshot, blobKey, sha256, byteSize: bytes.byteLength, note: plan.note, issuedByUserId: plan.user.id, issuedAt: plan.issuedAt })
+        .values({
+          datasheetId,
+          revision: plan.revision,
+          snapshot: plan.snapshot,
+          blobKey,
+          sha256,
+          byteSize: bytes.byteLength,
+          note: plan.note,
+          issuedByUserId: plan.user.id,
+          issuedAt: plan.issuedAt,
+        })
         .returning({ id: datasheetRevisions.id });
       if (!rev) throw new Error('datasheet revision insert returned no row');
-      const written: IssuedRevision = { datasheetId, revisionId: rev.id, number: plan.number, revision: plan.revision, sha256, byteSize: bytes.byteLength, blobKey, issuedAt: plan.issuedAt.toISOString() };
+      const written: IssuedRevision = {
+        datasheetId,
+        revisionId: rev.id,
+        number: plan.number,
+        revision: plan.revision,
+        sha256,
+        byteSize: bytes.byteLength,
+        blobKey,
+        issuedAt: plan.issuedAt.toISOString(),
+      };
       await writeAudit(tx, {
-        actor: plan.user, action: 'datasheet.issued', entityType: 'datasheet_revision', entityId: rev.id, accountId: plan.account.id,
-        detail: { number: plan.number, revision: plan.revision, sizingId: plan.sizing.id, sha256, byteSize: bytes.byteLength, store: store.kind },
+        actor: plan.user,
+        action: 'datasheet.issued',
+        entityType: 'datasheet_revision',
+        entityId: rev.id,
+        accountId: plan.account.id,
+        detail: {
+          number: plan.number,
+          revision: plan.revision,
+          sizingId: plan.sizing.id,
+          sha256,
+          byteSize: bytes.byteLength,
+          store: store.kind,
+        },
       });
       if (plan.account.billingContactEmail) {
         await enqueueEmail(tx, {
           template: 'datasheet-issued',
           to: plan.account.billingContactEmail,
-          props: { accountName: plan.account.name, datasheetNumber: plan.number, revision: plan.revision, sizingTitle: plan.sizing.title, equipmentTag: plan.sizing.equipmentTag, datasheetUrl: `/datasheets#${plan.number}` },
+          props: {
+            accountName: plan.account.name,
+            datasheetNumber: plan.number,
+            revision: plan.revision,
+            sizingTitle: plan.sizing.title,
+            equipmentTag: plan.sizing.equipmentTag,
+            datasheetUrl: `/datasheets#${plan.number}`,
+          },
           accountId: plan.account.id,
           entity: { type: 'datasheet_revision', id: rev.id },
         });

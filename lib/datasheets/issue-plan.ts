@@ -30,14 +30,28 @@ export type IssuePlan = {
 /** A saved result the datasheet can print; rows saved without engine output are refused with a reason. */
 export function engineResultOf(sizing: SizingDetail): SizingResult {
   const r = sizing.result as Partial<SizingResult> | null;
-  const ok = r && ((r.service === 'heater' && 'heater' in r) || (r.service === 'compressor' && 'compressor' in r)) && Array.isArray(r.warnings) && r.gas && r.basis;
-  if (!ok) throw new ActionError(`Sizing ${sizing.number} has no complete engine result stored; re-save it from the sizing form before issuing a datasheet.`, 422);
+  const ok =
+    r &&
+    ((r.service === 'heater' && 'heater' in r) || (r.service === 'compressor' && 'compressor' in r)) &&
+    Array.isArray(r.warnings) &&
+    r.gas &&
+    r.basis;
+  if (!ok)
+    throw new ActionError(
+      `Sizing ${sizing.number} has no complete engine result stored; re-save it from the sizing form before issuing a datasheet.`,
+      422,
+    );
   return r as SizingResult;
 }
 
 export async function loadIssueAccount(accountId: string): Promise<IssueAccount> {
   const [a] = await db
-    .select({ id: accounts.id, name: accounts.name, site: accounts.site, billingContactEmail: accounts.billingContactEmail })
+    .select({
+      id: accounts.id,
+      name: accounts.name,
+      site: accounts.site,
+      billingContactEmail: accounts.billingContactEmail,
+    })
     .from(accounts)
     .where(eq(accounts.id, accountId))
     .limit(1);
@@ -47,12 +61,22 @@ export async function loadIssueAccount(accountId: string): Promise<IssueAccount>
 
 async function history(datasheetId: string): Promise<RevisionEntry[]> {
   const rows = await db
-    .select({ revision: datasheetRevisions.revision, issuedAt: datasheetRevisions.issuedAt, note: datasheetRevisions.note, issuedByName: users.name })
+    .select({
+      revision: datasheetRevisions.revision,
+      issuedAt: datasheetRevisions.issuedAt,
+      note: datasheetRevisions.note,
+      issuedByName: users.name,
+    })
     .from(datasheetRevisions)
     .leftJoin(users, eq(users.id, datasheetRevisions.issuedByUserId))
     .where(eq(datasheetRevisions.datasheetId, datasheetId));
   return rows
-    .map((r) => ({ revision: r.revision, issuedAt: r.issuedAt.toISOString(), note: r.note, issuedByName: r.issuedByName }))
+    .map((r) => ({
+      revision: r.revision,
+      issuedAt: r.issuedAt.toISOString(),
+      note: r.note,
+      issuedByName: r.issuedByName,
+    }))
     .sort((a, b) => compareRevisionLetters(a.revision, b.revision));
 }
 
@@ -60,13 +84,26 @@ async function history(datasheetId: string): Promise<RevisionEntry[]> {
  * Reads the datasheet's current state and decides the next letter (and, for a first issue, reserves a
  * number: sequence values are never rolled back, so an abandoned attempt only leaves a gap).
  */
-export async function planIssue(user: CurrentUser, sizing: SizingDetail, account: IssueAccount, note: string | null): Promise<IssuePlan> {
+export async function planIssue(
+  user: CurrentUser,
+  sizing: SizingDetail,
+  account: IssueAccount,
+  note: string | null,
+): Promise<IssuePlan> {
   const result = engineResultOf(sizing);
-  const [existing] = await db.select({ id: datasheets.id, number: datasheets.number }).from(datasheets).where(eq(datasheets.sizingId, sizing.id)).limit(1);
+  const [existing] = await db
+    .select({ id: datasheets.id, number: datasheets.number })
+    .from(datasheets)
+    .where(eq(datasheets.sizingId, sizing.id))
+    .limit(1);
   const past = existing ? await history(existing.id) : [];
   const previous = past.at(-1)?.revision ?? null;
   const revision = nextRevisionLetter(previous);
-  if (!revision) throw new ActionError(`Datasheet ${existing?.number ?? ''} has used every revision letter up to ZZ; issue a new datasheet from a new sizing.`, 409);
+  if (!revision)
+    throw new ActionError(
+      `Datasheet ${existing?.number ?? ''} has used every revision letter up to ZZ; issue a new datasheet from a new sizing.`,
+      409,
+    );
   const number = existing?.number ?? (await db.transaction((tx) => nextNumber(tx, 'datasheet')));
   const issuedAt = new Date();
   const entry: RevisionEntry = { revision, issuedAt: issuedAt.toISOString(), note, issuedByName: user.name };
@@ -75,12 +112,31 @@ export async function planIssue(user: CurrentUser, sizing: SizingDetail, account
     datasheet: { number, revision, issuedAt: entry.issuedAt, note, issuedByName: user.name },
     account: { id: account.id, name: account.name, site: account.site },
     sizing: {
-      id: sizing.id, number: sizing.number, title: sizing.title, equipmentTag: sizing.equipmentTag, service: sizing.service, gasLabel: sizing.gasLabel,
-      notes: sizing.notes, engineVersion: sizing.engineVersion, revision: sizing.revision, createdAt: sizing.createdAt.toISOString(),
+      id: sizing.id,
+      number: sizing.number,
+      title: sizing.title,
+      equipmentTag: sizing.equipmentTag,
+      service: sizing.service,
+      gasLabel: sizing.gasLabel,
+      notes: sizing.notes,
+      engineVersion: sizing.engineVersion,
+      revision: sizing.revision,
+      createdAt: sizing.createdAt.toISOString(),
     },
     input: sizing.input,
     result,
     revisions: [...past, entry],
   };
-  return { datasheetId: existing?.id ?? null, number, revision, previous, issuedAt, note, account, sizing, user, snapshot };
+  return {
+    datasheetId: existing?.id ?? null,
+    number,
+    revision,
+    previous,
+    issuedAt,
+    note,
+    account,
+    sizing,
+    user,
+    snapshot,
+  };
 }

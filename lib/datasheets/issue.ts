@@ -21,7 +21,11 @@ const ATTEMPTS = 3;
  * PDF outside the transaction, then stores bytes, revision row, audit entry and the customer's e-mail
  * in one transaction. Concurrent issues of one sizing are serialised and each gets its own letter.
  */
-export async function issueDatasheet(user: CurrentUser, input: { sizingId: string; note?: string }, opts: IssueOptions = {}): Promise<IssuedRevision> {
+export async function issueDatasheet(
+  user: CurrentUser,
+  input: { sizingId: string; note?: string },
+  opts: IssueOptions = {},
+): Promise<IssuedRevision> {
   if (!can(user.role, 'datasheet:issue')) throw new AuthError(403, 'Your role does not allow issuing datasheets.');
   const parsed = issueDatasheetSchema.safeParse(input);
   if (!parsed.success) throw new ActionError('The datasheet request is not valid.', 400, fieldErrorsOf(parsed.error));
@@ -35,5 +39,8 @@ export async function issueDatasheet(user: CurrentUser, input: { sizingId: strin
     const issued = await commitIssue(plan, bytes, store, opts.beforeCommit);
     if (issued) return issued;
   }
-  throw new ActionError('Other revisions of this datasheet were being issued at the same moment; reload the page and try again.', 409);
+  throw new ActionError(
+    'Other revisions of this datasheet were being issued at the same moment; reload the page and try again.',
+    409,
+  );
 }

@@ -8,7 +8,15 @@ import { can, isStaff } from '@/lib/auth/roles';
 import { getEntitlement } from '@/lib/billing/entitlements';
 import { compareRevisionLetters } from './revision-letter';
 
-export type RevisionSummary = { id: string; revision: string; issuedAt: Date; sha256: string; byteSize: number; note: string | null; issuedByName: string | null };
+export type RevisionSummary = {
+  id: string;
+  revision: string;
+  issuedAt: Date;
+  sha256: string;
+  byteSize: number;
+  note: string | null;
+  issuedByName: string | null;
+};
 
 export type DatasheetSummary = {
   id: string;
@@ -29,14 +37,27 @@ function requireRead(user: CurrentUser): void {
 }
 
 /** Datasheets the user may see (staff: every account; customers: their own), newest first, with their revisions. */
-export async function listDatasheets(user: CurrentUser, filter: { sizingId?: string; limit?: number } = {}): Promise<DatasheetSummary[]> {
+export async function listDatasheets(
+  user: CurrentUser,
+  filter: { sizingId?: string; limit?: number } = {},
+): Promise<DatasheetSummary[]> {
   requireRead(user);
   const scope = accountScope(user);
-  const conds = [scope ? eq(datasheets.accountId, scope) : undefined, filter.sizingId ? eq(datasheets.sizingId, filter.sizingId) : undefined].filter((c) => c !== undefined);
+  const conds = [
+    scope ? eq(datasheets.accountId, scope) : undefined,
+    filter.sizingId ? eq(datasheets.sizingId, filter.sizingId) : undefined,
+  ].filter((c) => c !== undefined);
   const rows = await db
     .select({
-      id: datasheets.id, number: datasheets.number, accountId: datasheets.accountId, accountName: accounts.name, sizingId: datasheets.sizingId,
-      sizingTitle: sizings.title, equipmentTag: sizings.equipmentTag, service: sizings.service, createdAt: datasheets.createdAt,
+      id: datasheets.id,
+      number: datasheets.number,
+      accountId: datasheets.accountId,
+      accountName: accounts.name,
+      sizingId: datasheets.sizingId,
+      sizingTitle: sizings.title,
+      equipmentTag: sizings.equipmentTag,
+      service: sizings.service,
+      createdAt: datasheets.createdAt,
     })
     .from(datasheets)
     .innerJoin(sizings, eq(sizings.id, datasheets.sizingId))
@@ -47,15 +68,30 @@ export async function listDatasheets(user: CurrentUser, filter: { sizingId?: str
   if (rows.length === 0) return [];
   const revs = await db
     .select({
-      datasheetId: datasheetRevisions.datasheetId, id: datasheetRevisions.id, revision: datasheetRevisions.revision, issuedAt: datasheetRevisions.issuedAt,
-      sha256: datasheetRevisions.sha256, byteSize: datasheetRevisions.byteSize, note: datasheetRevisions.note, issuedByName: users.name,
+      datasheetId: datasheetRevisions.datasheetId,
+      id: datasheetRevisions.id,
+      revision: datasheetRevisions.revision,
+      issuedAt: datasheetRevisions.issuedAt,
+      sha256: datasheetRevisions.sha256,
+      byteSize: datasheetRevisions.byteSize,
+      note: datasheetRevisions.note,
+      issuedByName: users.name,
     })
     .from(datasheetRevisions)
     .leftJoin(users, eq(users.id, datasheetRevisions.issuedByUserId))
-    .where(inArray(datasheetRevisions.datasheetId, rows.map((r) => r.id)));
+    .where(
+      inArray(
+        datasheetRevisions.datasheetId,
+        rows.map((r) => r.id),
+      ),
+    );
   const byDatasheet = new Map<string, RevisionSummary[]>();
-  for (const { datasheetId, ...r } of revs) (byDatasheet.get(datasheetId) ?? byDatasheet.set(datasheetId, []).get(datasheetId)!).push(r);
-  return rows.map((r) => ({ ...r, revisions: (byDatasheet.get(r.id) ?? []).sort((a, b) => compareRevisionLetters(a.revision, b.revision)) }));
+  for (const { datasheetId, ...r } of revs)
+    (byDatasheet.get(datasheetId) ?? byDatasheet.set(datasheetId, []).get(datasheetId)!).push(r);
+  return rows.map((r) => ({
+    ...r,
+    revisions: (byDatasheet.get(r.id) ?? []).sort((a, b) => compareRevisionLetters(a.revision, b.revision)),
+  }));
 }
 
 export type DownloadAccess = { unlocked: boolean; reason: 'staff' | 'subscribed' | 'no-subscription' | 'no-account' };

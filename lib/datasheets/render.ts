@@ -14,7 +14,9 @@ export function countPdfPages(bytes: Buffer): number {
 
 function renderWith(kit: PdfKit, s: DatasheetSnapshot, blocks: Block[], pages: Block[][] | null): Promise<Buffer> {
   // renderToBuffer is typed for a <Document> element; DatasheetDocument returns exactly that.
-  const element = createElement(DatasheetDocument, { s, blocks, pages }) as unknown as Parameters<PdfKit['renderToBuffer']>[0];
+  const element = createElement(DatasheetDocument, { s, blocks, pages }) as unknown as Parameters<
+    PdfKit['renderToBuffer']
+  >[0];
   return kit.renderToBuffer(element);
 }
 
@@ -33,7 +35,10 @@ export async function renderDatasheetPdf(snapshot: DatasheetSnapshot, opts: Rend
   if (plan) {
     const bytes = await renderWith(kit, snapshot, blocks, plan);
     if (countPdfPages(bytes) === plan.length) return bytes;
-    logger.debug({ number: snapshot.datasheet.number, planned: plan.length }, 'datasheet overflowed its page plan; rendering it flowing');
+    logger.debug(
+      { number: snapshot.datasheet.number, planned: plan.length },
+      'datasheet overflowed its page plan; rendering it flowing',
+    );
   }
   return renderWith(kit, snapshot, blocks, null);
 }

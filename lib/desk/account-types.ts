@@ -1,5 +1,10 @@
 /** A customer account as the desk's picker needs it: its name and site conditions. */
-export type AccountSite = { id: string; name: string; barometricPressureKpa: number | null; siteAltitudeM: number | null };
+export type AccountSite = {
+  id: string;
+  name: string;
+  barometricPressureKpa: number | null;
+  siteAltitudeM: number | null;
+};
 
 /** A draft quote a sizing can be added to. */
 export type QuoteOption = { id: string; number: string; title: string; accountId: string };

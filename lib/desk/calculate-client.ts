@@ -21,7 +21,12 @@ export const CALCULATE_PATH = '/api/v1/calculate';
 export async function postCalculate(input: SizingInput, signal?: AbortSignal): Promise<SizingResult> {
   let res: Response;
   try {
-    res = await fetch(CALCULATE_PATH, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(input), signal });
+    res = await fetch(CALCULATE_PATH, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: JSON.stringify(input),
+      signal,
+    });
   } catch (err) {
     if (signal?.aborted) throw err;
     throw new CalculateError({ kind: 'network' });
@@ -29,7 +34,10 @@ export async function postCalculate(input: SizingInput, signal?: AbortSignal): P
   if (res.ok) return (await res.json()) as SizingResult;
   if (res.status === 400 || res.status === 422) {
     const body = (await res.json().catch(() => null)) as { errors?: SizingIssue[] } | null;
-    throw new CalculateError({ kind: 'input', issues: body?.errors ?? [{ path: '', message: 'the calculator refused this input' }] });
+    throw new CalculateError({
+      kind: 'input',
+      issues: body?.errors ?? [{ path: '', message: 'the calculator refused this input' }],
+    });
   }
   if (res.status === 429) {
     const retry = Number(res.headers.get('retry-after'));
@@ -42,10 +50,15 @@ export async function postCalculate(input: SizingInput, signal?: AbortSignal): P
 /** How a failure reads in the result panel. */
 export function failureText(f: CalculateFailure): string {
   switch (f.kind) {
-    case 'input': return 'The calculator refused this duty point; see the fields marked.';
-    case 'rate-limited': return `Too many calculations in a short time; the desk retries in ${f.retryAfterS} s.`;
-    case 'too-large': return 'The request is too large for the calculator (shorten the catalogue rating list).';
-    case 'server': return `The calculator answered with an error (HTTP ${f.status}). Try again in a moment.`;
-    case 'network': return 'The calculator could not be reached; check the connection. The desk retries when inputs change.';
+    case 'input':
+      return 'The calculator refused this duty point; see the fields marked.';
+    case 'rate-limited':
+      return `Too many calculations in a short time; the desk retries in ${f.retryAfterS} s.`;
+    case 'too-large':
+      return 'The request is too large for the calculator (shorten the catalogue rating list).';
+    case 'server':
+      return `The calculator answered with an error (HTTP ${f.status}). Try again in a moment.`;
+    case 'network':
+      return 'The calculator could not be reached; check the connection. The desk retries when inputs change.';
   }
 }

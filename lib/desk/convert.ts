@@ -37,7 +37,8 @@ export function switchUnitValue(
 ): SwitchResult {
   if (fromUnit === toUnit || valueText.trim() === '') return { ok: true, value: valueText, exact: null };
   const value = exact && exact.text === valueText && exact.unit === fromUnit ? exact.value : parseNumeric(valueText);
-  if (!Number.isFinite(value)) return { ok: false, reason: 'enter a number before changing the unit, so it can be converted' };
+  if (!Number.isFinite(value))
+    return { ok: false, reason: 'enter a number before changing the unit, so it can be converted' };
   try {
     const converted = convertQuantity(KIND[kind], value, fromUnit, toUnit, {
       barometricPressurePa: ctx.barometricPressurePa,
@@ -48,7 +49,10 @@ export function switchUnitValue(
     return { ok: true, value: text, exact: { text, unit: toUnit, value: converted } };
   } catch (err) {
     if (err instanceof UnitError) {
-      return { ok: false, reason: 'converting between mass and volume flow needs a valid gas and inlet state; fix those first' };
+      return {
+        ok: false,
+        reason: 'converting between mass and volume flow needs a valid gas and inlet state; fix those first',
+      };
     }
     throw err;
   }

@@ -1,5 +1,11 @@
 import { parseNumeric } from '@/lib/sizing/schema-fields';
-import { STANDARD_FLOW_BASES, flowToKgPerS, isGaugePressureUnit, pressureToPa, type StandardFlowUnit } from '@/lib/units';
+import {
+  STANDARD_FLOW_BASES,
+  flowToKgPerS,
+  isGaugePressureUnit,
+  pressureToPa,
+  type StandardFlowUnit,
+} from '@/lib/units';
 import { fixed, figure } from './format';
 import type { FlowContext } from '@/lib/units';
 import type { QtyText } from './form-types';
@@ -37,7 +43,13 @@ export function flowHint(q: QtyText, ctx: FlowContext | null): string {
 }
 
 /** "Ratio 3.04 per stage (overall 28.2)" while both pressures are readable and discharge is above suction. */
-export function stageRatioHint(suction: QtyText, discharge: QtyText, stagesText: string, dropPercentText: string, barometricPa: number): string {
+export function stageRatioHint(
+  suction: QtyText,
+  discharge: QtyText,
+  stagesText: string,
+  dropPercentText: string,
+  barometricPa: number,
+): string {
   const p1 = parseNumeric(suction.value);
   const p2 = parseNumeric(discharge.value);
   const n = Number(stagesText);

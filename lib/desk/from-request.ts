@@ -12,12 +12,21 @@ const NOT_ON_DESK = ['k', 'cpJPerKgK', 'motorEfficiency', 'motorPowerFactor', 'a
 
 function gasValues(g: SizingInput['gas'], base: DeskValues['gas']): DeskValues['gas'] {
   if (g.components) {
-    const components: MixtureRow[] = Object.entries(g.components).map(([species, x]) => ({ species, fraction: String(x) }));
+    const components: MixtureRow[] = Object.entries(g.components).map(([species, x]) => ({
+      species,
+      fraction: String(x),
+    }));
     return { ...base, mode: 'mixture', basis: g.basis ?? 'mole', components };
   }
   const preset = g.preset ?? base.preset;
   if (g.dewPoint) return { ...base, mode: 'preset', preset, humidityBy: 'dew', dewPoint: q(g.dewPoint) };
-  return { ...base, mode: 'preset', preset, humidityBy: 'rh', relativeHumidityPercent: text(g.relativeHumidityPercent, base.relativeHumidityPercent) };
+  return {
+    ...base,
+    mode: 'preset',
+    preset,
+    humidityBy: 'rh',
+    relativeHumidityPercent: text(g.relativeHumidityPercent, base.relativeHumidityPercent),
+  };
 }
 
 function siteValue(site: SizingInput['site'], base: QtyText): QtyText {
@@ -40,7 +49,9 @@ export function valuesFromInput(input: SizingInput, system: UnitSystem): { value
     inlet: { temperature: q(input.inlet.temperature), pressure: q(input.inlet.pressure) },
     site: { barometricPressure: siteValue(input.site, base.site.barometricPressure) },
     // Without a supply the engine figures a heater on 400 V three-phase.
-    supply: input.supply ? { voltageV: String(input.supply.voltageV), phases: input.supply.phases === 1 ? '1' : '3' } : { voltageV: '400', phases: '3' },
+    supply: input.supply
+      ? { voltageV: String(input.supply.voltageV), phases: input.supply.phases === 1 ? '1' : '3' }
+      : { voltageV: '400', phases: '3' },
   };
   const dropped: string[] = [];
   if (input.service === 'heater') {

@@ -38,5 +38,8 @@ export function normaliseRows(rows: readonly MixtureRow[]): MixtureRow[] | null 
 export function presetRows(presetId: string): MixtureRow[] | null {
   const preset = findPreset(presetId);
   if (!preset?.moleFractions) return null;
-  return Object.entries(preset.moleFractions).map(([species, x]) => ({ species, fraction: String(Number((x ?? 0).toPrecision(6))) }));
+  return Object.entries(preset.moleFractions).map(([species, x]) => ({
+    species,
+    fraction: String(Number((x ?? 0).toPrecision(6))),
+  }));
 }

@@ -11,8 +11,15 @@ function setPath(target: Record<string, unknown>, path: string, leaf: unknown): 
 
 // Quantities register "<path>.value"; their issues land on that input.
 const QUANTITY_KEYS = new Set([
-  'site.barometricPressure', 'gas.dewPoint', 'flow', 'inlet.temperature', 'inlet.pressure', 'outletTemperature',
-  'dischargePressure', 'intercoolerOutletTemperature', 'dischargeTemperatureLimit',
+  'site.barometricPressure',
+  'gas.dewPoint',
+  'flow',
+  'inlet.temperature',
+  'inlet.pressure',
+  'outletTemperature',
+  'dischargePressure',
+  'intercoolerOutletTemperature',
+  'dischargeTemperatureLimit',
 ]);
 
 /** react-hook-form resolver built on the engine's request schema (via `validateDesk`). */

@@ -23,14 +23,17 @@ function fromBase64Url(text: string): string {
 /** The `i` parameter that reopens these inputs: versioned base64url of the request's JSON. */
 export function encodeShareParam(request: SizingRequest | SizingInput): string {
   const param = PREFIX + toBase64Url(JSON.stringify(request));
-  if (param.length > MAX_SHARE_PARAM_CHARS) throw new Error(`share link would be ${param.length} characters; the limit is ${MAX_SHARE_PARAM_CHARS}`);
+  if (param.length > MAX_SHARE_PARAM_CHARS)
+    throw new Error(`share link would be ${param.length} characters; the limit is ${MAX_SHARE_PARAM_CHARS}`);
   return param;
 }
 
 /** Reads an `i` parameter back, refusing anything oversized, garbled or not a valid sizing request. */
 export function decodeShareParam(param: string): ShareDecode {
-  if (param.length > MAX_SHARE_PARAM_CHARS) return { ok: false, reason: `the link's inputs are longer than ${MAX_SHARE_PARAM_CHARS} characters` };
-  if (!param.startsWith(PREFIX)) return { ok: false, reason: 'the link was not made by this sizing desk (unknown format)' };
+  if (param.length > MAX_SHARE_PARAM_CHARS)
+    return { ok: false, reason: `the link's inputs are longer than ${MAX_SHARE_PARAM_CHARS} characters` };
+  if (!param.startsWith(PREFIX))
+    return { ok: false, reason: 'the link was not made by this sizing desk (unknown format)' };
   let json: unknown;
   try {
     json = JSON.parse(fromBase64Url(param.slice(PREFIX.length)));
@@ -40,7 +43,10 @@ export function decodeShareParam(param: string): ShareDecode {
   const parsed = sizingRequestSchema.safeParse(json);
   if (!parsed.success) {
     const first = issuesFromZod(parsed.error)[0];
-    return { ok: false, reason: `the link's inputs are not a valid sizing${first ? ` (${first.path || 'request'}: ${first.message})` : ''}` };
+    return {
+      ok: false,
+      reason: `the link's inputs are not a valid sizing${first ? ` (${first.path || 'request'}: ${first.message})` : ''}`,
+    };
   }
   return { ok: true, input: parsed.data };
 }

@@ -6,7 +6,9 @@ const kw = (v: number) => `${formatKw(v)} kW`;
 
 /** "IEC 315 kW / NEMA 400 hp": ratings are series values, printed as listed. */
 export function motorText(m: MotorSelection): string {
-  return [m.iecKw === null ? null : `IEC ${m.iecKw} kW`, m.nemaHp === null ? null : `NEMA ${m.nemaHp} hp`].filter(Boolean).join(' / ');
+  return [m.iecKw === null ? null : `IEC ${m.iecKw} kW`, m.nemaHp === null ? null : `NEMA ${m.nemaHp} hp`]
+    .filter(Boolean)
+    .join(' / ');
 }
 
 /** Headline and figure lines of a compressor result. */
@@ -25,7 +27,9 @@ export function compressorLines(r: CompressorResult, system: UnitSystem): { head
     headline: [
       `Shaft power: ${kw(c.shaftPowerKw)} (${formatHp(c.shaftPowerKw)} hp), ${c.stageCount} stage${c.stageCount > 1 ? 's' : ''}, ${c.basis} basis`,
       `Motor: ${motor || 'above the standard series'} (at least ${fixed(m.requiredMarginPercent, 0)} % over shaft power)` +
-        (c.lineCurrentA === null ? '' : `; ${formatA(c.lineCurrentA)} A line current at ${c.drive ? fixed(c.drive.voltageV, 0) : ''} V`),
+        (c.lineCurrentA === null
+          ? ''
+          : `; ${formatA(c.lineCurrentA)} A line current at ${c.drive ? fixed(c.drive.voltageV, 0) : ''} V`),
     ],
     figures: [
       `Suction ${p(c.suctionPressureKpa)}, discharge ${p(c.dischargePressureKpa)}, overall ratio ${fixed(c.overallPressureRatio, 3)}`,
@@ -35,7 +39,9 @@ export function compressorLines(r: CompressorResult, system: UnitSystem): { head
       ...stageLines,
       `Intercooler duties: ${headline.intercoolerDutiesKw.length ? headline.intercoolerDutiesKw.map(kw).join(', ') : 'none (single stage)'}`,
       `Discharge temperature limit ${joined(showTemperature(c.dischargeTemperatureLimitC, system))}; ` +
-        (c.suggestedStages === null ? 'no stage count up to 6 keeps under it' : `${c.suggestedStages} stage${c.suggestedStages > 1 ? 's' : ''} keep every stage under it`),
+        (c.suggestedStages === null
+          ? 'no stage count up to 6 keeps under it'
+          : `${c.suggestedStages} stage${c.suggestedStages > 1 ? 's' : ''} keep every stage under it`),
     ],
   };
 }

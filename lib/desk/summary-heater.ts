@@ -1,5 +1,15 @@
 import type { HeaterResult } from '@/lib/sizing';
-import { fixed, formatA, formatKw, formatPercent, formatRating, joined, showCp, showTemperature, type Shown } from './format';
+import {
+  fixed,
+  formatA,
+  formatKw,
+  formatPercent,
+  formatRating,
+  joined,
+  showCp,
+  showTemperature,
+  type Shown,
+} from './format';
 import type { UnitSystem } from './unit-systems';
 
 const t = (c: number, s: UnitSystem) => joined(showTemperature(c, s));
@@ -10,7 +20,10 @@ export function heaterLines(r: HeaterResult, system: UnitSystem): { headline: st
   const h = r.heater;
   const e = h.electrical;
   const phase = e.phases === 3 ? 'three-phase' : 'single-phase';
-  const rating = h.selectedRatingKw === null ? 'above the largest catalogue rating' : `catalogue rating ${formatRating(h.selectedRatingKw)} kW`;
+  const rating =
+    h.selectedRatingKw === null
+      ? 'above the largest catalogue rating'
+      : `catalogue rating ${formatRating(h.selectedRatingKw)} kW`;
   const cpMean: Shown = showCp(h.cpMeanJPerKgK, system);
   const flagged = Math.abs(h.temperatureRiseK) > 200 ? ' (rise above 200 K: do not use the estimate)' : '';
   return {

@@ -21,9 +21,14 @@ function dutyPoint(r: SizingResult, system: UnitSystem): string[] {
  * severity, basis and the preliminary statement, in that order.
  */
 export function buildSummary(r: SizingResult, system: UnitSystem, link?: string): string {
-  const title = r.service === 'heater' ? 'Electric process gas heater' : `Gas compressor, ${r.compressor.stageCount} stage${r.compressor.stageCount > 1 ? 's' : ''}`;
+  const title =
+    r.service === 'heater'
+      ? 'Electric process gas heater'
+      : `Gas compressor, ${r.compressor.stageCount} stage${r.compressor.stageCount > 1 ? 's' : ''}`;
   const lines = r.service === 'heater' ? heaterLines(r, system) : compressorLines(r, system);
-  const warnings = groupWarnings(r.warnings).flatMap((g) => g.warnings.map((w) => `- ${SEVERITY_LABEL[g.severity].toUpperCase()}: ${w.message}`));
+  const warnings = groupWarnings(r.warnings).flatMap((g) =>
+    g.warnings.map((w) => `- ${SEVERITY_LABEL[g.severity].toUpperCase()}: ${w.message}`),
+  );
   const b = r.basis;
   const out = [
     `Dutywise sizing summary (PRELIMINARY): ${title}`,

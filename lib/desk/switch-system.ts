@@ -39,7 +39,10 @@ export function switchUnitSystem(
   let next = values;
   const skipped: QuantityPath[] = [];
   const nextExact: ExactValues = { ...exact };
-  for (const [path, kind] of Object.entries(QUANTITY_FIELDS) as [QuantityPath, (typeof QUANTITY_FIELDS)[QuantityPath]][]) {
+  for (const [path, kind] of Object.entries(QUANTITY_FIELDS) as [
+    QuantityPath,
+    (typeof QUANTITY_FIELDS)[QuantityPath],
+  ][]) {
     const q = quantityAt(values, path);
     const unit = systemUnitFor(kind, q.unit, system);
     const r = switchUnitValue(kind, q.value, q.unit, unit, ctx, exact[path]);

@@ -14,7 +14,8 @@ function gasOf(g: DeskValues['gas']): GasRequest {
       if (!row.species || blank(row.fraction)) continue;
       // A species listed twice is summed, as a pasted analysis would mean.
       const prior = components[row.species];
-      components[row.species] = prior === undefined ? row.fraction.trim() : String(Number(prior) + Number(row.fraction));
+      components[row.species] =
+        prior === undefined ? row.fraction.trim() : String(Number(prior) + Number(row.fraction));
     }
     return g.basis === 'mass' ? { components, basis: 'mass' } : { components };
   }
@@ -56,11 +57,17 @@ export function toRequest(v: DeskValues): SizingRequest {
     ...common,
     dischargePressure: trimmed(v.dischargePressure),
     stages: v.stages,
-    ...(v.efficiencyKind === 'polytropic' ? { polytropicEfficiency: efficiency } : { isentropicEfficiency: efficiency }),
-    ...(blank(v.intercoolerOutletTemperature.value) ? {} : { intercoolerOutletTemperature: trimmed(v.intercoolerOutletTemperature) }),
+    ...(v.efficiencyKind === 'polytropic'
+      ? { polytropicEfficiency: efficiency }
+      : { isentropicEfficiency: efficiency }),
+    ...(blank(v.intercoolerOutletTemperature.value)
+      ? {}
+      : { intercoolerOutletTemperature: trimmed(v.intercoolerOutletTemperature) }),
     interstagePressureDropPercent: v.interstagePressureDropPercent.trim(),
     mechanicalEfficiency: v.mechanicalEfficiency.trim(),
     method: v.method,
-    ...(blank(v.dischargeTemperatureLimit.value) ? {} : { dischargeTemperatureLimit: trimmed(v.dischargeTemperatureLimit) }),
+    ...(blank(v.dischargeTemperatureLimit.value)
+      ? {}
+      : { dischargeTemperatureLimit: trimmed(v.dischargeTemperatureLimit) }),
   };
 }

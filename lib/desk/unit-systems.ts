@@ -1,25 +1,59 @@
 import {
-  ABSOLUTE_PRESSURE_UNITS, ACTUAL_FLOW_UNITS, GAUGE_PRESSURE_UNITS, MASS_FLOW_UNITS, STANDARD_FLOW_UNITS,
-  TEMPERATURE_UNITS, isUnitOf,
+  ABSOLUTE_PRESSURE_UNITS,
+  ACTUAL_FLOW_UNITS,
+  GAUGE_PRESSURE_UNITS,
+  MASS_FLOW_UNITS,
+  STANDARD_FLOW_UNITS,
+  TEMPERATURE_UNITS,
+  isUnitOf,
 } from '@/lib/units';
 import type { FieldKind } from './form-types';
 
 export type UnitSystem = 'si' | 'us';
 
 /** Families a unit belongs to; switching the unit system keeps the family (gauge stays gauge). */
-export type UnitFamily = 'massFlow' | 'standardFlow' | 'actualFlow' | 'temperature' | 'gaugePressure' | 'absolutePressure' | 'barometric';
+export type UnitFamily =
+  'massFlow' | 'standardFlow' | 'actualFlow' | 'temperature' | 'gaugePressure' | 'absolutePressure' | 'barometric';
 
 /** Each system's unit per family: what the desk shows before anyone overrides a field [cp]. */
 export const SYSTEM_UNITS: Readonly<Record<UnitSystem, Readonly<Record<UnitFamily, string>>>> = {
-  si: { massFlow: 'kg/h', standardFlow: 'Nm3/h', actualFlow: 'm3/h', temperature: 'degC', gaugePressure: 'barg', absolutePressure: 'bar', barometric: 'kPa' },
-  us: { massFlow: 'lb/h', standardFlow: 'SCFM', actualFlow: 'ACFM', temperature: 'degF', gaugePressure: 'psig', absolutePressure: 'psia', barometric: 'psia' },
+  si: {
+    massFlow: 'kg/h',
+    standardFlow: 'Nm3/h',
+    actualFlow: 'm3/h',
+    temperature: 'degC',
+    gaugePressure: 'barg',
+    absolutePressure: 'bar',
+    barometric: 'kPa',
+  },
+  us: {
+    massFlow: 'lb/h',
+    standardFlow: 'SCFM',
+    actualFlow: 'ACFM',
+    temperature: 'degF',
+    gaugePressure: 'psig',
+    absolutePressure: 'psia',
+    barometric: 'psia',
+  },
 };
 
 const LABELS: Readonly<Record<string, string>> = {
-  degC: '°C', degF: '°F', K: 'K', degR: '°R',
-  'Nm3/h': 'Nm³/h', 'Sm3/h': 'Sm³/h', 'm3/h': 'm³/h (actual)', ACFM: 'ACFM (actual)',
-  kPa: 'kPa abs', MPa: 'MPa abs', Pa: 'Pa abs', bar: 'bar abs', psia: 'psia',
-  kPag: 'kPa g', barg: 'bar g', psig: 'psig',
+  degC: '°C',
+  degF: '°F',
+  K: 'K',
+  degR: '°R',
+  'Nm3/h': 'Nm³/h',
+  'Sm3/h': 'Sm³/h',
+  'm3/h': 'm³/h (actual)',
+  ACFM: 'ACFM (actual)',
+  kPa: 'kPa abs',
+  MPa: 'MPa abs',
+  Pa: 'Pa abs',
+  bar: 'bar abs',
+  psia: 'psia',
+  kPag: 'kPa g',
+  barg: 'bar g',
+  psig: 'psig',
 };
 
 /** How a unit reads beside a number: "°C", "Nm³/h", "bar g", "kPa abs". */
@@ -59,7 +93,18 @@ export function systemUnitFor(kind: FieldKind, unit: string, system: UnitSystem)
   return SYSTEM_UNITS[system][unitFamily(kind, unit)];
 }
 
-const US_UNITS: ReadonlySet<string> = new Set(['degF', 'degR', 'psia', 'psig', 'lb/h', 'lb/s', 'SCFM', 'SCFH', 'MMSCFD', 'ACFM']);
+const US_UNITS: ReadonlySet<string> = new Set([
+  'degF',
+  'degR',
+  'psia',
+  'psig',
+  'lb/h',
+  'lb/s',
+  'SCFM',
+  'SCFH',
+  'MMSCFD',
+  'ACFM',
+]);
 
 /** The system most of a request's units belong to (inlet state and flow), for someone with no saved preference. */
 export function systemOfUnits(units: readonly string[]): UnitSystem {

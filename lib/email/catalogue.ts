@@ -2,15 +2,35 @@
 // Fields ending in Url are absolute, or app paths such as /billing that rendering resolves against APP_URL.
 export type EmailProps = {
   invitation: { accountName: string; inviterName: string; inviteUrl: string; expiresInDays: number };
-  'quote-sent': { accountName: string; quoteNumber: string; quoteTitle: string; senderName: string; quoteUrl: string; lines: { title: string; tag: string | null; headline: string; quantity: number }[] };
-  'datasheet-issued': { accountName: string; datasheetNumber: string; revision: string; sizingTitle: string; equipmentTag: string | null; datasheetUrl: string };
+  'quote-sent': {
+    accountName: string;
+    quoteNumber: string;
+    quoteTitle: string;
+    senderName: string;
+    quoteUrl: string;
+    lines: { title: string; tag: string | null; headline: string; quantity: number }[];
+  };
+  'datasheet-issued': {
+    accountName: string;
+    datasheetNumber: string;
+    revision: string;
+    sizingTitle: string;
+    equipmentTag: string | null;
+    datasheetUrl: string;
+  };
   'payment-failed': { accountName: string; billingUrl: string; graceDays: number };
   'subscription-ending': { accountName: string; periodEnd: string; billingUrl: string };
 };
 
 export type EmailTemplate = keyof EmailProps;
 
-export const emailTemplates = ['invitation', 'quote-sent', 'datasheet-issued', 'payment-failed', 'subscription-ending'] as const satisfies readonly EmailTemplate[];
+export const emailTemplates = [
+  'invitation',
+  'quote-sent',
+  'datasheet-issued',
+  'payment-failed',
+  'subscription-ending',
+] as const satisfies readonly EmailTemplate[];
 
 export function subjectFor<T extends EmailTemplate>(template: T, props: EmailProps[T]): string {
   switch (template) {

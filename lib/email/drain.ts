@@ -3,7 +3,15 @@ import { hostname } from 'node:os';
 import { env } from '@/lib/env';
 import { logger } from '@/lib/log/logger';
 import { emailTemplates, type EmailTemplate } from './catalogue';
-import { claimDue, buryAbandoned, LOCK_SECONDS, markFailed, markSent, releaseUntried, type ClaimedEmail } from './outbox-claims';
+import {
+  claimDue,
+  buryAbandoned,
+  LOCK_SECONDS,
+  markFailed,
+  markSent,
+  releaseUntried,
+  type ClaimedEmail,
+} from './outbox-claims';
 import { EmailInputError } from './props-schema';
 import { renderEmail, type RenderedEmail } from './render';
 import { getTransport, messageIdFor } from './transport';
@@ -36,14 +44,22 @@ function describe(error: unknown): string {
 }
 
 async function renderRow(row: ClaimedEmail) {
-  if (!(emailTemplates as readonly string[]).includes(row.template)) throw new EmailInputError(`template: unknown e-mail template "${row.template}"`);
+  if (!(emailTemplates as readonly string[]).includes(row.template))
+    throw new EmailInputError(`template: unknown e-mail template "${row.template}"`);
   return renderEmail(row.template as EmailTemplate, row.payload);
 }
 
 async function sendRow(row: ClaimedEmail, rendered: RenderedEmail): Promise<string> {
   const messageId = messageIdFor(row.id);
   // The Message-ID comes from the row, so a resend after a crash is the same message to the receiver.
-  const info = await getTransport().sendMail({ from: env.MAIL_FROM, to: row.toAddress, subject: row.subject, html: rendered.html, text: rendered.text, messageId });
+  const info = await getTransport().sendMail({
+    from: env.MAIL_FROM,
+    to: row.toAddress,
+    subject: row.subject,
+    html: rendered.html,
+    text: rendered.text,
+    messageId,
+  });
   return info.messageId || messageId;
 }
 

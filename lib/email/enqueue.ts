@@ -62,7 +62,10 @@ export async function enqueueEmail<T extends EmailTemplate>(tx: Tx, input: Enque
     })
     .onConflictDoNothing();
   if (problem) {
-    logger.error({ component: 'outbox', template: input.template, entity: input.entity, err: problem }, 'e-mail cannot be sent; stored as dead');
+    logger.error(
+      { component: 'outbox', template: input.template, entity: input.entity, err: problem },
+      'e-mail cannot be sent; stored as dead',
+    );
     return;
   }
   await tx.execute(sql`select pg_notify(${outboxChannel}, '')`);

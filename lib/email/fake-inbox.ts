@@ -7,11 +7,25 @@ import { env } from '@/lib/env';
 const TIMEOUT_MS = 2_000;
 const SHOWN = 50;
 
-const summarySchema = z.object({ id: z.string(), receivedAt: z.string(), to: z.array(z.string()), subject: z.string(), messageId: z.string().nullable() });
+const summarySchema = z.object({
+  id: z.string(),
+  receivedAt: z.string(),
+  to: z.array(z.string()),
+  subject: z.string(),
+  messageId: z.string().nullable(),
+});
 const listSchema = z.object({ data: z.array(summarySchema) });
 const detailSchema = summarySchema.extend({ text: z.string().nullable() });
 
-export type FakeInboxMessage = { id: string; receivedAt: string; to: string[]; subject: string; messageId: string | null; text: string | null; htmlUrl: string };
+export type FakeInboxMessage = {
+  id: string;
+  receivedAt: string;
+  to: string[];
+  subject: string;
+  messageId: string | null;
+  text: string | null;
+  htmlUrl: string;
+};
 
 export type FakeInbox =
   | { state: 'unconfigured' }
@@ -34,13 +48,24 @@ export async function readFakeInbox(baseUrl: string | undefined = env.MAIL_FAKE_
     // The list leaves bodies out; fetch each shown message's text (loopback, at most SHOWN calls).
     const messages = await Promise.all(
       newest.map(async (m) => {
-        const detail = detailSchema.safeParse(await getJson(`${base}/messages/${encodeURIComponent(m.id)}`).catch(() => null));
-        return { ...m, text: detail.success ? detail.data.text : null, htmlUrl: `${base}/messages/${encodeURIComponent(m.id)}/html` };
+        const detail = detailSchema.safeParse(
+          await getJson(`${base}/messages/${encodeURIComponent(m.id)}`).catch(() => null),
+        );
+        return {
+          ...m,
+          text: detail.success ? detail.data.text : null,
+          htmlUrl: `${base}/messages/${encodeURIComponent(m.id)}/html`,
+        };
       }),
     );
     return { state: 'ok', url: base, total: list.data.length, messages };
   } catch (error) {
-    const reason = error instanceof z.ZodError ? 'it answered with something other than the inbox API' : error instanceof Error ? error.message : String(error);
+    const reason =
+      error instanceof z.ZodError
+        ? 'it answered with something other than the inbox API'
+        : error instanceof Error
+          ? error.message
+          : String(error);
     return { state: 'unreachable', url: base, reason };
   }
 }

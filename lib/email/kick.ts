@@ -12,7 +12,12 @@ export function kickOutbox(limit = 5): void {
   // One kick at a time per process; SKIP LOCKED already keeps kicks and workers from double-sending.
   if (inFlight) return;
   inFlight = drainOutbox({ limit, workerId: `kick-${process.pid}` })
-    .catch((error: unknown) => logger.warn({ component: 'outbox', err: error instanceof Error ? error.message : String(error) }, 'outbox kick failed'))
+    .catch((error: unknown) =>
+      logger.warn(
+        { component: 'outbox', err: error instanceof Error ? error.message : String(error) },
+        'outbox kick failed',
+      ),
+    )
     .finally(() => {
       inFlight = null;
     });

@@ -14,7 +14,14 @@ export function retryDelaySeconds(attempts: number): number {
   return Math.min(FIRST_RETRY_S * 2 ** Math.max(0, attempts - 1), MAX_RETRY_S);
 }
 
-export type ClaimedEmail = { id: string; template: string; toAddress: string; subject: string; payload: unknown; attempts: number };
+export type ClaimedEmail = {
+  id: string;
+  template: string;
+  toAddress: string;
+  subject: string;
+  payload: unknown;
+  attempts: number;
+};
 
 /** The clock the queue runs on: the database's, unless a caller (a test) supplies one. */
 export function clock(now: Date | undefined): SQL {
@@ -29,7 +36,14 @@ export function clock(now: Date | undefined): SQL {
 export async function claimDue(limit: number, now: Date | undefined, toAddressLike?: string): Promise<ClaimedEmail[]> {
   const at = clock(now);
   const scope = toAddressLike ? sql`and to_address like ${toAddressLike}` : sql``;
-  const res = await db.execute<{ id: string; template: string; to_address: string; subject: string; payload: unknown; attempts: number }>(sql`
+  const res = await db.execute<{
+    id: string;
+    template: string;
+    to_address: string;
+    subject: string;
+    payload: unknown;
+    attempts: number;
+  }>(sql`
     with due as (
       select id from outbox
       where status = 'pending' and next_attempt_at <= ${at}
@@ -42,7 +56,14 @@ export async function claimDue(limit: number, now: Date | undefined, toAddressLi
     update outbox o set attempts = o.attempts + 1, locked_until = ${at} + make_interval(secs => ${LOCK_SECONDS})
     from due where o.id = due.id
     returning o.id, o.template, o.to_address, o.subject, o.payload, o.attempts`);
-  return res.rows.map((r) => ({ id: r.id, template: r.template, toAddress: r.to_address, subject: r.subject, payload: r.payload, attempts: r.attempts }));
+  return res.rows.map((r) => ({
+    id: r.id,
+    template: r.template,
+    toAddress: r.to_address,
+    subject: r.subject,
+    payload: r.payload,
+    attempts: r.attempts,
+  }));
 }
 
 /** Rows whose last allowed attempt was claimed by a worker that never reported back are given up. */
@@ -59,14 +80,21 @@ export async function buryAbandoned(now: Date | undefined, toAddressLike?: strin
 export async function markSent(id: string, messageId: string, now: Date | undefined): Promise<void> {
   const at = clock(now);
   // Sent wins over anything a slower, stale claim might write later: the guard below keeps it.
-  await db.execute(sql`update outbox set status = 'sent', message_id = ${messageId}, sent_at = ${at}, locked_until = null where id = ${id} and status <> 'sent'`);
+  await db.execute(
+    sql`update outbox set status = 'sent', message_id = ${messageId}, sent_at = ${at}, locked_until = null where id = ${id} and status <> 'sent'`,
+  );
 }
 
 /**
  * Records a failed attempt: retry after the backoff, or dead when attempts are used up or the
  * failure is permanent. Only the claim that made this attempt may write (same attempts count).
  */
-export async function markFailed(row: ClaimedEmail, error: string, permanent: boolean, now: Date | undefined): Promise<'retry' | 'dead'> {
+export async function markFailed(
+  row: ClaimedEmail,
+  error: string,
+  permanent: boolean,
+  now: Date | undefined,
+): Promise<'retry' | 'dead'> {
   const at = clock(now);
   const dead = permanent || row.attempts >= MAX_ATTEMPTS;
   await db.execute(sql`
@@ -79,6 +107,8 @@ export async function markFailed(row: ClaimedEmail, error: string, permanent: bo
 /** Hands back claimed rows that were not tried, without counting an attempt against them. */
 export async function releaseUntried(rows: readonly ClaimedEmail[]): Promise<void> {
   for (const row of rows) {
-    await db.execute(sql`update outbox set locked_until = null, attempts = attempts - 1 where id = ${row.id} and status = 'pending' and attempts = ${row.attempts}`);
+    await db.execute(
+      sql`update outbox set locked_until = null, attempts = attempts - 1 where id = ${row.id} and status = 'pending' and attempts = ${row.attempts}`,
+    );
   }
 }

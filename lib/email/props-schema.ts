@@ -7,16 +7,32 @@ const text = z.string().trim().min(1, 'must not be empty');
 const link = z.string().trim().min(1, 'must be an absolute URL or an app path starting with /');
 
 export const emailPropsSchemas: { [T in EmailTemplate]: z.ZodType<EmailProps[T]> } = {
-  invitation: z.object({ accountName: text, inviterName: text, inviteUrl: link, expiresInDays: z.number().int().min(1).max(365) }),
+  invitation: z.object({
+    accountName: text,
+    inviterName: text,
+    inviteUrl: link,
+    expiresInDays: z.number().int().min(1).max(365),
+  }),
   'quote-sent': z.object({
     accountName: text,
     quoteNumber: text,
     quoteTitle: text,
     senderName: text,
     quoteUrl: link,
-    lines: z.array(z.object({ title: text, tag: z.string().nullable(), headline: z.string(), quantity: z.number().int().min(1) })).max(200),
+    lines: z
+      .array(
+        z.object({ title: text, tag: z.string().nullable(), headline: z.string(), quantity: z.number().int().min(1) }),
+      )
+      .max(200),
   }),
-  'datasheet-issued': z.object({ accountName: text, datasheetNumber: text, revision: text, sizingTitle: text, equipmentTag: z.string().nullable(), datasheetUrl: link }),
+  'datasheet-issued': z.object({
+    accountName: text,
+    datasheetNumber: text,
+    revision: text,
+    sizingTitle: text,
+    equipmentTag: z.string().nullable(),
+    datasheetUrl: link,
+  }),
   'payment-failed': z.object({ accountName: text, billingUrl: link, graceDays: z.number().int().min(0).max(365) }),
   'subscription-ending': z.object({ accountName: text, periodEnd: text, billingUrl: link }),
 };
@@ -37,7 +53,9 @@ function describe(issues: readonly z.core.$ZodIssue[], prefix: string): string {
 
 /** Parses a template's props, throwing EmailInputError that names every bad field. */
 export function parseEmailProps<T extends EmailTemplate>(template: T, props: unknown): EmailProps[T] {
-  const schema: z.ZodType<EmailProps[T]> | undefined = Object.hasOwn(emailPropsSchemas, template) ? emailPropsSchemas[template] : undefined;
+  const schema: z.ZodType<EmailProps[T]> | undefined = Object.hasOwn(emailPropsSchemas, template)
+    ? emailPropsSchemas[template]
+    : undefined;
   if (!schema) throw new EmailInputError(`template: unknown e-mail template "${String(template)}"`);
   const parsed = schema.safeParse(props);
   if (!parsed.success) throw new EmailInputError(`${template} e-mail: ${describe(parsed.error.issues, 'props')}`);
@@ -46,6 +64,9 @@ export function parseEmailProps<T extends EmailTemplate>(template: T, props: unk
 
 export function parseRecipient(to: unknown): string {
   const parsed = recipientSchema.safeParse(to);
-  if (!parsed.success) throw new EmailInputError(`to ${parsed.error.issues[0]?.message ?? 'is not an e-mail address'} (got ${JSON.stringify(to)})`);
+  if (!parsed.success)
+    throw new EmailInputError(
+      `to ${parsed.error.issues[0]?.message ?? 'is not an e-mail address'} (got ${JSON.stringify(to)})`,
+    );
   return parsed.data;
 }

@@ -23,7 +23,8 @@ const components: { [T in EmailTemplate]: (props: EmailProps[T]) => ReactElement
 function absoluteLinks<P extends object>(props: P, appUrl: string): P {
   const out: Record<string, unknown> = { ...(props as Record<string, unknown>) };
   for (const [key, value] of Object.entries(out)) {
-    if (key.endsWith('Url') && typeof value === 'string' && value.startsWith('/')) out[key] = new URL(value, appUrl).toString();
+    if (key.endsWith('Url') && typeof value === 'string' && value.startsWith('/'))
+      out[key] = new URL(value, appUrl).toString();
   }
   return out as P;
 }
@@ -32,7 +33,11 @@ function absoluteLinks<P extends object>(props: P, appUrl: string): P {
  * Renders a template to its subject, HTML and plain-text parts. Props are validated first
  * (stored payloads are untyped jsonb); throws EmailInputError naming the bad field.
  */
-export async function renderEmail<T extends EmailTemplate>(template: T, rawProps: unknown, appUrl: string = env.APP_URL): Promise<RenderedEmail> {
+export async function renderEmail<T extends EmailTemplate>(
+  template: T,
+  rawProps: unknown,
+  appUrl: string = env.APP_URL,
+): Promise<RenderedEmail> {
   const props = absoluteLinks(parseEmailProps(template, rawProps), appUrl);
   const component = components[template] as (p: EmailProps[T]) => ReactElement;
   const html = await render(createElement(component, props));

@@ -33,7 +33,13 @@ let transport: Transporter<SMTPTransport.SentMessageInfo> | undefined;
 /** The process's one SMTP transport, configured from the environment on first use. */
 export function getTransport(): Transporter<SMTPTransport.SentMessageInfo> {
   transport ??= nodemailer.createTransport(
-    smtpOptions({ host: env.SMTP_HOST, port: env.SMTP_PORT, secure: env.SMTP_SECURE, user: env.SMTP_USER, password: env.SMTP_PASSWORD }),
+    smtpOptions({
+      host: env.SMTP_HOST,
+      port: env.SMTP_PORT,
+      secure: env.SMTP_SECURE,
+      user: env.SMTP_USER,
+      password: env.SMTP_PASSWORD,
+    }),
   );
   return transport;
 }

@@ -12,11 +12,22 @@ import { sweepOrphanBlobs } from '@/lib/blob/sweep';
 import { env } from '@/lib/env';
 import { outboxChannel } from './enqueue';
 
-const { values } = parseArgs({ options: { 'interval-ms': { type: 'string', default: '2000' }, limit: { type: 'string', default: '20' }, once: { type: 'boolean', default: false }, 'only-to': { type: 'string' } } });
+const { values } = parseArgs({
+  options: {
+    'interval-ms': { type: 'string', default: '2000' },
+    limit: { type: 'string', default: '20' },
+    once: { type: 'boolean', default: false },
+    'only-to': { type: 'string' },
+  },
+});
 const intervalMs = Number(values['interval-ms']);
 const limit = Number(values.limit);
-if (!Number.isInteger(intervalMs) || intervalMs < 100 || intervalMs > 600_000) throw new Error(`--interval-ms must be a whole number of milliseconds from 100 to 600000 (got ${values['interval-ms']})`);
-if (!Number.isInteger(limit) || limit < 1 || limit > 500) throw new Error(`--limit must be a whole number from 1 to 500 (got ${values.limit})`);
+if (!Number.isInteger(intervalMs) || intervalMs < 100 || intervalMs > 600_000)
+  throw new Error(
+    `--interval-ms must be a whole number of milliseconds from 100 to 600000 (got ${values['interval-ms']})`,
+  );
+if (!Number.isInteger(limit) || limit < 1 || limit > 500)
+  throw new Error(`--limit must be a whole number from 1 to 500 (got ${values.limit})`);
 
 // A LIKE pattern on recipients: tests that share a database run workers over their own mail only.
 const toAddressLike = values['only-to'] || undefined;

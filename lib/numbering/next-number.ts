@@ -25,6 +25,8 @@ export async function nextNumber(tx: Tx, kind: NumberKind): Promise<string> {
 
 /** `count` numbers in one round trip, for batch saves. */
 export async function nextNumbers(tx: Tx, kind: NumberKind, count: number): Promise<string[]> {
-  const res = await tx.execute<{ n: string }>(sql`select nextval(${formats[kind].seq}::regclass)::text as n from generate_series(1, ${count})`);
+  const res = await tx.execute<{ n: string }>(
+    sql`select nextval(${formats[kind].seq}::regclass)::text as n from generate_series(1, ${count})`,
+  );
   return res.rows.map((r) => format(kind, r.n));
 }

@@ -10,7 +10,12 @@ let pending: Promise<boolean> | null = null;
 
 function ping(): Promise<boolean> {
   if (!pool) {
-    pool = new Pool({ connectionString: env.DATABASE_URL, max: 1, connectionTimeoutMillis: 1_500, idleTimeoutMillis: 10_000 });
+    pool = new Pool({
+      connectionString: env.DATABASE_URL,
+      max: 1,
+      connectionTimeoutMillis: 1_500,
+      idleTimeoutMillis: 10_000,
+    });
     // An idle connection dropped by a stopped server must not crash the process; the next ping reports it.
     pool.on('error', () => undefined);
   }

@@ -5,7 +5,10 @@ import { checkHealth, type HealthReport } from './health';
 // Mail older than this in the queue means delivery is stuck (SMTP down or no worker running).
 const STUCK_AFTER_S = 15 * 60;
 
-export type Readiness = HealthReport & { outbox: { pending: number; dead: number; oldestPendingAgeS: number | null; stuck: boolean } | null; ready: boolean };
+export type Readiness = HealthReport & {
+  outbox: { pending: number; dead: number; oldestPendingAgeS: number | null; stuck: boolean } | null;
+  ready: boolean;
+};
 
 /** Ready to take traffic: the database answers and the mail queue is not stuck. */
 export async function checkReadiness(): Promise<Readiness> {

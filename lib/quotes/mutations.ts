@@ -13,7 +13,18 @@ import { formatHeadline } from '@/lib/sizings/headline';
 import type { QuoteCreateInput } from './schema';
 
 async function lockQuote(tx: Tx, user: CurrentUser, quoteId: string) {
-  const [q] = await tx.select({ id: quotes.id, accountId: quotes.accountId, status: quotes.status, number: quotes.number, title: quotes.title }).from(quotes).where(eq(quotes.id, quoteId)).for('update').limit(1);
+  const [q] = await tx
+    .select({
+      id: quotes.id,
+      accountId: quotes.accountId,
+      status: quotes.status,
+      number: quotes.number,
+      title: quotes.title,
+    })
+    .from(quotes)
+    .where(eq(quotes.id, quoteId))
+    .for('update')
+    .limit(1);
   if (!q) throw new ActionError('That quote does not exist.', 404);
   assertAccountAccess(user, q.accountId);
   return q;
@@ -22,39 +33,78 @@ async function lockQuote(tx: Tx, user: CurrentUser, quoteId: string) {
 /** Sizings must belong to the quote's account: a line can never reach into another customer's work. */
 async function assertSizingsInAccount(tx: Tx, accountId: string, sizingIds: string[]) {
   if (!sizingIds.length) return;
-  const found = await tx.select({ id: sizings.id }).from(sizings).where(and(inArray(sizings.id, sizingIds), eq(sizings.accountId, accountId)));
-  if (found.length !== new Set(sizingIds).size) throw new ActionError('Every line must be a sizing saved to this quote’s customer account.', 422, { sizingIds: ['Not all sizings belong to this account.'] });
+  const found = await tx
+    .select({ id: sizings.id })
+    .from(sizings)
+    .where(and(inArray(sizings.id, sizingIds), eq(sizings.accountId, accountId)));
+  if (found.length !== new Set(sizingIds).size)
+    throw new ActionError('Every line must be a sizing saved to this quote’s customer account.', 422, {
+      sizingIds: ['Not all sizings belong to this account.'],
+    });
 }
 
-export async function createQuote(user: CurrentUser, input: QuoteCreateInput, txIn?: Tx): Promise<{ id: string; number: string }> {
+export async function createQuote(
+  user: CurrentUser,
+  input: QuoteCreateInput,
+  txIn?: Tx,
+): Promise<{ id: string; number: string }> {
   assertAccountAccess(user, input.accountId);
   const work = async (tx: Tx) => {
     const [acct] = await tx.select({ id: accounts.id }).from(accounts).where(eq(accounts.id, input.accountId)).limit(1);
     if (!acct) throw new ActionError('That customer account does not exist.', 404, { accountId: ['Unknown account.'] });
     await assertSizingsInAccount(tx, input.accountId, input.sizingIds);
     const number = await nextNumber(tx, 'quote');
-    const [q] = await tx.insert(quotes).values({ number, accountId: input.accountId, title: input.title, notes: input.notes, createdByUserId: user.id }).returning({ id: quotes.id });
+    const [q] = await tx
+      .insert(quotes)
+      .values({ number, accountId: input.accountId, title: input.title, notes: input.notes, createdByUserId: user.id })
+      .returning({ id: quotes.id });
     if (!q) throw new Error('quote insert returned no row');
     if (input.sizingIds.length) {
-      await tx.insert(quoteItems).values(input.sizingIds.map((sizingId, position) => ({ quoteId: q.id, sizingId, position, quantity: 1 })));
+      await tx
+        .insert(quoteItems)
+        .values(input.sizingIds.map((sizingId, position) => ({ quoteId: q.id, sizingId, position, quantity: 1 })));
     }
-    await writeAudit(tx, { actor: user, action: 'quote.created', entityType: 'quote', entityId: q.id, accountId: input.accountId, detail: { number, lines: input.sizingIds.length } });
+    await writeAudit(tx, {
+      actor: user,
+      action: 'quote.created',
+      entityType: 'quote',
+      entityId: q.id,
+      accountId: input.accountId,
+      detail: { number, lines: input.sizingIds.length },
+    });
     return { id: q.id, number };
   };
   return txIn ? work(txIn) : db.transaction(work);
 }
 
-export async function addQuoteItem(user: CurrentUser, quoteId: string, sizingId: string, quantity: number, txIn?: Tx): Promise<void> {
+export async function addQuoteItem(
+  user: CurrentUser,
+  quoteId: string,
+  sizingId: string,
+  quantity: number,
+  txIn?: Tx,
+): Promise<void> {
   const work = async (tx: Tx) => {
     const q = await lockQuote(tx, user, quoteId);
-    if (q.status !== 'draft') throw new ActionError(`Quote ${q.number} is ${q.status}; only draft quotes take new lines.`, 409);
+    if (q.status !== 'draft')
+      throw new ActionError(`Quote ${q.number} is ${q.status}; only draft quotes take new lines.`, 409);
     await assertSizingsInAccount(tx, q.accountId, [sizingId]);
-    const [{ pos } = { pos: 0 }] = await tx.select({ pos: sql<number>`coalesce(max(${quoteItems.position}) + 1, 0)::int` }).from(quoteItems).where(eq(quoteItems.quoteId, quoteId));
+    const [{ pos } = { pos: 0 }] = await tx
+      .select({ pos: sql<number>`coalesce(max(${quoteItems.position}) + 1, 0)::int` })
+      .from(quoteItems)
+      .where(eq(quoteItems.quoteId, quoteId));
     await tx
       .insert(quoteItems)
       .values({ quoteId, sizingId, quantity, position: pos })
       .onConflictDoUpdate({ target: [quoteItems.quoteId, quoteItems.sizingId], set: { quantity } });
-    await writeAudit(tx, { actor: user, action: 'quote.line_added', entityType: 'quote', entityId: quoteId, accountId: q.accountId, detail: { sizingId, quantity } });
+    await writeAudit(tx, {
+      actor: user,
+      action: 'quote.line_added',
+      entityType: 'quote',
+      entityId: quoteId,
+      accountId: q.accountId,
+      detail: { sizingId, quantity },
+    });
   };
   if (txIn) await work(txIn);
   else await db.transaction(work);
@@ -63,30 +113,67 @@ export async function addQuoteItem(user: CurrentUser, quoteId: string, sizingId:
 /** Appends many sizings of the quote's account as lines (batch saves), in the caller's transaction. */
 export async function addQuoteItems(tx: Tx, user: CurrentUser, quoteId: string, sizingIds: string[]): Promise<void> {
   const q = await lockQuote(tx, user, quoteId);
-  if (q.status !== 'draft') throw new ActionError(`Quote ${q.number} is ${q.status}; only draft quotes take new lines.`, 409);
+  if (q.status !== 'draft')
+    throw new ActionError(`Quote ${q.number} is ${q.status}; only draft quotes take new lines.`, 409);
   await assertSizingsInAccount(tx, q.accountId, sizingIds);
-  const [{ pos } = { pos: 0 }] = await tx.select({ pos: sql<number>`coalesce(max(${quoteItems.position}) + 1, 0)::int` }).from(quoteItems).where(eq(quoteItems.quoteId, quoteId));
+  const [{ pos } = { pos: 0 }] = await tx
+    .select({ pos: sql<number>`coalesce(max(${quoteItems.position}) + 1, 0)::int` })
+    .from(quoteItems)
+    .where(eq(quoteItems.quoteId, quoteId));
   for (let i = 0; i < sizingIds.length; i += 1000) {
-    await tx.insert(quoteItems).values(sizingIds.slice(i, i + 1000).map((sizingId, j) => ({ quoteId, sizingId, quantity: 1, position: pos + i + j }))).onConflictDoNothing();
+    await tx
+      .insert(quoteItems)
+      .values(
+        sizingIds.slice(i, i + 1000).map((sizingId, j) => ({ quoteId, sizingId, quantity: 1, position: pos + i + j })),
+      )
+      .onConflictDoNothing();
   }
-  await writeAudit(tx, { actor: user, action: 'quote.lines_added', entityType: 'quote', entityId: quoteId, accountId: q.accountId, detail: { count: sizingIds.length } });
+  await writeAudit(tx, {
+    actor: user,
+    action: 'quote.lines_added',
+    entityType: 'quote',
+    entityId: quoteId,
+    accountId: q.accountId,
+    detail: { count: sizingIds.length },
+  });
 }
 
 export async function removeQuoteItem(user: CurrentUser, quoteId: string, itemId: string): Promise<void> {
   await db.transaction(async (tx) => {
     const q = await lockQuote(tx, user, quoteId);
     if (q.status !== 'draft') throw new ActionError(`Quote ${q.number} is ${q.status}; lines are fixed.`, 409);
-    const res = await tx.delete(quoteItems).where(and(eq(quoteItems.id, itemId), eq(quoteItems.quoteId, quoteId))).returning({ id: quoteItems.id });
+    const res = await tx
+      .delete(quoteItems)
+      .where(and(eq(quoteItems.id, itemId), eq(quoteItems.quoteId, quoteId)))
+      .returning({ id: quoteItems.id });
     if (!res[0]) throw new ActionError('That line is not on this quote.', 404);
-    await writeAudit(tx, { actor: user, action: 'quote.line_removed', entityType: 'quote', entityId: quoteId, accountId: q.accountId, detail: { itemId } });
+    await writeAudit(tx, {
+      actor: user,
+      action: 'quote.line_removed',
+      entityType: 'quote',
+      entityId: quoteId,
+      accountId: q.accountId,
+      detail: { itemId },
+    });
   });
 }
 
-export async function setQuoteStatus(user: CurrentUser, quoteId: string, status: 'draft' | 'sent' | 'won' | 'lost'): Promise<void> {
+export async function setQuoteStatus(
+  user: CurrentUser,
+  quoteId: string,
+  status: 'draft' | 'sent' | 'won' | 'lost',
+): Promise<void> {
   await db.transaction(async (tx) => {
     const q = await lockQuote(tx, user, quoteId);
     await tx.update(quotes).set({ status, updatedAt: new Date() }).where(eq(quotes.id, quoteId));
-    await writeAudit(tx, { actor: user, action: 'quote.status_changed', entityType: 'quote', entityId: quoteId, accountId: q.accountId, detail: { from: q.status, to: status } });
+    await writeAudit(tx, {
+      actor: user,
+      action: 'quote.status_changed',
+      entityType: 'quote',
+      entityId: quoteId,
+      accountId: q.accountId,
+      detail: { from: q.status, to: status },
+    });
   });
 }
 
@@ -94,15 +181,32 @@ export async function setQuoteStatus(user: CurrentUser, quoteId: string, status:
 export async function sendQuote(user: CurrentUser, quoteId: string): Promise<{ to: string }> {
   return db.transaction(async (tx) => {
     const q = await lockQuote(tx, user, quoteId);
-    const [acct] = await tx.select({ name: accounts.name, email: accounts.billingContactEmail }).from(accounts).where(eq(accounts.id, q.accountId)).limit(1);
-    if (!acct?.email) throw new ActionError('The customer account has no billing contact e-mail; add one on the account page first.', 422);
+    const [acct] = await tx
+      .select({ name: accounts.name, email: accounts.billingContactEmail })
+      .from(accounts)
+      .where(eq(accounts.id, q.accountId))
+      .limit(1);
+    if (!acct?.email)
+      throw new ActionError(
+        'The customer account has no billing contact e-mail; add one on the account page first.',
+        422,
+      );
     const lines = await tx
-      .select({ title: sizings.title, tag: sizings.equipmentTag, service: sizings.service, headlineKw: sizings.headlineKw, quantity: quoteItems.quantity })
+      .select({
+        title: sizings.title,
+        tag: sizings.equipmentTag,
+        service: sizings.service,
+        headlineKw: sizings.headlineKw,
+        quantity: quoteItems.quantity,
+      })
       .from(quoteItems)
       .innerJoin(sizings, eq(sizings.id, quoteItems.sizingId))
       .where(eq(quoteItems.quoteId, quoteId));
     if (!lines.length) throw new ActionError('Add at least one sizing before sending the quote.', 422);
-    await tx.update(quotes).set({ status: 'sent', sentAt: new Date(), updatedAt: new Date() }).where(eq(quotes.id, quoteId));
+    await tx
+      .update(quotes)
+      .set({ status: 'sent', sentAt: new Date(), updatedAt: new Date() })
+      .where(eq(quotes.id, quoteId));
     await enqueueEmail(tx, {
       template: 'quote-sent',
       to: acct.email,
@@ -114,10 +218,22 @@ export async function sendQuote(user: CurrentUser, quoteId: string): Promise<{ t
         quoteTitle: q.title,
         senderName: user.name,
         quoteUrl: `${env.APP_URL}/quotes/${quoteId}`,
-        lines: lines.map((l) => ({ title: l.title, tag: l.tag, headline: formatHeadline(l.service, l.headlineKw), quantity: l.quantity })),
+        lines: lines.map((l) => ({
+          title: l.title,
+          tag: l.tag,
+          headline: formatHeadline(l.service, l.headlineKw),
+          quantity: l.quantity,
+        })),
       },
     });
-    await writeAudit(tx, { actor: user, action: 'quote.sent', entityType: 'quote', entityId: quoteId, accountId: q.accountId, detail: { to: acct.email } });
+    await writeAudit(tx, {
+      actor: user,
+      action: 'quote.sent',
+      entityType: 'quote',
+      entityId: quoteId,
+      accountId: q.accountId,
+      detail: { to: acct.email },
+    });
     return { to: acct.email };
   });
 }

@@ -60,7 +60,12 @@ export type QuoteLine = {
   quantity: number;
 };
 
-export type QuoteDetail = QuoteSummary & { notes: string | null; createdByName: string | null; billingContactEmail: string | null; lines: QuoteLine[] };
+export type QuoteDetail = QuoteSummary & {
+  notes: string | null;
+  createdByName: string | null;
+  billingContactEmail: string | null;
+  lines: QuoteLine[];
+};
 
 export async function getQuote(user: CurrentUser, quoteId: string): Promise<QuoteDetail> {
   const [q] = await db

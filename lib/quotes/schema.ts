@@ -4,7 +4,11 @@ export const quoteStatuses = ['draft', 'sent', 'won', 'lost'] as const;
 
 export const quoteCreateSchema = z.object({
   accountId: z.uuid({ message: 'Choose the customer account.' }),
-  title: z.string().trim().min(3, { message: 'Title needs 3 to 160 characters.' }).max(160, { message: 'Title needs 3 to 160 characters.' }),
+  title: z
+    .string()
+    .trim()
+    .min(3, { message: 'Title needs 3 to 160 characters.' })
+    .max(160, { message: 'Title needs 3 to 160 characters.' }),
   notes: z.string().trim().max(4000, { message: 'Notes are limited to 4000 characters.' }).optional(),
   sizingIds: z.array(z.uuid()).max(200).default([]),
 });
@@ -13,7 +17,12 @@ export type QuoteCreateInput = z.output<typeof quoteCreateSchema>;
 export const quoteItemSchema = z.object({
   quoteId: z.uuid(),
   sizingId: z.uuid({ message: 'Choose a saved sizing.' }),
-  quantity: z.coerce.number().int({ message: 'Quantity is a whole number.' }).min(1, { message: 'Quantity must be 1 to 1000.' }).max(1000, { message: 'Quantity must be 1 to 1000.' }).default(1),
+  quantity: z.coerce
+    .number()
+    .int({ message: 'Quantity is a whole number.' })
+    .min(1, { message: 'Quantity must be 1 to 1000.' })
+    .max(1000, { message: 'Quantity must be 1 to 1000.' })
+    .default(1),
 });
 
 export const quoteStatusSchema = z.object({ quoteId: z.uuid(), status: z.enum(quoteStatuses) });

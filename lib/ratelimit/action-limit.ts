@@ -7,5 +7,10 @@ import { clientKey, consumeRate } from './consume';
 export async function limitPublicAction(name: string) {
   const rate = await consumeRate(`${name}:${clientKey(await headers())}`, env.RATE_LIMIT_SIGN_IN_PER_MIN, 60);
   if (rate.allowed) return null;
-  return { ok: false as const, fieldErrors: {}, formError: `Too many attempts; try again in ${rate.retryAfterS} s.`, status: 429 };
+  return {
+    ok: false as const,
+    fieldErrors: {},
+    formError: `Too many attempts; try again in ${rate.retryAfterS} s.`,
+    status: 429,
+  };
 }

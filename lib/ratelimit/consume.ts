@@ -17,7 +17,11 @@ export async function consumeRate(key: string, limit: number, windowS: number): 
     returning count, extract(epoch from now() - window_start)::float8 as age_s`);
   const row = res.rows[0] ?? { count: 1, age_s: 0 };
   const allowed = row.count <= limit;
-  return { allowed, remaining: Math.max(0, limit - row.count), retryAfterS: allowed ? 0 : Math.max(1, Math.ceil(windowS - row.age_s)) };
+  return {
+    allowed,
+    remaining: Math.max(0, limit - row.count),
+    retryAfterS: allowed ? 0 : Math.max(1, Math.ceil(windowS - row.age_s)),
+  };
 }
 
 /** The client address as the nearest trusted proxy reports it; loopback when there is none. */

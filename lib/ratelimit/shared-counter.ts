@@ -11,7 +11,13 @@ const SYNC_MS = 200;
 const EXACT_UP_TO = 1000;
 const MAX_SLOTS = 20_000;
 
-type Slot = { global: number; pending: number; windowEndsMs: number; lastSyncMs: number; inFlight: Promise<void> | null };
+type Slot = {
+  global: number;
+  pending: number;
+  windowEndsMs: number;
+  lastSyncMs: number;
+  inFlight: Promise<void> | null;
+};
 const slots = new Map<string, Slot>();
 
 async function sync(key: string, slot: Slot, windowS: number): Promise<void> {
@@ -37,7 +43,11 @@ function evictExpired(now: number) {
 }
 
 /** Counts one request against `key`; resolves to whether it is within `limit` per `windowS`, and when to retry. */
-export async function consumeShared(key: string, limit: number, windowS: number): Promise<{ allowed: boolean; retryAfterS: number }> {
+export async function consumeShared(
+  key: string,
+  limit: number,
+  windowS: number,
+): Promise<{ allowed: boolean; retryAfterS: number }> {
   const now = Date.now();
   evictExpired(now);
   let slot = slots.get(key);
@@ -46,7 +56,8 @@ export async function consumeShared(key: string, limit: number, windowS: number)
     slots.set(key, slot);
   }
   if (now >= slot.windowEndsMs) slot.global = 0;
-  else if (slot.global >= limit) return { allowed: false, retryAfterS: Math.max(1, Math.ceil((slot.windowEndsMs - now) / 1000)) };
+  else if (slot.global >= limit)
+    return { allowed: false, retryAfterS: Math.max(1, Math.ceil((slot.windowEndsMs - now) / 1000)) };
   slot.pending += 1;
   const nearLimit = limit <= EXACT_UP_TO || slot.global + slot.pending >= limit * 0.9;
   if (nearLimit || now - slot.lastSyncMs >= SYNC_MS) {
@@ -57,5 +68,7 @@ export async function consumeShared(key: string, limit: number, windowS: number)
     else s.inFlight.catch(() => undefined);
   }
   const total = slot.global + slot.pending;
-  return total <= limit ? { allowed: true, retryAfterS: 0 } : { allowed: false, retryAfterS: Math.max(1, Math.ceil((slot.windowEndsMs - now) / 1000)) };
+  return total <= limit
+    ? { allowed: true, retryAfterS: 0 }
+    : { allowed: false, retryAfterS: Math.max(1, Math.ceil((slot.windowEndsMs - now) / 1000)) };
 }

@@ -34,7 +34,8 @@ function commonHeaders(opts: HeaderOptions): { key: string; value: string }[] {
     { key: 'Permissions-Policy', value: 'camera=(), microphone=(), geolocation=(), payment=()' },
     { key: 'Cross-Origin-Opener-Policy', value: 'same-origin' },
   ];
-  if (opts.production && opts.https) headers.push({ key: 'Strict-Transport-Security', value: 'max-age=63072000; includeSubDomains' });
+  if (opts.production && opts.https)
+    headers.push({ key: 'Strict-Transport-Security', value: 'max-age=63072000; includeSubDomains' });
   return headers;
 }
 

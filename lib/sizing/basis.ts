@@ -14,7 +14,11 @@ function info(b: StandardFlowBasis): StandardFlowBasisInfo {
   });
 }
 
-const REPORTED = Object.freeze([info(STANDARD_FLOW_BASES['Nm3/h']), info(STANDARD_FLOW_BASES['Sm3/h']), info(STANDARD_FLOW_BASES.SCFM)]);
+const REPORTED = Object.freeze([
+  info(STANDARD_FLOW_BASES['Nm3/h']),
+  info(STANDARD_FLOW_BASES['Sm3/h']),
+  info(STANDARD_FLOW_BASES.SCFM),
+]);
 const INPUT_BASES = new Map(Object.values(STANDARD_FLOW_BASES).map((b) => [b.unit as string, info(b)]));
 
 export const HEATER_CONVENTIONS: readonly string[] = Object.freeze([

@@ -4,7 +4,10 @@ import { temperatureToK } from '../units/temperature';
 import { UnitError } from '../units/unit-error';
 import { COMPRESSOR_CONVENTIONS, HEATER_CONVENTIONS, buildBasis } from './basis';
 import {
-  DEFAULT_DISCHARGE_LIMIT_K, HYDROGEN_DISCHARGE_LIMIT_K, sizeCompressor, type CompressorCase,
+  DEFAULT_DISCHARGE_LIMIT_K,
+  HYDROGEN_DISCHARGE_LIMIT_K,
+  sizeCompressor,
+  type CompressorCase,
 } from './compressor';
 import { DEFAULT_SUPPLY } from './electrical';
 import { summarizeGas } from './gas-summary';
@@ -32,7 +35,11 @@ const c2 = (k: number) => `${(k - 273.15).toFixed(2)} °C`;
 // Built field by field (no object spread): this runs once per sizing in batches.
 function commonResult(common: ResolvedCommon) {
   const { gas, massFlowKgPerS: m } = common;
-  const ctx = { molarMassKgPerKmol: gas.molarMassKgPerKmol, temperatureK: common.inletTemperatureK, pressurePa: common.inletPressurePa };
+  const ctx = {
+    molarMassKgPerKmol: gas.molarMassKgPerKmol,
+    temperatureK: common.inletTemperatureK,
+    pressurePa: common.inletPressurePa,
+  };
   const { summary, composition } = summarizeGas(gas);
   return {
     engineVersion: ENGINE_VERSION,
@@ -55,7 +62,10 @@ function commonResult(common: ResolvedCommon) {
 function heaterResult(input: HeaterInput, common: ResolvedCommon, issues: SizingIssue[]): HeaterResult {
   const outletK = resolveTemperatureK(input.outletTemperature, 'outletTemperature', issues);
   if (issues.length === 0 && !(outletK >= common.inletTemperatureK + MIN_RISE_K)) {
-    issues.push({ path: 'outletTemperature', message: `outlet ${c2(outletK)} must be above the inlet ${c2(common.inletTemperatureK)} (by at least ${MIN_RISE_K} K): a heater only adds heat` });
+    issues.push({
+      path: 'outletTemperature',
+      message: `outlet ${c2(outletK)} must be above the inlet ${c2(common.inletTemperatureK)} (by at least ${MIN_RISE_K} K): a heater only adds heat`,
+    });
   }
   if (issues.length > 0) throw new SizingInputError(issues);
   const supply = input.supply ?? DEFAULT_SUPPLY;
@@ -92,7 +102,10 @@ function compressorCase(input: CompressorInput, common: ResolvedCommon, issues: 
   const p1 = common.inletPressurePa;
   const p2 = resolvePressurePa(input.dischargePressure, 'dischargePressure', common.barometricPressurePa, issues);
   if (issues.length === 0 && !(p2 >= p1 * MIN_PRESSURE_RATIO)) {
-    issues.push({ path: 'dischargePressure', message: `discharge ${(p2 / 1000).toFixed(3)} kPa abs must be above the suction ${(p1 / 1000).toFixed(3)} kPa abs (pressure ratio at least ${MIN_PRESSURE_RATIO})` });
+    issues.push({
+      path: 'dischargePressure',
+      message: `discharge ${(p2 / 1000).toFixed(3)} kPa abs must be above the suction ${(p1 / 1000).toFixed(3)} kPa abs (pressure ratio at least ${MIN_PRESSURE_RATIO})`,
+    });
   }
   const coolK = input.intercoolerOutletTemperature
     ? resolveTemperatureK(input.intercoolerOutletTemperature, 'intercoolerOutletTemperature', issues)
@@ -103,12 +116,17 @@ function compressorCase(input: CompressorInput, common: ResolvedCommon, issues: 
   const hydrogenRich = (common.gas.moleFractions.H2 ?? 0) >= 0.5;
   const limitK = input.dischargeTemperatureLimit
     ? temperatureToK(input.dischargeTemperatureLimit.value, input.dischargeTemperatureLimit.unit)
-    : hydrogenRich ? HYDROGEN_DISCHARGE_LIMIT_K : DEFAULT_DISCHARGE_LIMIT_K;
+    : hydrogenRich
+      ? HYDROGEN_DISCHARGE_LIMIT_K
+      : DEFAULT_DISCHARGE_LIMIT_K;
   const r = common.gas.gasConstantJPerKgK;
   checkPropertyOverrides(input.k, input.cpJPerKgK, r, issues);
   const eta = [input.isentropicEfficiency, input.polytropicEfficiency].filter((e) => e !== undefined);
   if (eta.length !== 1 || !eta.every((e) => e > 0 && e <= 1)) {
-    issues.push({ path: 'isentropicEfficiency', message: 'give exactly one of isentropicEfficiency or polytropicEfficiency, above 0 and at most 1' });
+    issues.push({
+      path: 'isentropicEfficiency',
+      message: 'give exactly one of isentropicEfficiency or polytropicEfficiency, above 0 and at most 1',
+    });
   }
   if (!(Number.isInteger(input.stages) && input.stages >= 1 && input.stages <= 6)) {
     issues.push({ path: 'stages', message: 'stages must be a whole number from 1 to 6' });
@@ -144,10 +162,13 @@ function compressorResult(input: CompressorInput, common: ResolvedCommon, issues
     compressor = sizeCompressor(c);
   } catch (err) {
     if (!(err instanceof ThermoRangeError)) throw err;
-    throw new SizingInputError([{
-      path: 'dischargePressure',
-      message: 'the predicted discharge temperature is above 6000 K, outside the property data: use more stages or a lower pressure ratio',
-    }]);
+    throw new SizingInputError([
+      {
+        path: 'dischargePressure',
+        message:
+          'the predicted discharge temperature is above 6000 K, outside the property data: use more stages or a lower pressure ratio',
+      },
+    ]);
   }
   const r = commonResult(common);
   return {
@@ -192,12 +213,18 @@ function checkPropertyOverrides(k: number | undefined, cp: number | undefined, r
   const kMax = LIMITS.k.max;
   const cpMin = (r * kMax) / (kMax - 1);
   if (!(cp >= cpMin)) {
-    issues.push({ path: 'cpJPerKgK', message: `cp must be at least ${cpMin.toFixed(1)} J/(kg K) for this gas (R = ${r.toFixed(2)} J/(kg K)): a lower cp implies k = cp/(cp - R) above ${kMax}` });
+    issues.push({
+      path: 'cpJPerKgK',
+      message: `cp must be at least ${cpMin.toFixed(1)} J/(kg K) for this gas (R = ${r.toFixed(2)} J/(kg K)): a lower cp implies k = cp/(cp - R) above ${kMax}`,
+    });
     return;
   }
   if (k === undefined) return;
   const impliedR = (cp * (k - 1)) / k;
   if (Math.abs(impliedR - r) > OVERRIDE_R_TOLERANCE * r) {
-    issues.push({ path: 'cpJPerKgK', message: `k ${k} and cp ${cp} J/(kg K) imply R = cp (k - 1)/k = ${impliedR.toFixed(1)} J/(kg K), but this gas has R = ${r.toFixed(2)} J/(kg K) (cp - cv = R); give one of them, or a pair within ${OVERRIDE_R_TOLERANCE * 100} %` });
+    issues.push({
+      path: 'cpJPerKgK',
+      message: `k ${k} and cp ${cp} J/(kg K) imply R = cp (k - 1)/k = ${impliedR.toFixed(1)} J/(kg K), but this gas has R = ${r.toFixed(2)} J/(kg K) (cp - cv = R); give one of them, or a pair within ${OVERRIDE_R_TOLERANCE * 100} %`,
+    });
   }
 }

@@ -6,7 +6,9 @@ import {
   temperatureFromEntropy as temperatureFromEntropyImported,
 } from '../thermo/inversion';
 import {
-  cpMass as cpMassImported, enthalpyMass as enthalpyMassImported, standardEntropyMass as standardEntropyMassImported,
+  cpMass as cpMassImported,
+  enthalpyMass as enthalpyMassImported,
+  standardEntropyMass as standardEntropyMassImported,
 } from '../thermo/properties';
 
 // Imports used per call, re-bound to module constants once: under tsx's CommonJS output every use of an
@@ -37,13 +39,27 @@ export function newStageState(): StageState {
  * temperature. With only one override the other follows from cp - cv = R.
  */
 export function constantKProperties(
-  gas: GasModel, inletK: number, kOverride: number | null, cpOverride: number | null, out: StageState,
+  gas: GasModel,
+  inletK: number,
+  kOverride: number | null,
+  cpOverride: number | null,
+  out: StageState,
 ): void {
   const r = gas.gasConstantJPerKgK;
-  if (kOverride !== null && cpOverride !== null) { out.k = kOverride; out.cpJPerKgK = cpOverride; }
-  else if (kOverride !== null) { out.k = kOverride; out.cpJPerKgK = (r * kOverride) / (kOverride - 1); }
-  else if (cpOverride !== null) { out.cpJPerKgK = cpOverride; out.k = cpOverride / (cpOverride - r); }
-  else { const cp = cpMass(gas, inletK); out.cpJPerKgK = cp; out.k = cp / (cp - r); }
+  if (kOverride !== null && cpOverride !== null) {
+    out.k = kOverride;
+    out.cpJPerKgK = cpOverride;
+  } else if (kOverride !== null) {
+    out.k = kOverride;
+    out.cpJPerKgK = (r * kOverride) / (kOverride - 1);
+  } else if (cpOverride !== null) {
+    out.cpJPerKgK = cpOverride;
+    out.k = cpOverride / (cpOverride - r);
+  } else {
+    const cp = cpMass(gas, inletK);
+    out.cpJPerKgK = cp;
+    out.k = cp / (cp - r);
+  }
 }
 
 /**
@@ -86,6 +102,11 @@ export function isentropicFromPolytropic(polytropicEfficiency: number, ratio: nu
 }
 
 /** Equal pressure ratio per stage with a fractional pressure drop at each of the N-1 intercoolers. */
-export function stagePressureRatio(stages: number, suctionPa: number, dischargePa: number, dropFraction: number): number {
+export function stagePressureRatio(
+  stages: number,
+  suctionPa: number,
+  dischargePa: number,
+  dropFraction: number,
+): number {
   return Math.pow(dischargePa / (suctionPa * Math.pow(1 - dropFraction, stages - 1)), 1 / stages);
 }

@@ -2,8 +2,12 @@ import { ZERO_CELSIUS_K } from '../thermo/constants';
 import type { GasModel } from '../thermo/gas-model';
 import { enthalpyMass as enthalpyMassImported } from '../thermo/properties';
 import {
-  constantKProperties as constantKPropertiesImported, constantKStage as constantKStageImported, newStageState,
-  stagePressureRatio as stagePressureRatioImported, variableCpStage as variableCpStageImported, type StageState,
+  constantKProperties as constantKPropertiesImported,
+  constantKStage as constantKStageImported,
+  newStageState,
+  stagePressureRatio as stagePressureRatioImported,
+  variableCpStage as variableCpStageImported,
+  type StageState,
 } from './compression';
 import type { CompressionMethodResult, CompressorStage } from './result-types';
 
@@ -71,7 +75,8 @@ export function maxDischargeK(c: TrainCase, method: Method, stages: number, eta:
 function coolerDutyKw(c: TrainCase, method: Method, fromK: number, toK: number, cpJPerKgK: number): number {
   if (!(fromK > toK)) return 0;
   // Constant-k keeps the stage's cp for its cooler, variable-cp integrates h.
-  const dh = method === 'variable-cp' ? enthalpyMass(c.gas, fromK) - enthalpyMass(c.gas, toK) : cpJPerKgK * (fromK - toK);
+  const dh =
+    method === 'variable-cp' ? enthalpyMass(c.gas, fromK) - enthalpyMass(c.gas, toK) : cpJPerKgK * (fromK - toK);
   return (c.massFlowKgPerS * dh) / 1000;
 }
 
@@ -116,7 +121,13 @@ export function runTrain(c: TrainCase, method: Method, stages: number, eta: numb
       inletK = nextK;
       inletPa = dischargePa * (1 - c.interstageDropFraction);
     } else if (c.aftercoolerOutletTemperatureK !== null) {
-      aftercoolerDutyKw = coolerDutyKw(c, method, s.dischargeK, Math.min(c.aftercoolerOutletTemperatureK, s.dischargeK), s.cpJPerKgK);
+      aftercoolerDutyKw = coolerDutyKw(
+        c,
+        method,
+        s.dischargeK,
+        Math.min(c.aftercoolerOutletTemperatureK, s.dischargeK),
+        s.cpJPerKgK,
+      );
     }
   }
   const first = out[0]!;

@@ -1,11 +1,16 @@
 import { ZERO_CELSIUS_K } from '../thermo/constants';
 import { ThermoRangeError } from '../thermo/errors';
 import {
-  constantKProperties as constantKPropertiesImported, isentropicFromPolytropic as isentropicFromPolytropicImported,
-  newStageState, stagePressureRatio as stagePressureRatioImported,
+  constantKProperties as constantKPropertiesImported,
+  isentropicFromPolytropic as isentropicFromPolytropicImported,
+  newStageState,
+  stagePressureRatio as stagePressureRatioImported,
 } from './compression';
 import {
-  maxDischargeK as maxDischargeKImported, runTrain as runTrainImported, type Method, type TrainCase,
+  maxDischargeK as maxDischargeKImported,
+  runTrain as runTrainImported,
+  type Method,
+  type TrainCase,
 } from './compressor-train';
 import { lineCurrentA } from './electrical';
 import { selectMotor } from './motor-ratings';
@@ -114,6 +119,7 @@ export function sizeCompressor(c: CompressorCase): CompressorBlock {
     lineCurrentA: driveResult?.lineCurrentA ?? null,
     dischargeTemperatureLimitC: c.dischargeLimitK - KELVIN_OFFSET,
     suggestedStages: suggestStages(c),
-    dischargeActualFlowM3PerH: (3600 * c.massFlowKgPerS * c.gas.gasConstantJPerKgK * lastDischargeK) / c.dischargePressurePa,
+    dischargeActualFlowM3PerH:
+      (3600 * c.massFlowKgPerS * c.gas.gasConstantJPerKgK * lastDischargeK) / c.dischargePressurePa,
   };
 }

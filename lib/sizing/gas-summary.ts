@@ -14,7 +14,12 @@ function compositionText(gas: GasModel): string {
     (id) => `${id} ${Number((gas.moleFractions[id] ?? 0).toPrecision(6))}`,
   );
   const preset = GAS_PRESETS.find((p) => `preset:${p.id}` === gas.key);
-  const source = preset?.id === 'air' || gas.key.startsWith('humid-') ? `; ${DRY_AIR_SOURCE}` : preset?.note ? `; ${preset.note}` : '';
+  const source =
+    preset?.id === 'air' || gas.key.startsWith('humid-')
+      ? `; ${DRY_AIR_SOURCE}`
+      : preset?.note
+        ? `; ${preset.note}`
+        : '';
   return `mole fractions ${parts.join(', ')}${source}`;
 }
 

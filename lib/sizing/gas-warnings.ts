@@ -56,7 +56,8 @@ function buildGasWarnings(gas: GasModel): SizingWarning[] {
     out.push({
       code: 'flammable-gas',
       severity: 'danger',
-      message: `Flammable gas (${percentList(gas, FLAMMABLE)}): the installation is normally in a classified hazardous area; ` +
+      message:
+        `Flammable gas (${percentList(gas, FLAMMABLE)}): the installation is normally in a classified hazardous area; ` +
         'equipment, purging, venting and relief must suit it under local codes.',
     });
     if (o2 >= FUEL_THRESHOLD) {
@@ -71,21 +72,24 @@ function buildGasWarnings(gas: GasModel): SizingWarning[] {
     out.push({
       code: 'oxygen-service',
       severity: 'danger',
-      message: `Oxygen-enriched gas (O2 ${(100 * o2).toPrecision(3)} %): heat of compression, friction, particles and contamination (oil, grease) are ignition sources; ` +
+      message:
+        `Oxygen-enriched gas (O2 ${(100 * o2).toPrecision(3)} %): heat of compression, friction, particles and contamination (oil, grease) are ignition sources; ` +
         'materials, cleaning and velocities must suit oxygen service (ASTM G88) and lower discharge-temperature limits apply (EIGA practice).',
     });
   } else if (o2 < OXYGEN_DEFICIENT) {
     out.push({
       code: 'asphyxiation',
       severity: 'caution',
-      message: 'The gas is oxygen-deficient: a leak into an enclosed space can asphyxiate without warning. Ventilate and monitor oxygen.',
+      message:
+        'The gas is oxygen-deficient: a leak into an enclosed space can asphyxiate without warning. Ventilate and monitor oxygen.',
     });
   }
   if (h2 >= FUEL_THRESHOLD) {
     out.push({
       code: 'hydrogen',
       severity: 'warning',
-      message: `Hydrogen (${(100 * h2).toPrecision(3)} %): wide flammable range, very low ignition energy, invisible flame, leaks easily and embrittles steels; ` +
+      message:
+        `Hydrogen (${(100 * h2).toPrecision(3)} %): wide flammable range, very low ignition energy, invisible flame, leaks easily and embrittles steels; ` +
         'piping to ASME B31.12 practice. Reciprocating compressors in hydrogen-rich service are limited to about 135 °C discharge (API 618).',
     });
   }

@@ -2,7 +2,9 @@ import { ZERO_CELSIUS_K } from '../thermo/constants';
 import type { GasModel } from '../thermo/gas-model';
 import { cpMass as cpMassImported, enthalpyMass as enthalpyMassImported } from '../thermo/properties';
 import {
-  SUBDIVISION_LIMIT_A, continuousCurrentA as continuousCurrentAImported, lineCurrentA as lineCurrentAImported,
+  SUBDIVISION_LIMIT_A,
+  continuousCurrentA as continuousCurrentAImported,
+  lineCurrentA as lineCurrentAImported,
 } from './electrical';
 import { propertyPoint as propertyPointImported } from './property-point';
 import { selectRating as selectRatingImported } from './ratings';
@@ -87,6 +89,10 @@ export function sizeHeater(c: HeaterCase): HeaterBlock {
       subdivisionRequired: currentA > SUBDIVIDE_ABOVE_A,
     },
     outletActualFlowM3PerH: (3600 * m * gas.gasConstantJPerKgK * t2) / c.pressurePa,
-    properties: { inlet: propertyPoint(gas, t1), outlet: propertyPoint(gas, t2), mean: propertyPoint(gas, meanK, cpMean) },
+    properties: {
+      inlet: propertyPoint(gas, t1),
+      outlet: propertyPoint(gas, t2),
+      mean: propertyPoint(gas, meanK, cpMean),
+    },
   };
 }

@@ -6,7 +6,9 @@ import { sizingRequestSchema } from './schema';
 /** Validates `input` against the request schema and sizes it; throws SizingInputError listing every bad field. */
 export function calculate(input: unknown): SizingResult {
   if (typeof input !== 'object' || input === null || Array.isArray(input)) {
-    throw new SizingInputError([{ path: '', message: 'the request must be a JSON object with a "service" field ("heater" or "compressor")' }]);
+    throw new SizingInputError([
+      { path: '', message: 'the request must be a JSON object with a "service" field ("heater" or "compressor")' },
+    ]);
   }
   const parsed = sizingRequestSchema.safeParse(input);
   if (!parsed.success) throw new SizingInputError(issuesFromZod(parsed.error));
@@ -17,21 +19,53 @@ export function calculate(input: unknown): SizingResult {
 export { ENGINE_VERSION, calculateCore } from './calculate-core';
 export { SizingInputError, issuesFromZod, type SizingIssue } from './input-error';
 export {
-  LIMITS, compressorRequestSchema, heaterRequestSchema, sizingRequestSchema, type CompressorInput, type GasInput,
-  type HeaterInput, type QuantityInput, type SizingInput, type SizingRequest,
+  LIMITS,
+  compressorRequestSchema,
+  heaterRequestSchema,
+  sizingRequestSchema,
+  type CompressorInput,
+  type GasInput,
+  type HeaterInput,
+  type QuantityInput,
+  type SizingInput,
+  type SizingRequest,
 } from './schema';
 export type {
-  BasisInfo, CompressionMethodResult, CompressorBlock, CompressorResult, CompressorStage, FlowSummary, GasSummary,
-  HeaterBlock, HeaterElectrical, HeaterResult, MotorDrive, MotorSelection, PropertyPoint, Severity, SizingResult,
-  SizingWarning, StandardFlowBasisInfo,
+  BasisInfo,
+  CompressionMethodResult,
+  CompressorBlock,
+  CompressorResult,
+  CompressorStage,
+  FlowSummary,
+  GasSummary,
+  HeaterBlock,
+  HeaterElectrical,
+  HeaterResult,
+  MotorDrive,
+  MotorSelection,
+  PropertyPoint,
+  Severity,
+  SizingResult,
+  SizingWarning,
+  StandardFlowBasisInfo,
 } from './result-types';
 export { sizeHeater, absorbedDutyKw, averageCpDutyKw, DESIGN_DUTY_CONVENTION, type HeaterCase } from './heater';
 export {
-  sizeCompressor, suggestStages, DEFAULT_DISCHARGE_LIMIT_K, DEFAULT_MECHANICAL_EFFICIENCY, type CompressorCase,
+  sizeCompressor,
+  suggestStages,
+  DEFAULT_DISCHARGE_LIMIT_K,
+  DEFAULT_MECHANICAL_EFFICIENCY,
+  type CompressorCase,
 } from './compressor';
 export { isentropicFromPolytropic, stagePressureRatio } from './compression';
 export { DEFAULT_HEATER_RATINGS_KW, selectRating } from './ratings';
 export { IEC_MOTOR_RATINGS_KW, NEMA_MOTOR_RATINGS_HP, MOTOR_MARGIN_PERCENT, selectMotor } from './motor-ratings';
-export { CONTINUOUS_LOAD_FACTOR, DEFAULT_SUPPLY, SUBDIVISION_LIMIT_A, continuousCurrentA, lineCurrentA } from './electrical';
+export {
+  CONTINUOUS_LOAD_FACTOR,
+  DEFAULT_SUPPLY,
+  SUBDIVISION_LIMIT_A,
+  continuousCurrentA,
+  lineCurrentA,
+} from './electrical';
 export { GAS_PRESETS, type GasPreset } from '../thermo/presets';
 export { UNITS_BY_KIND } from '../units';

@@ -35,7 +35,8 @@ export function issuesFromZod(error: z.ZodError): SizingIssue[] {
   for (const issue of error.issues) {
     const base = joinPath(issue.path);
     if (issue.code === 'unrecognized_keys') {
-      for (const key of issue.keys) add(base ? `${base}.${key}` : key, 'unknown field; check the spelling against the documented request');
+      for (const key of issue.keys)
+        add(base ? `${base}.${key}` : key, 'unknown field; check the spelling against the documented request');
     } else if (issue.code === 'invalid_type' && issue.message.endsWith('received undefined')) {
       add(base, `required (${issue.expected})`);
     } else {

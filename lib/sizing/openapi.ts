@@ -11,15 +11,30 @@ const stage = {
   type: 'object',
   required: ['stage', 'pressureRatio', 'inletTemperatureC', 'dischargeTemperatureC', 'gasPowerKw'],
   properties: Object.fromEntries(
-    ['stage', 'pressureRatio', 'inletPressureKpa', 'dischargePressureKpa', 'inletTemperatureC', 'dischargeTemperatureC',
-      'isentropicDischargeTemperatureC', 'specificWorkKjPerKg', 'gasPowerKw', 'k', 'cpJPerKgK'].map((k) => [k, num]),
+    [
+      'stage',
+      'pressureRatio',
+      'inletPressureKpa',
+      'dischargePressureKpa',
+      'inletTemperatureC',
+      'dischargeTemperatureC',
+      'isentropicDischargeTemperatureC',
+      'specificWorkKjPerKg',
+      'gasPowerKw',
+      'k',
+      'cpJPerKgK',
+    ].map((k) => [k, num]),
   ),
 };
 const method = {
   type: 'object',
   required: ['k', 'cpJPerKgK', 'gasPowerKw', 'stages', 'intercoolerDutiesKw'],
   properties: {
-    k: num, cpJPerKgK: num, gasPowerKw: num, specificWorkKjPerKg: num, totalIntercoolerDutyKw: num,
+    k: num,
+    cpJPerKgK: num,
+    gasPowerKw: num,
+    specificWorkKjPerKg: num,
+    totalIntercoolerDutyKw: num,
     stages: { type: 'array', items: stage },
     intercoolerDutiesKw: { type: 'array', items: num, description: 'between stages only: N-1 entries' },
     aftercoolerDutyKw: { type: ['number', 'null'] },
@@ -31,7 +46,11 @@ const errors = {
   properties: {
     errors: {
       type: 'array',
-      items: { type: 'object', required: ['path', 'message'], properties: { path: { type: 'string' }, message: { type: 'string' } } },
+      items: {
+        type: 'object',
+        required: ['path', 'message'],
+        properties: { path: { type: 'string' }, message: { type: 'string' } },
+      },
     },
   },
 };
@@ -49,8 +68,16 @@ const result = {
       type: 'object',
       properties: {
         ...Object.fromEntries(
-          ['absorbedDutyKw', 'averageCpDutyKw', 'averageCpDifferencePercent', 'cpMeanJPerKgK', 'heatLossKw', 'marginKw',
-            'designDutyKw', 'outletActualFlowM3PerH'].map((k) => [k, num]),
+          [
+            'absorbedDutyKw',
+            'averageCpDutyKw',
+            'averageCpDifferencePercent',
+            'cpMeanJPerKgK',
+            'heatLossKw',
+            'marginKw',
+            'designDutyKw',
+            'outletActualFlowM3PerH',
+          ].map((k) => [k, num]),
         ),
         selectedRatingKw: { type: ['number', 'null'] },
       },
@@ -65,7 +92,14 @@ const result = {
         methodDifferencePercent: num,
         isentropicEfficiency: num,
         suggestedStages: { type: ['integer', 'null'] },
-        motor: { type: 'object', properties: { iecKw: { type: ['number', 'null'] }, nemaHp: { type: ['number', 'null'] }, marginPercent: { type: ['number', 'null'] } } },
+        motor: {
+          type: 'object',
+          properties: {
+            iecKw: { type: ['number', 'null'] },
+            nemaHp: { type: ['number', 'null'] },
+            marginPercent: { type: ['number', 'null'] },
+          },
+        },
       },
     },
     warnings: {
@@ -73,7 +107,11 @@ const result = {
       items: {
         type: 'object',
         required: ['code', 'severity', 'message'],
-        properties: { code: { type: 'string' }, severity: { enum: ['info', 'caution', 'warning', 'danger'] }, message: { type: 'string' } },
+        properties: {
+          code: { type: 'string' },
+          severity: { enum: ['info', 'caution', 'warning', 'danger'] },
+          message: { type: 'string' },
+        },
       },
     },
     basis: { type: 'object', additionalProperties: true },
@@ -84,7 +122,10 @@ const result = {
 type JsonObject = { properties?: Record<string, JsonObject>; required?: string[]; oneOf?: JsonObject[] };
 
 // zod treats transform leaves as optional on input, so required quantities are restored here.
-const REQUIRED_QUANTITIES: Record<string, string[]> = { heater: ['flow', 'outletTemperature'], compressor: ['flow', 'dischargePressure'] };
+const REQUIRED_QUANTITIES: Record<string, string[]> = {
+  heater: ['flow', 'outletTemperature'],
+  compressor: ['flow', 'dischargePressure'],
+};
 
 function requestSchema(): Record<string, unknown> {
   const schema = z.toJSONSchema(sizingRequestSchema, {
@@ -119,10 +160,19 @@ export function calculateOpenApiDocument(): Record<string, unknown> {
       '/api/v1/calculate': {
         post: {
           summary: 'Size a heater or a compressor for one duty point',
-          requestBody: { required: true, content: { 'application/json': { schema: { $ref: '#/components/schemas/SizingRequest' } } } },
+          requestBody: {
+            required: true,
+            content: { 'application/json': { schema: { $ref: '#/components/schemas/SizingRequest' } } },
+          },
           responses: {
-            200: { description: 'Sizing result', content: { 'application/json': { schema: { $ref: '#/components/schemas/SizingResult' } } } },
-            400: { description: 'Invalid JSON or refused fields (every one listed)', content: { 'application/json': { schema: errors } } },
+            200: {
+              description: 'Sizing result',
+              content: { 'application/json': { schema: { $ref: '#/components/schemas/SizingResult' } } },
+            },
+            400: {
+              description: 'Invalid JSON or refused fields (every one listed)',
+              content: { 'application/json': { schema: errors } },
+            },
             413: { description: 'Body larger than 64 KiB', content: { 'application/json': { schema: errors } } },
           },
         },

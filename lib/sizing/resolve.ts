@@ -5,7 +5,10 @@ import { findPreset, humidAirGas, mixtureGas, presetGas } from '../thermo/preset
 // Leaf modules rather than the package index: each index re-export adds a getter per call under tsx.
 import { STANDARD_FLOW_BASES, flowToKgPerS as flowToKgPerSImported } from '../units/flow';
 import {
-  STANDARD_ATMOSPHERE_PA, isGaugePressureUnit, pressureFromPa, pressureToPa as pressureToPaImported,
+  STANDARD_ATMOSPHERE_PA,
+  isGaugePressureUnit,
+  pressureFromPa,
+  pressureToPa as pressureToPaImported,
 } from '../units/pressure';
 import { standardAtmospherePressurePa } from '../units/standard-atmosphere';
 import { temperatureFromK, temperatureToK as temperatureToKImported } from '../units/temperature';
@@ -70,7 +73,10 @@ function resolveBarometric(input: SizingInput, issues: SizingIssue[]): [number, 
   if (site?.barometricPressure) {
     const p = pressureToPa(site.barometricPressure.value, site.barometricPressure.unit);
     if (!(p >= BAROMETRIC_RANGE_PA[0] && p <= BAROMETRIC_RANGE_PA[1])) {
-      issues.push({ path: 'site.barometricPressure', message: `site barometric pressure must be 40 to 110 kPa absolute; got ${fmt(p / 1000)} kPa` });
+      issues.push({
+        path: 'site.barometricPressure',
+        message: `site barometric pressure must be 40 to 110 kPa absolute; got ${fmt(p / 1000)} kPa`,
+      });
     }
     return [p, 'site.barometricPressure'];
   }
@@ -84,7 +90,8 @@ function resolveGas(g: GasInput, temperatureK: number, pressurePa: number, issue
   if (g.components !== undefined) {
     const check = checkComposition(g.components, g.basis ?? 'mole');
     if (check.ok) return mixtureGas(check.moleFractions);
-    for (const i of check.issues) issues.push({ path: i.path ? `gas.components.${i.path}` : 'gas.components', message: i.message });
+    for (const i of check.issues)
+      issues.push({ path: i.path ? `gas.components.${i.path}` : 'gas.components', message: i.message });
     return null;
   }
   const preset = g.preset === undefined ? undefined : findPreset(g.preset);
@@ -93,11 +100,17 @@ function resolveGas(g: GasInput, temperatureK: number, pressurePa: number, issue
     return null;
   }
   if (preset.moleFractions) return presetGas(preset.id) ?? null;
-  const spec = g.relativeHumidityPercent !== undefined
-    ? { relativeHumidityPercent: g.relativeHumidityPercent }
-    : g.dewPoint !== undefined ? { dewPointK: temperatureToK(g.dewPoint.value, g.dewPoint.unit) } : undefined;
+  const spec =
+    g.relativeHumidityPercent !== undefined
+      ? { relativeHumidityPercent: g.relativeHumidityPercent }
+      : g.dewPoint !== undefined
+        ? { dewPointK: temperatureToK(g.dewPoint.value, g.dewPoint.unit) }
+        : undefined;
   if (!spec) {
-    issues.push({ path: 'gas.relativeHumidityPercent', message: 'humid air needs relativeHumidityPercent or dewPoint' });
+    issues.push({
+      path: 'gas.relativeHumidityPercent',
+      message: 'humid air needs relativeHumidityPercent or dewPoint',
+    });
     return null;
   }
   const humid = humidAirGas(spec, temperatureK, pressurePa);
@@ -116,13 +129,28 @@ export function resolveCommon(input: SizingInput, issues: SizingIssue[]): Resolv
   if (issues.length > before) return null;
   const gas = resolveGas(input.gas, inletTemperatureK, inletPressurePa, issues);
   if (!gas) return null;
-  const ctx = { molarMassKgPerKmol: gas.molarMassKgPerKmol, temperatureK: inletTemperatureK, pressurePa: inletPressurePa };
+  const ctx = {
+    molarMassKgPerKmol: gas.molarMassKgPerKmol,
+    temperatureK: inletTemperatureK,
+    pressurePa: inletPressurePa,
+  };
   const massFlowKgPerS = flowToKgPerS(input.flow.value, input.flow.unit, ctx);
   if (!(massFlowKgPerS > 0 && massFlowKgPerS <= MAX_MASS_FLOW_KG_PER_S)) {
-    issues.push({ path: 'flow', message: `flow must be above 0 and at most ${MAX_MASS_FLOW_KG_PER_S} kg/s; got ${fmt(massFlowKgPerS)} kg/s` });
+    issues.push({
+      path: 'flow',
+      message: `flow must be above 0 and at most ${MAX_MASS_FLOW_KG_PER_S} kg/s; got ${fmt(massFlowKgPerS)} kg/s`,
+    });
     return null;
   }
-  return { gas, massFlowKgPerS, inletTemperatureK, inletPressurePa, barometricPressurePa, barometricSource, flowInputUnit: input.flow.unit };
+  return {
+    gas,
+    massFlowKgPerS,
+    inletTemperatureK,
+    inletPressurePa,
+    barometricPressurePa,
+    barometricSource,
+    flowInputUnit: input.flow.unit,
+  };
 }
 
 /** The named basis of a standard-volume flow unit, or undefined for mass and actual flow. */

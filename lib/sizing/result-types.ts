@@ -19,7 +19,8 @@ export type BasisInfo = {
   /** Bases of the standard flows reported in `flows`. */
   reportedFlowBases: StandardFlowBasisInfo[];
   barometricPressureKpa: number;
-  barometricPressureSource: 'default (101.325 kPa)' | 'site.barometricPressure' | 'site.altitudeM (ISO 2533 standard atmosphere)';
+  barometricPressureSource:
+    'default (101.325 kPa)' | 'site.barometricPressure' | 'site.altitudeM (ISO 2533 standard atmosphere)';
   conventions: string[];
 };
 

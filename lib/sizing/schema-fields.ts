@@ -65,9 +65,12 @@ function fail(ctx: Issues, message: string, input: unknown, path?: string[]): vo
 function readNumber(raw: unknown, b: Bounds, range: string, ctx: Issues, path?: string[]): number {
   const v = typeof raw === 'number' ? raw : typeof raw === 'string' ? parseNumeric(raw) : NaN;
   if (raw === undefined) fail(ctx, `required (allowed: ${range})`, raw, path);
-  else if (typeof raw !== 'number' && typeof raw !== 'string') fail(ctx, `must be a number (allowed: ${range})`, raw, path);
-  else if (typeof raw === 'string' && raw.trim() === '') fail(ctx, `is empty: give a number (allowed: ${range})`, raw, path);
-  else if (typeof raw === 'string' && Number.isNaN(v)) fail(ctx, `"${raw}" is not a number (allowed: ${range})`, raw, path);
+  else if (typeof raw !== 'number' && typeof raw !== 'string')
+    fail(ctx, `must be a number (allowed: ${range})`, raw, path);
+  else if (typeof raw === 'string' && raw.trim() === '')
+    fail(ctx, `is empty: give a number (allowed: ${range})`, raw, path);
+  else if (typeof raw === 'string' && Number.isNaN(v))
+    fail(ctx, `"${raw}" is not a number (allowed: ${range})`, raw, path);
   else if (!Number.isFinite(v)) fail(ctx, `must be a finite number (allowed: ${range})`, raw, path);
   else if (!inBounds(v, b)) fail(ctx, `${v} is out of range (allowed: ${range})`, raw, path);
   else return v;
@@ -81,7 +84,10 @@ export function numberField(b: Bounds = {}) {
     const v = readNumber(raw, b, range, ctx);
     return Number.isNaN(v) ? z.NEVER : v;
   });
-  return hint(schema, { anyOf: [{ type: 'number' }, { type: 'string' }], description: `number or numeric text; ${range}` });
+  return hint(schema, {
+    anyOf: [{ type: 'number' }, { type: 'string' }],
+    description: `number or numeric text; ${range}`,
+  });
 }
 
 type UnitCheck<T extends string> = { allowed: ReadonlySet<string>; list: string; kind: string; _t?: T };
@@ -109,14 +115,22 @@ function unitCheck<T extends string>(units: readonly T[], kind: string): UnitChe
 export function unitField<const T extends string>(units: readonly T[], kind: string) {
   const check = unitCheck(units, kind);
   const schema = z.transform((raw: string, ctx): T => readUnit(raw, check, ctx) ?? z.NEVER);
-  return hint(schema, { type: 'string', description: `one of: ${check.list} (superscript and degree-sign spellings accepted)` });
+  return hint(schema, {
+    type: 'string',
+    description: `one of: ${check.list} (superscript and degree-sign spellings accepted)`,
+  });
 }
 
 export type Quantity<T extends string> = { value: number; unit: T };
 type Extra<T extends string> = (q: Quantity<T>, ctx: Issues) => void;
 
 /** A { value, unit } quantity, checked in one step; unknown keys are refused like everywhere else. */
-export function quantityField<const T extends string>(units: readonly T[], kind: string, bounds: Bounds = {}, extra?: Extra<T>) {
+export function quantityField<const T extends string>(
+  units: readonly T[],
+  kind: string,
+  bounds: Bounds = {},
+  extra?: Extra<T>,
+) {
   const check = unitCheck(units, kind);
   const range = describeRange(bounds);
   const schema = z.transform((raw: { value: number | string; unit: string }, ctx): Quantity<T> => {
@@ -130,7 +144,8 @@ export function quantityField<const T extends string>(units: readonly T[], kind:
     }
     const before = ctx.issues.length;
     for (const key in raw) {
-      if (key !== 'value' && key !== 'unit') fail(ctx, 'unknown field; a quantity has only "value" and "unit"', raw, [key]);
+      if (key !== 'value' && key !== 'unit')
+        fail(ctx, 'unknown field; a quantity has only "value" and "unit"', raw, [key]);
     }
     const value = readNumber(raw.value, bounds, range, ctx, ['value']);
     const unit = readUnit(raw.unit, check, ctx, ['unit']);
@@ -165,7 +180,11 @@ export function temperatureField<const T extends string>(
     const k = temperatureToK(q.value, q.unit);
     if (k < 0) fail(ctx, `${q.value} ${q.unit} is below absolute zero`, q);
     else if (k < minK || k > maxK) {
-      fail(ctx, `${q.value} ${q.unit} is outside ${why}: allowed ${formatIn(minK, q.unit)} to ${formatIn(maxK, q.unit)}`, q);
+      fail(
+        ctx,
+        `${q.value} ${q.unit} is outside ${why}: allowed ${formatIn(minK, q.unit)} to ${formatIn(maxK, q.unit)}`,
+        q,
+      );
     }
   });
 }

@@ -33,7 +33,8 @@ const pressure = quantityField(PRESSURE_UNITS, 'pressure');
 
 const supply = z.strictObject({
   voltageV: numberField({ ...LIMITS.voltageV, unit: 'V', hint: 'line-to-line for three-phase' }),
-  phases: z.union([z.literal(1), z.literal(3), z.literal('1'), z.literal('3')], { error: 'phases must be 1 or 3' })
+  phases: z
+    .union([z.literal(1), z.literal(3), z.literal('1'), z.literal('3')], { error: 'phases must be 1 or 3' })
     .transform((p) => (Number(p) === 1 ? 1 : 3) as 1 | 3),
 });
 
@@ -43,7 +44,12 @@ const gas = z
     components: z.record(z.string(), numberField({ min: 0, max: 1 })).optional(),
     basis: z.enum(['mole', 'mass'], { error: 'basis must be "mole" or "mass"' }).optional(),
     relativeHumidityPercent: numberField({ min: 0, max: 100, unit: '%' }).optional(),
-    dewPoint: temperatureField(TEMPERATURE_UNITS, ASHRAE_MIN_TEMPERATURE_K, ASHRAE_MAX_TEMPERATURE_K, 'the ASHRAE saturation-pressure range').optional(),
+    dewPoint: temperatureField(
+      TEMPERATURE_UNITS,
+      ASHRAE_MIN_TEMPERATURE_K,
+      ASHRAE_MAX_TEMPERATURE_K,
+      'the ASHRAE saturation-pressure range',
+    ).optional(),
   })
   .check((ctx) => {
     const g = ctx.value;
@@ -60,13 +66,15 @@ const gas = z
       push(['relativeHumidityPercent'], 'humid air needs exactly one of relativeHumidityPercent or dewPoint');
     }
     if (!humid) {
-      if (g.relativeHumidityPercent !== undefined) push(['relativeHumidityPercent'], 'only used with preset "humid-air"');
+      if (g.relativeHumidityPercent !== undefined)
+        push(['relativeHumidityPercent'], 'only used with preset "humid-air"');
       if (g.dewPoint !== undefined) push(['dewPoint'], 'only used with preset "humid-air"');
     }
     if (g.basis !== undefined && g.components === undefined) push(['basis'], 'only used with "components"');
     if (g.components !== undefined) {
       const check = checkComposition(g.components, g.basis ?? 'mole');
-      if (!check.ok) for (const issue of check.issues) push(['components', ...(issue.path ? [issue.path] : [])], issue.message);
+      if (!check.ok)
+        for (const issue of check.issues) push(['components', ...(issue.path ? [issue.path] : [])], issue.message);
     }
   });
 
@@ -76,12 +84,20 @@ const common = {
   inlet: z.strictObject({ temperature, pressure }),
   site: z
     .strictObject({
-      barometricPressure: quantityField(ABSOLUTE_PRESSURE_UNITS, 'absolute pressure', { min: 0, minExclusive: true }).optional(),
+      barometricPressure: quantityField(ABSOLUTE_PRESSURE_UNITS, 'absolute pressure', {
+        min: 0,
+        minExclusive: true,
+      }).optional(),
       altitudeM: numberField({ ...LIMITS.siteAltitudeM, unit: 'm' }).optional(),
     })
     .check((ctx) => {
       if (ctx.value.barometricPressure !== undefined && ctx.value.altitudeM !== undefined) {
-        ctx.issues.push({ code: 'custom', path: ['altitudeM'], message: 'give barometricPressure or altitudeM, not both', input: ctx.value });
+        ctx.issues.push({
+          code: 'custom',
+          path: ['altitudeM'],
+          message: 'give barometricPressure or altitudeM, not both',
+          input: ctx.value,
+        });
       }
     })
     .optional(),
@@ -95,7 +111,9 @@ const heater = z.strictObject({
   designMarginPercent: numberField({ ...LIMITS.designMarginPercent, unit: '%' }).default(0),
   supply: supply.optional(),
   heaterRatingsKw: z
-    .array(numberField({ ...LIMITS.heaterRatingKw, minExclusive: true, unit: 'kW' }), { error: 'must be a list of ratings in kW' })
+    .array(numberField({ ...LIMITS.heaterRatingKw, minExclusive: true, unit: 'kW' }), {
+      error: 'must be a list of ratings in kW',
+    })
     .min(1, { error: 'give at least one rating' })
     .max(500, { error: 'at most 500 ratings' })
     .optional(),
@@ -113,7 +131,9 @@ const compressor = z
     aftercoolerOutletTemperature: temperature.optional(),
     interstagePressureDropPercent: numberField({ ...LIMITS.interstagePressureDropPercent, unit: '%' }).default(0),
     mechanicalEfficiency: efficiency('mechanical (bearings, seals, gear)').default(DEFAULT_MECHANICAL_EFFICIENCY),
-    method: z.enum(['constant-k', 'variable-cp'], { error: 'method must be "constant-k" or "variable-cp"' }).default('variable-cp'),
+    method: z
+      .enum(['constant-k', 'variable-cp'], { error: 'method must be "constant-k" or "variable-cp"' })
+      .default('variable-cp'),
     dischargeTemperatureLimit: temperature.optional(),
     k: numberField({ ...LIMITS.k, minExclusive: true, hint: 'ratio of specific heats override' }).optional(),
     cpJPerKgK: numberField({ ...LIMITS.cpJPerKgK, unit: 'J/(kg K)' }).optional(),

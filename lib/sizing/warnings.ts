@@ -17,7 +17,8 @@ const PRESSURE_EQUIPMENT_GAUGE_PA = 50_000;
 export const PRELIMINARY: SizingWarning = {
   code: 'preliminary',
   severity: 'caution',
-  message: 'Preliminary sizing on ideal-gas properties. Confirm with a qualified engineer under the local codes before purchase or construction.',
+  message:
+    'Preliminary sizing on ideal-gas properties. Confirm with a qualified engineer under the local codes before purchase or construction.',
 };
 
 const c1 = (v: number) => v.toFixed(1);
@@ -34,24 +35,30 @@ function surfaceWarnings(gas: GasModel, hottestC: number, heater: boolean): Sizi
   const flammable = isFlammable(gas);
   if (!flammable && !heater) return out;
   const cls = bestTemperatureClass(hottestC);
-  const where = heater ? 'Element sheaths run hotter than the gas and must stay within the class even with no flow' : 'Casing and piping reach the discharge temperature';
+  const where = heater
+    ? 'Element sheaths run hotter than the gas and must stay within the class even with no flow'
+    : 'Casing and piping reach the discharge temperature';
   out.push({
     code: 'temperature-class',
     severity: cls === null && flammable ? 'danger' : flammable ? 'warning' : 'info',
-    message: cls === null
-      ? `Gas at ${c1(hottestC)} °C is above the T1 limit (450 °C, IEC 60079-0): the equipment cannot meet any temperature class where a flammable atmosphere may occur.`
-      : `Gas at ${c1(hottestC)} °C: in a hazardous area the equipment can meet at best ${cls.name} (${cls.maxSurfaceC} °C maximum surface, IEC 60079-0). ${where}; check against the area classification.`,
+    message:
+      cls === null
+        ? `Gas at ${c1(hottestC)} °C is above the T1 limit (450 °C, IEC 60079-0): the equipment cannot meet any temperature class where a flammable atmosphere may occur.`
+        : `Gas at ${c1(hottestC)} °C: in a hazardous area the equipment can meet at best ${cls.name} (${cls.maxSurfaceC} °C maximum surface, IEC 60079-0). ${where}; check against the area classification.`,
   });
   return out;
 }
 
 function pressureWarning(pressurePa: number, barometricPa: number): SizingWarning[] {
   if (pressurePa - barometricPa <= PRESSURE_EQUIPMENT_GAUGE_PA) return [];
-  return [{
-    code: 'pressure-equipment',
-    severity: 'info',
-    message: 'Pressure parts above 0.5 bar gauge fall under pressure-equipment codes (e.g. EU PED, ASME VIII): design, relief and inspection to the local code.',
-  }];
+  return [
+    {
+      code: 'pressure-equipment',
+      severity: 'info',
+      message:
+        'Pressure parts above 0.5 bar gauge fall under pressure-equipment codes (e.g. EU PED, ASME VIII): design, relief and inspection to the local code.',
+    },
+  ];
 }
 
 function present(...items: (SizingWarning | null)[]): SizingWarning[] {
@@ -59,28 +66,68 @@ function present(...items: (SizingWarning | null)[]): SizingWarning[] {
 }
 
 /** All cautions for a heater duty; always ends with the preliminary note. */
-export function heaterWarnings(gas: GasModel, h: HeaterBlock, pressurePa: number, barometricPa: number): SizingWarning[] {
+export function heaterWarnings(
+  gas: GasModel,
+  h: HeaterBlock,
+  pressurePa: number,
+  barometricPa: number,
+): SizingWarning[] {
   const states: GasState[] = [
     { label: 'heater inlet', temperatureK: h.inletTemperatureC + 273.15, pressurePa },
     { label: 'heater outlet', temperatureK: h.outletTemperatureC + 273.15, pressurePa },
   ];
-  const out: SizingWarning[] = [...present(condensationWarning(gas, states), idealGasWarning(gas, states)), ...gasWarnings(gas)];
+  const out: SizingWarning[] = [
+    ...present(condensationWarning(gas, states), idealGasWarning(gas, states)),
+    ...gasWarnings(gas),
+  ];
   if (Math.abs(h.temperatureRiseK) > AVERAGE_CP_LIMIT_K) {
-    out.push({ code: 'average-cp-range', severity: 'caution', message: `Temperature rise ${c1(h.temperatureRiseK)} K exceeds ${AVERAGE_CP_LIMIT_K} K: do not use the average-cp estimate (${c1(h.averageCpDifferencePercent)} % off here); the absorbed duty integrates cp.` });
+    out.push({
+      code: 'average-cp-range',
+      severity: 'caution',
+      message: `Temperature rise ${c1(h.temperatureRiseK)} K exceeds ${AVERAGE_CP_LIMIT_K} K: do not use the average-cp estimate (${c1(h.averageCpDifferencePercent)} % off here); the absorbed duty integrates cp.`,
+    });
   }
   if (h.selectedRatingKw === null) {
-    out.push({ code: 'above-rating-list', severity: 'warning', message: `Design duty ${c1(h.designDutyKw)} kW is above the largest catalogue rating: split into several heaters or supply a longer rating list.` });
+    out.push({
+      code: 'above-rating-list',
+      severity: 'warning',
+      message: `Design duty ${c1(h.designDutyKw)} kW is above the largest catalogue rating: split into several heaters or supply a longer rating list.`,
+    });
   }
   if (h.heatLossPercent === 0 && h.designMarginPercent === 0) {
-    out.push({ code: 'no-allowance', severity: 'caution', message: 'No heat-loss allowance or design margin applied: design duty equals absorbed duty (typical: 2-10 % loss, 10-25 % margin).' });
+    out.push({
+      code: 'no-allowance',
+      severity: 'caution',
+      message:
+        'No heat-loss allowance or design margin applied: design duty equals absorbed duty (typical: 2-10 % loss, 10-25 % margin).',
+    });
   }
   if (h.electrical.subdivisionRequired) {
-    out.push({ code: 'circuit-subdivision', severity: 'caution', message: `Line current ${c1(h.electrical.currentA)} A exceeds ${SUBDIVISION_LIMIT_A} A: resistance heating is subdivided into circuits of at most ${SUBDIVISION_LIMIT_A} A (NEC 424.22(B)/425.22 where the NEC applies).` });
+    out.push({
+      code: 'circuit-subdivision',
+      severity: 'caution',
+      message: `Line current ${c1(h.electrical.currentA)} A exceeds ${SUBDIVISION_LIMIT_A} A: resistance heating is subdivided into circuits of at most ${SUBDIVISION_LIMIT_A} A (NEC 424.22(B)/425.22 where the NEC applies).`,
+    });
   }
   out.push(
-    { code: 'heater-safety-controls', severity: 'warning', message: 'Provide an independent manual-reset high-temperature cutout and flow proving, so the heater cannot be energised without gas flow.' },
-    { code: 'supply-voltage', severity: 'info', message: 'Heater output varies with the square of voltage (-10 % voltage gives -19 % power): rate the elements at the minimum supply voltage.' },
-    { code: 'electrical-codes', severity: 'info', message: 'Currents are for a balanced resistive load; the 125 % continuous-load figure follows NEC 424.4(B)/Art. 425 (IEC practice: IEC 60364-4-43). Electrical work to local codes.' },
+    {
+      code: 'heater-safety-controls',
+      severity: 'warning',
+      message:
+        'Provide an independent manual-reset high-temperature cutout and flow proving, so the heater cannot be energised without gas flow.',
+    },
+    {
+      code: 'supply-voltage',
+      severity: 'info',
+      message:
+        'Heater output varies with the square of voltage (-10 % voltage gives -19 % power): rate the elements at the minimum supply voltage.',
+    },
+    {
+      code: 'electrical-codes',
+      severity: 'info',
+      message:
+        'Currents are for a balanced resistive load; the 125 % continuous-load figure follows NEC 424.4(B)/Art. 425 (IEC practice: IEC 60364-4-43). Electrical work to local codes.',
+    },
     ...pressureWarning(pressurePa, barometricPa),
     ...surfaceWarnings(gas, h.outletTemperatureC, true),
     PRELIMINARY,
@@ -92,8 +139,16 @@ function trainStates(stages: readonly CompressorStage[]): GasState[] {
   const states: GasState[] = [];
   for (const s of stages) {
     states.push(
-      { label: `stage ${s.stage} inlet`, temperatureK: s.inletTemperatureC + 273.15, pressurePa: s.inletPressureKpa * 1000 },
-      { label: `stage ${s.stage} discharge`, temperatureK: s.dischargeTemperatureC + 273.15, pressurePa: s.dischargePressureKpa * 1000 },
+      {
+        label: `stage ${s.stage} inlet`,
+        temperatureK: s.inletTemperatureC + 273.15,
+        pressurePa: s.inletPressureKpa * 1000,
+      },
+      {
+        label: `stage ${s.stage} discharge`,
+        temperatureK: s.dischargeTemperatureC + 273.15,
+        pressurePa: s.dischargePressureKpa * 1000,
+      },
     );
   }
   return states;
@@ -103,7 +158,10 @@ function trainStates(stages: readonly CompressorStage[]): GasState[] {
 export function compressorWarnings(gas: GasModel, c: CompressorBlock, barometricPa: number): SizingWarning[] {
   const stages = (c.basis === 'constant-k' ? c.constantK : c.variableCp).stages;
   const states = trainStates(stages);
-  const out: SizingWarning[] = [...present(condensationWarning(gas, states), idealGasWarning(gas, states)), ...gasWarnings(gas)];
+  const out: SizingWarning[] = [
+    ...present(condensationWarning(gas, states), idealGasWarning(gas, states)),
+    ...gasWarnings(gas),
+  ];
   let hottest = stages[0]!;
   let noCooling = false;
   let methodDtK = 0;
@@ -118,27 +176,64 @@ export function compressorWarnings(gas: GasModel, c: CompressorBlock, barometric
     maxPa = Math.max(maxPa, s.dischargePressureKpa * 1000);
   }
   if (hottest.dischargeTemperatureC > c.dischargeTemperatureLimitC + 1e-9) {
-    const advice = c.suggestedStages === null ? 'no stage count up to 6 meets it: lower the intercooler temperature or split the duty' : `${c.suggestedStages} stages would meet it`;
-    out.push({ code: 'high-discharge-temperature', severity: 'warning', message: `Stage ${hottest.stage} discharge ${c1(hottest.dischargeTemperatureC)} °C exceeds the ${c1(c.dischargeTemperatureLimitC)} °C limit (about 150 °C for reciprocating process compressors, API 618); ${advice}.` });
+    const advice =
+      c.suggestedStages === null
+        ? 'no stage count up to 6 meets it: lower the intercooler temperature or split the duty'
+        : `${c.suggestedStages} stages would meet it`;
+    out.push({
+      code: 'high-discharge-temperature',
+      severity: 'warning',
+      message: `Stage ${hottest.stage} discharge ${c1(hottest.dischargeTemperatureC)} °C exceeds the ${c1(c.dischargeTemperatureLimitC)} °C limit (about 150 °C for reciprocating process compressors, API 618); ${advice}.`,
+    });
   }
   if (c.stagePressureRatio > HIGH_STAGE_RATIO) {
-    out.push({ code: 'high-stage-ratio', severity: 'caution', message: `Pressure ratio ${c.stagePressureRatio.toFixed(2)} per stage is above ${HIGH_STAGE_RATIO}: consider more stages.` });
+    out.push({
+      code: 'high-stage-ratio',
+      severity: 'caution',
+      message: `Pressure ratio ${c.stagePressureRatio.toFixed(2)} per stage is above ${HIGH_STAGE_RATIO}: consider more stages.`,
+    });
   }
   if (noCooling) {
-    out.push({ code: 'intercooler-no-cooling', severity: 'caution', message: 'The intercooler outlet temperature is not below a stage discharge: that cooler removes nothing and the next stage takes the gas as discharged.' });
+    out.push({
+      code: 'intercooler-no-cooling',
+      severity: 'caution',
+      message:
+        'The intercooler outlet temperature is not below a stage discharge: that cooler removes nothing and the next stage takes the gas as discharged.',
+    });
   }
   if (methodDtK > 5 || Math.abs(c.methodDifferencePercent) > 1) {
-    out.push({ code: 'method-difference', severity: 'info', message: `Constant-k and variable-cp differ by ${c.methodDifferencePercent.toFixed(2)} % in gas power and up to ${c1(methodDtK)} K in discharge temperature; variable-cp integrates the property data.` });
+    out.push({
+      code: 'method-difference',
+      severity: 'info',
+      message: `Constant-k and variable-cp differ by ${c.methodDifferencePercent.toFixed(2)} % in gas power and up to ${c1(methodDtK)} K in discharge temperature; variable-cp integrates the property data.`,
+    });
   }
   if (c.polytropicEfficiency !== null) {
-    out.push({ code: 'polytropic-converted', severity: 'info', message: `Polytropic efficiency ${c.polytropicEfficiency} converted to isentropic ${c.isentropicEfficiency.toFixed(4)} for the stage ratio at the suction k.` });
+    out.push({
+      code: 'polytropic-converted',
+      severity: 'info',
+      message: `Polytropic efficiency ${c.polytropicEfficiency} converted to isentropic ${c.isentropicEfficiency.toFixed(4)} for the stage ratio at the suction k.`,
+    });
   }
   if (c.motor.iecKw === null || c.motor.nemaHp === null) {
-    out.push({ code: 'motor-above-series', severity: 'warning', message: 'Shaft power with 10 % margin is above the standard motor series listed (IEC to 1000 kW, NEMA to 500 hp): select a large machine from a maker.' });
+    out.push({
+      code: 'motor-above-series',
+      severity: 'warning',
+      message:
+        'Shaft power with 10 % margin is above the standard motor series listed (IEC to 1000 kW, NEMA to 500 hp): select a large machine from a maker.',
+    });
   }
   if (c.drive) {
-    out.push({ code: 'motor-data-assumed', severity: 'info', message: `Motor input and line current use efficiency ${c.drive.motorEfficiency} and power factor ${c.drive.powerFactor}; use the nameplate values of the chosen motor.` });
+    out.push({
+      code: 'motor-data-assumed',
+      severity: 'info',
+      message: `Motor input and line current use efficiency ${c.drive.motorEfficiency} and power factor ${c.drive.powerFactor}; use the nameplate values of the chosen motor.`,
+    });
   }
-  out.push(...pressureWarning(maxPa, barometricPa), ...surfaceWarnings(gas, hottest.dischargeTemperatureC, false), PRELIMINARY);
+  out.push(
+    ...pressureWarning(maxPa, barometricPa),
+    ...surfaceWarnings(gas, hottest.dischargeTemperatureC, false),
+    PRELIMINARY,
+  );
   return out;
 }

@@ -31,7 +31,10 @@ const summaryColumns = {
   createdAt: sizings.createdAt,
 };
 
-export async function listSizings(user: CurrentUser, filter: { accountId?: string; limit?: number } = {}): Promise<SizingSummary[]> {
+export async function listSizings(
+  user: CurrentUser,
+  filter: { accountId?: string; limit?: number } = {},
+): Promise<SizingSummary[]> {
   const scope = accountScope(user);
   const conds: SQL[] = [];
   if (scope) conds.push(eq(sizings.accountId, scope));

@@ -37,28 +37,31 @@ type Computed = { input: unknown; result: SizingResult };
 function sizingValues(user: CurrentUser, meta: SizingMeta, computed: Computed, number: string, revision: number) {
   const gas = gasKeyAndLabel((computed.input as { gas?: unknown }).gas);
   return {
-      number,
-      accountId: meta.accountId,
-      title: meta.title,
-      equipmentTag: meta.equipmentTag,
-      notes: meta.notes,
-      service: computed.result.service,
-      gasKey: gas.key,
-      gasLabel: gas.label,
-      input: computed.input,
-      result: computed.result,
-      engineVersion: ENGINE_VERSION,
-      headlineKw: headlineOf(computed.result),
-      massFlowKgPerS: computed.result.massFlowKgPerS,
-      revision,
-      revisedFromId: meta.revisedFromId,
-      createdByUserId: user.id,
+    number,
+    accountId: meta.accountId,
+    title: meta.title,
+    equipmentTag: meta.equipmentTag,
+    notes: meta.notes,
+    service: computed.result.service,
+    gasKey: gas.key,
+    gasLabel: gas.label,
+    input: computed.input,
+    result: computed.result,
+    engineVersion: ENGINE_VERSION,
+    headlineKw: headlineOf(computed.result),
+    massFlowKgPerS: computed.result.massFlowKgPerS,
+    revision,
+    revisedFromId: meta.revisedFromId,
+    createdByUserId: user.id,
   };
 }
 
 export async function insertSizing(tx: Tx, user: CurrentUser, meta: SizingMeta, computed: Computed, revision = 1) {
   const number = await nextNumber(tx, 'sizing');
-  const [row] = await tx.insert(sizings).values(sizingValues(user, meta, computed, number, revision)).returning({ id: sizings.id, number: sizings.number });
+  const [row] = await tx
+    .insert(sizings)
+    .values(sizingValues(user, meta, computed, number, revision))
+    .returning({ id: sizings.id, number: sizings.number });
   if (!row) throw new Error('sizing insert returned no row');
   return row;
 }
@@ -75,22 +78,39 @@ export async function insertSizings(tx: Tx, user: CurrentUser, items: { meta: Si
 }
 
 /** Saves a sizing to an account (and optionally a draft quote) in one transaction with its audit entry. */
-export async function saveSizing(user: CurrentUser, meta: SizingMeta, rawInput: unknown): Promise<{ id: string; number: string }> {
+export async function saveSizing(
+  user: CurrentUser,
+  meta: SizingMeta,
+  rawInput: unknown,
+): Promise<{ id: string; number: string }> {
   assertAccountAccess(user, meta.accountId);
-  if (meta.quoteId && !can(user.role, 'quote:manage')) throw new ActionError('Only vendor staff add sizings to quotes.', 403);
+  if (meta.quoteId && !can(user.role, 'quote:manage'))
+    throw new ActionError('Only vendor staff add sizings to quotes.', 403);
   const computed = computeForSave(rawInput);
   return db.transaction(async (tx) => {
     const [acct] = await tx.select({ id: accounts.id }).from(accounts).where(eq(accounts.id, meta.accountId)).limit(1);
     if (!acct) throw new ActionError('That customer account does not exist.', 404, { accountId: ['Unknown account.'] });
     let revision = 1;
     if (meta.revisedFromId) {
-      const [prev] = await tx.select({ accountId: sizings.accountId, revision: sizings.revision }).from(sizings).where(eq(sizings.id, meta.revisedFromId)).limit(1);
-      if (!prev || prev.accountId !== meta.accountId) throw new ActionError('The sizing being revised belongs to another account.', 422);
+      const [prev] = await tx
+        .select({ accountId: sizings.accountId, revision: sizings.revision })
+        .from(sizings)
+        .where(eq(sizings.id, meta.revisedFromId))
+        .limit(1);
+      if (!prev || prev.accountId !== meta.accountId)
+        throw new ActionError('The sizing being revised belongs to another account.', 422);
       revision = prev.revision + 1;
     }
     const row = await insertSizing(tx, user, meta, computed, revision);
     if (meta.quoteId) await addQuoteItem(user, meta.quoteId, row.id, 1, tx);
-    await writeAudit(tx, { actor: user, action: meta.revisedFromId ? 'sizing.revised' : 'sizing.created', entityType: 'sizing', entityId: row.id, accountId: meta.accountId, detail: { number: row.number, quoteId: meta.quoteId ?? null } });
+    await writeAudit(tx, {
+      actor: user,
+      action: meta.revisedFromId ? 'sizing.revised' : 'sizing.created',
+      entityType: 'sizing',
+      entityId: row.id,
+      accountId: meta.accountId,
+      detail: { number: row.number, quoteId: meta.quoteId ?? null },
+    });
     return row;
   });
 }

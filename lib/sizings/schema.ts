@@ -7,7 +7,11 @@ export const sizingMetaSchema = z.object({
     .union([z.literal(''), z.uuid()])
     .optional()
     .transform((v) => (v ? v : undefined)),
-  title: z.string().trim().min(3, { message: 'Title needs 3 to 160 characters.' }).max(160, { message: 'Title needs 3 to 160 characters.' }),
+  title: z
+    .string()
+    .trim()
+    .min(3, { message: 'Title needs 3 to 160 characters.' })
+    .max(160, { message: 'Title needs 3 to 160 characters.' }),
   equipmentTag: z
     .string()
     .trim()
@@ -15,7 +19,12 @@ export const sizingMetaSchema = z.object({
     .regex(/^[\p{L}\p{N} ._\-/#()]*$/u, { message: 'Equipment tag may use letters, digits, spaces and . _ - / # ( ).' })
     .optional()
     .transform((v) => (v ? v : undefined)),
-  notes: z.string().trim().max(4000, { message: 'Notes are limited to 4000 characters.' }).optional().transform((v) => (v ? v : undefined)),
+  notes: z
+    .string()
+    .trim()
+    .max(4000, { message: 'Notes are limited to 4000 characters.' })
+    .optional()
+    .transform((v) => (v ? v : undefined)),
   revisedFromId: z.uuid().optional(),
 });
 export type SizingMeta = z.output<typeof sizingMetaSchema>;

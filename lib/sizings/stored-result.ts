@@ -12,7 +12,8 @@ export function readStoredSizing(input: unknown, result: unknown): StoredSizing 
   const parsed = sizingRequestSchema.safeParse(input);
   if (!parsed.success || typeof result !== 'object' || result === null) return null;
   const r = result as Partial<SizingResult> & { heater?: unknown; compressor?: unknown };
-  const sameMajor = typeof r.engineVersion === 'string' && r.engineVersion.split('.')[0] === ENGINE_VERSION.split('.')[0];
+  const sameMajor =
+    typeof r.engineVersion === 'string' && r.engineVersion.split('.')[0] === ENGINE_VERSION.split('.')[0];
   const block = r.service === 'heater' ? r.heater : r.service === 'compressor' ? r.compressor : undefined;
   if (!sameMajor || r.service !== parsed.data.service || typeof block !== 'object' || block === null) return null;
   if (!Array.isArray(r.warnings) || typeof r.basis !== 'object' || r.basis === null) return null;

@@ -5,5 +5,10 @@ import { users } from '@/db/schema';
 
 /** People who create sizings, for the creator filter. */
 export async function listStaffOptions(): Promise<{ id: string; name: string }[]> {
-  return db.select({ id: users.id, name: users.name }).from(users).where(inArray(users.role, ['sales_engineer', 'admin', 'customer'])).orderBy(asc(users.name)).limit(500);
+  return db
+    .select({ id: users.id, name: users.name })
+    .from(users)
+    .where(inArray(users.role, ['sales_engineer', 'admin', 'customer']))
+    .orderBy(asc(users.name))
+    .limit(500);
 }

@@ -10,10 +10,21 @@ import { kickOutbox } from '@/lib/email/kick';
 import { env } from '@/lib/env';
 
 /** Queues the latest datasheet revision's e-mail again to the account's billing contact (support), audited. */
-export async function resendDatasheetEmail(user: CurrentUser, sizingId: string): Promise<{ to: string; datasheetNumber: string; revision: string }> {
+export async function resendDatasheetEmail(
+  user: CurrentUser,
+  sizingId: string,
+): Promise<{ to: string; datasheetNumber: string; revision: string }> {
   const out = await db.transaction(async (tx) => {
     const [row] = await tx
-      .select({ datasheetId: datasheets.id, number: datasheets.number, accountId: datasheets.accountId, accountName: accounts.name, to: accounts.billingContactEmail, title: sizings.title, tag: sizings.equipmentTag })
+      .select({
+        datasheetId: datasheets.id,
+        number: datasheets.number,
+        accountId: datasheets.accountId,
+        accountName: accounts.name,
+        to: accounts.billingContactEmail,
+        title: sizings.title,
+        tag: sizings.equipmentTag,
+      })
       .from(datasheets)
       .innerJoin(accounts, eq(accounts.id, datasheets.accountId))
       .innerJoin(sizings, eq(sizings.id, datasheets.sizingId))
@@ -21,16 +32,35 @@ export async function resendDatasheetEmail(user: CurrentUser, sizingId: string):
       .limit(1);
     if (!row) throw new ActionError('This sizing has no datasheet yet; nothing to resend.', 404);
     if (!row.to) throw new ActionError('The customer account has no billing contact e-mail to send to.', 422);
-    const [rev] = await tx.select({ revision: datasheetRevisions.revision }).from(datasheetRevisions).where(and(eq(datasheetRevisions.datasheetId, row.datasheetId))).orderBy(desc(datasheetRevisions.issuedAt)).limit(1);
+    const [rev] = await tx
+      .select({ revision: datasheetRevisions.revision })
+      .from(datasheetRevisions)
+      .where(and(eq(datasheetRevisions.datasheetId, row.datasheetId)))
+      .orderBy(desc(datasheetRevisions.issuedAt))
+      .limit(1);
     if (!rev) throw new ActionError('The datasheet has no issued revision.', 404);
     await enqueueEmail(tx, {
       template: 'datasheet-issued',
       to: row.to,
       accountId: row.accountId,
       entity: { type: 'datasheet', id: row.datasheetId },
-      props: { accountName: row.accountName, datasheetNumber: row.number, revision: rev.revision, sizingTitle: row.title, equipmentTag: row.tag, datasheetUrl: `${env.APP_URL}/datasheets` },
+      props: {
+        accountName: row.accountName,
+        datasheetNumber: row.number,
+        revision: rev.revision,
+        sizingTitle: row.title,
+        equipmentTag: row.tag,
+        datasheetUrl: `${env.APP_URL}/datasheets`,
+      },
     });
-    await writeAudit(tx, { actor: user, action: 'datasheet.email_resent', entityType: 'sizing', entityId: sizingId, accountId: row.accountId, detail: { datasheet: row.number, revision: rev.revision, to: row.to } });
+    await writeAudit(tx, {
+      actor: user,
+      action: 'datasheet.email_resent',
+      entityType: 'sizing',
+      entityId: sizingId,
+      accountId: row.accountId,
+      detail: { datasheet: row.number, revision: rev.revision, to: row.to },
+    });
     return { to: row.to, datasheetNumber: row.number, revision: rev.revision };
   });
   kickOutbox();

@@ -21,7 +21,13 @@ export type SupportHit = {
   quoteNumbers: string[];
 };
 
-export type SupportResults = { hits: SupportHit[]; total: number; totalIsEstimate: boolean; page: number; pageSize: number };
+export type SupportResults = {
+  hits: SupportHit[];
+  total: number;
+  totalIsEstimate: boolean;
+  page: number;
+  pageSize: number;
+};
 
 const COUNT_CAP = 1_000;
 
@@ -68,7 +74,10 @@ function conditions(user: CurrentUser, f: SupportSearch, fuzzy: boolean): SQL[] 
   if (f.from) c.push(sql`s.created_at >= ${f.from}::date`);
   if (f.to) c.push(sql`s.created_at < (${f.to}::date + 1)`);
   if (f.creator) c.push(sql`s.created_by_user_id = ${f.creator}`);
-  if (f.quoteStatus) c.push(sql`s.id in (select qi.sizing_id from quote_items qi join quotes q3 on q3.id = qi.quote_id where q3.status = ${f.quoteStatus})`);
+  if (f.quoteStatus)
+    c.push(
+      sql`s.id in (select qi.sizing_id from quote_items qi join quotes q3 on q3.id = qi.quote_id where q3.status = ${f.quoteStatus})`,
+    );
   return c;
 }
 
@@ -81,7 +90,9 @@ function orderBy(f: SupportSearch): SQL {
     case 'smallest':
       return sql`s.headline_kw asc, s.id`;
     case 'relevance':
-      return f.q ? sql`similarity(${f.q.toLowerCase()}, s.search_text) desc, s.created_at desc` : sql`s.created_at desc, s.id`;
+      return f.q
+        ? sql`similarity(${f.q.toLowerCase()}, s.search_text) desc, s.created_at desc`
+        : sql`s.created_at desc, s.id`;
     default:
       return sql`s.created_at desc, s.id`;
   }
@@ -101,7 +112,10 @@ export async function searchSizings(user: CurrentUser, f: SupportSearch): Promis
       set_config('pg_trgm.word_similarity_threshold', '0.5', true), set_config('jit', 'off', true)`);
     const count = async (conds: SQL[], fuzzy: boolean) => {
       // A text query alone: its id set is the answer, so count it without probing every sizing it names.
-      const from = f.q && conds.length === 1 ? sql`(${matchingIds(f.q, fuzzy)} limit ${COUNT_CAP + 1})` : sql`(select 1 from sizings s ${whereOf(conds)} limit ${COUNT_CAP + 1})`;
+      const from =
+        f.q && conds.length === 1
+          ? sql`(${matchingIds(f.q, fuzzy)} limit ${COUNT_CAP + 1})`
+          : sql`(select 1 from sizings s ${whereOf(conds)} limit ${COUNT_CAP + 1})`;
       return (await tx.execute<{ n: number }>(sql`select count(*)::int as n from ${from} t`)).rows[0]?.n ?? 0;
     };
     let conds = conditions(user, f, false);
@@ -123,6 +137,12 @@ export async function searchSizings(user: CurrentUser, f: SupportSearch): Promis
       ${where}
       order by ${orderBy(f)}
       limit ${f.pageSize} offset ${offset}`);
-    return { hits: rows.rows, total: Math.min(n, COUNT_CAP), totalIsEstimate: n > COUNT_CAP, page: f.page, pageSize: f.pageSize };
+    return {
+      hits: rows.rows,
+      total: Math.min(n, COUNT_CAP),
+      totalIsEstimate: n > COUNT_CAP,
+      page: f.page,
+      pageSize: f.pageSize,
+    };
   });
 }

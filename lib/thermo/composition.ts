@@ -7,9 +7,7 @@ export type CompositionBasis = 'mole' | 'mass';
 export type MoleFractions = Partial<Record<SpeciesId, number>>;
 export type CompositionIssue = { path: string; message: string };
 
-export type CompositionCheck =
-  | { ok: true; moleFractions: MoleFractions }
-  | { ok: false; issues: CompositionIssue[] };
+export type CompositionCheck = { ok: true; moleFractions: MoleFractions } | { ok: false; issues: CompositionIssue[] };
 
 const SPECIES_LIST = SPECIES_IDS.join(', ');
 
@@ -52,10 +50,12 @@ export function checkComposition(components: Record<string, unknown>, basis: Com
   if (Math.abs(sum - 1) > TOLERANCE) {
     return {
       ok: false,
-      issues: [{
-        path: '',
-        message: `${basis} fractions sum to ${Number(sum.toPrecision(6))}; they must sum to 1 within ${TOLERANCE}`,
-      }],
+      issues: [
+        {
+          path: '',
+          message: `${basis} fractions sum to ${Number(sum.toPrecision(6))}; they must sum to 1 within ${TOLERANCE}`,
+        },
+      ],
     };
   }
   return { ok: true, moleFractions: toMoleFractions(basis) };

@@ -16,4 +16,5 @@ export const DRY_AIR_MOLE_FRACTIONS: Readonly<MoleFractions> = Object.freeze({
   CO2: LISTED.CO2 / LISTED_SUM,
 });
 
-export const DRY_AIR_SOURCE = 'Dry air: N2 0.78084, O2 0.209476, Ar 0.00934, CO2 0.000314 (U.S. Standard Atmosphere 1976), normalised';
+export const DRY_AIR_SOURCE =
+  'Dry air: N2 0.78084, O2 0.209476, Ar 0.00934, CO2 0.000314 (U.S. Standard Atmosphere 1976), normalised';

@@ -6,10 +6,22 @@ import { SPECIES, type NasaCoefficients, type SpeciesId } from './species-data';
  * h and s° divisors folded in, so each property is a single Horner evaluation.
  */
 export type RangePolynomial = {
-  readonly c0: number; readonly c1: number; readonly c2: number; readonly c3: number; readonly c4: number;
-  readonly h1: number; readonly h2: number; readonly h3: number; readonly h4: number; readonly h5: number;
+  readonly c0: number;
+  readonly c1: number;
+  readonly c2: number;
+  readonly c3: number;
+  readonly c4: number;
+  readonly h1: number;
+  readonly h2: number;
+  readonly h3: number;
+  readonly h4: number;
+  readonly h5: number;
   readonly h6: number;
-  readonly s2: number; readonly s3: number; readonly s4: number; readonly s5: number; readonly s7: number;
+  readonly s2: number;
+  readonly s3: number;
+  readonly s4: number;
+  readonly s5: number;
+  readonly s7: number;
 };
 
 /** A compiled ideal-gas mixture; build with `compileGas`, never by hand. */
@@ -38,11 +50,32 @@ function weightedCoefficients(moleFractions: Partial<Record<SpeciesId, number>>,
 }
 
 function rangePolynomial(a: number[], rMass: number): RangePolynomial {
-  const [a1, a2, a3, a4, a5, a6, a7] = a.map((v) => v * rMass) as [number, number, number, number, number, number, number];
+  const [a1, a2, a3, a4, a5, a6, a7] = a.map((v) => v * rMass) as [
+    number,
+    number,
+    number,
+    number,
+    number,
+    number,
+    number,
+  ];
   return {
-    c0: a1, c1: a2, c2: a3, c3: a4, c4: a5,
-    h1: a1, h2: a2 / 2, h3: a3 / 3, h4: a4 / 4, h5: a5 / 5, h6: a6,
-    s2: a2, s3: a3 / 2, s4: a4 / 3, s5: a5 / 4, s7: a7,
+    c0: a1,
+    c1: a2,
+    c2: a3,
+    c3: a4,
+    c4: a5,
+    h1: a1,
+    h2: a2 / 2,
+    h3: a3 / 3,
+    h4: a4 / 4,
+    h5: a5 / 5,
+    h6: a6,
+    s2: a2,
+    s3: a3 / 2,
+    s4: a4 / 3,
+    s5: a5 / 4,
+    s7: a7,
   };
 }
 

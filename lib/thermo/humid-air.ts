@@ -24,7 +24,11 @@ export function humidAirAt(spec: HumiditySpec, temperatureK: number, pressurePa:
   let vapourPressurePa: number;
   if ('relativeHumidityPercent' in spec) {
     if (!inAshraeRange(temperatureK)) {
-      return { ok: false, field: 'temperature', message: `humid air by relative humidity needs an inlet temperature of ${RANGE_TEXT}` };
+      return {
+        ok: false,
+        field: 'temperature',
+        message: `humid air by relative humidity needs an inlet temperature of ${RANGE_TEXT}`,
+      };
     }
     vapourPressurePa = (spec.relativeHumidityPercent / 100) * saturationPressureAshraePa(temperatureK);
     if (vapourPressurePa >= pressurePa) {
@@ -41,11 +45,19 @@ export function humidAirAt(spec: HumiditySpec, temperatureK: number, pressurePa:
     }
     if (spec.dewPointK > temperatureK + 1e-9) {
       const inletC = (temperatureK - ZERO_CELSIUS_K).toFixed(2);
-      return { ok: false, field: 'dewPoint', message: `dew point must not be above the inlet temperature (${inletC} °C)` };
+      return {
+        ok: false,
+        field: 'dewPoint',
+        message: `dew point must not be above the inlet temperature (${inletC} °C)`,
+      };
     }
     vapourPressurePa = saturationPressureAshraePa(spec.dewPointK);
     if (vapourPressurePa >= pressurePa) {
-      return { ok: false, field: 'dewPoint', message: 'water vapour pressure at this dew point exceeds the inlet pressure' };
+      return {
+        ok: false,
+        field: 'dewPoint',
+        message: 'water vapour pressure at this dew point exceeds the inlet pressure',
+      };
     }
   }
   const xw = vapourPressurePa / pressurePa;

@@ -14,14 +14,28 @@ export type GasPreset = {
 
 /** Gas presets for the form's picker, in display order. */
 export const GAS_PRESETS: readonly GasPreset[] = [
-  { id: 'air', displayName: 'Air (dry)', moleFractions: DRY_AIR_MOLE_FRACTIONS, note: 'U.S. Standard Atmosphere 1976 composition' },
-  { id: 'humid-air', displayName: 'Air (humid)', note: 'dry air plus water vapour from relative humidity or dew point at the inlet' },
+  {
+    id: 'air',
+    displayName: 'Air (dry)',
+    moleFractions: DRY_AIR_MOLE_FRACTIONS,
+    note: 'U.S. Standard Atmosphere 1976 composition',
+  },
+  {
+    id: 'humid-air',
+    displayName: 'Air (humid)',
+    note: 'dry air plus water vapour from relative humidity or dew point at the inlet',
+  },
   { id: 'nitrogen', displayName: 'Nitrogen (N2)', moleFractions: { N2: 1 } },
   { id: 'oxygen', displayName: 'Oxygen (O2)', moleFractions: { O2: 1 } },
   { id: 'argon', displayName: 'Argon (Ar)', moleFractions: { Ar: 1 } },
   { id: 'helium', displayName: 'Helium (He)', moleFractions: { He: 1 } },
   { id: 'carbon-dioxide', displayName: 'Carbon dioxide (CO2)', moleFractions: { CO2: 1 } },
-  { id: 'steam', displayName: 'Steam / water vapour (H2O)', moleFractions: { H2O: 1 }, note: 'ideal-gas steam: superheated, low pressure only' },
+  {
+    id: 'steam',
+    displayName: 'Steam / water vapour (H2O)',
+    moleFractions: { H2O: 1 },
+    note: 'ideal-gas steam: superheated, low pressure only',
+  },
   { id: 'hydrogen', displayName: 'Hydrogen (H2)', moleFractions: { H2: 1 } },
   { id: 'methane', displayName: 'Methane (CH4)', moleFractions: { CH4: 1 } },
   { id: 'ethane', displayName: 'Ethane (C2H6)', moleFractions: { C2H6: 1 } },
@@ -38,7 +52,11 @@ export const GAS_PRESETS: readonly GasPreset[] = [
 ];
 
 /** Accepted alternative spellings of preset ids. */
-export const PRESET_ALIASES: Readonly<Record<string, string>> = { 'water-vapour': 'steam', 'water-vapor': 'steam', 'dry-air': 'air' };
+export const PRESET_ALIASES: Readonly<Record<string, string>> = {
+  'water-vapour': 'steam',
+  'water-vapor': 'steam',
+  'dry-air': 'air',
+};
 
 export const PRESET_IDS: readonly string[] = GAS_PRESETS.map((p) => p.id);
 
@@ -65,7 +83,11 @@ export function humidAirGas(
   const state = humidAirAt(spec, temperatureK, pressurePa);
   if (!state.ok) return state;
   const percent = (100 * state.waterMoleFraction).toFixed(3);
-  const gas = cachedGas(`humid-${compositionKey(state.moleFractions)}`, `Air (humid, H2O ${percent} mol %)`, state.moleFractions);
+  const gas = cachedGas(
+    `humid-${compositionKey(state.moleFractions)}`,
+    `Air (humid, H2O ${percent} mol %)`,
+    state.moleFractions,
+  );
   return { ok: true, gas, state };
 }
 

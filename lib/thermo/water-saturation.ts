@@ -23,9 +23,18 @@ export function saturationPressureAshraePa(temperatureK: number): number {
   const lnT = Math.log(t);
   const lnP =
     t <= TRIPLE_POINT_K
-      ? -5.6745359e3 / t + 6.3925247 - 9.677843e-3 * t + 6.2215701e-7 * t * t + 2.0747825e-9 * t * t * t -
-        9.484024e-13 * t * t * t * t + 4.1635019 * lnT
-      : -5.8002206e3 / t + 1.3914993 - 4.8640239e-2 * t + 4.1764768e-5 * t * t - 1.4452093e-8 * t * t * t +
+      ? -5.6745359e3 / t +
+        6.3925247 -
+        9.677843e-3 * t +
+        6.2215701e-7 * t * t +
+        2.0747825e-9 * t * t * t -
+        9.484024e-13 * t * t * t * t +
+        4.1635019 * lnT
+      : -5.8002206e3 / t +
+        1.3914993 -
+        4.8640239e-2 * t +
+        4.1764768e-5 * t * t -
+        1.4452093e-8 * t * t * t +
         6.5459673 * lnT;
   return Math.exp(lnP);
 }
@@ -56,6 +65,7 @@ export function saturationPressureWagnerPrussPa(temperatureK: number): number {
  */
 export function saturationPressureForCheckPa(temperatureK: number): number {
   if (temperatureK > WATER_CRITICAL_TEMPERATURE_K) return Infinity;
-  if (temperatureK <= ASHRAE_MAX_TEMPERATURE_K) return saturationPressureAshraePa(Math.max(temperatureK, ASHRAE_MIN_TEMPERATURE_K));
+  if (temperatureK <= ASHRAE_MAX_TEMPERATURE_K)
+    return saturationPressureAshraePa(Math.max(temperatureK, ASHRAE_MIN_TEMPERATURE_K));
   return saturationPressureWagnerPrussPa(temperatureK);
 }

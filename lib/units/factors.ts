@@ -7,7 +7,9 @@ import convert from 'convert-units';
 
 function cu(value: number, from: string, to: string): number {
   // The library's unit names are a string union in its types; the names used below are all valid.
-  return convert(value).from(from as convert.Unit).to(to as convert.Unit);
+  return convert(value)
+    .from(from as convert.Unit)
+    .to(to as convert.Unit);
 }
 
 export const PA_PER_KPA = cu(1, 'kPa', 'Pa');

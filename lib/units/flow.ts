@@ -21,11 +21,41 @@ const US_BASIS = '60 °F and 14.696 psia (US gas-industry practice; other bases 
 
 /** Reference states of the standard-volume units; printed on the datasheet basis line. */
 export const STANDARD_FLOW_BASES: Readonly<Record<StandardFlowUnit, StandardFlowBasis>> = {
-  'Nm3/h': { unit: 'Nm3/h', temperatureK: 273.15, pressurePa: 101_325, description: '0 °C and 101.325 kPa (DIN 1343)', m3PerHourPerUnit: 1 },
-  'Sm3/h': { unit: 'Sm3/h', temperatureK: 288.15, pressurePa: 101_325, description: '15 °C and 101.325 kPa (ISO 13443)', m3PerHourPerUnit: 1 },
-  SCFM: { unit: 'SCFM', temperatureK: US_STANDARD_T_K, pressurePa: US_STANDARD_P_PA, description: US_BASIS, m3PerHourPerUnit: M3_PER_FT3 * 60 },
-  SCFH: { unit: 'SCFH', temperatureK: US_STANDARD_T_K, pressurePa: US_STANDARD_P_PA, description: US_BASIS, m3PerHourPerUnit: M3_PER_FT3 },
-  MMSCFD: { unit: 'MMSCFD', temperatureK: US_STANDARD_T_K, pressurePa: US_STANDARD_P_PA, description: US_BASIS, m3PerHourPerUnit: (M3_PER_FT3 * 1e6) / 24 },
+  'Nm3/h': {
+    unit: 'Nm3/h',
+    temperatureK: 273.15,
+    pressurePa: 101_325,
+    description: '0 °C and 101.325 kPa (DIN 1343)',
+    m3PerHourPerUnit: 1,
+  },
+  'Sm3/h': {
+    unit: 'Sm3/h',
+    temperatureK: 288.15,
+    pressurePa: 101_325,
+    description: '15 °C and 101.325 kPa (ISO 13443)',
+    m3PerHourPerUnit: 1,
+  },
+  SCFM: {
+    unit: 'SCFM',
+    temperatureK: US_STANDARD_T_K,
+    pressurePa: US_STANDARD_P_PA,
+    description: US_BASIS,
+    m3PerHourPerUnit: M3_PER_FT3 * 60,
+  },
+  SCFH: {
+    unit: 'SCFH',
+    temperatureK: US_STANDARD_T_K,
+    pressurePa: US_STANDARD_P_PA,
+    description: US_BASIS,
+    m3PerHourPerUnit: M3_PER_FT3,
+  },
+  MMSCFD: {
+    unit: 'MMSCFD',
+    temperatureK: US_STANDARD_T_K,
+    pressurePa: US_STANDARD_P_PA,
+    description: US_BASIS,
+    m3PerHourPerUnit: (M3_PER_FT3 * 1e6) / 24,
+  },
 };
 
 const R = GAS_CONSTANT_J_PER_MOL_K;

@@ -36,7 +36,11 @@ export function pressureToPa(value: number, unit: string, barometricPressurePa =
 }
 
 /** An absolute pressure in Pa expressed in any pressure unit (gauge relative to the site pressure). */
-export function pressureFromPa(pressurePa: number, unit: string, barometricPressurePa = STANDARD_ATMOSPHERE_PA): number {
+export function pressureFromPa(
+  pressurePa: number,
+  unit: string,
+  barometricPressurePa = STANDARD_ATMOSPHERE_PA,
+): number {
   const map = mapOf(unit);
   return (map.gauge ? pressurePa - barometricPressurePa : pressurePa) / map.factor;
 }

@@ -21,10 +21,14 @@ export const SI_UNIT_BY_KIND: Readonly<Record<QuantityKind, string>> = {
 export function toSi(kind: QuantityKind, value: number, unit: string, ctx: ConversionContext = {}): number {
   const u = normalizeUnit(unit);
   switch (kind) {
-    case 'flow': return flowToKgPerS(value, u, ctx.flow);
-    case 'temperature': return temperatureToK(value, u);
-    case 'pressure': return pressureToPa(value, u, ctx.barometricPressurePa ?? STANDARD_ATMOSPHERE_PA);
-    case 'power': return powerToW(value, u);
+    case 'flow':
+      return flowToKgPerS(value, u, ctx.flow);
+    case 'temperature':
+      return temperatureToK(value, u);
+    case 'pressure':
+      return pressureToPa(value, u, ctx.barometricPressurePa ?? STANDARD_ATMOSPHERE_PA);
+    case 'power':
+      return powerToW(value, u);
   }
 }
 
@@ -32,10 +36,14 @@ export function toSi(kind: QuantityKind, value: number, unit: string, ctx: Conve
 export function fromSi(kind: QuantityKind, siValue: number, unit: string, ctx: ConversionContext = {}): number {
   const u = normalizeUnit(unit);
   switch (kind) {
-    case 'flow': return flowFromKgPerS(siValue, u, ctx.flow);
-    case 'temperature': return temperatureFromK(siValue, u);
-    case 'pressure': return pressureFromPa(siValue, u, ctx.barometricPressurePa ?? STANDARD_ATMOSPHERE_PA);
-    case 'power': return powerFromW(siValue, u);
+    case 'flow':
+      return flowFromKgPerS(siValue, u, ctx.flow);
+    case 'temperature':
+      return temperatureFromK(siValue, u);
+    case 'pressure':
+      return pressureFromPa(siValue, u, ctx.barometricPressurePa ?? STANDARD_ATMOSPHERE_PA);
+    case 'power':
+      return powerFromW(siValue, u);
   }
 }
 

@@ -36,7 +36,12 @@ export type UnitListKind = keyof typeof UNITS_BY_KIND;
 // Typographic spellings people paste from datasheets. Anything else must match exactly (case matters:
 // "MPa" and "mPa" differ by 10^9).
 const ALIASES: Readonly<Record<string, string>> = {
-  '°C': 'degC', '℃': 'degC', '°F': 'degF', '℉': 'degF', '°R': 'degR', '°K': 'K',
+  '°C': 'degC',
+  '℃': 'degC',
+  '°F': 'degF',
+  '℉': 'degF',
+  '°R': 'degR',
+  '°K': 'K',
 };
 
 /** The canonical spelling of a unit string: superscript ³ becomes 3, degree signs become deg*. */

@@ -15,7 +15,13 @@ export async function getInvitationPreview(token: string): Promise<InvitationPre
     .select({ email: invitations.email, accountName: accounts.name, expiresAt: invitations.expiresAt })
     .from(invitations)
     .innerJoin(accounts, eq(accounts.id, invitations.accountId))
-    .where(and(eq(invitations.tokenHash, hashToken(token)), isNull(invitations.acceptedAt), sql`${invitations.expiresAt} > now()`))
+    .where(
+      and(
+        eq(invitations.tokenHash, hashToken(token)),
+        isNull(invitations.acceptedAt),
+        sql`${invitations.expiresAt} > now()`,
+      ),
+    )
     .limit(1);
   return row ?? null;
 }

@@ -27,7 +27,11 @@ async function loadTarget(tx: Tx, userId: string) {
     .for('update')
     .limit(1);
   if (!row) throw new ActionError('That user does not exist.', 404);
-  const [m] = await tx.select({ accountId: memberships.accountId }).from(memberships).where(eq(memberships.userId, userId)).limit(1);
+  const [m] = await tx
+    .select({ accountId: memberships.accountId })
+    .from(memberships)
+    .where(eq(memberships.userId, userId))
+    .limit(1);
   return { ...row, accountId: m?.accountId ?? null };
 }
 
@@ -42,19 +46,28 @@ async function countOtherActiveAdmins(tx: Tx, exceptUserId: string): Promise<num
 /** Changes a staff member's role and audits it in the same transaction. */
 export async function changeUserRole(actor: CurrentUser, input: UserRoleChangeInput): Promise<{ changed: boolean }> {
   assertManager(actor);
-  if (input.userId === actor.id) throw new ActionError('You cannot change your own role; ask another admin.', 409, { role: ['Not for your own sign-in.'] });
+  if (input.userId === actor.id)
+    throw new ActionError('You cannot change your own role; ask another admin.', 409, {
+      role: ['Not for your own sign-in.'],
+    });
   return db.transaction(async (tx) => {
     await lockAdminSet(tx);
     const target = await loadTarget(tx, input.userId);
     if (target.role === input.role) return { changed: false };
     // Customer users are bound to one customer account; turning one into staff would open every account to them.
     if (target.role === 'customer' || input.role === 'customer') {
-      throw new ActionError('Customer users keep the customer role: they belong to a customer account. Invite staff with their own sign-in instead.', 422, {
-        role: ['Only sales engineer, support and admin can be swapped.'],
-      });
+      throw new ActionError(
+        'Customer users keep the customer role: they belong to a customer account. Invite staff with their own sign-in instead.',
+        422,
+        {
+          role: ['Only sales engineer, support and admin can be swapped.'],
+        },
+      );
     }
     if (target.role === 'admin' && !target.disabledAt && (await countOtherActiveAdmins(tx, target.id)) === 0) {
-      throw new ActionError('This is the last active admin; make someone else an admin first.', 409, { role: ['Last active admin.'] });
+      throw new ActionError('This is the last active admin; make someone else an admin first.', 409, {
+        role: ['Last active admin.'],
+      });
     }
     await tx.update(users).set({ role: input.role, updatedAt: new Date() }).where(eq(users.id, target.id));
     await writeAudit(tx, {
@@ -80,7 +93,10 @@ export async function setUserDisabled(actor: CurrentUser, input: UserDisableInpu
     if (input.disabled && target.role === 'admin' && (await countOtherActiveAdmins(tx, target.id)) === 0) {
       throw new ActionError('This is the last active admin; make someone else an admin first.', 409);
     }
-    await tx.update(users).set({ disabledAt: input.disabled ? new Date() : null, updatedAt: new Date() }).where(eq(users.id, target.id));
+    await tx
+      .update(users)
+      .set({ disabledAt: input.disabled ? new Date() : null, updatedAt: new Date() })
+      .where(eq(users.id, target.id));
     await writeAudit(tx, {
       actor,
       action: input.disabled ? 'user.disabled' : 'user.enabled',

@@ -8,7 +8,8 @@ export function clerkBackendHandlers(users: FakeClerkUser[]) {
   return [
     http.get('*/v1/users/:userId', ({ params }) => {
       const u = users.find((x) => x.id === params.userId);
-      if (!u) return HttpResponse.json({ errors: [{ code: 'resource_not_found', message: 'not found' }] }, { status: 404 });
+      if (!u)
+        return HttpResponse.json({ errors: [{ code: 'resource_not_found', message: 'not found' }] }, { status: 404 });
       const emailId = `idn_${u.id}`;
       return HttpResponse.json({
         object: 'user',
@@ -16,7 +17,15 @@ export function clerkBackendHandlers(users: FakeClerkUser[]) {
         first_name: u.firstName,
         last_name: u.lastName,
         primary_email_address_id: emailId,
-        email_addresses: [{ id: emailId, object: 'email_address', email_address: u.email, verification: { status: 'verified', strategy: 'email_code' }, linked_to: [] }],
+        email_addresses: [
+          {
+            id: emailId,
+            object: 'email_address',
+            email_address: u.email,
+            verification: { status: 'verified', strategy: 'email_code' },
+            linked_to: [],
+          },
+        ],
         phone_numbers: [],
         web3_wallets: [],
         external_accounts: [],

@@ -12,7 +12,12 @@ function keyOf(secret: string): Uint8Array {
 }
 
 /** Signs a session for a user id that expires after `ttlSeconds`. */
-export async function signLocalSession(userId: string, role: string, secret: string, ttlSeconds: number): Promise<string> {
+export async function signLocalSession(
+  userId: string,
+  role: string,
+  secret: string,
+  ttlSeconds: number,
+): Promise<string> {
   return new SignJWT({ role })
     .setProtectedHeader({ alg: 'HS256' })
     .setSubject(userId)
@@ -23,11 +28,15 @@ export async function signLocalSession(userId: string, role: string, secret: str
 }
 
 /** Returns the claims of a valid, unexpired token, or null for anything else. */
-export async function verifyLocalSession(token: string | undefined, secret: string): Promise<LocalSessionClaims | null> {
+export async function verifyLocalSession(
+  token: string | undefined,
+  secret: string,
+): Promise<LocalSessionClaims | null> {
   if (!token || token.length > 4096) return null;
   try {
     const { payload } = await jwtVerify(token, keyOf(secret), { issuer: ISSUER, algorithms: ['HS256'] });
-    if (typeof payload.sub !== 'string' || typeof payload.role !== 'string' || typeof payload.exp !== 'number') return null;
+    if (typeof payload.sub !== 'string' || typeof payload.role !== 'string' || typeof payload.exp !== 'number')
+      return null;
     return { sub: payload.sub, role: payload.role, exp: payload.exp };
   } catch {
     return null;

@@ -8,7 +8,9 @@ export type RunningS3Fake = { fake: S3Fake; endpoint: string; close: () => Promi
  * Serves the same in-memory S3 over real HTTP on loopback, for another process (a child under test,
  * the demo) to reach through the SDK. Port 0 picks a free one.
  */
-export async function startS3FakeServer(opts: { port?: number; buckets?: string[]; accessKeyId?: string } = {}): Promise<RunningS3Fake> {
+export async function startS3FakeServer(
+  opts: { port?: number; buckets?: string[]; accessKeyId?: string } = {},
+): Promise<RunningS3Fake> {
   const fake = createS3Fake({ endpoint: '*', buckets: opts.buckets, accessKeyId: opts.accessKeyId });
   const app = createServer(...fake.handlers);
   const server = await new Promise<ReturnType<typeof app.listen>>((resolve) => {

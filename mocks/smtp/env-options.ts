@@ -3,7 +3,8 @@ import type { SmtpFakeOptions } from './server';
 function portFrom(value: string | undefined, fallback: number, name: string): number {
   if (value === undefined || value === '') return fallback;
   const port = Number(value);
-  if (!Number.isInteger(port) || port < 0 || port > 65_535) throw new Error(`${name} must be a port number from 0 to 65535, got '${value}'`);
+  if (!Number.isInteger(port) || port < 0 || port > 65_535)
+    throw new Error(`${name} must be a port number from 0 to 65535, got '${value}'`);
   return port;
 }
 

@@ -21,10 +21,18 @@ function handle(req: IncomingMessage, res: ServerResponse, store: MessageStore, 
   const method = req.method ?? 'GET';
   const path = url.pathname.replace(/\/$/, '') || '/';
   const one = /^\/messages\/([^/]+)(\/html)?$/.exec(path);
-  if (method === 'GET' && path === '/health') return sendJson(res, 200, { ok: true, service: 'smtp-fake', smtp: smtpUp() ? 'up' : 'stopped', messages: store.list().length });
+  if (method === 'GET' && path === '/health')
+    return sendJson(res, 200, {
+      ok: true,
+      service: 'smtp-fake',
+      smtp: smtpUp() ? 'up' : 'stopped',
+      messages: store.list().length,
+    });
   if (method === 'GET' && path === '/messages') {
     const to = url.searchParams.get('to')?.toLowerCase();
-    const messages = store.list().filter((m) => !to || [...m.to, ...m.cc, ...m.envelope.to].some((a) => a.toLowerCase() === to));
+    const messages = store
+      .list()
+      .filter((m) => !to || [...m.to, ...m.cc, ...m.envelope.to].some((a) => a.toLowerCase() === to));
     return sendJson(res, 200, { data: messages.map(summary) });
   }
   if (method === 'DELETE' && path === '/messages') return sendJson(res, 200, { deleted: store.clear() });
@@ -33,8 +41,14 @@ function handle(req: IncomingMessage, res: ServerResponse, store: MessageStore, 
     if (!message) return sendJson(res, 404, { error: `No message with id '${one[1]}'.` });
     if (!one[2]) return sendJson(res, 200, message);
     // Shown as received, but sandboxed: mail HTML must not run script on this origin.
-    res.writeHead(200, { 'content-type': 'text/html; charset=utf-8', 'content-security-policy': 'sandbox; default-src data: \'unsafe-inline\'' });
-    res.end(message.html ?? `<pre>${(message.text ?? '').replace(/[&<>]/g, (ch) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;' })[ch] ?? ch)}</pre>`);
+    res.writeHead(200, {
+      'content-type': 'text/html; charset=utf-8',
+      'content-security-policy': "sandbox; default-src data: 'unsafe-inline'",
+    });
+    res.end(
+      message.html ??
+        `<pre>${(message.text ?? '').replace(/[&<>]/g, (ch) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;' })[ch] ?? ch)}</pre>`,
+    );
     return;
   }
   if (method === 'GET' && path === '/') {
@@ -42,11 +56,18 @@ function handle(req: IncomingMessage, res: ServerResponse, store: MessageStore, 
     res.end(renderInboxPage(store.list()));
     return;
   }
-  sendJson(res, 404, { error: `No route ${method} ${url.pathname}. Try GET /messages, GET /messages/:id, DELETE /messages, GET /health.` });
+  sendJson(res, 404, {
+    error: `No route ${method} ${url.pathname}. Try GET /messages, GET /messages/:id, DELETE /messages, GET /health.`,
+  });
 }
 
 /** The JSON inbox API (and a human page at /) over the message store. */
-export async function listenInboxApi(options: { port: number; host: string; store: MessageStore; smtpUp: () => boolean }): Promise<InboxApi> {
+export async function listenInboxApi(options: {
+  port: number;
+  host: string;
+  store: MessageStore;
+  smtpUp: () => boolean;
+}): Promise<InboxApi> {
   const server: Server = createServer((req, res) => handle(req, res, options.store, options.smtpUp));
   await new Promise<void>((resolve, reject) => {
     server.once('error', reject);

@@ -8,7 +8,9 @@ export function renderInboxPage(messages: StoredMessage[]): string {
   const rows = [...messages]
     .reverse()
     .map(
-      (m) => `<tr><td>${escapeHtml(m.receivedAt.replace('T', ' ').slice(0, 19))}</td><td>${escapeHtml(m.from ?? '')}</td>
+      (
+        m,
+      ) => `<tr><td>${escapeHtml(m.receivedAt.replace('T', ' ').slice(0, 19))}</td><td>${escapeHtml(m.from ?? '')}</td>
 <td>${escapeHtml(m.to.join(', '))}</td><td><a href="/messages/${m.id}/html">${escapeHtml(m.subject || '(no subject)')}</a></td>
 <td><a href="/messages/${m.id}">JSON</a></td></tr>`,
     )

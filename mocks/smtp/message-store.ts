@@ -73,6 +73,8 @@ function loadMessages(path: string): StoredMessage[] {
     return parsed as StoredMessage[];
   } catch (error) {
     // Refuse to start over a file we cannot read rather than silently losing received mail.
-    throw new Error(`SMTP fake state file ${path} cannot be read (${(error as Error).message}); move it aside to start fresh.`);
+    throw new Error(
+      `SMTP fake state file ${path} cannot be read (${(error as Error).message}); move it aside to start fresh.`,
+    );
   }
 }

@@ -3,14 +3,19 @@ import type { NewMessage } from './message-store';
 
 function addresses(field: AddressObject | AddressObject[] | undefined): string[] {
   const objects = field === undefined ? [] : Array.isArray(field) ? field : [field];
-  return objects.flatMap((object) => object.value.map((entry) => entry.address ?? '').filter((address) => address !== ''));
+  return objects.flatMap((object) =>
+    object.value.map((entry) => entry.address ?? '').filter((address) => address !== ''),
+  );
 }
 
 /** Raw header lines by lower-case name with folding undone, e.g. `message-id`. */
 function headerMap(lines: readonly { key: string; line: string }[]): Record<string, string> {
   const out: Record<string, string> = {};
   for (const { key, line } of lines) {
-    const value = line.slice(line.indexOf(':') + 1).replace(/\r?\n[ \t]+/g, ' ').trim();
+    const value = line
+      .slice(line.indexOf(':') + 1)
+      .replace(/\r?\n[ \t]+/g, ' ')
+      .trim();
     out[key] = out[key] === undefined ? value : `${out[key]}\n${value}`;
   }
   return out;
@@ -30,7 +35,11 @@ export async function parseMessage(raw: Buffer, envelope: NewMessage['envelope']
     date: parsed.date ? parsed.date.toISOString() : null,
     messageId: parsed.messageId ?? null,
     headers: headerMap(parsed.headerLines),
-    attachments: parsed.attachments.map((a) => ({ filename: a.filename ?? null, contentType: a.contentType, sizeBytes: a.size })),
+    attachments: parsed.attachments.map((a) => ({
+      filename: a.filename ?? null,
+      contentType: a.contentType,
+      sizeBytes: a.size,
+    })),
     sizeBytes: raw.length,
   };
 }

@@ -30,7 +30,8 @@ export type SmtpFakeHandle = {
 };
 
 function checkPort(value: number, name: string): void {
-  if (!Number.isInteger(value) || value < 0 || value > 65_535) throw new Error(`SMTP fake: ${name} must be an integer from 0 to 65535, got ${value}`);
+  if (!Number.isInteger(value) || value < 0 || value > 65_535)
+    throw new Error(`SMTP fake: ${name} must be an integer from 0 to 65535, got ${value}`);
 }
 
 /** Starts the SMTP fake and its inbox API; stoppable and restartable on the same ports. */

@@ -11,7 +11,12 @@ const MAX_MESSAGE_BYTES = 25 * 1024 * 1024;
  * Plain SMTP on loopback: no TLS, STARTTLS not offered, any AUTH accepted (or none), so the
  * app's transport works with or without credentials.
  */
-export async function listenSmtp(options: { port: number; host: string; store: MessageStore; log: (line: string) => void }): Promise<SmtpListener> {
+export async function listenSmtp(options: {
+  port: number;
+  host: string;
+  store: MessageStore;
+  log: (line: string) => void;
+}): Promise<SmtpListener> {
   const server = new SMTPServer({
     secure: false,
     disabledCommands: ['STARTTLS'],

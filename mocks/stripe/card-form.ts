@@ -55,7 +55,8 @@ export function checkCardForm(input: CardFormInput, now: Date): CardFormResult {
   const fieldErrors: Partial<Record<CardFormField, string>> = {};
   const email = input.email.trim();
   const name = input.name.trim();
-  if (!EMAIL_PATTERN.test(email) || email.length > 254) fieldErrors.email = 'Enter an email address such as name@example.com.';
+  if (!EMAIL_PATTERN.test(email) || email.length > 254)
+    fieldErrors.email = 'Enter an email address such as name@example.com.';
   const cardError = checkCardNumber(input.cardNumber);
   if (cardError) fieldErrors.cardNumber = cardError;
   const expiryError = checkExpiry(input.expiry, now);

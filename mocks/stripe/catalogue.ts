@@ -59,7 +59,8 @@ export class Catalogue {
       if (!Number.isInteger(seed.unitAmountMinor) || seed.unitAmountMinor < 0) {
         throw new Error(`Price catalogue: ${seed.id} unitAmountMinor must be a non-negative integer`);
       }
-      if (!/^[a-z]{3}$/.test(seed.currency)) throw new Error(`Price catalogue: ${seed.id} currency must be 3 lower-case letters`);
+      if (!/^[a-z]{3}$/.test(seed.currency))
+        throw new Error(`Price catalogue: ${seed.id} currency must be 3 lower-case letters`);
       this.prices.set(seed.id, seed);
     }
   }

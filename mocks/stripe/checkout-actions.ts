@@ -10,7 +10,10 @@ import { renderInvoice, renderSubscription } from './render-billing';
 const DAY_SECONDS = 86_400;
 
 /** Creates a customer record (shared by the API and by checkout for new payers). */
-export function createCustomer(ctx: FakeContext, fields: Partial<Omit<CustomerRecord, 'id' | 'created'>>): CustomerRecord {
+export function createCustomer(
+  ctx: FakeContext,
+  fields: Partial<Omit<CustomerRecord, 'id' | 'created'>>,
+): CustomerRecord {
   const customer: CustomerRecord = {
     id: newId('cus', 14),
     created: nowSeconds(),
@@ -69,7 +72,11 @@ export function createInvoice(
  * Settles a session paid with the success card: customer, subscription and first invoice, then
  * the events in the order Dutywise's webhook must cope with. Returns the event ids.
  */
-export function completeCheckout(ctx: FakeContext, session: SessionRecord, payer: { email: string; name: string }): string[] {
+export function completeCheckout(
+  ctx: FakeContext,
+  session: SessionRecord,
+  payer: { email: string; name: string },
+): string[] {
   const state = ctx.store.state;
   const now = nowSeconds();
   let customer = session.customerId ? state.customers[session.customerId] : undefined;
@@ -87,7 +94,12 @@ export function completeCheckout(ctx: FakeContext, session: SessionRecord, payer
     created: now,
     customerId: customer.id,
     status: trialEnd ? 'trialing' : 'active',
-    items: session.lineItems.map((item) => ({ id: newId('si', 14), created: now, priceId: item.priceId, quantity: item.quantity })),
+    items: session.lineItems.map((item) => ({
+      id: newId('si', 14),
+      created: now,
+      priceId: item.priceId,
+      quantity: item.quantity,
+    })),
     metadata: { ...session.subscriptionMetadata },
     currency: session.currency,
     startDate: now,
@@ -104,7 +116,14 @@ export function completeCheckout(ctx: FakeContext, session: SessionRecord, payer
   };
   state.subscriptions[sub.id] = sub;
   // Stripe's first subscription invoice covers an instant (period start = end = creation) [mem].
-  const invoice = createInvoice(ctx, sub, 'subscription_create', 'paid', { start: now, end: now }, trialEnd ? 0 : undefined);
+  const invoice = createInvoice(
+    ctx,
+    sub,
+    'subscription_create',
+    'paid',
+    { start: now, end: now },
+    trialEnd ? 0 : undefined,
+  );
 
   session.status = 'complete';
   session.paymentStatus = trialEnd ? 'no_payment_required' : 'paid';

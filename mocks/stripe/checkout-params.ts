@@ -19,13 +19,33 @@ import {
 // Parameters Stripe accepts that change nothing on a local test page; refusing them would
 // only make the app's real calls fail against the fake.
 const IGNORED = [
-  'allow_promotion_codes', 'automatic_tax', 'billing_address_collection', 'consent_collection',
-  'custom_text', 'customer_update', 'locale', 'payment_method_collection', 'payment_method_types',
-  'tax_id_collection', 'ui_mode', 'customer_creation', 'submit_type',
+  'allow_promotion_codes',
+  'automatic_tax',
+  'billing_address_collection',
+  'consent_collection',
+  'custom_text',
+  'customer_update',
+  'locale',
+  'payment_method_collection',
+  'payment_method_types',
+  'tax_id_collection',
+  'ui_mode',
+  'customer_creation',
+  'submit_type',
 ];
 const KNOWN = [
-  'mode', 'line_items', 'customer', 'customer_email', 'client_reference_id', 'metadata',
-  'subscription_data', 'success_url', 'cancel_url', 'expires_at', 'expand', ...IGNORED,
+  'mode',
+  'line_items',
+  'customer',
+  'customer_email',
+  'client_reference_id',
+  'metadata',
+  'subscription_data',
+  'success_url',
+  'cancel_url',
+  'expires_at',
+  'expand',
+  ...IGNORED,
 ];
 // Stripe's limits: 30 minutes to 24 hours for expires_at, 730 days of trial, 200 characters of
 // client_reference_id, quantities up to 999,999 [mem].
@@ -48,13 +68,22 @@ export type CheckoutParams = {
 
 function readLineItems(ctx: FakeContext, body: FormObject): { items: LineItemRecord[]; seeds: PriceSeed[] } {
   const raw = optionalList(body, 'line_items');
-  if (raw.length === 0) throw badParam('line_items', 'Missing required param: line_items (at least one, e.g. line_items[0][price]).', 'parameter_missing');
+  if (raw.length === 0)
+    throw badParam(
+      'line_items',
+      'Missing required param: line_items (at least one, e.g. line_items[0][price]).',
+      'parameter_missing',
+    );
   const items: LineItemRecord[] = [];
   const seeds: PriceSeed[] = [];
   raw.forEach((entry, i) => {
     const param = `line_items[${i}]`;
     if (typeof entry !== 'object' || Array.isArray(entry)) throw badParam(param, `Invalid ${param}: must be a hash.`);
-    if (entry.price_data !== undefined) throw badParam(`${param}[price_data]`, 'The local Stripe fake sells only catalogue prices; pass line_items[n][price].');
+    if (entry.price_data !== undefined)
+      throw badParam(
+        `${param}[price_data]`,
+        'The local Stripe fake sells only catalogue prices; pass line_items[n][price].',
+      );
     assertKnownParams(entry, ['price', 'quantity'], param);
     const priceId = requiredString(entry, 'price', 200, `${param}[price]`);
     const seed = ctx.catalogue.find(priceId);
@@ -64,10 +93,14 @@ function readLineItems(ctx: FakeContext, body: FormObject): { items: LineItemRec
     seeds.push(seed);
   });
   const [first] = seeds;
-  if (first && seeds.some((s) => s.interval !== first.interval || (s.intervalCount ?? 1) !== (first.intervalCount ?? 1))) {
+  if (
+    first &&
+    seeds.some((s) => s.interval !== first.interval || (s.intervalCount ?? 1) !== (first.intervalCount ?? 1))
+  ) {
     throw badParam('line_items', 'All line items of a subscription checkout must bill on the same interval.');
   }
-  if (first && seeds.some((s) => s.currency !== first.currency)) throw badParam('line_items', 'All line items must share one currency.');
+  if (first && seeds.some((s) => s.currency !== first.currency))
+    throw badParam('line_items', 'All line items must share one currency.');
   return { items, seeds };
 }
 
@@ -75,18 +108,31 @@ function readLineItems(ctx: FakeContext, body: FormObject): { items: LineItemRec
 export function readCheckoutParams(ctx: FakeContext, body: FormObject, nowSeconds: number): CheckoutParams {
   assertKnownParams(body, KNOWN);
   const mode = requiredString(body, 'mode', 20);
-  if (mode !== 'subscription') throw badParam('mode', `The local Stripe fake supports only mode=subscription, got '${mode}'.`);
+  if (mode !== 'subscription')
+    throw badParam('mode', `The local Stripe fake supports only mode=subscription, got '${mode}'.`);
   const uiMode = optionalString(body, 'ui_mode', 20);
-  if (uiMode !== undefined && uiMode !== 'hosted') throw badParam('ui_mode', 'The local Stripe fake serves only the hosted page (ui_mode=hosted).');
+  if (uiMode !== undefined && uiMode !== 'hosted')
+    throw badParam('ui_mode', 'The local Stripe fake serves only the hosted page (ui_mode=hosted).');
   const customerId = optionalString(body, 'customer', 200) || null;
   const customerEmail = optionalEmail(body, 'customer_email') ?? null;
-  if (customerId && customerEmail) throw badParam('customer_email', 'You may only specify one of these parameters: customer, customer_email.');
+  if (customerId && customerEmail)
+    throw badParam('customer_email', 'You may only specify one of these parameters: customer, customer_email.');
   if (customerId && !ctx.store.state.customers[customerId]) throw noSuchParam('customer', customerId, 'customer');
   const successUrl = optionalUrl(body, 'success_url');
-  if (!successUrl) throw badParam('success_url', 'Missing required param: success_url (the page Checkout returns to after payment).', 'parameter_missing');
+  if (!successUrl)
+    throw badParam(
+      'success_url',
+      'Missing required param: success_url (the page Checkout returns to after payment).',
+      'parameter_missing',
+    );
   const subscriptionData = optionalHash(body, 'subscription_data') ?? {};
   assertKnownParams(subscriptionData, ['metadata', 'trial_period_days', 'description'], 'subscription_data');
-  const expiresAt = optionalInteger(body, 'expires_at', nowSeconds + MIN_EXPIRY_SECONDS, nowSeconds + MAX_EXPIRY_SECONDS);
+  const expiresAt = optionalInteger(
+    body,
+    'expires_at',
+    nowSeconds + MIN_EXPIRY_SECONDS,
+    nowSeconds + MAX_EXPIRY_SECONDS,
+  );
   const { items, seeds } = readLineItems(ctx, body);
   return {
     customerId,
@@ -94,7 +140,8 @@ export function readCheckoutParams(ctx: FakeContext, body: FormObject, nowSecond
     clientReferenceId: optionalString(body, 'client_reference_id', 200) ?? null,
     metadata: optionalMetadata(body, 'metadata') ?? {},
     subscriptionMetadata: optionalMetadata(subscriptionData, 'metadata', 'subscription_data[metadata]') ?? {},
-    trialPeriodDays: optionalInteger(subscriptionData, 'trial_period_days', 1, 730, 'subscription_data[trial_period_days]') ?? null,
+    trialPeriodDays:
+      optionalInteger(subscriptionData, 'trial_period_days', 1, 730, 'subscription_data[trial_period_days]') ?? null,
     lineItems: items,
     seeds,
     successUrl,

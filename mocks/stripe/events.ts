@@ -8,7 +8,12 @@ import type { WebhookSender } from './webhook-sender';
 export type EventSink = { store: StateStore; sender: WebhookSender; apiVersion: string };
 
 /** Records an event with a snapshot of the object as it is now, and queues its delivery. */
-export function emitEvent(sink: EventSink, type: string, object: unknown, previousAttributes?: JsonObject): EventRecord {
+export function emitEvent(
+  sink: EventSink,
+  type: string,
+  object: unknown,
+  previousAttributes?: JsonObject,
+): EventRecord {
   const event: EventRecord = {
     id: newId('evt'),
     type,
@@ -16,7 +21,14 @@ export function emitEvent(sink: EventSink, type: string, object: unknown, previo
     apiVersion: sink.apiVersion,
     object: toJson(object),
     previousAttributes: previousAttributes ?? null,
-    delivery: { status: 'pending', attempts: 0, lastStatusCode: null, lastError: null, lastAttemptAt: null, deliveredAt: null },
+    delivery: {
+      status: 'pending',
+      attempts: 0,
+      lastStatusCode: null,
+      lastError: null,
+      lastAttemptAt: null,
+      deliveredAt: null,
+    },
   };
   sink.store.state.events.push(event);
   sink.store.save();

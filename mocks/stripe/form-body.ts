@@ -65,7 +65,8 @@ function finalize(draft: Draft, rawPath: string): FormValue {
   const indices = keys.map(Number).sort((a, b) => a - b);
   if ((indices.at(-1) ?? 0) > MAX_INDEX) throw new FormParseError(`Index too large in ${rawPath}.`);
   // Stripe's SDK sends dense arrays from 0; holes would mean a lost item, so refuse them.
-  if (indices.some((n, i) => n !== i)) throw new FormParseError(`Array ${rawPath} must be indexed 0, 1, 2 ... without gaps.`);
+  if (indices.some((n, i) => n !== i))
+    throw new FormParseError(`Array ${rawPath} must be indexed 0, 1, 2 ... without gaps.`);
   return indices.map((n) => finalize(draft[String(n)] as Draft, `${rawPath}[${n}]`));
 }
 

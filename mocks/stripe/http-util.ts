@@ -29,7 +29,11 @@ export function route(method: string, path: string, handler: RouteHandler): Rout
   return { method, pattern: new RegExp(`^${source}$`), handler };
 }
 
-export function matchRoute(routes: readonly Route[], method: string, pathname: string): { route: Route; params: string[] } | undefined {
+export function matchRoute(
+  routes: readonly Route[],
+  method: string,
+  pathname: string,
+): { route: Route; params: string[] } | undefined {
   for (const candidate of routes) {
     if (candidate.method !== method) continue;
     const match = candidate.pattern.exec(pathname);

@@ -4,7 +4,9 @@ import { startStripeFake } from './server';
 
 const options = stripeFakeOptionsFromEnv(process.env);
 const fake = await startStripeFake(options);
-console.log(`stripe fake: API ${fake.url}, pages ${fake.publicBaseUrl}, webhooks -> ${options.webhookUrl}${options.statePath ? `, state ${options.statePath}` : ''}`);
+console.log(
+  `stripe fake: API ${fake.url}, pages ${fake.publicBaseUrl}, webhooks -> ${options.webhookUrl}${options.statePath ? `, state ${options.statePath}` : ''}`,
+);
 
 const stop = async (signal: string) => {
   console.log(`stripe fake: ${signal}, stopping`);

@@ -43,18 +43,26 @@ export function optionalString(body: FormObject, key: string, maxLength = 5000, 
 
 export function requiredString(body: FormObject, key: string, maxLength = 5000, param = key): string {
   const value = optionalString(body, key, maxLength, param);
-  if (value === undefined || value === '') throw badParam(param, `Missing required param: ${param}.`, 'parameter_missing');
+  if (value === undefined || value === '')
+    throw badParam(param, `Missing required param: ${param}.`, 'parameter_missing');
   return value;
 }
 
 export function optionalBoolean(body: FormObject, key: string, param = key): boolean | undefined {
   const value = optionalString(body, key, 5, param);
   if (value === undefined) return undefined;
-  if (value !== 'true' && value !== 'false') throw badParam(param, `Invalid boolean for ${param}: '${value}' (use true or false).`);
+  if (value !== 'true' && value !== 'false')
+    throw badParam(param, `Invalid boolean for ${param}: '${value}' (use true or false).`);
   return value === 'true';
 }
 
-export function optionalInteger(body: FormObject, key: string, min: number, max: number, param = key): number | undefined {
+export function optionalInteger(
+  body: FormObject,
+  key: string,
+  min: number,
+  max: number,
+  param = key,
+): number | undefined {
   const value = optionalString(body, key, 20, param);
   if (value === undefined) return undefined;
   const n = Number(value);
@@ -95,9 +103,18 @@ export function optionalMetadata(body: FormObject, key: string, param = key): Re
   if (entries.length > METADATA_MAX_KEYS) throw badParam(param, `Invalid ${param}: at most ${METADATA_MAX_KEYS} keys.`);
   const out: Record<string, string> = {};
   for (const [name, value] of entries) {
-    if (typeof value !== 'string') throw badParam(`${param}[${name}]`, `Invalid ${param}[${name}]: metadata values must be strings.`);
-    if (name.length > METADATA_MAX_KEY_LENGTH) throw badParam(`${param}[${name}]`, `Invalid ${param}: keys must be at most ${METADATA_MAX_KEY_LENGTH} characters.`);
-    if (value.length > METADATA_MAX_VALUE_LENGTH) throw badParam(`${param}[${name}]`, `Invalid ${param}[${name}]: values must be at most ${METADATA_MAX_VALUE_LENGTH} characters.`);
+    if (typeof value !== 'string')
+      throw badParam(`${param}[${name}]`, `Invalid ${param}[${name}]: metadata values must be strings.`);
+    if (name.length > METADATA_MAX_KEY_LENGTH)
+      throw badParam(
+        `${param}[${name}]`,
+        `Invalid ${param}: keys must be at most ${METADATA_MAX_KEY_LENGTH} characters.`,
+      );
+    if (value.length > METADATA_MAX_VALUE_LENGTH)
+      throw badParam(
+        `${param}[${name}]`,
+        `Invalid ${param}[${name}]: values must be at most ${METADATA_MAX_VALUE_LENGTH} characters.`,
+      );
     out[name] = value;
   }
   return out;

@@ -12,7 +12,8 @@ function daysInMonthUtc(year: number, monthIndex: number): number {
  * as calendar billing commonly does [cp].
  */
 export function addInterval(startSeconds: number, interval: BillingInterval, count = 1): number {
-  if (!Number.isInteger(count) || count < 1) throw new RangeError(`interval count must be a positive integer, got ${count}`);
+  if (!Number.isInteger(count) || count < 1)
+    throw new RangeError(`interval count must be a positive integer, got ${count}`);
   if (interval === 'day') return startSeconds + count * DAY_SECONDS;
   if (interval === 'week') return startSeconds + count * 7 * DAY_SECONDS;
   const start = new Date(startSeconds * 1000);
@@ -21,13 +22,6 @@ export function addInterval(startSeconds: number, interval: BillingInterval, cou
   const year = start.getUTCFullYear() + Math.floor(targetMonth / 12);
   const monthIndex = ((targetMonth % 12) + 12) % 12;
   const day = Math.min(start.getUTCDate(), daysInMonthUtc(year, monthIndex));
-  const end = Date.UTC(
-    year,
-    monthIndex,
-    day,
-    start.getUTCHours(),
-    start.getUTCMinutes(),
-    start.getUTCSeconds(),
-  );
+  const end = Date.UTC(year, monthIndex, day, start.getUTCHours(), start.getUTCMinutes(), start.getUTCSeconds());
   return Math.floor(end / 1000);
 }

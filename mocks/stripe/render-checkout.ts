@@ -28,7 +28,10 @@ export function renderCustomer(customer: CustomerRecord): WireShape<Stripe.Custo
   };
 }
 
-export function renderLineItems(ctx: RenderContext, session: SessionRecord): WireShape<Stripe.ApiList<Stripe.LineItem>> {
+export function renderLineItems(
+  ctx: RenderContext,
+  session: SessionRecord,
+): WireShape<Stripe.ApiList<Stripe.LineItem>> {
   return {
     object: 'list',
     data: session.lineItems.map((item) => {
@@ -111,7 +114,10 @@ export function renderSession(ctx: RenderContext, session: SessionRecord): WireS
   };
 }
 
-export function renderPortalSession(ctx: RenderContext, portal: PortalSessionRecord): WireShape<Stripe.BillingPortal.Session> {
+export function renderPortalSession(
+  ctx: RenderContext,
+  portal: PortalSessionRecord,
+): WireShape<Stripe.BillingPortal.Session> {
   return {
     id: portal.id,
     object: 'billing_portal.session',

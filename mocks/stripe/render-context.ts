@@ -12,6 +12,10 @@ export type RenderContext = {
 /** The catalogue price behind a stored record; a record pointing at a removed price is a configuration fault. */
 export function requirePrice(ctx: RenderContext, priceId: string): PriceSeed {
   const seed = ctx.catalogue.find(priceId);
-  if (!seed) throw badParam('price', `Price ${priceId} is no longer in the fake's catalogue (was it removed from the options?).`);
+  if (!seed)
+    throw badParam(
+      'price',
+      `Price ${priceId} is no longer in the fake's catalogue (was it removed from the options?).`,
+    );
   return seed;
 }

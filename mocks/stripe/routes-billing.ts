@@ -16,7 +16,8 @@ export function billingRoutes(ctx: FakeContext): Route[] {
   return [
     route('POST', '/v1/billing_portal/sessions', ({ body }) => {
       assertKnownParams(body, ['customer', 'return_url', 'flow_data', 'expand', ...PORTAL_IGNORED]);
-      if (body.flow_data !== undefined) throw badParam('flow_data', 'The local Stripe fake has one portal page; flow_data is not supported.');
+      if (body.flow_data !== undefined)
+        throw badParam('flow_data', 'The local Stripe fake has one portal page; flow_data is not supported.');
       const customerId = requiredString(body, 'customer', 200);
       if (!ctx.store.state.customers[customerId]) throw noSuchParam('customer', customerId, 'customer');
       const portal: PortalSessionRecord = {

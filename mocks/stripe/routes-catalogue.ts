@@ -5,7 +5,18 @@ import { listReply } from './list-reply';
 import { withExpand } from './lookup';
 import { assertKnownParams, expandParam, optionalBoolean, optionalList, optionalString } from './params';
 
-const PRICE_LIST_PARAMS = ['active', 'currency', 'lookup_keys', 'product', 'type', 'recurring', 'limit', 'starting_after', 'ending_before', 'expand'];
+const PRICE_LIST_PARAMS = [
+  'active',
+  'currency',
+  'lookup_keys',
+  'product',
+  'type',
+  'recurring',
+  'limit',
+  'starting_after',
+  'ending_before',
+  'expand',
+];
 
 export function catalogueRoutes(ctx: FakeContext): Route[] {
   const { catalogue } = ctx;
@@ -17,7 +28,8 @@ export function catalogueRoutes(ctx: FakeContext): Route[] {
       const product = optionalString(body, 'product', 200);
       const type = optionalString(body, 'type', 20);
       const lookupKeys = optionalList(body, 'lookup_keys').map((key, i) => {
-        if (typeof key !== 'string') throw badParam(`lookup_keys[${i}]`, `Invalid lookup_keys[${i}]: must be a string.`);
+        if (typeof key !== 'string')
+          throw badParam(`lookup_keys[${i}]`, `Invalid lookup_keys[${i}]: must be a string.`);
         return key;
       });
       const expand = expandParam(body).map((path) => path.replace(/^data\./, ''));
@@ -27,7 +39,9 @@ export function catalogueRoutes(ctx: FakeContext): Route[] {
         .filter((seed) => !currency || seed.currency === currency)
         .filter((seed) => !product || seed.productId === product)
         .filter(() => !type || type === 'recurring')
-        .filter((seed) => lookupKeys.length === 0 || (seed.lookupKey !== undefined && lookupKeys.includes(seed.lookupKey)))
+        .filter(
+          (seed) => lookupKeys.length === 0 || (seed.lookupKey !== undefined && lookupKeys.includes(seed.lookupKey)),
+        )
         .map((seed) => withExpand(ctx, catalogue.renderPrice(seed), expand));
       return json(listReply(prices, body, '/v1/prices'));
     }),

@@ -12,7 +12,13 @@ import { toJson } from './wire-types';
 function sessionReply(ctx: FakeContext, session: SessionRecord, expand: string[]) {
   const rendered = toJson(renderSession(ctx, session));
   if (expand.includes('line_items')) rendered.line_items = toJson(renderLineItems(ctx, session));
-  return json(withExpand(ctx, rendered, expand.filter((path) => path !== 'line_items')));
+  return json(
+    withExpand(
+      ctx,
+      rendered,
+      expand.filter((path) => path !== 'line_items'),
+    ),
+  );
 }
 
 export function checkoutRoutes(ctx: FakeContext): Route[] {
@@ -35,7 +41,10 @@ export function checkoutRoutes(ctx: FakeContext): Route[] {
         trialPeriodDays: params.trialPeriodDays,
         lineItems: params.lineItems,
         currency: params.seeds[0]?.currency ?? 'eur',
-        amountTotalMinor: params.lineItems.reduce((sum, item, i) => sum + (params.seeds[i]?.unitAmountMinor ?? 0) * item.quantity, 0),
+        amountTotalMinor: params.lineItems.reduce(
+          (sum, item, i) => sum + (params.seeds[i]?.unitAmountMinor ?? 0) * item.quantity,
+          0,
+        ),
         successUrl: params.successUrl,
         cancelUrl: params.cancelUrl,
         subscriptionId: null,

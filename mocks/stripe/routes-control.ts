@@ -9,7 +9,13 @@ import { advancePeriodEnd, failPayment } from './subscription-actions';
 /** An event's identity and delivery state, without its payload, for /_control/events. */
 export function eventSummary(event: EventRecord) {
   const object = event.object;
-  return { id: event.id, type: event.type, created: event.created, objectId: object.id ?? null, delivery: { ...event.delivery } };
+  return {
+    id: event.id,
+    type: event.type,
+    created: event.created,
+    objectId: object.id ?? null,
+    delivery: { ...event.delivery },
+  };
 }
 
 /** Resets the delivery record and queues the same event (same id) again. */
@@ -24,10 +30,16 @@ export function resendEvent(ctx: FakeContext, id: string): EventRecord {
 
 /** Test and demo controls; the hosted service has no equivalent, so they live under /_control/. */
 export function controlRoutes(ctx: FakeContext, onReset: () => void): Route[] {
-  const subscriptionReply = (id: string) => json(withExpand(ctx, renderSubscription(ctx, requireSubscription(ctx, id)), []));
+  const subscriptionReply = (id: string) =>
+    json(withExpand(ctx, renderSubscription(ctx, requireSubscription(ctx, id)), []));
   return [
     route('GET', '/_control/health', () =>
-      json({ ok: true, service: 'stripe-fake', subscriptions: Object.keys(ctx.store.state.subscriptions).length, events: ctx.store.state.events.length }),
+      json({
+        ok: true,
+        service: 'stripe-fake',
+        subscriptions: Object.keys(ctx.store.state.subscriptions).length,
+        events: ctx.store.state.events.length,
+      }),
     ),
     route('GET', '/_control/events', ({ url }) => {
       const type = url.searchParams.get('type');

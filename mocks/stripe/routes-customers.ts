@@ -2,7 +2,14 @@ import type { FakeContext } from './context';
 import { createCustomer } from './checkout-actions';
 import { json, type Route, route } from './http-util';
 import { requireCustomer, withExpand } from './lookup';
-import { assertKnownParams, expandParam, mergeMetadata, optionalEmail, optionalMetadata, optionalString } from './params';
+import {
+  assertKnownParams,
+  expandParam,
+  mergeMetadata,
+  optionalEmail,
+  optionalMetadata,
+  optionalString,
+} from './params';
 import { renderCustomer } from './render-checkout';
 
 // Accepted so the app may send them; the fake has no use for them.

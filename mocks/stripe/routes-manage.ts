@@ -61,7 +61,11 @@ export function manageRoutes(ctx: FakeContext): Route[] {
         }),
       );
     }),
-    route('POST', '/manage/:id/subscriptions/:sub/cancel', ({ params }) => portalChange(ctx, params[0] ?? '', params[1] ?? '', true)),
-    route('POST', '/manage/:id/subscriptions/:sub/resume', ({ params }) => portalChange(ctx, params[0] ?? '', params[1] ?? '', false)),
+    route('POST', '/manage/:id/subscriptions/:sub/cancel', ({ params }) =>
+      portalChange(ctx, params[0] ?? '', params[1] ?? '', true),
+    ),
+    route('POST', '/manage/:id/subscriptions/:sub/resume', ({ params }) =>
+      portalChange(ctx, params[0] ?? '', params[1] ?? '', false),
+    ),
   ];
 }

@@ -44,7 +44,13 @@ function pageModel(ctx: FakeContext, session: SessionRecord, values: Partial<Car
 function closedPage(session: SessionRecord) {
   if (session.status === 'complete') {
     const href = session.successUrl.replaceAll('{CHECKOUT_SESSION_ID}', session.id);
-    return html(messagePage('Already paid', 'This checkout is complete; the subscription is active.', { href, label: 'Continue to Dutywise' }), 409);
+    return html(
+      messagePage('Already paid', 'This checkout is complete; the subscription is active.', {
+        href,
+        label: 'Continue to Dutywise',
+      }),
+      409,
+    );
   }
   const link = session.cancelUrl ? { href: session.cancelUrl, label: 'Back to Dutywise' } : undefined;
   return html(messagePage('Checkout expired', 'This checkout has expired. Start a new one from Dutywise.', link), 410);
@@ -55,7 +61,13 @@ function formInput(body: FormObject): CardFormInput {
     const value = body[key];
     return typeof value === 'string' ? value : '';
   };
-  return { email: text('email'), cardNumber: text('cardNumber'), expiry: text('expiry'), cvc: text('cvc'), name: text('name') };
+  return {
+    email: text('email'),
+    cardNumber: text('cardNumber'),
+    expiry: text('expiry'),
+    cvc: text('cvc'),
+    name: text('name'),
+  };
 }
 
 export function payRoutes(ctx: FakeContext): Route[] {
@@ -90,4 +102,3 @@ export function payRoutes(ctx: FakeContext): Route[] {
     }),
   ];
 }
-

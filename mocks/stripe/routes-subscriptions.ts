@@ -3,7 +3,14 @@ import type { FakeContext } from './context';
 import { json, type Route, route } from './http-util';
 import { listReply } from './list-reply';
 import { requireSubscription, withExpand } from './lookup';
-import { assertKnownParams, expandParam, mergeMetadata, optionalBoolean, optionalMetadata, optionalString } from './params';
+import {
+  assertKnownParams,
+  expandParam,
+  mergeMetadata,
+  optionalBoolean,
+  optionalMetadata,
+  optionalString,
+} from './params';
 import { renderSubscription } from './render-billing';
 import { cancelSubscriptionNow, updateSubscription } from './subscription-actions';
 
@@ -11,7 +18,18 @@ const LIST_PARAMS = ['customer', 'status', 'price', 'limit', 'starting_after', '
 // Accepted and ignored: proration and collection settings make no difference to a fake charge.
 const UPDATE_PARAMS = ['cancel_at_period_end', 'metadata', 'expand', 'proration_behavior', 'cancellation_details'];
 const CANCEL_PARAMS = ['invoice_now', 'prorate', 'cancellation_details', 'expand'];
-const STATUSES = ['active', 'trialing', 'past_due', 'canceled', 'all', 'ended', 'incomplete', 'incomplete_expired', 'unpaid', 'paused'];
+const STATUSES = [
+  'active',
+  'trialing',
+  'past_due',
+  'canceled',
+  'all',
+  'ended',
+  'incomplete',
+  'incomplete_expired',
+  'unpaid',
+  'paused',
+];
 
 export function subscriptionRoutes(ctx: FakeContext): Route[] {
   return [
@@ -20,13 +38,18 @@ export function subscriptionRoutes(ctx: FakeContext): Route[] {
       const customer = optionalString(body, 'customer', 200);
       const status = optionalString(body, 'status', 30);
       const price = optionalString(body, 'price', 200);
-      if (status !== undefined && !STATUSES.includes(status)) throw badParam('status', `Invalid status: '${status}' (one of ${STATUSES.join(', ')}).`);
+      if (status !== undefined && !STATUSES.includes(status))
+        throw badParam('status', `Invalid status: '${status}' (one of ${STATUSES.join(', ')}).`);
       const expand = expandParam(body).map((path) => path.replace(/^data\./, ''));
       const matches = Object.values(ctx.store.state.subscriptions)
         .filter((sub) => !customer || sub.customerId === customer)
         .filter((sub) => !price || sub.items.some((item) => item.priceId === price))
         // Stripe's default list leaves canceled subscriptions out [mem].
-        .filter((sub) => (status === undefined ? sub.status !== 'canceled' : status === 'all' || sub.status === status || (status === 'ended' && sub.status === 'canceled')))
+        .filter((sub) =>
+          status === undefined
+            ? sub.status !== 'canceled'
+            : status === 'all' || sub.status === status || (status === 'ended' && sub.status === 'canceled'),
+        )
         .sort((a, b) => b.created - a.created)
         .map((sub) => withExpand(ctx, renderSubscription(ctx, sub), expand));
       return json(listReply(matches, body, '/v1/subscriptions'));

@@ -42,9 +42,18 @@ function authError(req: IncomingMessage): StripeApiError | undefined {
   const header = req.headers.authorization ?? '';
   const key = /^Bearer\s+(\S+)$/i.exec(header)?.[1];
   if (!key) {
-    return new StripeApiError(401, 'invalid_request_error', 'You did not provide an API key. Send it as a Bearer token in the Authorization header.');
+    return new StripeApiError(
+      401,
+      'invalid_request_error',
+      'You did not provide an API key. Send it as a Bearer token in the Authorization header.',
+    );
   }
-  if (/^(sk|rk)_live_/.test(key)) return new StripeApiError(401, 'invalid_request_error', 'The local Stripe fake refuses live keys; use a sk_test_ key.');
+  if (/^(sk|rk)_live_/.test(key))
+    return new StripeApiError(
+      401,
+      'invalid_request_error',
+      'The local Stripe fake refuses live keys; use a sk_test_ key.',
+    );
   return undefined;
 }
 
@@ -56,14 +65,20 @@ function errorReply(error: unknown, pathname: string, options: ResolvedOptions):
         ? new StripeApiError(400, 'invalid_request_error', error.message)
         : undefined;
   if (!apiError) options.log(`unexpected error on ${pathname}: ${(error as Error).stack ?? String(error)}`);
-  const reply = apiError ?? new StripeApiError(500, 'api_error', 'The local Stripe fake hit an unexpected error; see its log.');
+  const reply =
+    apiError ?? new StripeApiError(500, 'api_error', 'The local Stripe fake hit an unexpected error; see its log.');
   if (pathname.startsWith('/pay/') || pathname.startsWith('/manage/')) {
     return html(messagePage('Page not available', reply.message), reply.statusCode);
   }
   return json(reply.toBody(), reply.statusCode);
 }
 
-async function handle(req: IncomingMessage, res: ServerResponse, routes: Route[], options: ResolvedOptions): Promise<void> {
+async function handle(
+  req: IncomingMessage,
+  res: ServerResponse,
+  routes: Route[],
+  options: ResolvedOptions,
+): Promise<void> {
   const url = new URL(req.url ?? '/', 'http://fake.invalid');
   const method = req.method ?? 'GET';
   let reply: Reply;
@@ -74,7 +89,11 @@ async function handle(req: IncomingMessage, res: ServerResponse, routes: Route[]
     }
     const found = matchRoute(routes, method, url.pathname);
     if (!found) {
-      throw new StripeApiError(404, 'invalid_request_error', `Unrecognized request URL (${method}: ${url.pathname}). The local Stripe fake serves only the calls Dutywise makes.`);
+      throw new StripeApiError(
+        404,
+        'invalid_request_error',
+        `Unrecognized request URL (${method}: ${url.pathname}). The local Stripe fake serves only the calls Dutywise makes.`,
+      );
     }
     const raw = method === 'GET' ? '' : await readBody(req);
     const body = { ...parseForm(url.search.slice(1)), ...parseForm(raw) };

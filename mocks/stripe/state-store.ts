@@ -37,10 +37,14 @@ function loadState(path: string): FakeState {
     parsed = JSON.parse(text);
   } catch (error) {
     // Refuse rather than start empty: silently dropping paid subscriptions would be worse.
-    throw new Error(`Stripe fake state file ${path} is not valid JSON (${(error as Error).message}); move it aside to start fresh.`);
+    throw new Error(
+      `Stripe fake state file ${path} is not valid JSON (${(error as Error).message}); move it aside to start fresh.`,
+    );
   }
   if (typeof parsed !== 'object' || parsed === null || (parsed as { version?: unknown }).version !== 1) {
-    throw new Error(`Stripe fake state file ${path} has an unknown layout (expected version 1); move it aside to start fresh.`);
+    throw new Error(
+      `Stripe fake state file ${path} has an unknown layout (expected version 1); move it aside to start fresh.`,
+    );
   }
   return { ...emptyState(), ...(parsed as FakeState) };
 }

@@ -11,7 +11,12 @@ import { toJson } from './wire-types';
 
 function refuseIfCanceled(sub: SubscriptionRecord): void {
   if (sub.status === 'canceled') {
-    throw new StripeApiError(400, 'invalid_request_error', `Subscription ${sub.id} is canceled; a canceled subscription cannot be changed.`, 'subscription');
+    throw new StripeApiError(
+      400,
+      'invalid_request_error',
+      `Subscription ${sub.id} is canceled; a canceled subscription cannot be changed.`,
+      'subscription',
+    );
   }
 }
 
@@ -85,7 +90,10 @@ export function advancePeriodEnd(ctx: FakeContext, sub: SubscriptionRecord): voi
 export function failPayment(ctx: FakeContext, sub: SubscriptionRecord): void {
   refuseIfCanceled(sub);
   const before = toJson(renderSubscription(ctx, sub));
-  const invoice = createInvoice(ctx, sub, 'subscription_cycle', 'open', { start: sub.currentPeriodStart, end: sub.currentPeriodEnd });
+  const invoice = createInvoice(ctx, sub, 'subscription_cycle', 'open', {
+    start: sub.currentPeriodStart,
+    end: sub.currentPeriodEnd,
+  });
   sub.status = 'past_due';
   const after = toJson(renderSubscription(ctx, sub));
   ctx.store.save();

@@ -119,7 +119,11 @@ export class WebhookSender {
     try {
       const response = await fetch(this.options.url, {
         method: 'POST',
-        headers: { 'content-type': 'application/json; charset=utf-8', 'stripe-signature': header, 'user-agent': 'DutywiseStripeFake/1.0' },
+        headers: {
+          'content-type': 'application/json; charset=utf-8',
+          'stripe-signature': header,
+          'user-agent': 'DutywiseStripeFake/1.0',
+        },
         body: payload,
         signal: AbortSignal.any([this.abort.signal, AbortSignal.timeout(this.options.timeoutMs)]),
       });

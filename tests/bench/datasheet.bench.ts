@@ -21,14 +21,45 @@ function cpuMs(): number {
 }
 
 async function main() {
-  const [acct] = await db.insert(accounts).values({ name: `Datasheet bench ${randomUUID().slice(0, 6)}`, site: 'Bench hall', billingContactEmail: 'bench@customer.example' }).returning({ id: accounts.id });
-  const [u] = await db.insert(users).values({ email: `ds-bench-${randomUUID()}@bench.example`, name: 'Datasheet bench', role: 'sales_engineer' }).returning({ id: users.id });
-  const user: CurrentUser = { id: u!.id, email: 'ds-bench@bench.example', name: 'Datasheet bench', role: 'sales_engineer', accountId: null, unitSystem: 'si' };
+  const [acct] = await db
+    .insert(accounts)
+    .values({
+      name: `Datasheet bench ${randomUUID().slice(0, 6)}`,
+      site: 'Bench hall',
+      billingContactEmail: 'bench@customer.example',
+    })
+    .returning({ id: accounts.id });
+  const [u] = await db
+    .insert(users)
+    .values({ email: `ds-bench-${randomUUID()}@bench.example`, name: 'Datasheet bench', role: 'sales_engineer' })
+    .returning({ id: users.id });
+  const user: CurrentUser = {
+    id: u!.id,
+    email: 'ds-bench@bench.example',
+    name: 'Datasheet bench',
+    role: 'sales_engineer',
+    accountId: null,
+    unitSystem: 'si',
+  };
   // The demo scenario's heaters and compressors (invented duty points), one sizing each.
   const sizingIds: string[] = [];
   for (const s of seedSizings) {
     const result = calculate(s.input);
-    const row = await db.transaction((tx) => insertSizing(tx, user, { accountId: acct!.id, title: s.title, equipmentTag: s.tag, notes: undefined, quoteId: undefined, revisedFromId: undefined }, { input: s.input, result }));
+    const row = await db.transaction((tx) =>
+      insertSizing(
+        tx,
+        user,
+        {
+          accountId: acct!.id,
+          title: s.title,
+          equipmentTag: s.tag,
+          notes: undefined,
+          quoteId: undefined,
+          revisedFromId: undefined,
+        },
+        { input: s.input, result },
+      ),
+    );
     sizingIds.push(row.id);
   }
   const store = getBlobStore();
@@ -43,7 +74,10 @@ async function main() {
   for (let i = 0; i < ISSUES; i++) {
     const c0 = cpuMs();
     const t0 = performance.now();
-    const issued = await issueDatasheet(user, { sizingId: sizingIds[i % sizingIds.length]!, note: `Bench revision ${i}` });
+    const issued = await issueDatasheet(user, {
+      sizingId: sizingIds[i % sizingIds.length]!,
+      note: `Bench revision ${i}`,
+    });
     wall.push(performance.now() - t0);
     cpu.push(cpuMs() - c0);
     bytes += issued.byteSize;
@@ -51,13 +85,16 @@ async function main() {
   const median = percentile(wall, 50);
   const p95 = percentile(wall, 95);
   const ms = (v: number) => `${v.toFixed(0)} ms`;
-  recordResults(`Datasheet render-and-store (${ISSUES} issues, ${store.kind} blob store, ${(bytes / ISSUES / 1024).toFixed(0)} KiB average PDF)`, [
-    ['median wall clock per issue', ms(median), '< 300 ms', verdict(median < 300)],
-    ['p95 wall clock per issue', ms(p95), '< 600 ms', verdict(p95 < 600)],
-    ['median CPU of this process per issue', ms(percentile(cpu, 50)), 'info', '-'],
-    ['max wall clock per issue', ms(Math.max(...wall)), 'info', '-'],
-    ['first issue in a fresh process (fonts, renderer load)', ms(coldMs), 'info', '-'],
-  ]);
+  recordResults(
+    `Datasheet render-and-store (${ISSUES} issues, ${store.kind} blob store, ${(bytes / ISSUES / 1024).toFixed(0)} KiB average PDF)`,
+    [
+      ['median wall clock per issue', ms(median), '< 300 ms', verdict(median < 300)],
+      ['p95 wall clock per issue', ms(p95), '< 600 ms', verdict(p95 < 600)],
+      ['median CPU of this process per issue', ms(percentile(cpu, 50)), 'info', '-'],
+      ['max wall clock per issue', ms(Math.max(...wall)), 'info', '-'],
+      ['first issue in a fresh process (fonts, renderer load)', ms(coldMs), 'info', '-'],
+    ],
+  );
   console.log(`\n${verdict(median < 300 && p95 < 600)}: median ${ms(median)}, p95 ${ms(p95)}`);
   await pool.end();
 }

@@ -3,8 +3,15 @@
 // not distort them; wall-clock figures are printed beside. Nothing here asserts.
 import { presetGas } from '../../lib/thermo';
 import {
-  calculate, calculateCore, sizeCompressor, sizeHeater, sizingRequestSchema, DEFAULT_HEATER_RATINGS_KW,
-  type CompressorCase, type HeaterCase, type SizingInput,
+  calculate,
+  calculateCore,
+  sizeCompressor,
+  sizeHeater,
+  sizingRequestSchema,
+  DEFAULT_HEATER_RATINGS_KW,
+  type CompressorCase,
+  type HeaterCase,
+  type SizingInput,
 } from '../../lib/sizing';
 
 type Row = { name: string; value: number; wall: number; unit: string; target: number; higherIsBetter: boolean };
@@ -36,8 +43,16 @@ const nitrogen = presetGas('nitrogen')!;
 const methane = presetGas('natural-gas')!;
 
 const heaterCase: HeaterCase = {
-  gas: air, massFlowKgPerS: 0.5, inletTemperatureK: 293.15, outletTemperatureK: 623.15, pressurePa: 101_325,
-  heatLossPercent: 5, designMarginPercent: 10, voltageV: 400, phases: 3, ratingsKw: DEFAULT_HEATER_RATINGS_KW,
+  gas: air,
+  massFlowKgPerS: 0.5,
+  inletTemperatureK: 293.15,
+  outletTemperatureK: 623.15,
+  pressurePa: 101_325,
+  heatLossPercent: 5,
+  designMarginPercent: 10,
+  voltageV: 400,
+  phases: 3,
+  ratingsKw: DEFAULT_HEATER_RATINGS_KW,
 };
 const heaterRate = rate((i) => {
   heaterCase.outletTemperatureK = 500 + (i & 255);
@@ -46,11 +61,25 @@ const heaterRate = rate((i) => {
 });
 
 const compressorCase: CompressorCase = {
-  gas: air, massFlowKgPerS: 1, suctionTemperatureK: 293.15, suctionPressurePa: 100_000, dischargePressurePa: 2_000_000,
-  interstageDropFraction: 0.01, intercoolerOutletTemperatureK: 308.15, aftercoolerOutletTemperatureK: null,
-  kOverride: null, cpOverride: null, stages: 3, isentropicEfficiency: 0.8, polytropicEfficiency: null,
-  method: 'variable-cp', mechanicalEfficiency: 0.98, dischargeLimitK: 423.15, motorEfficiency: null,
-  motorPowerFactor: null, supply: null,
+  gas: air,
+  massFlowKgPerS: 1,
+  suctionTemperatureK: 293.15,
+  suctionPressurePa: 100_000,
+  dischargePressurePa: 2_000_000,
+  interstageDropFraction: 0.01,
+  intercoolerOutletTemperatureK: 308.15,
+  aftercoolerOutletTemperatureK: null,
+  kOverride: null,
+  cpOverride: null,
+  stages: 3,
+  isentropicEfficiency: 0.8,
+  polytropicEfficiency: null,
+  method: 'variable-cp',
+  mechanicalEfficiency: 0.98,
+  dischargeLimitK: 423.15,
+  motorEfficiency: null,
+  motorPowerFactor: null,
+  supply: null,
 };
 const gases = [air, nitrogen, methane];
 const compressorRate = rate((i) => {
@@ -60,15 +89,24 @@ const compressorRate = rate((i) => {
 });
 
 const heaterRequest = {
-  service: 'heater', gas: { preset: 'air' }, flow: { value: 2000, unit: 'kg/h' },
+  service: 'heater',
+  gas: { preset: 'air' },
+  flow: { value: 2000, unit: 'kg/h' },
   inlet: { temperature: { value: 20, unit: 'degC' }, pressure: { value: 101.325, unit: 'kPa' } },
-  outletTemperature: { value: 350, unit: 'degC' }, heatLossPercent: 5, designMarginPercent: 10,
+  outletTemperature: { value: 350, unit: 'degC' },
+  heatLossPercent: 5,
+  designMarginPercent: 10,
 };
 const compressorRequest = {
-  service: 'compressor', gas: { components: { CH4: 0.9, C2H6: 0.05, N2: 0.05 } }, flow: { value: 5000, unit: 'Nm3/h' },
+  service: 'compressor',
+  gas: { components: { CH4: 0.9, C2H6: 0.05, N2: 0.05 } },
+  flow: { value: 5000, unit: 'Nm3/h' },
   inlet: { temperature: { value: 25, unit: 'degC' }, pressure: { value: 2, unit: 'barg' } },
-  dischargePressure: { value: 40, unit: 'barg' }, isentropicEfficiency: 0.78, stages: 3,
-  intercoolerOutletTemperature: { value: 40, unit: 'degC' }, interstagePressureDropPercent: 1.5,
+  dischargePressure: { value: 40, unit: 'barg' },
+  isentropicEfficiency: 0.78,
+  stages: 3,
+  intercoolerOutletTemperature: { value: 40, unit: 'degC' },
+  interstagePressureDropPercent: 1.5,
 };
 const heaterCalcRate = rate((i) => {
   heaterRequest.flow.value = 1000 + (i & 1023);
@@ -86,19 +124,30 @@ const coreCalcRate = rate(() => calculateCore(parsedHeater).massFlowKgPerS);
 const presets = ['air', 'nitrogen', 'methane', 'natural-gas', 'hydrogen', 'carbon-dioxide', 'steam', 'propane'];
 const rows: unknown[] = [];
 for (let i = 0; i < 10_000; i++) {
-  const gas = i % 11 === 0 ? { preset: 'humid-air', relativeHumidityPercent: 40 + (i % 50) } : { preset: presets[i % presets.length] };
+  const gas =
+    i % 11 === 0
+      ? { preset: 'humid-air', relativeHumidityPercent: 40 + (i % 50) }
+      : { preset: presets[i % presets.length] };
   const inletC = presets[i % presets.length] === 'steam' ? 150 : 10 + (i % 30);
   if (i % 2 === 0) {
     rows.push({
-      service: 'heater', gas, flow: { value: String(500 + i), unit: i % 4 === 0 ? 'kg/h' : 'Nm3/h' },
+      service: 'heater',
+      gas,
+      flow: { value: String(500 + i), unit: i % 4 === 0 ? 'kg/h' : 'Nm3/h' },
       inlet: { temperature: { value: inletC, unit: 'degC' }, pressure: { value: 3 + (i % 5), unit: 'barg' } },
-      outletTemperature: { value: 200 + (i % 300), unit: 'degC' }, heatLossPercent: '5', designMarginPercent: 15,
+      outletTemperature: { value: 200 + (i % 300), unit: 'degC' },
+      heatLossPercent: '5',
+      designMarginPercent: 15,
     });
   } else {
     rows.push({
-      service: 'compressor', gas, flow: { value: 1000 + i, unit: i % 3 === 0 ? 'SCFM' : 'kg/h' },
+      service: 'compressor',
+      gas,
+      flow: { value: 1000 + i, unit: i % 3 === 0 ? 'SCFM' : 'kg/h' },
       inlet: { temperature: { value: inletC, unit: 'degC' }, pressure: { value: 1, unit: 'bar' } },
-      dischargePressure: { value: 5 + (i % 20), unit: 'bar' }, polytropicEfficiency: 0.82, stages: 1 + (i % 4),
+      dischargePressure: { value: 5 + (i % 20), unit: 'bar' },
+      polytropicEfficiency: 0.82,
+      stages: 1 + (i % 4),
       method: i % 5 === 0 ? 'constant-k' : 'variable-cp',
     });
   }
@@ -122,21 +171,74 @@ const coldBatch = runBatch();
 const warmBatch = runBatch();
 
 const table: Row[] = [
-  { name: 'heater sizing, core (sizeHeater)', value: heaterRate.cpu, wall: heaterRate.wall, unit: '/s', target: 1_000_000, higherIsBetter: true },
-  { name: '3-stage compressor sizing, core (both methods + stage search)', value: compressorRate.cpu, wall: compressorRate.wall, unit: '/s', target: 100_000, higherIsBetter: true },
-  { name: 'calculate() validated, heater', value: heaterCalcRate.cpu, wall: heaterCalcRate.wall, unit: '/s', target: 50_000, higherIsBetter: true },
-  { name: 'calculate() validated, 3-stage compressor mixture', value: compressorCalcRate.cpu, wall: compressorCalcRate.wall, unit: '/s', target: 50_000, higherIsBetter: true },
-  { name: 'calculateCore() typed heater (no zod)', value: coreCalcRate.cpu, wall: coreCalcRate.wall, unit: '/s', target: 50_000, higherIsBetter: true },
-  { name: `10,000-row mixed batch via calculate(), first pass (${coldBatch.refused} refused)`, value: coldBatch.cpu, wall: coldBatch.wall, unit: ' s', target: 1, higherIsBetter: false },
-  { name: '10,000-row mixed batch via calculate(), second pass', value: warmBatch.cpu, wall: warmBatch.wall, unit: ' s', target: 1, higherIsBetter: false },
+  {
+    name: 'heater sizing, core (sizeHeater)',
+    value: heaterRate.cpu,
+    wall: heaterRate.wall,
+    unit: '/s',
+    target: 1_000_000,
+    higherIsBetter: true,
+  },
+  {
+    name: '3-stage compressor sizing, core (both methods + stage search)',
+    value: compressorRate.cpu,
+    wall: compressorRate.wall,
+    unit: '/s',
+    target: 100_000,
+    higherIsBetter: true,
+  },
+  {
+    name: 'calculate() validated, heater',
+    value: heaterCalcRate.cpu,
+    wall: heaterCalcRate.wall,
+    unit: '/s',
+    target: 50_000,
+    higherIsBetter: true,
+  },
+  {
+    name: 'calculate() validated, 3-stage compressor mixture',
+    value: compressorCalcRate.cpu,
+    wall: compressorCalcRate.wall,
+    unit: '/s',
+    target: 50_000,
+    higherIsBetter: true,
+  },
+  {
+    name: 'calculateCore() typed heater (no zod)',
+    value: coreCalcRate.cpu,
+    wall: coreCalcRate.wall,
+    unit: '/s',
+    target: 50_000,
+    higherIsBetter: true,
+  },
+  {
+    name: `10,000-row mixed batch via calculate(), first pass (${coldBatch.refused} refused)`,
+    value: coldBatch.cpu,
+    wall: coldBatch.wall,
+    unit: ' s',
+    target: 1,
+    higherIsBetter: false,
+  },
+  {
+    name: '10,000-row mixed batch via calculate(), second pass',
+    value: warmBatch.cpu,
+    wall: warmBatch.wall,
+    unit: ' s',
+    target: 1,
+    higherIsBetter: false,
+  },
 ];
 
 const fmt = (v: number, unit: string) => (unit === ' s' ? v.toFixed(3) : Math.round(v).toLocaleString('en-US')) + unit;
 const width = Math.max(...table.map((r) => r.name.length));
-console.log(`${'measure (per CPU-second, one core)'.padEnd(width)}  ${'result'.padStart(14)}  ${'target'.padStart(14)}  verdict  ${'wall clock'.padStart(14)}`);
+console.log(
+  `${'measure (per CPU-second, one core)'.padEnd(width)}  ${'result'.padStart(14)}  ${'target'.padStart(14)}  verdict  ${'wall clock'.padStart(14)}`,
+);
 for (const r of table) {
   const pass = r.higherIsBetter ? r.value >= r.target : r.value <= r.target;
   const target = (r.higherIsBetter ? '>= ' : '< ') + fmt(r.target, r.unit);
-  console.log(`${r.name.padEnd(width)}  ${fmt(r.value, r.unit).padStart(14)}  ${target.padStart(14)}  ${(pass ? 'PASS' : 'MISS').padEnd(7)}  ${fmt(r.wall, r.unit).padStart(14)}`);
+  console.log(
+    `${r.name.padEnd(width)}  ${fmt(r.value, r.unit).padStart(14)}  ${target.padStart(14)}  ${(pass ? 'PASS' : 'MISS').padEnd(7)}  ${fmt(r.wall, r.unit).padStart(14)}`,
+  );
 }
 if (sink === 42) console.log(''); // keeps the work observable to the optimiser

@@ -7,9 +7,13 @@ const app = process.env.BENCH_APP_URL ?? 'http://localhost:3200';
 const bare = process.env.BENCH_BARE_URL ?? 'http://127.0.0.1:3299';
 const seconds = Number(process.env.BENCH_LOAD_SECONDS ?? 30);
 const body = JSON.stringify({
-  service: 'heater', gas: { preset: 'air' }, flow: { value: 2000, unit: 'kg/h' },
+  service: 'heater',
+  gas: { preset: 'air' },
+  flow: { value: 2000, unit: 'kg/h' },
   inlet: { temperature: { value: 15, unit: 'degC' }, pressure: { value: 3, unit: 'barg' } },
-  outletTemperature: { value: 320, unit: 'degC' }, heatLossPercent: 5, designMarginPercent: 10,
+  outletTemperature: { value: 320, unit: 'degC' },
+  heatLossPercent: 5,
+  designMarginPercent: 10,
 });
 
 type Row = [string, string, string, string];
@@ -19,12 +23,30 @@ type HitOptions = { method?: 'GET' | 'POST'; body?: string; headers?: Record<str
 
 async function hit(url: string, connections: number, opts: HitOptions): Promise<Run> {
   const requests = opts.paths?.map((path) => ({ method: 'GET' as const, path }));
-  const r = await autocannon({ url, connections, duration: seconds, method: opts.method ?? 'GET', body: opts.body, headers: { 'content-type': 'application/json', ...opts.headers }, requests });
-  return { rps: r.requests.average, p50: r.latency.p50, p99: r.latency.p99, errors: r.errors + r.timeouts, non2xx: r.non2xx };
+  const r = await autocannon({
+    url,
+    connections,
+    duration: seconds,
+    method: opts.method ?? 'GET',
+    body: opts.body,
+    headers: { 'content-type': 'application/json', ...opts.headers },
+    requests,
+  });
+  return {
+    rps: r.requests.average,
+    p50: r.latency.p50,
+    p99: r.latency.p99,
+    errors: r.errors + r.timeouts,
+    non2xx: r.non2xx,
+  };
 }
 
 async function supportCookie(): Promise<string> {
-  const res = await fetch(`${app}/api/auth/sign-in`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: 'priya.caldwell@halvard.example', password: 'dutywise-demo' }) });
+  const res = await fetch(`${app}/api/auth/sign-in`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ email: 'priya.caldwell@halvard.example', password: 'dutywise-demo' }),
+  });
   const cookie = res.headers.get('set-cookie')?.split(';')[0];
   if (!res.ok || !cookie) throw new Error(`could not sign in for the search load (HTTP ${res.status})`);
   return cookie;
@@ -36,7 +58,9 @@ async function searchPaths(cookie: string): Promise<string[]> {
   const res = await fetch(`${app}/api/v1/support/search?q=EH-4711`, { headers: { cookie } });
   const first = ((await res.json()) as { hits: { number: string; accountName: string }[] }).hits[0];
   if (!first) throw new Error('the benchmark database has no sizing tagged EH-4711; run generate-sizings first');
-  return ['EH-4711', first.accountName, first.number, 'EH-47'].map((q) => `/api/v1/support/search?q=${encodeURIComponent(q)}`);
+  return ['EH-4711', first.accountName, first.number, 'EH-47'].map(
+    (q) => `/api/v1/support/search?q=${encodeURIComponent(q)}`,
+  );
 }
 
 async function main() {
@@ -52,18 +76,48 @@ async function main() {
     const floor = connections === 50 ? await hit(`${app}/api/v1/openapi`, connections, {}) : null;
     const ratio = c.rps / b.rps;
     rows.push(
-      [`bare node:http calculate, ${connections} conn: req/s, p50/p99`, `${b.rps.toFixed(0)}, ${b.p50}/${b.p99} ms`, 'yardstick', '—'],
-      [`Next calculate, ${connections} conn: req/s, p50/p99`, `${c.rps.toFixed(0)}, ${c.p50}/${c.p99} ms`, connections === 50 ? 'p99 < 50 ms' : '—', connections === 50 ? verdict(c.p99 < 50) : '—'],
-      [`Next calculate, ${connections} conn: errors, non-2xx`, `${c.errors}, ${c.non2xx}`, '0, 0', verdict(c.errors === 0 && c.non2xx === 0)],
+      [
+        `bare node:http calculate, ${connections} conn: req/s, p50/p99`,
+        `${b.rps.toFixed(0)}, ${b.p50}/${b.p99} ms`,
+        'yardstick',
+        '—',
+      ],
+      [
+        `Next calculate, ${connections} conn: req/s, p50/p99`,
+        `${c.rps.toFixed(0)}, ${c.p50}/${c.p99} ms`,
+        connections === 50 ? 'p99 < 50 ms' : '—',
+        connections === 50 ? verdict(c.p99 < 50) : '—',
+      ],
+      [
+        `Next calculate, ${connections} conn: errors, non-2xx`,
+        `${c.errors}, ${c.non2xx}`,
+        '0, 0',
+        verdict(c.errors === 0 && c.non2xx === 0),
+      ],
       [`Next / bare throughput, ${connections} conn`, ratio.toFixed(2), '≥ 0.50', verdict(ratio >= 0.5)],
       ...(floor
         ? [
-            [`Next floor (GET /api/v1/openapi), ${connections} conn: req/s, p50/p99`, `${floor.rps.toFixed(0)}, ${floor.p50}/${floor.p99} ms`, 'info', '—'] as Row,
+            [
+              `Next floor (GET /api/v1/openapi), ${connections} conn: req/s, p50/p99`,
+              `${floor.rps.toFixed(0)}, ${floor.p50}/${floor.p99} ms`,
+              'info',
+              '—',
+            ] as Row,
             [`Next floor / bare throughput, ${connections} conn`, (floor.rps / b.rps).toFixed(2), 'info', '—'] as Row,
           ]
         : []),
-      [`support search (tag, customer, number, broad prefix), ${connections} conn: req/s, p50/p99`, `${s.rps.toFixed(0)}, ${s.p50}/${s.p99} ms`, '—', '—'],
-      [`support search, ${connections} conn: errors, non-2xx`, `${s.errors}, ${s.non2xx}`, '0, 0', verdict(s.errors === 0 && s.non2xx === 0)],
+      [
+        `support search (tag, customer, number, broad prefix), ${connections} conn: req/s, p50/p99`,
+        `${s.rps.toFixed(0)}, ${s.p50}/${s.p99} ms`,
+        '—',
+        '—',
+      ],
+      [
+        `support search, ${connections} conn: errors, non-2xx`,
+        `${s.errors}, ${s.non2xx}`,
+        '0, 0',
+        verdict(s.errors === 0 && s.non2xx === 0),
+      ],
     );
   }
   recordResults(`HTTP load (${seconds} s a run, loopback)`, rows);

@@ -14,7 +14,12 @@ const resultsFile = path.join(__dirname, 'RESULTS.md');
 /** Appends a section to tests/bench/RESULTS.md (started fresh by run.sh). */
 export function recordResults(title: string, rows: [string, string, string, string][]): void {
   if (!existsSync(resultsFile)) writeFileSync(resultsFile, machineHeader());
-  const lines = [`\n## ${title}\n`, '| measure | result | target | verdict |', '|---|---|---|---|', ...rows.map((r) => `| ${r.join(' | ')} |`)];
+  const lines = [
+    `\n## ${title}\n`,
+    '| measure | result | target | verdict |',
+    '|---|---|---|---|',
+    ...rows.map((r) => `| ${r.join(' | ')} |`),
+  ];
   appendFileSync(resultsFile, `${lines.join('\n')}\n`);
   console.log(`\n${title}`);
   for (const r of rows) console.log(`  ${r[0].padEnd(48)} ${r[1].padStart(14)}   target ${r[2].padEnd(14)} ${r[3]}`);

@@ -37,8 +37,14 @@ function classify(status: number, location: string | null): Outcome {
 test('every page and route handler has a row in the access table', () => {
   const files = new Set(routeFiles(path.join(root, 'app')));
   const covered = new Set(accessTable.map((r) => r.file));
-  expect([...files].filter((f) => !covered.has(f)), 'routes without an access row').toEqual([]);
-  expect([...covered].filter((f) => !files.has(f)), 'access rows for routes that do not exist').toEqual([]);
+  expect(
+    [...files].filter((f) => !covered.has(f)),
+    'routes without an access row',
+  ).toEqual([]);
+  expect(
+    [...covered].filter((f) => !files.has(f)),
+    'access rows for routes that do not exist',
+  ).toEqual([]);
 });
 
 test('each role reaches exactly what the table allows, and nothing of another account', async () => {
@@ -49,10 +55,17 @@ test('each role reaches exactly what the table allows, and nothing of another ac
     const ctx = await contextFor(who);
     for (const row of accessTable) {
       const url = row.path.replace(/:([a-zA-Z]+)/g, (_, k: string) => ids[k] ?? k);
-      const res = row.method === 'POST' ? await ctx.post(url, { data: row.body ?? {}, maxRedirects: 0 }) : await ctx.get(url, { maxRedirects: 0 });
+      const res =
+        row.method === 'POST'
+          ? await ctx.post(url, { data: row.body ?? {}, maxRedirects: 0 })
+          : await ctx.get(url, { maxRedirects: 0 });
       const expected = row.expect[who];
-      const got = typeof expected === 'number' ? res.status() : classify(res.status(), res.headers()['location'] ?? null);
-      if (got !== expected) failures.push(`${row.method ?? 'GET'} ${row.path} as ${who}: got ${got} (HTTP ${res.status()}), expected ${expected}`);
+      const got =
+        typeof expected === 'number' ? res.status() : classify(res.status(), res.headers()['location'] ?? null);
+      if (got !== expected)
+        failures.push(
+          `${row.method ?? 'GET'} ${row.path} as ${who}: got ${got} (HTTP ${res.status()}), expected ${expected}`,
+        );
     }
     await ctx.dispose();
   }

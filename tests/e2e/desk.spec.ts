@@ -10,10 +10,22 @@ import { convertQuantity } from '@/lib/units';
 
 const shots = path.join(__dirname, '__screenshots__');
 
-type HeaterSpec = { flow: [string, string]; inletT: [string, string]; pressure: [string, string]; outletT: [string, string]; system: 'si' | 'us' };
+type HeaterSpec = {
+  flow: [string, string];
+  inletT: [string, string];
+  pressure: [string, string];
+  outletT: [string, string];
+  system: 'si' | 'us';
+};
 type CompressorSpec = {
-  gas: string; flow: [string, string]; inletT: [string, string]; pressure: [string, string]; discharge: [string, string];
-  intercooler: [string, string]; baro: [string, string]; system: 'si' | 'us';
+  gas: string;
+  flow: [string, string];
+  inletT: [string, string];
+  pressure: [string, string];
+  discharge: [string, string];
+  intercooler: [string, string];
+  baro: [string, string];
+  system: 'si' | 'us';
 };
 
 async function openDesk(page: Page, url = '/size') {
@@ -70,11 +82,20 @@ async function expectHeaterFigures(page: Page, request: SizingRequest) {
   await expect(page.getByTestId('result-design-duty-kw')).toHaveText(formatKw(r.heater.designDutyKw));
   await expect(page.getByTestId('result-absorbed-duty-kw')).toHaveText(formatKw(r.heater.absorbedDutyKw));
   await expect(page.getByTestId('result-average-cp-duty-kw')).toHaveText(formatKw(r.heater.averageCpDutyKw));
-  await expect(page.getByTestId('result-selected-rating-kw')).toHaveText(formatRating(r.heater.selectedRatingKw ?? NaN));
+  await expect(page.getByTestId('result-selected-rating-kw')).toHaveText(
+    formatRating(r.heater.selectedRatingKw ?? NaN),
+  );
   await expect(page.getByTestId('result-current-a')).toHaveText(formatA(r.heater.electrical.currentA));
-  await expect(page.getByTestId('result-continuous-current-a')).toHaveText(formatA(r.heater.electrical.continuousCurrentA));
+  await expect(page.getByTestId('result-continuous-current-a')).toHaveText(
+    formatA(r.heater.electrical.continuousCurrentA),
+  );
   await expect(page.getByTestId('flow-kg-per-s')).toHaveText(fixed(r.massFlowKgPerS, 4));
-  for (const w of r.warnings) await expect(w.code === 'preliminary' ? page.getByTestId('preliminary-statement').first() : page.getByTestId(`warning-${w.code}`)).toContainText(w.message);
+  for (const w of r.warnings)
+    await expect(
+      w.code === 'preliminary'
+        ? page.getByTestId('preliminary-statement').first()
+        : page.getByTestId(`warning-${w.code}`),
+    ).toContainText(w.message);
   await expect(page.getByTestId('chart-heater-cp')).toBeVisible();
 }
 
@@ -127,20 +148,26 @@ async function expectCompressorFigures(page: Page, request: SizingRequest, syste
   await expect(page.getByTestId('result-shaft-power-kw')).toHaveText(formatKw(c.shaftPowerKw));
   await expect(page.getByTestId('result-gas-power-kw')).toHaveText(formatKw(c.gasPowerKw));
   if (c.motor.iecKw !== null) await expect(page.getByTestId('result-motor-iec-kw')).toHaveText(String(c.motor.iecKw));
-  if (c.motor.nemaHp !== null) await expect(page.getByTestId('result-motor-nema-hp')).toHaveText(String(c.motor.nemaHp));
+  if (c.motor.nemaHp !== null)
+    await expect(page.getByTestId('result-motor-nema-hp')).toHaveText(String(c.motor.nemaHp));
   await expect(page.getByTestId('stage-table').locator('tbody tr')).toHaveCount(3);
   for (const s of c.variableCp.stages) {
     await expect(page.getByTestId(`stage-row-${s.stage}`)).toBeVisible();
-    await expect(page.getByTestId(`stage-${s.stage}-discharge-temperature`)).toHaveText(showTemperature(s.dischargeTemperatureC, system).value);
+    await expect(page.getByTestId(`stage-${s.stage}-discharge-temperature`)).toHaveText(
+      showTemperature(s.dischargeTemperatureC, system).value,
+    );
     await expect(page.getByTestId(`stage-${s.stage}-power-kw`)).toHaveText(formatKw(s.gasPowerKw));
   }
-  for (const [i, duty] of c.variableCp.intercoolerDutiesKw.entries()) await expect(page.getByTestId(`intercooler-${i + 1}-kw`)).toHaveText(formatKw(duty));
+  for (const [i, duty] of c.variableCp.intercoolerDutiesKw.entries())
+    await expect(page.getByTestId(`intercooler-${i + 1}-kw`)).toHaveText(formatKw(duty));
   // Both methods side by side, with their difference.
   const methods = page.getByTestId('method-comparison');
   await expect(methods).toContainText(`${formatKw(c.constantK.gasPowerKw)} kW`);
   await expect(methods).toContainText(`${formatKw(c.variableCp.gasPowerKw)} kW`);
   await expect(page.getByTestId('result-method-difference')).toHaveText(fixed(c.methodDifferencePercent, 2));
-  await expect(page.getByTestId('result-suggested-stages')).toHaveText(c.suggestedStages === null ? 'none ≤ 6' : String(c.suggestedStages));
+  await expect(page.getByTestId('result-suggested-stages')).toHaveText(
+    c.suggestedStages === null ? 'none ≤ 6' : String(c.suggestedStages),
+  );
   await expect(page.getByTestId('chart-stages')).toBeVisible();
   await expect(page.getByTestId('chart-sweep')).toBeVisible();
 }
@@ -167,15 +194,39 @@ async function signIn(page: Page, email: string, next = '/size') {
   await page.waitForURL((url) => url.pathname === new URL(next, 'http://x').pathname);
 }
 
-const siHeater: HeaterSpec = { flow: ['2', 't/h'], inletT: ['15', 'degC'], pressure: ['3', 'barg'], outletT: ['320', 'degC'], system: 'si' };
-const usHeater: HeaterSpec = { flow: ['4400', 'lb/h'], inletT: ['60', 'degF'], pressure: ['45', 'psig'], outletT: ['600', 'degF'], system: 'us' };
+const siHeater: HeaterSpec = {
+  flow: ['2', 't/h'],
+  inletT: ['15', 'degC'],
+  pressure: ['3', 'barg'],
+  outletT: ['320', 'degC'],
+  system: 'si',
+};
+const usHeater: HeaterSpec = {
+  flow: ['4400', 'lb/h'],
+  inletT: ['60', 'degF'],
+  pressure: ['45', 'psig'],
+  outletT: ['600', 'degF'],
+  system: 'us',
+};
 const usCompressor: CompressorSpec = {
-  gas: 'nitrogen', flow: ['1000', 'SCFM'], inletT: ['70', 'degF'], pressure: ['0', 'psig'], discharge: ['400', 'psig'],
-  intercooler: ['100', 'degF'], baro: ['14.696', 'psia'], system: 'us',
+  gas: 'nitrogen',
+  flow: ['1000', 'SCFM'],
+  inletT: ['70', 'degF'],
+  pressure: ['0', 'psig'],
+  discharge: ['400', 'psig'],
+  intercooler: ['100', 'degF'],
+  baro: ['14.696', 'psia'],
+  system: 'us',
 };
 const siCompressor: CompressorSpec = {
-  gas: 'nitrogen', flow: ['1500', 'Nm3/h'], inletT: ['20', 'degC'], pressure: ['1', 'bar'], discharge: ['30', 'bar'],
-  intercooler: ['40', 'degC'], baro: ['101.325', 'kPa'], system: 'si',
+  gas: 'nitrogen',
+  flow: ['1500', 'Nm3/h'],
+  inletT: ['20', 'degC'],
+  pressure: ['1', 'bar'],
+  discharge: ['30', 'bar'],
+  intercooler: ['40', 'degC'],
+  baro: ['101.325', 'kPa'],
+  system: 'si',
 };
 
 test.describe('sizing desk', () => {
@@ -261,21 +312,33 @@ test.describe('sizing desk', () => {
     await waitReady(page);
     const duty = await page.getByTestId('result-design-duty-kw').textContent();
     await page.getByTestId('field-flow-unit').selectOption('lb/h');
-    expect(Number(await page.getByTestId('field-flow').inputValue())).toBeCloseTo(convertQuantity('flow', 2, 't/h', 'lb/h'), 2);
+    expect(Number(await page.getByTestId('field-flow').inputValue())).toBeCloseTo(
+      convertQuantity('flow', 2, 't/h', 'lb/h'),
+      2,
+    );
     await page.getByTestId('field-flow-unit').selectOption('t/h');
     await expect(page.getByTestId('field-flow')).toHaveValue('2');
     await page.getByTestId('field-inlet-pressure-unit').selectOption('kPa');
-    expect(Number(await page.getByTestId('field-inlet-pressure').inputValue())).toBeCloseTo(convertQuantity('pressure', 3, 'barg', 'kPa', { barometricPressurePa: 101_325 }), 6);
+    expect(Number(await page.getByTestId('field-inlet-pressure').inputValue())).toBeCloseTo(
+      convertQuantity('pressure', 3, 'barg', 'kPa', { barometricPressurePa: 101_325 }),
+      6,
+    );
     await page.getByTestId('field-inlet-pressure-unit').selectOption('barg');
     await expect(page.getByTestId('field-inlet-pressure')).toHaveValue('3');
     await page.getByTestId('field-inlet-temperature-unit').selectOption('degF');
-    expect(Number(await page.getByTestId('field-inlet-temperature').inputValue())).toBeCloseTo(convertQuantity('temperature', 15, 'degC', 'degF'), 6);
+    expect(Number(await page.getByTestId('field-inlet-temperature').inputValue())).toBeCloseTo(
+      convertQuantity('temperature', 15, 'degC', 'degF'),
+      6,
+    );
     await page.getByTestId('field-inlet-temperature-unit').selectOption('degC');
     // The whole desk to US customary and back: units change, the duty does not.
     await page.getByTestId('unit-system-us').check();
     await expect(page.getByTestId('field-outletTemperature-unit')).toHaveValue('degF');
     await expect(page.getByTestId('field-inlet-pressure-unit')).toHaveValue('psig');
-    expect(Number(await page.getByTestId('field-outletTemperature').inputValue())).toBeCloseTo(convertQuantity('temperature', 320, 'degC', 'degF'), 4);
+    expect(Number(await page.getByTestId('field-outletTemperature').inputValue())).toBeCloseTo(
+      convertQuantity('temperature', 320, 'degC', 'degF'),
+      4,
+    );
     await waitReady(page);
     await expect(page.getByTestId('result-design-duty-kw')).toHaveText(duty ?? '');
     await page.getByTestId('unit-system-si').check();

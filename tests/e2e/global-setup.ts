@@ -7,13 +7,24 @@ const root = path.join(__dirname, '..', '..');
 // Browser journeys start from the invented demo scenario, seeded fresh into the test database, with a
 // mail worker sending what the app queues to the SMTP fake. The returned function stops the worker.
 export default function globalSetup() {
-  const env = { ...process.env, DATABASE_URL: process.env.DATABASE_URL ?? 'postgres://postgres@127.0.0.1:55433/dutywise_test' };
-  execFileSync('npx', ['tsx', '--require', './db/script-preload.cjs', 'db/seed.ts', '--reset'], { cwd: root, stdio: 'inherit', env });
-  const worker = spawn('node', ['--require', './db/script-preload.cjs', '--import', 'tsx', 'lib/email/worker.mts', '--interval-ms', '500'], {
+  const env = {
+    ...process.env,
+    DATABASE_URL: process.env.DATABASE_URL ?? 'postgres://postgres@127.0.0.1:55433/dutywise_test',
+  };
+  execFileSync('npx', ['tsx', '--require', './db/script-preload.cjs', 'db/seed.ts', '--reset'], {
     cwd: root,
-    stdio: 'ignore',
-    env: { ...env, SMTP_PORT: String(e2ePorts.smtp), LOG_LEVEL: 'warn' },
+    stdio: 'inherit',
+    env,
   });
+  const worker = spawn(
+    'node',
+    ['--require', './db/script-preload.cjs', '--import', 'tsx', 'lib/email/worker.mts', '--interval-ms', '500'],
+    {
+      cwd: root,
+      stdio: 'ignore',
+      env: { ...env, SMTP_PORT: String(e2ePorts.smtp), LOG_LEVEL: 'warn' },
+    },
+  );
   return () => {
     worker.kill('SIGTERM');
   };

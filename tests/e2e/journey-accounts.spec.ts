@@ -11,13 +11,51 @@ const customerEmail = `rhona.dale.${suffix}@brackwater.example`;
 
 function enquiryCsv(): Buffer {
   const rows: Record<string, string>[] = [
-    { service: 'heater', title: 'Kiln air heater', equipment_tag: `BW-EH-${suffix}`, gas: 'air', flow_value: '3500', flow_unit: 'kg/h', inlet_temperature_value: '12', inlet_temperature_unit: 'degC', inlet_pressure_value: '0.5', inlet_pressure_unit: 'barg', outlet_temperature_value: '95', outlet_temperature_unit: 'degC', heat_loss_percent: '5', design_margin_percent: '10', supply_voltage_v: '400', supply_phases: '3' },
-    { service: 'compressor', title: 'CO2 recovery compressor', equipment_tag: `BW-K-${suffix}`, gas: 'carbon-dioxide', flow_value: '300', flow_unit: 'kg/h', inlet_temperature_value: '20', inlet_temperature_unit: 'degC', inlet_pressure_value: '1.05', inlet_pressure_unit: 'bar', discharge_pressure_value: '18', discharge_pressure_unit: 'bar', stages: '2', isentropic_efficiency: '0.75', intercooler_outlet_temperature_value: '30', intercooler_outlet_temperature_unit: 'degC' },
+    {
+      service: 'heater',
+      title: 'Kiln air heater',
+      equipment_tag: `BW-EH-${suffix}`,
+      gas: 'air',
+      flow_value: '3500',
+      flow_unit: 'kg/h',
+      inlet_temperature_value: '12',
+      inlet_temperature_unit: 'degC',
+      inlet_pressure_value: '0.5',
+      inlet_pressure_unit: 'barg',
+      outlet_temperature_value: '95',
+      outlet_temperature_unit: 'degC',
+      heat_loss_percent: '5',
+      design_margin_percent: '10',
+      supply_voltage_v: '400',
+      supply_phases: '3',
+    },
+    {
+      service: 'compressor',
+      title: 'CO2 recovery compressor',
+      equipment_tag: `BW-K-${suffix}`,
+      gas: 'carbon-dioxide',
+      flow_value: '300',
+      flow_unit: 'kg/h',
+      inlet_temperature_value: '20',
+      inlet_temperature_unit: 'degC',
+      inlet_pressure_value: '1.05',
+      inlet_pressure_unit: 'bar',
+      discharge_pressure_value: '18',
+      discharge_pressure_unit: 'bar',
+      stages: '2',
+      isentropic_efficiency: '0.75',
+      intercooler_outlet_temperature_value: '30',
+      intercooler_outlet_temperature_unit: 'degC',
+    },
   ];
-  return Buffer.from(Papa.unparse({ fields: batchColumnNames, data: rows.map((r) => batchColumnNames.map((c) => r[c] ?? '')) }));
+  return Buffer.from(
+    Papa.unparse({ fields: batchColumnNames, data: rows.map((r) => batchColumnNames.map((c) => r[c] ?? '')) }),
+  );
 }
 
-test('a sales engineer opens an account and quotes two sizings; the customer sees exactly that; support finds it; another customer cannot', async ({ browser }) => {
+test('a sales engineer opens an account and quotes two sizings; the customer sees exactly that; support finds it; another customer cannot', async ({
+  browser,
+}) => {
   test.setTimeout(120_000);
   const se = await browser.newPage();
   await signIn(se, signInFor.sales_engineer.email, signInFor.sales_engineer.password, '/accounts/new');
@@ -64,8 +102,13 @@ test('a sales engineer opens an account and quotes two sizings; the customer see
   await customer.goto(`/quotes/${quote!.id}`);
   await expect(customer.getByText('Kiln air heater')).toBeVisible();
   await expect(customer.getByText('CO2 recovery compressor')).toBeVisible();
-  const [heater] = await query<{ kw: number }>("select s.headline_kw as kw from sizings s join quote_items qi on qi.sizing_id = s.id where qi.quote_id = $1 and s.service = 'heater'", [quote!.id]);
-  await expect(customer.getByTestId('quote-totals')).toContainText(`heaters, 1 unit: ${formatHeadline('heater', Number(heater!.kw))}`);
+  const [heater] = await query<{ kw: number }>(
+    "select s.headline_kw as kw from sizings s join quote_items qi on qi.sizing_id = s.id where qi.quote_id = $1 and s.service = 'heater'",
+    [quote!.id],
+  );
+  await expect(customer.getByTestId('quote-totals')).toContainText(
+    `heaters, 1 unit: ${formatHeadline('heater', Number(heater!.kw))}`,
+  );
   await expect(customer.getByTestId('quote-totals')).toContainText('compressors, 1 unit:');
 
   // 4. support finds it from part of the customer's name

@@ -17,7 +17,9 @@ async function payWith(page: Page, card: string) {
   await page.getByRole('button', { name: /Pay .* and subscribe/ }).click();
 }
 
-test('a customer unlocks datasheets by subscribing; a declined card leaves them locked; cancelling locks at period end', async ({ page }) => {
+test('a customer unlocks datasheets by subscribing; a declined card leaves them locked; cancelling locks at period end', async ({
+  page,
+}) => {
   test.setTimeout(120_000);
   await signIn(page, marta.email, DEMO_PASSWORD, '/datasheets');
 
@@ -54,9 +56,23 @@ test('a customer unlocks datasheets by subscribing; a declined card leaves them 
   await page.getByRole('button', { name: 'Cancel at period end' }).click();
   await page.getByRole('link', { name: 'Back to Dutywise' }).click();
   await expect(page.getByTestId('subscription-status')).toContainText('Cancelled at period end', { timeout: 20_000 });
-  const [sub] = await query<{ id: string }>("select s.stripe_subscription_id as id from subscriptions s join accounts a on a.id = s.account_id where a.name = 'Greyfen Biogas' order by s.updated_at desc limit 1");
-  await fetch(`http://127.0.0.1:${e2ePorts.stripe}/_control/subscriptions/${sub!.id}/advance-period-end`, { method: 'POST' });
-  await expect.poll(async () => (await query<{ status: string }>('select status from subscriptions where stripe_subscription_id = $1', [sub!.id]))[0]?.status, { timeout: 20_000 }).toBe('canceled');
+  const [sub] = await query<{ id: string }>(
+    "select s.stripe_subscription_id as id from subscriptions s join accounts a on a.id = s.account_id where a.name = 'Greyfen Biogas' order by s.updated_at desc limit 1",
+  );
+  await fetch(`http://127.0.0.1:${e2ePorts.stripe}/_control/subscriptions/${sub!.id}/advance-period-end`, {
+    method: 'POST',
+  });
+  await expect
+    .poll(
+      async () =>
+        (
+          await query<{ status: string }>('select status from subscriptions where stripe_subscription_id = $1', [
+            sub!.id,
+          ])
+        )[0]?.status,
+      { timeout: 20_000 },
+    )
+    .toBe('canceled');
   await page.goto('/datasheets');
   await expect(page.getByTestId('datasheet-locked').first()).toBeVisible();
   await expect(page.getByTestId('datasheet-download')).toHaveCount(0);

@@ -11,7 +11,9 @@ async function inboxFor(address: string): Promise<{ subject: string }[]> {
   return Array.isArray(body) ? body : (body.data ?? []);
 }
 
-test('support finds a sizing from a mistyped tag, narrows it, reads its record and resends the datasheet e-mail', async ({ page }) => {
+test('support finds a sizing from a mistyped tag, narrows it, reads its record and resends the datasheet e-mail', async ({
+  page,
+}) => {
   test.setTimeout(90_000);
   await signIn(page, signInFor.support.email, signInFor.support.password, '/support');
   await page.goto('/support');
@@ -34,7 +36,9 @@ test('support finds a sizing from a mistyped tag, narrows it, reads its record a
   const before = (await inboxFor('olu.bennet@tarnside.example')).length;
   await page.getByTestId('resend-datasheet-email').click();
   await expect(page.getByTestId('resend-result')).toContainText('Queued to olu.bennet@tarnside.example');
-  await expect.poll(async () => (await inboxFor('olu.bennet@tarnside.example')).length, { timeout: 30_000 }).toBeGreaterThan(before);
+  await expect
+    .poll(async () => (await inboxFor('olu.bennet@tarnside.example')).length, { timeout: 30_000 })
+    .toBeGreaterThan(before);
   const latest = (await inboxFor('olu.bennet@tarnside.example')).at(-1);
   expect(latest?.subject).toMatch(/Datasheet DS\d{2}-\d+ rev\. [A-Z]+ issued/);
 

@@ -25,7 +25,9 @@ test('responses carry the security headers', async ({ request }) => {
   expect(h['x-powered-by']).toBeUndefined();
 });
 
-test('API answers carry the strict API policy and the common headers; pages keep the page policy', async ({ request }) => {
+test('API answers carry the strict API policy and the common headers; pages keep the page policy', async ({
+  request,
+}) => {
   const api = await request.get('/api/v1/openapi');
   const h = api.headers();
   expect(h['content-security-policy']).toBe("default-src 'none'; frame-ancestors 'none'");
@@ -65,7 +67,8 @@ test('no server secret reaches the browser bundles', () => {
   const leaks: string[] = [];
   for (const f of bundle) {
     const text = readFileSync(f, 'utf8');
-    for (const [name, value] of Object.entries(secretCanaries)) if (text.includes(value)) leaks.push(`${name} in ${path.relative(root, f)}`);
+    for (const [name, value] of Object.entries(secretCanaries))
+      if (text.includes(value)) leaks.push(`${name} in ${path.relative(root, f)}`);
     if (/postgres(ql)?:\/\/[^"'\s]*@/.test(text)) leaks.push(`a database URL in ${path.relative(root, f)}`);
   }
   expect(leaks).toEqual([]);

@@ -14,7 +14,11 @@ function safeNext(next: string | string[] | undefined): string {
   return value && value.startsWith('/') && !value.startsWith('//') ? value : '/size';
 }
 
-export default async function SignInPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+export default async function SignInPage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+}) {
   const next = safeNext((await searchParams).next);
   return (
     <main className="mx-auto flex min-h-screen max-w-md flex-col justify-center px-6 py-12">
@@ -27,8 +31,13 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
       ) : (
         <>
           <SignInForm next={next} />
-          <section aria-labelledby="demo-users" className="mt-8 rounded-panel border border-paper-line bg-paper-raised p-4 text-sm">
-            <h2 id="demo-users" className="font-semibold">Demo sign-ins (local identity)</h2>
+          <section
+            aria-labelledby="demo-users"
+            className="mt-8 rounded-panel border border-paper-line bg-paper-raised p-4 text-sm"
+          >
+            <h2 id="demo-users" className="font-semibold">
+              Demo sign-ins (local identity)
+            </h2>
             <table className="mt-2 w-full text-left">
               <tbody>
                 {demoSignIns.map((u) => (
@@ -39,12 +48,17 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
                 ))}
               </tbody>
             </table>
-            <p className="mt-2 text-hint text-ink-muted">Every demo user&apos;s password is <span className="font-mono">{demoSignIns[0]?.password}</span>.</p>
+            <p className="mt-2 text-hint text-ink-muted">
+              Every demo user&apos;s password is <span className="font-mono">{demoSignIns[0]?.password}</span>.
+            </p>
           </section>
         </>
       )}
       <p className="mt-6 text-sm text-ink-muted">
-        New customer? <Link className="text-tide-600 underline" href="/sign-up">Create an account</Link>
+        New customer?{' '}
+        <Link className="text-tide-600 underline" href="/sign-up">
+          Create an account
+        </Link>
       </p>
     </main>
   );

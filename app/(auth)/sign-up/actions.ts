@@ -13,9 +13,16 @@ import { limitPublicAction } from '@/lib/ratelimit/action-limit';
  * Not wrapped in defineAction: it is called by someone who is not signed in yet.
  */
 export async function signUpAction(raw: unknown): Promise<ActionResult<{ accountId: string }>> {
-  if (clerkEnabled) return { ok: false, fieldErrors: {}, formError: 'Create your account with the hosted form.', status: 400 };
+  if (clerkEnabled)
+    return { ok: false, fieldErrors: {}, formError: 'Create your account with the hosted form.', status: 400 };
   const parsed = signUpSchema.safeParse(raw);
-  if (!parsed.success) return { ok: false, fieldErrors: fieldErrorsOf(parsed.error), formError: 'Some fields need attention.', status: 400 };
+  if (!parsed.success)
+    return {
+      ok: false,
+      fieldErrors: fieldErrorsOf(parsed.error),
+      formError: 'Some fields need attention.',
+      status: 400,
+    };
   const limited = await limitPublicAction('sign-up');
   if (limited) return limited;
   try {
@@ -24,8 +31,14 @@ export async function signUpAction(raw: unknown): Promise<ActionResult<{ account
     await startLocalSession(created.userId, created.role);
     return { ok: true, data: { accountId: created.accountId } };
   } catch (err) {
-    if (err instanceof ActionError) return { ok: false, fieldErrors: err.fieldErrors, formError: err.message, status: err.status };
+    if (err instanceof ActionError)
+      return { ok: false, fieldErrors: err.fieldErrors, formError: err.message, status: err.status };
     logger.error({ err, action: 'auth.sign_up' }, 'sign-up failed');
-    return { ok: false, fieldErrors: {}, formError: 'Something went wrong on our side; no account was created. Try again.', status: 500 };
+    return {
+      ok: false,
+      fieldErrors: {},
+      formError: 'Something went wrong on our side; no account was created. Try again.',
+      status: 500,
+    };
   }
 }

@@ -16,11 +16,15 @@ export default function SignUpPage() {
       </Link>
       <h1 className="text-2xl font-semibold">Create your customer account</h1>
       <p className="mt-2 text-sm text-ink-soft">
-        One sign-in for you and a customer account for your company: save heater and compressor sizings, see your vendor’s quotes and download datasheets.
+        One sign-in for you and a customer account for your company: save heater and compressor sizings, see your
+        vendor’s quotes and download datasheets.
       </p>
       {clerkEnabled ? <ClerkSignUp /> : <SignUpForm />}
       <p className="mt-6 text-sm text-ink-muted">
-        Already use Dutywise? <Link className="text-tide-600 underline" href="/sign-in">Sign in</Link>
+        Already use Dutywise?{' '}
+        <Link className="text-tide-600 underline" href="/sign-in">
+          Sign in
+        </Link>
       </p>
     </main>
   );

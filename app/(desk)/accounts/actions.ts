@@ -6,8 +6,11 @@ import { createAccount } from '@/lib/accounts/mutations';
 import { accountInputSchema } from '@/lib/accounts/schema';
 
 /** Staff create a customer account for a prospect. */
-export const createAccountAction = defineAction({ permission: 'account:manage', schema: accountInputSchema, name: 'account.create' }, async (input, user) => {
-  const row = await createAccount(user, input);
-  revalidatePath('/accounts');
-  return row;
-});
+export const createAccountAction = defineAction(
+  { permission: 'account:manage', schema: accountInputSchema, name: 'account.create' },
+  async (input, user) => {
+    const row = await createAccount(user, input);
+    revalidatePath('/accounts');
+    return row;
+  },
+);

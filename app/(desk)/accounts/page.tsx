@@ -12,7 +12,15 @@ import { can, isStaff } from '@/lib/auth/roles';
 export const metadata: Metadata = { title: 'Customer accounts' };
 
 const columns: Column<AccountSummary>[] = [
-  { key: 'name', header: 'Customer account', cell: (a) => <Link href={`/accounts/${a.id}`} className={tableLinkClass}>{a.name}</Link> },
+  {
+    key: 'name',
+    header: 'Customer account',
+    cell: (a) => (
+      <Link href={`/accounts/${a.id}`} className={tableLinkClass}>
+        {a.name}
+      </Link>
+    ),
+  },
   { key: 'site', header: 'Site', cell: (a) => a.site ?? '—' },
   { key: 'members', header: 'Members', numeric: true, cell: (a) => a.memberCount },
   { key: 'quotes', header: 'Quotes', numeric: true, cell: (a) => a.quoteCount },
@@ -27,8 +35,18 @@ export default async function AccountsPage() {
     <PageBody>
       <PageHeader
         title="Customer accounts"
-        description={isStaff(user.role) ? 'Every customer account, with its members, quotes and subscription.' : 'Your company’s customer account.'}
-        actions={mayCreate && <Link href="/accounts/new" className={buttonLinkClass}>New customer account</Link>}
+        description={
+          isStaff(user.role)
+            ? 'Every customer account, with its members, quotes and subscription.'
+            : 'Your company’s customer account.'
+        }
+        actions={
+          mayCreate && (
+            <Link href="/accounts/new" className={buttonLinkClass}>
+              New customer account
+            </Link>
+          )
+        }
       />
       <DataTable
         caption="Customer accounts"
@@ -38,7 +56,9 @@ export default async function AccountsPage() {
         testId="accounts-table"
         empty={
           <EmptyState title="No customer accounts yet">
-            {mayCreate ? 'Create one for a prospect to start saving sizings and quotes against it.' : 'Your sign-in is not linked to a customer account; ask your vendor contact for an invitation.'}
+            {mayCreate
+              ? 'Create one for a prospect to start saving sizings and quotes against it.'
+              : 'Your sign-in is not linked to a customer account; ask your vendor contact for an invitation.'}
           </EmptyState>
         }
       />

@@ -5,14 +5,20 @@ import { defineAction } from '@/lib/actions/define-action';
 import { changeUserRole, setUserDisabled } from '@/lib/users/mutations';
 import { userDisableSchema, userRoleChangeSchema } from '@/lib/users/schema';
 
-export const changeUserRoleAction = defineAction({ permission: 'users:manage', schema: userRoleChangeSchema, name: 'user.role_change' }, async (input, user) => {
-  const res = await changeUserRole(user, input);
-  revalidatePath('/admin');
-  return res;
-});
+export const changeUserRoleAction = defineAction(
+  { permission: 'users:manage', schema: userRoleChangeSchema, name: 'user.role_change' },
+  async (input, user) => {
+    const res = await changeUserRole(user, input);
+    revalidatePath('/admin');
+    return res;
+  },
+);
 
-export const setUserDisabledAction = defineAction({ permission: 'users:manage', schema: userDisableSchema, name: 'user.disable' }, async (input, user) => {
-  const res = await setUserDisabled(user, input);
-  revalidatePath('/admin');
-  return res;
-});
+export const setUserDisabledAction = defineAction(
+  { permission: 'users:manage', schema: userDisableSchema, name: 'user.disable' },
+  async (input, user) => {
+    const res = await setUserDisabled(user, input);
+    revalidatePath('/admin');
+    return res;
+  },
+);

@@ -17,18 +17,57 @@ export default async function AdminPage() {
   const me = await requirePageUser('/admin', 'users:manage');
   const people = await listUsers(me);
   const columns: Column<UserSummary>[] = [
-    { key: 'name', header: 'Name', cell: (u) => <span className="font-medium">{u.name}{u.id === me.id && <span className="ml-1 text-ink-muted">(you)</span>}</span> },
+    {
+      key: 'name',
+      header: 'Name',
+      cell: (u) => (
+        <span className="font-medium">
+          {u.name}
+          {u.id === me.id && <span className="ml-1 text-ink-muted">(you)</span>}
+        </span>
+      ),
+    },
     { key: 'email', header: 'E-mail', cell: (u) => <span className="font-mono">{u.email}</span> },
     {
       key: 'role',
       header: 'Role',
       // Customers are bound to their account, and nobody changes their own role, so those rows are read-only.
-      cell: (u) => (u.role === 'customer' || u.id === me.id ? roleLabels[u.role] : <RoleForm userId={u.id} role={u.role} name={u.name} />),
+      cell: (u) =>
+        u.role === 'customer' || u.id === me.id ? (
+          roleLabels[u.role]
+        ) : (
+          <RoleForm userId={u.id} role={u.role} name={u.name} />
+        ),
     },
-    { key: 'account', header: 'Customer account', cell: (u) => (u.accountId ? <Link href={`/accounts/${u.accountId}`} className={tableLinkClass}>{u.accountName}</Link> : '—') },
+    {
+      key: 'account',
+      header: 'Customer account',
+      cell: (u) =>
+        u.accountId ? (
+          <Link href={`/accounts/${u.accountId}`} className={tableLinkClass}>
+            {u.accountName}
+          </Link>
+        ) : (
+          '—'
+        ),
+    },
     { key: 'since', header: 'Since', numeric: true, cell: (u) => formatDate(u.createdAt) },
-    { key: 'state', header: 'Sign-in', cell: (u) => (u.disabledAt ? <StatusBadge tone="danger">Disabled {formatDate(u.disabledAt)}</StatusBadge> : <StatusBadge tone="good">Active</StatusBadge>) },
-    { key: 'actions', header: 'Change', cell: (u) => (u.id === me.id ? null : <DisableButton userId={u.id} disabled={u.disabledAt !== null} name={u.name} />) },
+    {
+      key: 'state',
+      header: 'Sign-in',
+      cell: (u) =>
+        u.disabledAt ? (
+          <StatusBadge tone="danger">Disabled {formatDate(u.disabledAt)}</StatusBadge>
+        ) : (
+          <StatusBadge tone="good">Active</StatusBadge>
+        ),
+    },
+    {
+      key: 'actions',
+      header: 'Change',
+      cell: (u) =>
+        u.id === me.id ? null : <DisableButton userId={u.id} disabled={u.disabledAt !== null} name={u.name} />,
+    },
   ];
   return (
     <PageBody>
@@ -36,11 +75,22 @@ export default async function AdminPage() {
         title="People and roles"
         description={
           <>
-            Staff roles decide what each person may do; every change is recorded in the <Link href="/support/audit?entityType=user" className="text-tide-600 underline">audit trail</Link>. Customer users join through sign-up or an invitation to their account.
+            Staff roles decide what each person may do; every change is recorded in the{' '}
+            <Link href="/support/audit?entityType=user" className="text-tide-600 underline">
+              audit trail
+            </Link>
+            . Customer users join through sign-up or an invitation to their account.
           </>
         }
       />
-      <DataTable caption="People" columns={columns} rows={people} rowKey={(u) => u.id} testId="people-table" empty={<EmptyState title="No users yet" />} />
+      <DataTable
+        caption="People"
+        columns={columns}
+        rows={people}
+        rowKey={(u) => u.id}
+        testId="people-table"
+        empty={<EmptyState title="No users yet" />}
+      />
     </PageBody>
   );
 }

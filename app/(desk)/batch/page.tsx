@@ -9,15 +9,26 @@ export const metadata: Metadata = { title: 'Batch sizing' };
 
 export default async function BatchPage() {
   const user = await requirePageUser('/batch', 'batch:upload');
-  const [accounts, quotes] = await Promise.all([listAccountOptions(user), can(user.role, 'quote:manage') ? listOpenQuotes(user) : Promise.resolve([])]);
+  const [accounts, quotes] = await Promise.all([
+    listAccountOptions(user),
+    can(user.role, 'quote:manage') ? listOpenQuotes(user) : Promise.resolve([]),
+  ]);
   return (
     <main className="px-6 py-8">
       <h1 className="text-2xl font-semibold">Batch sizing</h1>
       <p className="mt-1 max-w-3xl text-ink-soft">
-        Size a whole enquiry at once: one duty point a row, every quantity with its unit column. Nothing is saved until you confirm.{' '}
-        <a className="text-tide-700 underline" href="/api/v1/batch/template">Download the template</a>
+        Size a whole enquiry at once: one duty point a row, every quantity with its unit column. Nothing is saved until
+        you confirm.{' '}
+        <a className="text-tide-700 underline" href="/api/v1/batch/template">
+          Download the template
+        </a>
       </p>
-      <BatchDesk accounts={accounts} quotes={quotes} canQuote={can(user.role, 'quote:manage')} fixedAccountId={user.role === 'customer' ? user.accountId : null} />
+      <BatchDesk
+        accounts={accounts}
+        quotes={quotes}
+        canQuote={can(user.role, 'quote:manage')}
+        fixedAccountId={user.role === 'customer' ? user.accountId : null}
+      />
     </main>
   );
 }

@@ -4,6 +4,12 @@ import { defineAction } from '@/lib/actions/define-action';
 import { openBillingPortal, startCheckout } from '@/lib/billing/checkout';
 import { checkoutSchema, emptySchema } from '@/lib/billing/schema';
 
-export const startCheckoutAction = defineAction({ permission: 'billing:manage', schema: checkoutSchema, name: 'startCheckout' }, async (input, user) => startCheckout(user, input.plan));
+export const startCheckoutAction = defineAction(
+  { permission: 'billing:manage', schema: checkoutSchema, name: 'startCheckout' },
+  async (input, user) => startCheckout(user, input.plan),
+);
 
-export const openPortalAction = defineAction({ permission: 'billing:manage', schema: emptySchema, name: 'openPortal' }, async (_input, user) => openBillingPortal(user));
+export const openPortalAction = defineAction(
+  { permission: 'billing:manage', schema: emptySchema, name: 'openPortal' },
+  async (_input, user) => openBillingPortal(user),
+);

@@ -17,19 +17,36 @@ export default async function DatasheetsPage() {
     <PageBody>
       <PageHeader
         title="Datasheets"
-        description={staff ? 'Issued datasheets for every customer account, newest first. An issued revision never changes; re-issuing makes the next letter.' : 'Datasheets issued for your account. An issued revision never changes; a later change comes out as a new revision.'}
+        description={
+          staff
+            ? 'Issued datasheets for every customer account, newest first. An issued revision never changes; re-issuing makes the next letter.'
+            : 'Datasheets issued for your account. An issued revision never changes; a later change comes out as a new revision.'
+        }
       />
       {!access.unlocked && (
-        <p role="status" className="rounded-md border border-severity-caution/40 bg-paper-raised px-3 py-2 text-sm text-ink-soft">
-          {access.reason === 'no-account' ? 'Your sign-in is not linked to a customer account yet, so there is nothing to download.' : 'Your account has no active subscription, so datasheets are listed but locked. '}
-          {access.reason !== 'no-account' && can(user.role, 'billing:manage') && <Link href="/billing" className="font-medium text-tide-600 underline">Subscribe to download</Link>}
+        <p
+          role="status"
+          className="rounded-md border border-severity-caution/40 bg-paper-raised px-3 py-2 text-sm text-ink-soft"
+        >
+          {access.reason === 'no-account'
+            ? 'Your sign-in is not linked to a customer account yet, so there is nothing to download.'
+            : 'Your account has no active subscription, so datasheets are listed but locked. '}
+          {access.reason !== 'no-account' && can(user.role, 'billing:manage') && (
+            <Link href="/billing" className="font-medium text-tide-600 underline">
+              Subscribe to download
+            </Link>
+          )}
         </p>
       )}
       {list.length === 0 ? (
-        <EmptyState title="No datasheets yet">{can(user.role, 'datasheet:issue') ? 'Issue one from a saved sizing’s page.' : null}</EmptyState>
+        <EmptyState title="No datasheets yet">
+          {can(user.role, 'datasheet:issue') ? 'Issue one from a saved sizing’s page.' : null}
+        </EmptyState>
       ) : (
         <div className="space-y-4">
-          {list.map((ds) => <DatasheetCard key={ds.id} ds={ds} unlocked={access.unlocked} showAccount />)}
+          {list.map((ds) => (
+            <DatasheetCard key={ds.id} ds={ds} unlocked={access.unlocked} showAccount />
+          ))}
         </div>
       )}
       {list.length >= 200 && <p className="text-sm text-ink-muted">Showing the newest 200 datasheets.</p>}

@@ -18,7 +18,9 @@ function MessageItem({ m }: { m: FakeInboxMessage }) {
       <p className="text-sm text-ink-soft">To {m.to.join(', ') || '(no recipient)'}</p>
       <details className="mt-1 text-sm">
         <summary className="cursor-pointer text-tide-600">Text of the message</summary>
-        <pre className="mt-2 max-h-96 overflow-auto whitespace-pre-wrap rounded-panel bg-paper-sunk p-3 font-mono text-hint text-ink">{m.text ?? 'No text part.'}</pre>
+        <pre className="mt-2 max-h-96 overflow-auto whitespace-pre-wrap rounded-panel bg-paper-sunk p-3 font-mono text-hint text-ink">
+          {m.text ?? 'No text part.'}
+        </pre>
         <a href={m.htmlUrl} target="_blank" rel="noreferrer" className="mt-1 inline-block text-tide-600 underline">
           Open as received (HTML)
         </a>
@@ -33,22 +35,36 @@ export default async function MailPage() {
   const inbox = await readFakeInbox();
   return (
     <PageBody>
-      <PageHeader title="Demo mail inbox" eyebrow="Local mail" description="Messages the local mail server has received from Dutywise, newest first. Nothing here reaches a real mailbox." />
+      <PageHeader
+        title="Demo mail inbox"
+        eyebrow="Local mail"
+        description="Messages the local mail server has received from Dutywise, newest first. Nothing here reaches a real mailbox."
+      />
       {inbox.state === 'unconfigured' && (
-        <EmptyState title="No demo inbox is configured">MAIL_FAKE_INBOX_URL is not set, so mail goes to the SMTP server in the settings and there is nothing to show here.</EmptyState>
+        <EmptyState title="No demo inbox is configured">
+          MAIL_FAKE_INBOX_URL is not set, so mail goes to the SMTP server in the settings and there is nothing to show
+          here.
+        </EmptyState>
       )}
       {inbox.state === 'unreachable' && (
-        <div role="status" className="rounded-panel border border-severity-caution/40 bg-paper-raised p-panel text-sm" data-testid="mail-inbox-down">
+        <div
+          role="status"
+          className="rounded-panel border border-severity-caution/40 bg-paper-raised p-panel text-sm"
+          data-testid="mail-inbox-down"
+        >
           <p className="font-medium text-severity-caution">The demo mail server is not answering</p>
           <p className="mt-1 text-ink-soft">
-            {inbox.url} could not be read ({inbox.reason}). Queued mail is kept and will be delivered once it is back; start it with <code>npm run fakes</code>.
+            {inbox.url} could not be read ({inbox.reason}). Queued mail is kept and will be delivered once it is back;
+            start it with <code>npm run fakes</code>.
           </p>
         </div>
       )}
       {inbox.state === 'ok' && (
         <Section title={`Received (${inbox.total})`} id="mail-received">
           {inbox.messages.length === 0 ? (
-            <EmptyState title="No mail yet">Invite someone, send a quote or issue a datasheet, and the message appears here within a few seconds.</EmptyState>
+            <EmptyState title="No mail yet">
+              Invite someone, send a quote or issue a datasheet, and the message appears here within a few seconds.
+            </EmptyState>
           ) : (
             <ul>
               {inbox.messages.map((m) => (
@@ -56,7 +72,11 @@ export default async function MailPage() {
               ))}
             </ul>
           )}
-          {inbox.total > inbox.messages.length && <p className="mt-2 text-hint text-ink-muted">Showing the newest {inbox.messages.length} of {inbox.total}.</p>}
+          {inbox.total > inbox.messages.length && (
+            <p className="mt-2 text-hint text-ink-muted">
+              Showing the newest {inbox.messages.length} of {inbox.total}.
+            </p>
+          )}
         </Section>
       )}
     </PageBody>

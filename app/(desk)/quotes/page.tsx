@@ -18,9 +18,16 @@ export default async function QuotesPage({ searchParams }: { searchParams: Searc
   const sp = await searchParams;
   const user = await requirePageUser('/quotes', 'quote:read');
   // Malformed filters fall back to "any" (the schema catches them) rather than failing the page.
-  const filter = quoteFilterSchema.parse({ status: firstParam(sp.status) || undefined, accountId: firstParam(sp.accountId) || undefined, q: firstParam(sp.q) || undefined });
+  const filter = quoteFilterSchema.parse({
+    status: firstParam(sp.status) || undefined,
+    accountId: firstParam(sp.accountId) || undefined,
+    q: firstParam(sp.q) || undefined,
+  });
   const staff = isStaff(user.role);
-  const [quotes, accounts] = await Promise.all([listQuotes(user, filter), staff ? listAccountOptions(user) : Promise.resolve(null)]);
+  const [quotes, accounts] = await Promise.all([
+    listQuotes(user, filter),
+    staff ? listAccountOptions(user) : Promise.resolve(null),
+  ]);
   const filtered = Boolean(filter.status || filter.accountId || filter.q);
   const mayCreate = can(user.role, 'quote:manage');
 
@@ -28,8 +35,18 @@ export default async function QuotesPage({ searchParams }: { searchParams: Searc
     <PageBody>
       <PageHeader
         title="Quotes"
-        description={staff ? 'Quotes for every customer account, newest first.' : 'Quotes your vendor has prepared for your account.'}
-        actions={mayCreate && <Link href="/quotes/new" className={buttonLinkClass}>New quote</Link>}
+        description={
+          staff
+            ? 'Quotes for every customer account, newest first.'
+            : 'Quotes your vendor has prepared for your account.'
+        }
+        actions={
+          mayCreate && (
+            <Link href="/quotes/new" className={buttonLinkClass}>
+              New quote
+            </Link>
+          )
+        }
       />
       <QuoteFilters filter={filter} accounts={accounts} />
       <p className="text-sm text-ink-muted tabular" aria-live="polite">
@@ -42,7 +59,13 @@ export default async function QuotesPage({ searchParams }: { searchParams: Searc
         hideAccount={!staff}
         empty={
           <EmptyState title={filtered ? 'No quotes match these filters' : 'No quotes yet'}>
-            {filtered ? <Link href="/quotes" className="text-tide-600 underline">Clear the filters</Link> : mayCreate ? 'Start one from a customer account’s saved sizings.' : null}
+            {filtered ? (
+              <Link href="/quotes" className="text-tide-600 underline">
+                Clear the filters
+              </Link>
+            ) : mayCreate ? (
+              'Start one from a customer account’s saved sizings.'
+            ) : null}
           </EmptyState>
         }
       />

@@ -7,14 +7,18 @@ import { saveSizing } from '@/lib/sizings/save';
 import { saveSizingSchema } from '@/lib/sizings/schema';
 
 /** Saves the desk's input with its title, tag and notes to an account (and a draft quote); the engine recomputes it. */
-export const saveSizingAction = defineAction({ permission: 'sizing:save', schema: saveSizingSchema, name: 'sizing.save' }, async ({ input, ...meta }, user) => {
-  const saved = await saveSizing(user, meta, input);
-  revalidatePath('/sizings');
-  if (meta.quoteId) revalidatePath(`/quotes/${meta.quoteId}`);
-  return saved;
-});
+export const saveSizingAction = defineAction(
+  { permission: 'sizing:save', schema: saveSizingSchema, name: 'sizing.save' },
+  async ({ input, ...meta }, user) => {
+    const saved = await saveSizing(user, meta, input);
+    revalidatePath('/sizings');
+    if (meta.quoteId) revalidatePath(`/quotes/${meta.quoteId}`);
+    return saved;
+  },
+);
 
 /** Remembers the signed-in user's unit system for the next visit. */
-export const setUnitSystemAction = defineAction({ permission: 'sizing:read', schema: unitSystemSchema, name: 'desk.unit-system' }, async (input, user) =>
-  setUnitSystem(user, input),
+export const setUnitSystemAction = defineAction(
+  { permission: 'sizing:read', schema: unitSystemSchema, name: 'desk.unit-system' },
+  async (input, user) => setUnitSystem(user, input),
 );

@@ -18,20 +18,38 @@ async function fromSaved(user: CurrentUser | null, id: string, revise: boolean):
   try {
     const s = await getSizing(user, id);
     const parsed = sizingRequestSchema.safeParse(s.input);
-    if (!parsed.success) return { input: null, reopened: null, notices: [`Sizing ${s.number} was saved with inputs this engine no longer accepts; start again from its record.`] };
+    if (!parsed.success)
+      return {
+        input: null,
+        reopened: null,
+        notices: [
+          `Sizing ${s.number} was saved with inputs this engine no longer accepts; start again from its record.`,
+        ],
+      };
     const reopened: ReopenedSizing = {
-      id: s.id, number: s.number, title: s.title, equipmentTag: s.equipmentTag, notes: s.notes,
-      accountId: s.accountId, accountName: s.accountName, revision: s.revision, revise,
+      id: s.id,
+      number: s.number,
+      title: s.title,
+      equipmentTag: s.equipmentTag,
+      notes: s.notes,
+      accountId: s.accountId,
+      accountName: s.accountName,
+      revision: s.revision,
+      revise,
     };
     return { input: parsed.data, reopened, notices: [] };
   } catch (err) {
-    if (err instanceof NotFoundError) return { input: null, reopened: null, notices: ['That saved sizing could not be opened.'] };
+    if (err instanceof NotFoundError)
+      return { input: null, reopened: null, notices: ['That saved sizing could not be opened.'] };
     throw err;
   }
 }
 
 /** What the desk opens with: a saved sizing (revise or duplicate), shared inputs, or nothing. */
-export async function loadDeskStart(user: CurrentUser | null, params: { sizing?: string; revise?: string; i?: string }): Promise<DeskStart> {
+export async function loadDeskStart(
+  user: CurrentUser | null,
+  params: { sizing?: string; revise?: string; i?: string },
+): Promise<DeskStart> {
   if (params.sizing) return fromSaved(user, params.sizing, params.revise === '1');
   if (params.i) {
     const decoded = decodeShareParam(params.i);

@@ -26,16 +26,19 @@ export default async function SizePage({ searchParams }: { searchParams: SearchP
   ]);
   // A saved preference wins; a prospect opening a link sees it in the units it was made in.
   const i = start.input;
-  const system = user?.unitSystem ?? (i ? systemOfUnits([i.flow.unit, i.inlet.temperature.unit, i.inlet.pressure.unit]) : 'si');
+  const system =
+    user?.unitSystem ?? (i ? systemOfUnits([i.flow.unit, i.inlet.temperature.unit, i.inlet.pressure.unit]) : 'si');
   const opened = start.input ? valuesFromInput(start.input, system) : { values: defaultValues(system), dropped: [] };
   const values = opened.values;
   const customerAccountId = user && !isStaff(user.role) ? user.accountId : null;
   values.accountId = start.reopened?.accountId ?? customerAccountId ?? '';
   // A new sizing for a known account starts from that site's pressure; reopened inputs keep their own.
   const account = accounts.find((a) => a.id === values.accountId);
-  if (!start.input && account) values.site.barometricPressure = { value: String(sitePressureOf(account).kpa), unit: 'kPa' };
+  if (!start.input && account)
+    values.site.barometricPressure = { value: String(sitePressureOf(account).kpa), unit: 'kPa' };
   const notices = [...start.notices];
-  if (opened.dropped.length) notices.push(`Inputs the desk has no field for were left out: ${opened.dropped.join(', ')}.`);
+  if (opened.dropped.length)
+    notices.push(`Inputs the desk has no field for were left out: ${opened.dropped.join(', ')}.`);
   return (
     <SizingDesk
       initialValues={values}

@@ -18,13 +18,25 @@ export default async function SizingsPage() {
     <PageBody>
       <PageHeader
         title="Saved sizings"
-        description={staff ? 'The newest sizings saved to every customer account.' : 'Sizings saved to your customer account.'}
-        actions={can(user.role, 'sizing:save') && <Link href="/size" className={buttonLinkClass}>Size a duty</Link>}
+        description={
+          staff ? 'The newest sizings saved to every customer account.' : 'Sizings saved to your customer account.'
+        }
+        actions={
+          can(user.role, 'sizing:save') && (
+            <Link href="/size" className={buttonLinkClass}>
+              Size a duty
+            </Link>
+          )
+        }
       />
       <SizingsTable
         sizings={sizings}
         hideAccount={!staff}
-        empty={<EmptyState title="No saved sizings yet">Size a heater or compressor on the sizing desk and save it to a customer account.</EmptyState>}
+        empty={
+          <EmptyState title="No saved sizings yet">
+            Size a heater or compressor on the sizing desk and save it to a customer account.
+          </EmptyState>
+        }
       />
       {sizings.length >= 200 && <p className="text-sm text-ink-muted">Showing the newest 200.</p>}
     </PageBody>

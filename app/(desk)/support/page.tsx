@@ -6,7 +6,11 @@ import { LookupDesk } from './_components/lookup-desk';
 
 export const metadata: Metadata = { title: 'Look-up' };
 
-export default async function SupportPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+export default async function SupportPage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+}) {
   await requirePageUser('/support', 'support:search');
   const raw = Object.fromEntries(Object.entries(await searchParams).map(([k, v]) => [k, Array.isArray(v) ? v[0] : v]));
   const initial = supportSearchSchema.parse(raw);
@@ -14,7 +18,10 @@ export default async function SupportPage({ searchParams }: { searchParams: Prom
   return (
     <main className="px-6 py-8">
       <h1 className="text-2xl font-semibold">Look-up</h1>
-      <p className="mt-1 text-ink-soft">Find any sizing by datasheet or quote number, customer, equipment tag, title or notes. Close spellings match too.</p>
+      <p className="mt-1 text-ink-soft">
+        Find any sizing by datasheet or quote number, customer, equipment tag, title or notes. Close spellings match
+        too.
+      </p>
       <LookupDesk initial={initial} creators={creators} />
     </main>
   );

@@ -11,15 +11,35 @@ export function basisBlocks(s: DatasheetSnapshot): Block[] {
   const { Text } = pdfKit();
   const b = s.result.basis;
   const bases = b.reportedFlowBases.map((f) => `${unitLabel(f.unit)}: ${f.description}`).join('; ');
-  const facts = kvBlocks('bk', [
-    ['Property data', b.propertySource],
-    ['Flow input basis', b.flowInputBasis ? `${unitLabel(b.flowInputBasis.unit)}: ${b.flowInputBasis.description}` : 'mass flow or actual volume flow entered; no standard basis applies'],
-    ['Standard flows reported', bases],
-    ['Barometric pressure', `${formatFixed(b.barometricPressureKpa, 3)} kPa (${b.barometricPressureSource})`, 'gauge pressures convert with this'],
-    ['Engine version', `${s.sizing.engineVersion} (sizing ${s.sizing.number}, saved ${s.sizing.createdAt.slice(0, 10)})`],
-  ], { labelPct: 26, mono: false });
+  const facts = kvBlocks(
+    'bk',
+    [
+      ['Property data', b.propertySource],
+      [
+        'Flow input basis',
+        b.flowInputBasis
+          ? `${unitLabel(b.flowInputBasis.unit)}: ${b.flowInputBasis.description}`
+          : 'mass flow or actual volume flow entered; no standard basis applies',
+      ],
+      ['Standard flows reported', bases],
+      [
+        'Barometric pressure',
+        `${formatFixed(b.barometricPressureKpa, 3)} kPa (${b.barometricPressureSource})`,
+        'gauge pressures convert with this',
+      ],
+      [
+        'Engine version',
+        `${s.sizing.engineVersion} (sizing ${s.sizing.number}, saved ${s.sizing.createdAt.slice(0, 10)})`,
+      ],
+    ],
+    { labelPct: 26, mono: false },
+  );
   const conventions = b.conventions.map((c, i) =>
-    block(`bc${i}`, 1 + 4 + EXTRA_LINE_PT * linesIn(`- ${c}`, pct(100)), <Text style={{ marginBottom: 1 }}>{`- ${c}`}</Text>),
+    block(
+      `bc${i}`,
+      1 + 4 + EXTRA_LINE_PT * linesIn(`- ${c}`, pct(100)),
+      <Text style={{ marginBottom: 1 }}>{`- ${c}`}</Text>,
+    ),
   );
   return [
     headingBlock('4', 'Method basis'),

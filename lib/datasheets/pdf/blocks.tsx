@@ -54,7 +54,17 @@ export function kvBlocks(key: string, rows: KvRow[], opts: { labelPct?: number; 
 
 export type Column = { title: string; widthPct: number; align?: 'left' | 'right' };
 
-function TableLine({ columns, cells, head, mono }: { columns: Column[]; cells: string[]; head: boolean; mono: boolean }) {
+function TableLine({
+  columns,
+  cells,
+  head,
+  mono,
+}: {
+  columns: Column[];
+  cells: string[];
+  head: boolean;
+  mono: boolean;
+}) {
   const { View, Text } = pdfKit();
   const cell = (c: Column, j: number): PdfStyle[] => [
     { width: `${c.widthPct}%`, textAlign: c.align ?? 'left', paddingHorizontal: 2 },
@@ -62,16 +72,36 @@ function TableLine({ columns, cells, head, mono }: { columns: Column[]; cells: s
   ];
   return (
     <View style={head ? styles.headRow : styles.row} wrap={false}>
-      {columns.map((c, j) => <Text key={j} style={cell(c, j)}>{cells[j] ?? ''}</Text>)}
+      {columns.map((c, j) => (
+        <Text key={j} style={cell(c, j)}>
+          {cells[j] ?? ''}
+        </Text>
+      ))}
     </View>
   );
 }
 
 /** A table as blocks: a shaded header row that stays with the first row, then one block per row. */
 export function tableBlocks(key: string, columns: Column[], rows: string[][], mono = true): Block[] {
-  const height = (cells: string[], face: 'sans' | 'mono') => rowHeight(columns.map((c, j) => ({ text: cells[j], widthPt: pct(c.widthPct) - 4, face: j > 0 ? face : 'sans' })));
-  const head: Block = { key: `${key}h`, heightPt: height(columns.map((c) => c.title), 'sans'), node: <TableLine columns={columns} cells={columns.map((c) => c.title)} head mono={mono} />, keepWithNext: true };
-  return [head, ...rows.map((cells, i) => ({ key: `${key}${i}`, heightPt: height(cells, mono ? 'mono' : 'sans'), node: <TableLine columns={columns} cells={cells} head={false} mono={mono} /> }))];
+  const height = (cells: string[], face: 'sans' | 'mono') =>
+    rowHeight(columns.map((c, j) => ({ text: cells[j], widthPt: pct(c.widthPct) - 4, face: j > 0 ? face : 'sans' })));
+  const head: Block = {
+    key: `${key}h`,
+    heightPt: height(
+      columns.map((c) => c.title),
+      'sans',
+    ),
+    node: <TableLine columns={columns} cells={columns.map((c) => c.title)} head mono={mono} />,
+    keepWithNext: true,
+  };
+  return [
+    head,
+    ...rows.map((cells, i) => ({
+      key: `${key}${i}`,
+      heightPt: height(cells, mono ? 'mono' : 'sans'),
+      node: <TableLine columns={columns} cells={cells} head={false} mono={mono} />,
+    })),
+  ];
 }
 
 /** Any other piece (a boxed figure set, a two-column panel) with its own height estimate. */

@@ -17,7 +17,9 @@ function Caution({ w }: { w: SizingWarning }) {
   const { View, Text } = pdfKit();
   return (
     <View style={styles.row} wrap={false}>
-      <Text style={{ width: '13%', fontWeight: 600, color: colors.severity[w.severity] }}>{severityLabel(w.severity)}</Text>
+      <Text style={{ width: '13%', fontWeight: 600, color: colors.severity[w.severity] }}>
+        {severityLabel(w.severity)}
+      </Text>
       <Text style={{ width: '87%' }}>{w.message}</Text>
     </View>
   );
@@ -27,6 +29,8 @@ function Caution({ w }: { w: SizingWarning }) {
 export function cautionBlocks(warnings: SizingWarning[]): Block[] {
   return [
     headingBlock('5', 'Warnings and cautions'),
-    ...sortedWarnings(warnings).map((w, i) => block(`w${i}`, rowHeight([{ text: w.message, widthPt: pct(87) }]), <Caution w={w} />)),
+    ...sortedWarnings(warnings).map((w, i) =>
+      block(`w${i}`, rowHeight([{ text: w.message, widthPt: pct(87) }]), <Caution w={w} />),
+    ),
   ];
 }

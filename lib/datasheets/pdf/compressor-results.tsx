@@ -1,6 +1,14 @@
 /** @jsxRuntime automatic @jsxImportSource react */
 import type { CompressorResult } from '@/lib/sizing';
-import { formatAmps, formatFigure, formatFixed, formatKw, formatPercent, formatRating, formatTemperatureC } from '../format';
+import {
+  formatAmps,
+  formatFigure,
+  formatFixed,
+  formatKw,
+  formatPercent,
+  formatRating,
+  formatTemperatureC,
+} from '../format';
 import { block, headingBlock, kvBlocks, type Block, type KvRow } from './blocks';
 import { headlineMethod, methodBlocks, methodLabel, stageTableBlocks } from './compressor-tables';
 import { highlightBlock } from './highlight';
@@ -11,7 +19,9 @@ export const iecText = (kw: number | null) => (kw === null ? 'above IEC series' 
 export const nemaText = (hp: number | null) => (hp === null ? 'above NEMA series' : `${formatRating(hp)} hp`);
 
 function suggestion(stages: number | null, limitC: number): string {
-  return stages === null ? `no count up to 6 keeps every stage under ${formatTemperatureC(limitC)}` : `${stages} (fewest keeping every stage under ${formatTemperatureC(limitC)})`;
+  return stages === null
+    ? `no count up to 6 keeps every stage under ${formatTemperatureC(limitC)}`
+    : `${stages} (fewest keeping every stage under ${formatTemperatureC(limitC)})`;
 }
 
 function caption(key: string, text: string): Block {
@@ -27,15 +37,29 @@ export function compressorResultBlocks(r: CompressorResult): Block[] {
   const rows: KvRow[] = [
     ['Gas power', formatKw(c.gasPowerKw), `${methodLabel(c.basis)} basis`],
     ['Shaft power', formatKw(c.shaftPowerKw), `gas power / ${formatFixed(c.mechanicalEfficiency, 3)}`],
-    ['Intercooler duties', m.intercoolerDutiesKw.length ? `${m.intercoolerDutiesKw.map(formatFigure).join(' + ')} kW` : 'none (single stage)', `total ${formatKw(m.totalIntercoolerDutyKw)}`],
+    [
+      'Intercooler duties',
+      m.intercoolerDutiesKw.length
+        ? `${m.intercoolerDutiesKw.map(formatFigure).join(' + ')} kW`
+        : 'none (single stage)',
+      `total ${formatKw(m.totalIntercoolerDutyKw)}`,
+    ],
     ...(m.aftercoolerDutyKw !== null ? [['Aftercooler duty', formatKw(m.aftercoolerDutyKw)] as KvRow] : []),
     ['Motor rating, IEC 60072-1', iecText(c.motor.iecKw), pct(c.motor.marginPercent)],
     ['Motor rating, NEMA MG 1', nemaText(c.motor.nemaHp), pct(c.motor.nemaMarginPercent)],
     ['Required motor margin', formatPercent(c.motor.requiredMarginPercent), 'over shaft power, no service factor'],
     ...(c.drive
       ? [
-          ['Motor input power', formatKw(c.drive.inputPowerKw), `efficiency ${formatFixed(c.drive.motorEfficiency, 3)}, pf ${formatFixed(c.drive.powerFactor, 2)}`] as KvRow,
-          ['Motor line current', formatAmps(c.drive.lineCurrentA), `${formatRating(c.drive.voltageV)} V, ${c.drive.phases}-phase`] as KvRow,
+          [
+            'Motor input power',
+            formatKw(c.drive.inputPowerKw),
+            `efficiency ${formatFixed(c.drive.motorEfficiency, 3)}, pf ${formatFixed(c.drive.powerFactor, 2)}`,
+          ] as KvRow,
+          [
+            'Motor line current',
+            formatAmps(c.drive.lineCurrentA),
+            `${formatRating(c.drive.voltageV)} V, ${c.drive.phases}-phase`,
+          ] as KvRow,
         ]
       : []),
     ['Suggested stages', suggestion(c.suggestedStages, c.dischargeTemperatureLimitC)],
@@ -43,12 +67,16 @@ export function compressorResultBlocks(r: CompressorResult): Block[] {
   ];
   return [
     headingBlock('3', 'Results: compressor'),
-    highlightBlock('ch', [
-      { label: 'Shaft power', value: formatKw(c.shaftPowerKw) },
-      { label: 'Gas power', value: formatKw(c.gasPowerKw) },
-      { label: 'Motor (IEC)', value: iecText(c.motor.iecKw) },
-      { label: 'Motor (NEMA)', value: nemaText(c.motor.nemaHp) },
-    ], colors.tide),
+    highlightBlock(
+      'ch',
+      [
+        { label: 'Shaft power', value: formatKw(c.shaftPowerKw) },
+        { label: 'Gas power', value: formatKw(c.gasPowerKw) },
+        { label: 'Motor (IEC)', value: iecText(c.motor.iecKw) },
+        { label: 'Motor (NEMA)', value: nemaText(c.motor.nemaHp) },
+      ],
+      colors.tide,
+    ),
     caption('cs', `Stages, ${methodLabel(c.basis)} (headline basis)`),
     ...stageTableBlocks(c),
     caption('cm', 'Both methods'),

@@ -1,6 +1,14 @@
 /** @jsxRuntime automatic @jsxImportSource react */
 import { enteredConditions, type EnteredConditions } from '../entered-input';
-import { formatEntered, formatFigure, formatFixed, formatKpa, formatPercent, formatRating, formatTemperatureC } from '../format';
+import {
+  formatEntered,
+  formatFigure,
+  formatFixed,
+  formatKpa,
+  formatPercent,
+  formatRating,
+  formatTemperatureC,
+} from '../format';
 import type { DatasheetSnapshot } from '../snapshot';
 import { headingBlock, kvBlocks, type Block, type KvRow } from './blocks';
 
@@ -19,14 +27,29 @@ function heaterRows(s: DatasheetSnapshot, e: EnteredConditions): KvRow[] {
 function compressorRows(s: DatasheetSnapshot, e: EnteredConditions): KvRow[] {
   if (s.result.service !== 'compressor') return [];
   const c = s.result.compressor;
-  const eff: KvRow = e.polytropicEfficiency !== null || c.polytropicEfficiency !== null
-    ? ['Polytropic efficiency per stage', formatFixed(c.polytropicEfficiency ?? e.polytropicEfficiency ?? NaN, 3), `isentropic equivalent ${formatFixed(c.isentropicEfficiency, 4)}`]
-    : ['Isentropic efficiency per stage', formatFixed(c.isentropicEfficiency, 3)];
+  const eff: KvRow =
+    e.polytropicEfficiency !== null || c.polytropicEfficiency !== null
+      ? [
+          'Polytropic efficiency per stage',
+          formatFixed(c.polytropicEfficiency ?? e.polytropicEfficiency ?? NaN, 3),
+          `isentropic equivalent ${formatFixed(c.isentropicEfficiency, 4)}`,
+        ]
+      : ['Isentropic efficiency per stage', formatFixed(c.isentropicEfficiency, 3)];
   return [
     ['Discharge pressure (target)', formatEntered(e.dischargePressure), formatKpa(c.dischargePressureKpa)],
-    ['Overall pressure ratio', formatFixed(c.overallPressureRatio, 3), `${c.stageCount} stage(s) of ${formatFixed(c.stagePressureRatio, 3)}`],
+    [
+      'Overall pressure ratio',
+      formatFixed(c.overallPressureRatio, 3),
+      `${c.stageCount} stage(s) of ${formatFixed(c.stagePressureRatio, 3)}`,
+    ],
     eff,
-    ['Intercooler outlet temperature', formatTemperatureC(c.intercoolerOutletTemperatureC), e.intercoolerOutletTemperature ? `entered ${formatEntered(e.intercoolerOutletTemperature)}` : 'suction temperature (default)'],
+    [
+      'Intercooler outlet temperature',
+      formatTemperatureC(c.intercoolerOutletTemperatureC),
+      e.intercoolerOutletTemperature
+        ? `entered ${formatEntered(e.intercoolerOutletTemperature)}`
+        : 'suction temperature (default)',
+    ],
     ['Interstage pressure drop', formatPercent(c.interstagePressureDropPercent)],
     ['Mechanical efficiency', formatFixed(c.mechanicalEfficiency, 3)],
     ['Discharge temperature limit', formatTemperatureC(c.dischargeTemperatureLimitC)],
@@ -40,7 +63,11 @@ export function conditionsBlocks(s: DatasheetSnapshot): Block[] {
   const rows: KvRow[] = [
     ['Flow as entered', formatEntered(e.flow)],
     ['Mass flow', `${formatFigure(r.massFlowKgPerS * 3600)} kg/h`, `${formatFixed(r.massFlowKgPerS, 4)} kg/s`],
-    ['Standard flows', `${formatFigure(r.flows.normalM3PerH)} Nm³/h`, `${formatFigure(r.flows.standardM3PerH)} Sm³/h, ${formatFigure(r.flows.scfm)} SCFM`],
+    [
+      'Standard flows',
+      `${formatFigure(r.flows.normalM3PerH)} Nm³/h`,
+      `${formatFigure(r.flows.standardM3PerH)} Sm³/h, ${formatFigure(r.flows.scfm)} SCFM`,
+    ],
     ['Inlet actual flow', `${formatFigure(r.inletActualFlowM3PerH)} m³/h`],
     ['Inlet temperature', formatEntered(e.inletTemperature), formatTemperatureC(r.inletTemperatureC)],
     ['Inlet pressure', formatEntered(e.inletPressure), formatKpa(r.inletPressureKpa)],

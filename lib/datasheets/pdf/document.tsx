@@ -10,7 +10,15 @@ import { styles } from './theme';
  * The datasheet on A4 with the running head and footer on every page. With `pages` each planned page is
  * an explicit page with its number printed; without, the blocks flow and the renderer numbers the pages.
  */
-export function DatasheetDocument({ s, blocks, pages }: { s: DatasheetSnapshot; blocks: Block[]; pages: Block[][] | null }) {
+export function DatasheetDocument({
+  s,
+  blocks,
+  pages,
+}: {
+  s: DatasheetSnapshot;
+  blocks: Block[];
+  pages: Block[][] | null;
+}) {
   const { Document, Page } = pdfKit();
   const layout = pages ?? [blocks];
   return (
@@ -27,7 +35,9 @@ export function DatasheetDocument({ s, blocks, pages }: { s: DatasheetSnapshot; 
         <Page key={i} size="A4" style={styles.page}>
           <RunningHead s={s} />
           <PageFooter s={s} page={pages ? { number: i + 1, total: pages.length } : undefined} />
-          {page.map((b) => <Fragment key={b.key}>{b.node}</Fragment>)}
+          {page.map((b) => (
+            <Fragment key={b.key}>{b.node}</Fragment>
+          ))}
         </Page>
       ))}
     </Document>

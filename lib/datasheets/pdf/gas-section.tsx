@@ -18,14 +18,26 @@ export function gasBlocks(s: DatasheetSnapshot): Block[] {
   const rows = Object.entries(g.moleFractions)
     .sort((a, b) => (b[1] ?? 0) - (a[1] ?? 0))
     .map(([species, x]) => [species, formatFixed((x ?? 0) * 100, 4), formatFixed((mass[species] ?? 0) * 100, 4)]);
-  const table = tableBlocks('gt', [{ title: 'Component', widthPct: 34 }, { title: 'Mole %', widthPct: 33, align: 'right' }, { title: 'Mass %', widthPct: 33, align: 'right' }], rows);
-  const facts = kvBlocks('gk', [
-    ['Gas', g.label],
-    ['Molar mass', `${formatFixed(g.molarMassKgPerKmol, 3)} kg/kmol`],
-    ['Specific gas constant R', `${formatFixed(g.gasConstantJPerKgK, 2)} J/(kg K)`],
-    ['Pseudo-critical T (Kay)', `${formatFigure(g.pseudoCriticalTemperatureK)} K`],
-    ['Pseudo-critical p (Kay)', `${formatFigure(g.pseudoCriticalPressureKpa)} kPa`],
-  ], { labelPct: 55 });
+  const table = tableBlocks(
+    'gt',
+    [
+      { title: 'Component', widthPct: 34 },
+      { title: 'Mole %', widthPct: 33, align: 'right' },
+      { title: 'Mass %', widthPct: 33, align: 'right' },
+    ],
+    rows,
+  );
+  const facts = kvBlocks(
+    'gk',
+    [
+      ['Gas', g.label],
+      ['Molar mass', `${formatFixed(g.molarMassKgPerKmol, 3)} kg/kmol`],
+      ['Specific gas constant R', `${formatFixed(g.gasConstantJPerKgK, 2)} J/(kg K)`],
+      ['Pseudo-critical T (Kay)', `${formatFigure(g.pseudoCriticalTemperatureK)} K`],
+      ['Pseudo-critical p (Kay)', `${formatFigure(g.pseudoCriticalPressureKpa)} kPa`],
+    ],
+    { labelPct: 55 },
+  );
   const basis = `Composition basis: ${s.result.basis.gasComposition}`;
   const panel = (
     <View style={{ flexDirection: 'row' }} wrap={false}>
@@ -36,6 +48,10 @@ export function gasBlocks(s: DatasheetSnapshot): Block[] {
   return [
     headingBlock('1', 'Gas'),
     block('gp', Math.max(sum(table), sum(facts)), panel),
-    block('gb', 3 + 9 * linesIn(basis, pct(100), 'small'), <Text style={[styles.small, { marginTop: 3 }]}>{basis}</Text>),
+    block(
+      'gb',
+      3 + 9 * linesIn(basis, pct(100), 'small'),
+      <Text style={[styles.small, { marginTop: 3 }]}>{basis}</Text>,
+    ),
   ];
 }

@@ -18,7 +18,11 @@ export function heaterResultBlocks(r: HeaterResult): Block[] {
   const rows: KvRow[] = [
     ['Absorbed duty (integrated cp)', formatKw(h.absorbedDutyKw), 'mass flow x (h out - h in)'],
     ['Average-cp estimate', formatKw(h.averageCpDutyKw), `difference ${formatPercent(h.averageCpDifferencePercent)}`],
-    ['cp at mean temperature', `${formatFigure(h.cpMeanJPerKgK)} J/(kg K)`, `at ${formatFixed(h.properties.mean.temperatureC, 1)} °C`],
+    [
+      'cp at mean temperature',
+      `${formatFigure(h.cpMeanJPerKgK)} J/(kg K)`,
+      `at ${formatFixed(h.properties.mean.temperatureC, 1)} °C`,
+    ],
     ['Heat-loss allowance', formatKw(h.heatLossKw), formatPercent(h.heatLossPercent)],
     ['Design margin', formatKw(h.marginKw), formatPercent(h.designMarginPercent)],
     ['Design duty', formatKw(h.designDutyKw)],
@@ -31,12 +35,16 @@ export function heaterResultBlocks(r: HeaterResult): Block[] {
   ];
   return [
     headingBlock('3', 'Results: heater'),
-    highlightBlock('hh', [
-      { label: 'Absorbed duty', value: formatKw(h.absorbedDutyKw) },
-      { label: 'Design duty', value: formatKw(h.designDutyKw) },
-      { label: 'Selected rating', value: ratingText(h.selectedRatingKw) },
-      { label: 'Line current', value: formatAmps(e.currentA) },
-    ], colors.copper),
+    highlightBlock(
+      'hh',
+      [
+        { label: 'Absorbed duty', value: formatKw(h.absorbedDutyKw) },
+        { label: 'Design duty', value: formatKw(h.designDutyKw) },
+        { label: 'Selected rating', value: ratingText(h.selectedRatingKw) },
+        { label: 'Line current', value: formatAmps(e.currentA) },
+      ],
+      colors.copper,
+    ),
     ...kvBlocks('hr', rows),
   ];
 }

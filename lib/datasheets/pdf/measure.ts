@@ -11,7 +11,13 @@ export type Face = 'sans' | 'mono' | 'small' | 'bold' | 'title';
 
 // Average advance per character: about 0.45 em for the sans face (taken as 0.47 em to stay on the safe
 // side), exactly 0.6 em for the mono face.
-const CHAR_PT: Record<Face, number> = { sans: 8 * 0.47, bold: 8.5 * 0.55, title: 15 * 0.55, mono: 7.6 * 0.6, small: 6.8 * 0.5 };
+const CHAR_PT: Record<Face, number> = {
+  sans: 8 * 0.47,
+  bold: 8.5 * 0.55,
+  title: 15 * 0.55,
+  mono: 7.6 * 0.6,
+  small: 6.8 * 0.5,
+};
 
 /** Lines a string needs in a column `widthPt` wide, allowing for words that do not fill a line. */
 export function linesIn(text: string | null | undefined, widthPt: number, face: Face = 'sans'): number {

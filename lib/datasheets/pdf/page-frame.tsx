@@ -13,7 +13,9 @@ export function RunningHead({ s }: { s: DatasheetSnapshot }) {
   const { View, Text } = pdfKit();
   return (
     <View style={styles.runningHead} fixed>
-      <Text><Text style={styles.wordmark}>DUTYWISE</Text>  Equipment datasheet</Text>
+      <Text>
+        <Text style={styles.wordmark}>DUTYWISE</Text> Equipment datasheet
+      </Text>
       <Text>{`${s.datasheet.number}  Rev. ${s.datasheet.revision}  ${s.sizing.equipmentTag ?? ''}`}</Text>
     </View>
   );
@@ -30,7 +32,11 @@ export function PageFooter({ s, page }: { s: DatasheetSnapshot; page?: { number:
       <Text>{PRELIMINARY_STATEMENT}</Text>
       <View style={styles.footerRow}>
         <Text>{`${s.datasheet.number} Rev. ${s.datasheet.revision}, issued ${s.datasheet.issuedAt.slice(0, 10)} for ${s.account.name}`}</Text>
-        {page ? <Text>{`Page ${page.number} of ${page.total}`}</Text> : <Text render={({ pageNumber, totalPages }) => `Page ${pageNumber} of ${totalPages}`} />}
+        {page ? (
+          <Text>{`Page ${page.number} of ${page.total}`}</Text>
+        ) : (
+          <Text render={({ pageNumber, totalPages }) => `Page ${pageNumber} of ${totalPages}`} />
+        )}
       </View>
     </View>
   );

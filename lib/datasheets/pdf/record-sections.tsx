@@ -8,8 +8,18 @@ import { styles } from './theme';
 
 /** Every revision letter with its date, note and issuer. */
 export function revisionBlocks(s: DatasheetSnapshot): Block[] {
-  const rows = s.revisions.map((r, i) => [r.revision, formatIssueDate(r.issuedAt), r.note ?? (i === 0 ? 'First issue' : 'Re-issued'), r.issuedByName ?? '—']);
-  const columns = [{ title: 'Rev.', widthPct: 8 }, { title: 'Date', widthPct: 14 }, { title: 'Description', widthPct: 54 }, { title: 'Issued by', widthPct: 24 }];
+  const rows = s.revisions.map((r, i) => [
+    r.revision,
+    formatIssueDate(r.issuedAt),
+    r.note ?? (i === 0 ? 'First issue' : 'Re-issued'),
+    r.issuedByName ?? '—',
+  ]);
+  const columns = [
+    { title: 'Rev.', widthPct: 8 },
+    { title: 'Date', widthPct: 14 },
+    { title: 'Description', widthPct: 54 },
+    { title: 'Issued by', widthPct: 24 },
+  ];
   return [headingBlock('6', 'Revisions'), ...tableBlocks('rv', columns, rows, false)];
 }
 

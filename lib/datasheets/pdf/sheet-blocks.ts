@@ -37,7 +37,7 @@ const CAPACITY_PT = PAGE_CONTENT_PT * 0.99;
 export function planPages(blocks: Block[], capacityPt = CAPACITY_PT): Block[][] | null {
   const pages: Block[][] = [[]];
   let used = 0;
-  for (let i = 0; i < blocks.length; ) {
+  for (let i = 0; i < blocks.length;) {
     const group: Block[] = [blocks[i]!];
     while (group.at(-1)!.keepWithNext && i + group.length < blocks.length) group.push(blocks[i + group.length]!);
     const height = group.reduce((h, b) => h + b.heightPt, 0);

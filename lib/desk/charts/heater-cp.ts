@@ -55,7 +55,10 @@ export function heaterCpChart(r: HeaterResult, system: UnitSystem, samples = 48)
     meanT: toT(meanK),
     meanCp: toCp(h.cpMeanJPerKgK),
     integratedCp: toCp(integrated),
-    band: { from: toT(Math.max(MIN_TEMPERATURE_K, meanK - AVERAGE_CP_SPAN_K / 2)), to: toT(meanK + AVERAGE_CP_SPAN_K / 2) },
+    band: {
+      from: toT(Math.max(MIN_TEMPERATURE_K, meanK - AVERAGE_CP_SPAN_K / 2)),
+      to: toT(meanK + AVERAGE_CP_SPAN_K / 2),
+    },
     riseK: h.temperatureRiseK,
     beyondBand: Math.abs(h.temperatureRiseK) > AVERAGE_CP_SPAN_K,
   };

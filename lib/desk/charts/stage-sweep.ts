@@ -5,9 +5,20 @@ import { SYSTEM_UNITS, unitLabel, type UnitSystem } from '../unit-systems';
 export const SWEEP_STAGES = [1, 2, 3, 4, 5, 6] as const;
 
 /** One stage count of the sweep; figures null where the engine refuses that count. */
-export type SweepPoint = { stages: number; shaftPowerKw: number | null; maxDischargeT: number | null; refused: string | null };
+export type SweepPoint = {
+  stages: number;
+  shaftPowerKw: number | null;
+  maxDischargeT: number | null;
+  refused: string | null;
+};
 
-export type SweepData = { points: SweepPoint[]; limitT: number | null; temperatureUnit: string; selected: number; suggested: number | null };
+export type SweepData = {
+  points: SweepPoint[];
+  limitT: number | null;
+  temperatureUnit: string;
+  selected: number;
+  suggested: number | null;
+};
 
 /**
  * Shaft power and hottest discharge for 1 to 6 stages of the same duty. Runs the engine in the browser

@@ -20,8 +20,20 @@ export type CheckoutPageModel = {
 
 const FIELDS: { key: CardFormField; label: string; autocomplete: string; type: string; extra: string }[] = [
   { key: 'email', label: 'Email', autocomplete: 'email', type: 'email', extra: '' },
-  { key: 'cardNumber', label: 'Card number', autocomplete: 'cc-number', type: 'text', extra: 'inputmode="numeric" placeholder="4242 4242 4242 4242"' },
-  { key: 'expiry', label: 'Expiry (MM/YY)', autocomplete: 'cc-exp', type: 'text', extra: 'inputmode="numeric" placeholder="MM/YY"' },
+  {
+    key: 'cardNumber',
+    label: 'Card number',
+    autocomplete: 'cc-number',
+    type: 'text',
+    extra: 'inputmode="numeric" placeholder="4242 4242 4242 4242"',
+  },
+  {
+    key: 'expiry',
+    label: 'Expiry (MM/YY)',
+    autocomplete: 'cc-exp',
+    type: 'text',
+    extra: 'inputmode="numeric" placeholder="MM/YY"',
+  },
   { key: 'cvc', label: 'CVC', autocomplete: 'cc-csc', type: 'text', extra: 'inputmode="numeric" placeholder="123"' },
   { key: 'name', label: 'Name on card', autocomplete: 'cc-name', type: 'text', extra: '' },
 ];
@@ -43,9 +55,14 @@ ${error ? `<div class="field-error" id="${id}-error">${escapeHtml(error)}</div>`
 export function renderCheckoutPage(model: CheckoutPageModel): string {
   const total = formatMoney(model.totalMinor, model.currency);
   const rows = model.lines
-    .map((line) => `<tr><td>${escapeHtml(line.label)}${line.quantity > 1 ? ` × ${line.quantity}` : ''}</td><td class="num">${formatMoney(line.amountMinor, model.currency)} ${escapeHtml(line.intervalLabel)}</td></tr>`)
+    .map(
+      (line) =>
+        `<tr><td>${escapeHtml(line.label)}${line.quantity > 1 ? ` × ${line.quantity}` : ''}</td><td class="num">${formatMoney(line.amountMinor, model.currency)} ${escapeHtml(line.intervalLabel)}</td></tr>`,
+    )
     .join('');
-  const trial = model.trialDays ? `<p class="muted">First ${model.trialDays} days free; the first charge follows the trial.</p>` : '';
+  const trial = model.trialDays
+    ? `<p class="muted">First ${model.trialDays} days free; the first charge follows the trial.</p>`
+    : '';
   const alert = model.formError ? `<div class="alert" role="alert">${escapeHtml(model.formError)}</div>` : '';
   const cancel = model.cancelUrl ? `<a href="${escapeHtml(model.cancelUrl)}">Back without paying</a>` : '';
   const body = `

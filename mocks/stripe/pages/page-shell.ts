@@ -55,6 +55,11 @@ export function pageShell(title: string, body: string): string {
 
 /** A one-panel page for expired, finished or missing sessions. */
 export function messagePage(title: string, message: string, link?: { href: string; label: string }): string {
-  const action = link ? `<div class="actions"><a href="${escapeHtml(link.href)}">${escapeHtml(link.label)}</a></div>` : '';
-  return pageShell(title, `<section class="panel"><h1>${escapeHtml(title)}</h1><p>${escapeHtml(message)}</p>${action}</section>`);
+  const action = link
+    ? `<div class="actions"><a href="${escapeHtml(link.href)}">${escapeHtml(link.label)}</a></div>`
+    : '';
+  return pageShell(
+    title,
+    `<section class="panel"><h1>${escapeHtml(title)}</h1><p>${escapeHtml(message)}</p>${action}</section>`,
+  );
 }

@@ -29,10 +29,21 @@ const NONE = '00000000-0000-0000-0000-000000000000';
 export async function scenarioIds(): Promise<Record<string, string>> {
   const one = async (sql: string, name: string) => (await query<{ id: string }>(sql, [name]))[0]?.id ?? NONE;
   const acct = (n: string) => one('select id from accounts where name = $1', n);
-  const sizing = (n: string) => one('select s.id from sizings s join accounts a on a.id = s.account_id where a.name = $1 order by s.number limit 1', n);
-  const quote = (n: string) => one('select q.id from quotes q join accounts a on a.id = q.account_id where a.name = $1 order by q.number limit 1', n);
+  const sizing = (n: string) =>
+    one(
+      'select s.id from sizings s join accounts a on a.id = s.account_id where a.name = $1 order by s.number limit 1',
+      n,
+    );
+  const quote = (n: string) =>
+    one(
+      'select q.id from quotes q join accounts a on a.id = q.account_id where a.name = $1 order by q.number limit 1',
+      n,
+    );
   const revision = (n: string) =>
-    one('select r.id from datasheet_revisions r join datasheets d on d.id = r.datasheet_id join accounts a on a.id = d.account_id where a.name = $1 order by r.issued_at limit 1', n);
+    one(
+      'select r.id from datasheet_revisions r join datasheets d on d.id = r.datasheet_id join accounts a on a.id = d.account_id where a.name = $1 order by r.issued_at limit 1',
+      n,
+    );
   return {
     tarnsideAccount: await acct('Tarnside Polymers'),
     greyfenAccount: await acct('Greyfen Biogas'),

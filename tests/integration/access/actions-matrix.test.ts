@@ -22,14 +22,19 @@ const roles: UserRole[] = ['sales_engineer', 'customer', 'support', 'admin'];
 const people = new Map<UserRole, { id: string; role: string }>();
 
 beforeAll(async () => {
-  for (const file of findActionFiles(path.join(root, 'app'))) modules.set(file, (await import(path.join(root, file))) as Record<string, unknown>);
+  for (const file of findActionFiles(path.join(root, 'app')))
+    modules.set(file, (await import(path.join(root, file))) as Record<string, unknown>);
   const acct = await makeAccount('Matrix');
   for (const r of roles) people.set(r, await makeUser(r, r === 'customer' ? acct.id : undefined));
 });
 
 describe('server action access matrix', () => {
   it('every exported action has a row in the table, and every row names a real export', () => {
-    const found = [...modules].flatMap(([file, mod]) => Object.entries(mod).filter(([, v]) => typeof v === 'function').map(([name]) => `${file}#${name}`));
+    const found = [...modules].flatMap(([file, mod]) =>
+      Object.entries(mod)
+        .filter(([, v]) => typeof v === 'function')
+        .map(([name]) => `${file}#${name}`),
+    );
     expect(found.sort()).toEqual(Object.keys(actionTable).sort());
   });
 
@@ -46,7 +51,10 @@ describe('server action access matrix', () => {
         const res = (await action({})) as { ok: boolean; status?: number };
         const allowed = access.allowed === 'public' || (who !== null && access.allowed.includes(who));
         const expected = allowed ? [400, 409, 410, 422] : [who === null ? 401 : 403];
-        if (res.ok || !expected.includes(res.status ?? 0)) failures.push(`${key} as ${who ?? 'signed-out'}: got ${res.ok ? 'ok' : res.status}, expected ${expected.join('/')}`);
+        if (res.ok || !expected.includes(res.status ?? 0))
+          failures.push(
+            `${key} as ${who ?? 'signed-out'}: got ${res.ok ? 'ok' : res.status}, expected ${expected.join('/')}`,
+          );
       }
     }
     expect(failures).toEqual([]);

@@ -32,7 +32,10 @@ describe('customer accounts are scoped', () => {
 
   it('creating an account writes its audit entry in the same transaction', async () => {
     const engineer = await makeUser('sales_engineer');
-    const { id } = await createAccount(engineer, accountInputSchema.parse({ name: 'Audit Check Ltd', barometricPressureKpa: '99.1' }));
+    const { id } = await createAccount(
+      engineer,
+      accountInputSchema.parse({ name: 'Audit Check Ltd', barometricPressureKpa: '99.1' }),
+    );
     const rows = await db.select().from(auditLog).where(eq(auditLog.entityId, id));
     expect(rows.map((r) => r.action)).toEqual(['account.created']);
     expect(rows[0]?.actorUserId).toBe(engineer.id);
@@ -60,7 +63,9 @@ describe('quotes are scoped and keep lines inside their account', () => {
     const b = await makeAccount();
     const engineer = await makeUser('sales_engineer');
     const foreign = await makeSizingRow(b.id, engineer.id);
-    await expect(createQuote(engineer, { accountId: a.id, title: 'Cross account', sizingIds: [foreign] })).rejects.toThrow(/saved to this quote/);
+    await expect(
+      createQuote(engineer, { accountId: a.id, title: 'Cross account', sizingIds: [foreign] }),
+    ).rejects.toThrow(/saved to this quote/);
     const { id } = await createQuote(engineer, { accountId: a.id, title: 'Clean quote', sizingIds: [] });
     await expect(addQuoteItem(engineer, id, foreign, 1)).rejects.toThrow(/saved to this quote/);
     expect(await db.select().from(quoteItems).where(eq(quoteItems.quoteId, id))).toHaveLength(0);
@@ -82,7 +87,11 @@ describe('quotes are scoped and keep lines inside their account', () => {
   it('quote numbers are unique and follow the Qyy-nnnn scheme', async () => {
     const a = await makeAccount();
     const engineer = await makeUser('sales_engineer');
-    const made = await Promise.all(Array.from({ length: 8 }, (_, i) => createQuote(engineer, { accountId: a.id, title: `Parallel ${i}`, sizingIds: [] })));
+    const made = await Promise.all(
+      Array.from({ length: 8 }, (_, i) =>
+        createQuote(engineer, { accountId: a.id, title: `Parallel ${i}`, sizingIds: [] }),
+      ),
+    );
     const numbers = made.map((m) => m.number);
     expect(new Set(numbers).size).toBe(8);
     for (const n of numbers) expect(n).toMatch(/^Q\d{2}-\d{4,}$/);

@@ -8,14 +8,28 @@ import { makeClerkKeys, publishableKey, signClerkSession } from '../helpers/cler
 // The production identity path, exercised offline: Clerk's own middleware verifies RS256 session
 // tokens against CLERK_JWT_KEY (a key pair made here), and the backend API is answered by msw.
 const clerkUserId = `user_${Math.random().toString(36).slice(2, 10)}`;
-const server = setupServer(...clerkBackendHandlers([{ id: clerkUserId, email: `${clerkUserId}@customer.example`, firstName: 'Rhea', lastName: 'Voss', role: 'sales_engineer' }]));
+const server = setupServer(
+  ...clerkBackendHandlers([
+    {
+      id: clerkUserId,
+      email: `${clerkUserId}@customer.example`,
+      firstName: 'Rhea',
+      lastName: 'Voss',
+      role: 'sales_engineer',
+    },
+  ]),
+);
 let keys: Awaited<ReturnType<typeof makeClerkKeys>>;
 let middleware: (req: NextRequest, ev: NextFetchEvent) => Promise<Response> | Response;
 
 function requestWith(token: string, path = '/quotes') {
   const iat = JSON.parse(Buffer.from(token.split('.')[1] ?? '', 'base64url').toString()).iat as number;
   return new NextRequest(`https://desk.dutywise.test${path}`, {
-    headers: { cookie: `__session=${token}; __client_uat=${iat - 1}`, accept: 'text/html', 'sec-fetch-dest': 'document' },
+    headers: {
+      cookie: `__session=${token}; __client_uat=${iat - 1}`,
+      accept: 'text/html',
+      'sec-fetch-dest': 'document',
+    },
   });
 }
 // Refused means redirected (to sign-in or Clerk's handshake) and never marked signed in.
@@ -61,7 +75,10 @@ describe('Clerk session tokens in middleware', () => {
     const [h, p, s] = token.split('.');
     const forged = JSON.parse(Buffer.from(p ?? '', 'base64url').toString());
     forged.sub = 'user_someone_else';
-    const res = await middleware(requestWith(`${h}.${Buffer.from(JSON.stringify(forged)).toString('base64url')}.${s}`), event);
+    const res = await middleware(
+      requestWith(`${h}.${Buffer.from(JSON.stringify(forged)).toString('base64url')}.${s}`),
+      event,
+    );
     expectRefused(res);
   });
 
@@ -75,7 +92,12 @@ describe('mapping a Clerk user to a Dutywise user', () => {
   it('creates the row on first sign-in with the role from public metadata, then reuses it', async () => {
     const { mapClerkUser } = await import('@/lib/auth/clerk-user');
     const first = await mapClerkUser(clerkUserId);
-    expect(first).toMatchObject({ email: `${clerkUserId}@customer.example`, name: 'Rhea Voss', role: 'sales_engineer', accountId: null });
+    expect(first).toMatchObject({
+      email: `${clerkUserId}@customer.example`,
+      name: 'Rhea Voss',
+      role: 'sales_engineer',
+      accountId: null,
+    });
     const again = await mapClerkUser(clerkUserId);
     expect(again?.id).toBe(first?.id);
     const { db } = await import('@/db');

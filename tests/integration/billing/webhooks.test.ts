@@ -34,7 +34,13 @@ async function startForwarder(): Promise<string> {
     req.on('end', async () => {
       const body = Buffer.concat(chunks).toString('utf8');
       const type = (JSON.parse(body) as { type: string }).type;
-      const response = await POST(new Request('http://localhost/api/webhooks/stripe', { method: 'POST', body, headers: { 'stripe-signature': String(req.headers['stripe-signature']) } }));
+      const response = await POST(
+        new Request('http://localhost/api/webhooks/stripe', {
+          method: 'POST',
+          body,
+          headers: { 'stripe-signature': String(req.headers['stripe-signature']) },
+        }),
+      );
       outcomes.push({ type, status: response.status });
       res.writeHead(response.status, { 'content-type': 'application/json' }).end(await response.text());
     });
@@ -44,7 +50,14 @@ async function startForwarder(): Promise<string> {
 }
 
 const sign = (payload: string) => Stripe.webhooks.generateTestHeaderString({ payload, secret: cfg.secret });
-const postEvent = (payload: string, signature = sign(payload)) => POST(new Request('http://localhost/api/webhooks/stripe', { method: 'POST', body: payload, headers: { 'stripe-signature': signature } }));
+const postEvent = (payload: string, signature = sign(payload)) =>
+  POST(
+    new Request('http://localhost/api/webhooks/stripe', {
+      method: 'POST',
+      body: payload,
+      headers: { 'stripe-signature': signature },
+    }),
+  );
 
 async function subscribedCustomer() {
   const acct = await makeAccount('Subscriber');
@@ -58,7 +71,14 @@ async function subscribedCustomer() {
 }
 
 beforeAll(async () => {
-  fake = await startStripeFake({ port: cfg.port, webhookUrl: await startForwarder(), webhookSecret: cfg.secret, retryDelaysMs: [30, 60, 120], redirectWaitMs: 0, log: () => undefined });
+  fake = await startStripeFake({
+    port: cfg.port,
+    webhookUrl: await startForwarder(),
+    webhookSecret: cfg.secret,
+    retryDelaysMs: [30, 60, 120],
+    redirectWaitMs: 0,
+    log: () => undefined,
+  });
 });
 afterAll(async () => {
   await fake.close();
@@ -67,7 +87,13 @@ afterAll(async () => {
 
 describe('payment webhooks', () => {
   it('refuses a bad signature with 400 and records nothing', async () => {
-    const payload = JSON.stringify({ id: 'evt_forged_1', object: 'event', type: 'invoice.paid', created: 1, data: { object: {} } });
+    const payload = JSON.stringify({
+      id: 'evt_forged_1',
+      object: 'event',
+      type: 'invoice.paid',
+      created: 1,
+      data: { object: {} },
+    });
     const res = await postEvent(payload, 't=1,v1=deadbeef');
     expect(res.status).toBe(400);
     expect(await db.select().from(webhookEvents).where(eq(webhookEvents.id, 'evt_forged_1'))).toHaveLength(0);
@@ -94,7 +120,9 @@ describe('payment webhooks', () => {
 
   it('the same event delivered twice changes nothing the second time', async () => {
     const { acct } = await subscribedCustomer();
-    const events = (await (await fetch(`${fake.url}/_control/events`)).json()) as { data: { id: string; type: string }[] };
+    const events = (await (await fetch(`${fake.url}/_control/events`)).json()) as {
+      data: { id: string; type: string }[];
+    };
     const paid = events.data.filter((e) => e.type === 'invoice.paid').at(-1)!;
     const [before] = await db.select().from(subscriptions).where(eq(subscriptions.accountId, acct.id));
     const n = outcomes.length;
@@ -108,12 +136,19 @@ describe('payment webhooks', () => {
     const { acct } = await subscribedCustomer();
     const [sub] = await db.select().from(subscriptions).where(eq(subscriptions.accountId, acct.id));
     const n = outcomes.length;
-    await new Stripe('sk_test_x', { host: '127.0.0.1', port: cfg.port, protocol: 'http', maxNetworkRetries: 0 }).subscriptions.update(sub!.stripeSubscriptionId, { cancel_at_period_end: true });
+    await new Stripe('sk_test_x', {
+      host: '127.0.0.1',
+      port: cfg.port,
+      protocol: 'http',
+      maxNetworkRetries: 0,
+    }).subscriptions.update(sub!.stripeSubscriptionId, { cancel_at_period_end: true });
     await waitUntil(() => outcomes.length > n, 'subscription.updated delivered');
     await fake.webhooksIdle();
     expect(await getEntitlement(acct.id)).toMatchObject({ unlocked: true, cancelAtPeriodEnd: true });
     const m = outcomes.length;
-    await fetch(`${fake.url}/_control/subscriptions/${sub!.stripeSubscriptionId}/advance-period-end`, { method: 'POST' });
+    await fetch(`${fake.url}/_control/subscriptions/${sub!.stripeSubscriptionId}/advance-period-end`, {
+      method: 'POST',
+    });
     await waitUntil(() => outcomes.length > m, 'subscription.deleted delivered');
     await fake.webhooksIdle();
     const ent = await getEntitlement(acct.id);
@@ -123,7 +158,9 @@ describe('payment webhooks', () => {
 
   it('an update that arrives before its checkout completion still ends active', async () => {
     const { acct } = await subscribedCustomer();
-    const list = (await (await fetch(`${fake.url}/_control/events`)).json()) as { data: { id: string; type: string }[] };
+    const list = (await (await fetch(`${fake.url}/_control/events`)).json()) as {
+      data: { id: string; type: string }[];
+    };
     // Replay this subscription's events newest first into a fresh account state.
     await db.delete(subscriptions).where(eq(subscriptions.accountId, acct.id));
     const mine = list.data.slice(-3).reverse();
@@ -143,9 +180,14 @@ describe('payment webhooks', () => {
     const futureAccountId = crypto.randomUUID();
     const sdk = new Stripe('sk_test_x', { host: '127.0.0.1', port: cfg.port, protocol: 'http', maxNetworkRetries: 0 });
     const session = await sdk.checkout.sessions.create({
-      mode: 'subscription', line_items: [{ price: 'price_desk_annual', quantity: 1 }], customer_email: 'late@customer.example',
-      client_reference_id: futureAccountId, metadata: { accountId: futureAccountId }, subscription_data: { metadata: { accountId: futureAccountId } },
-      success_url: 'http://localhost/billing', cancel_url: 'http://localhost/billing',
+      mode: 'subscription',
+      line_items: [{ price: 'price_desk_annual', quantity: 1 }],
+      customer_email: 'late@customer.example',
+      client_reference_id: futureAccountId,
+      metadata: { accountId: futureAccountId },
+      subscription_data: { metadata: { accountId: futureAccountId } },
+      success_url: 'http://localhost/billing',
+      cancel_url: 'http://localhost/billing',
     });
     const n = outcomes.length;
     await payHostedCheckout(session.url!, SUCCESS_CARD);
@@ -154,10 +196,19 @@ describe('payment webhooks', () => {
     const failed = outcomes.slice(n).filter((o) => o.status === 500);
     expect(failed.length).toBeGreaterThan(0);
     const done = await sdk.checkout.sessions.retrieve(session.id);
-    expect(await db.select().from(subscriptions).where(eq(subscriptions.stripeSubscriptionId, String(done.subscription)))).toHaveLength(0);
+    expect(
+      await db
+        .select()
+        .from(subscriptions)
+        .where(eq(subscriptions.stripeSubscriptionId, String(done.subscription))),
+    ).toHaveLength(0);
     // The account appears; the sender's next attempt is processed.
-    await db.insert(accounts).values({ id: futureAccountId, name: 'Late account', billingContactEmail: 'late@customer.example' });
-    const list = (await (await fetch(`${fake.url}/_control/events`)).json()) as { data: { id: string; type: string }[] };
+    await db
+      .insert(accounts)
+      .values({ id: futureAccountId, name: 'Late account', billingContactEmail: 'late@customer.example' });
+    const list = (await (await fetch(`${fake.url}/_control/events`)).json()) as {
+      data: { id: string; type: string }[];
+    };
     const created = list.data.filter((e) => e.type === 'customer.subscription.created').at(-1)!;
     const m = outcomes.length;
     await fetch(`${fake.url}/_control/events/${created.id}/resend`, { method: 'POST' });

@@ -33,20 +33,41 @@ afterAll(() => s3Server.close());
 async function setup() {
   const account = await makeAccount('Atomic Issue');
   const engineer = await makeUser('sales_engineer');
-  const sizing = await makeEngineSizing(engineer, account.id, nitrogenHeater, { title: 'All or nothing', tag: 'EH-7301' });
+  const sizing = await makeEngineSizing(engineer, account.id, nitrogenHeater, {
+    title: 'All or nothing',
+    tag: 'EH-7301',
+  });
   return { account, engineer, sizing };
 }
 
 async function nothingLeft(accountId: string, sizingId: string) {
   const ds = await db.select({ id: datasheets.id }).from(datasheets).where(eq(datasheets.sizingId, sizingId));
-  const blobRows = await db.select({ key: blobs.key }).from(blobs).where(like(blobs.key, `accounts/${accountId}/%`));
-  const audits = await db.select({ id: auditLog.id }).from(auditLog).where(and(eq(auditLog.accountId, accountId), eq(auditLog.action, 'datasheet.issued')));
-  const mail = await db.select({ id: outbox.id }).from(outbox).where(and(eq(outbox.accountId, accountId), eq(outbox.template, 'datasheet-issued')));
-  return { datasheets: ds.length, blobRows: blobRows.length, audits: audits.length, mail: mail.length, s3Objects: s3KeysOf(accountId).length };
+  const blobRows = await db
+    .select({ key: blobs.key })
+    .from(blobs)
+    .where(like(blobs.key, `accounts/${accountId}/%`));
+  const audits = await db
+    .select({ id: auditLog.id })
+    .from(auditLog)
+    .where(and(eq(auditLog.accountId, accountId), eq(auditLog.action, 'datasheet.issued')));
+  const mail = await db
+    .select({ id: outbox.id })
+    .from(outbox)
+    .where(and(eq(outbox.accountId, accountId), eq(outbox.template, 'datasheet-issued')));
+  return {
+    datasheets: ds.length,
+    blobRows: blobRows.length,
+    audits: audits.length,
+    mail: mail.length,
+    s3Objects: s3KeysOf(accountId).length,
+  };
 }
 
 const none = { datasheets: 0, blobRows: 0, audits: 0, mail: 0, s3Objects: 0 };
-const stores: [string, BlobStore][] = [['postgres', createPostgresBlobStore()], ['s3', s3Store]];
+const stores: [string, BlobStore][] = [
+  ['postgres', createPostgresBlobStore()],
+  ['s3', s3Store],
+];
 
 describe.each(stores)('issuing with the %s store is all or nothing', (kind, store) => {
   it('stores the bytes under the account namespace and serves them back unchanged', async () => {
@@ -56,24 +77,56 @@ describe.each(stores)('issuing with the %s store is all or nothing', (kind, stor
     expect(await store.exists(issued.blobKey)).toBe(true);
     const dl = await getRevisionDownload(engineer, issued.revisionId, { store });
     expect(dl.status === 'ok' && sha256Hex(dl.bytes)).toBe(issued.sha256);
-    expect(await nothingLeft(account.id, sizing.id)).toMatchObject({ datasheets: 1, audits: 1, mail: 1, blobRows: kind === 'postgres' ? 1 : 0, s3Objects: kind === 's3' ? 1 : 0 });
+    expect(await nothingLeft(account.id, sizing.id)).toMatchObject({
+      datasheets: 1,
+      audits: 1,
+      mail: 1,
+      blobRows: kind === 'postgres' ? 1 : 0,
+      s3Objects: kind === 's3' ? 1 : 0,
+    });
   });
 
   it('a failure after the blob write and before commit leaves no row and no blob', async () => {
     const { account, engineer, sizing } = await setup();
     faults.failMail = true;
-    await expect(issueDatasheet(engineer, { sizingId: sizing.id }, { store })).rejects.toThrow(/injected: outbox unavailable/);
+    await expect(issueDatasheet(engineer, { sizingId: sizing.id }, { store })).rejects.toThrow(
+      /injected: outbox unavailable/,
+    );
     expect(await nothingLeft(account.id, sizing.id)).toEqual(none);
-    if (kind === 's3') expect(s3Fake.calls.filter((c) => c.key.startsWith(`accounts/${account.id}/`)).map((c) => c.op)).toEqual(['PutObject', 'DeleteObject']);
+    if (kind === 's3')
+      expect(s3Fake.calls.filter((c) => c.key.startsWith(`accounts/${account.id}/`)).map((c) => c.op)).toEqual([
+        'PutObject',
+        'DeleteObject',
+      ]);
   });
 
   it('a failure on a later revision keeps the earlier one intact and adds nothing', async () => {
     const { account, engineer, sizing } = await setup();
     const a = await issueDatasheet(engineer, { sizingId: sizing.id }, { store });
-    await expect(issueDatasheet(engineer, { sizingId: sizing.id }, { store, beforeCommit: async () => { throw new Error('injected: crash before commit'); } })).rejects.toThrow(/crash before commit/);
-    const revs = await db.select({ revision: datasheetRevisions.revision }).from(datasheetRevisions).where(eq(datasheetRevisions.datasheetId, a.datasheetId));
+    await expect(
+      issueDatasheet(
+        engineer,
+        { sizingId: sizing.id },
+        {
+          store,
+          beforeCommit: async () => {
+            throw new Error('injected: crash before commit');
+          },
+        },
+      ),
+    ).rejects.toThrow(/crash before commit/);
+    const revs = await db
+      .select({ revision: datasheetRevisions.revision })
+      .from(datasheetRevisions)
+      .where(eq(datasheetRevisions.datasheetId, a.datasheetId));
     expect(revs.map((r) => r.revision)).toEqual(['A']);
-    expect(await nothingLeft(account.id, sizing.id)).toMatchObject({ datasheets: 1, audits: 1, mail: 1, blobRows: kind === 'postgres' ? 1 : 0, s3Objects: kind === 's3' ? 1 : 0 });
+    expect(await nothingLeft(account.id, sizing.id)).toMatchObject({
+      datasheets: 1,
+      audits: 1,
+      mail: 1,
+      blobRows: kind === 'postgres' ? 1 : 0,
+      s3Objects: kind === 's3' ? 1 : 0,
+    });
     expect(await store.exists(a.blobKey)).toBe(true);
   });
 });

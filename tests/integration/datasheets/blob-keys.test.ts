@@ -10,9 +10,11 @@ describe('blob keys are namespaced by account', () => {
   });
 
   it('refuses parts that could leave the namespace and ids that are not UUIDs', () => {
-    for (const bad of ['..', '../other', 'a/b', '', '.hidden', 'x'.repeat(129)]) expect(() => accountKey(id, bad)).toThrow(BlobKeyError);
+    for (const bad of ['..', '../other', 'a/b', '', '.hidden', 'x'.repeat(129)])
+      expect(() => accountKey(id, bad)).toThrow(BlobKeyError);
     expect(() => accountKey('not-a-uuid', 'x')).toThrow(/UUID/);
     expect(() => accountKey(id)).toThrow(/at least one part/);
-    for (const key of ['datasheets/x.pdf', `accounts/${id}`, `accounts/${id}/../x`, `accounts/${id}//x`]) expect(() => accountIdOfKey(key)).toThrow(BlobKeyError);
+    for (const key of ['datasheets/x.pdf', `accounts/${id}`, `accounts/${id}/../x`, `accounts/${id}//x`])
+      expect(() => accountIdOfKey(key)).toThrow(BlobKeyError);
   });
 });

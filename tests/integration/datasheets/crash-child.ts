@@ -6,19 +6,30 @@ import { issueDatasheet } from '@/lib/datasheets/issue';
 
 const [userJson, sizingId, storeKind, endpoint] = process.argv.slice(2);
 const user = JSON.parse(userJson ?? '{}') as CurrentUser;
-const store = storeKind === 's3'
-  ? createS3BlobStore({ bucket: 'dutywise-crash', region: 'us-east-1', endpoint, accessKeyId: 'AKCRASHTEST', secretAccessKey: 'crash-secret' })
-  : createPostgresBlobStore();
+const store =
+  storeKind === 's3'
+    ? createS3BlobStore({
+        bucket: 'dutywise-crash',
+        region: 'us-east-1',
+        endpoint,
+        accessKeyId: 'AKCRASHTEST',
+        secretAccessKey: 'crash-secret',
+      })
+    : createPostgresBlobStore();
 // Never outlive a test that died itself.
 setTimeout(() => process.exit(3), 60_000).unref();
 
-issueDatasheet(user, { sizingId: sizingId ?? '' }, {
-  store,
-  beforeCommit: async (_tx, written) => {
-    process.stdout.write(`READY ${written.blobKey}\n`);
-    await new Promise(() => setInterval(() => undefined, 1000));
+issueDatasheet(
+  user,
+  { sizingId: sizingId ?? '' },
+  {
+    store,
+    beforeCommit: async (_tx, written) => {
+      process.stdout.write(`READY ${written.blobKey}\n`);
+      await new Promise(() => setInterval(() => undefined, 1000));
+    },
   },
-}).catch((err: unknown) => {
+).catch((err: unknown) => {
   console.error('child issue failed', err);
   process.exit(2);
 });

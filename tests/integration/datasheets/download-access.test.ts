@@ -37,8 +37,13 @@ beforeAll(async () => {
   issued = await issueDatasheet(engineer, { sizingId });
 });
 
-const call = (id: string) => GET(new Request(`http://localhost:3000/api/v1/datasheets/${id}`), { params: Promise.resolve({ revisionId: id }) });
-const downloads = (revisionId: string) => db.select().from(auditLog).where(and(eq(auditLog.entityId, revisionId), eq(auditLog.action, 'datasheet.downloaded')));
+const call = (id: string) =>
+  GET(new Request(`http://localhost:3000/api/v1/datasheets/${id}`), { params: Promise.resolve({ revisionId: id }) });
+const downloads = (revisionId: string) =>
+  db
+    .select()
+    .from(auditLog)
+    .where(and(eq(auditLog.entityId, revisionId), eq(auditLog.action, 'datasheet.downloaded')));
 
 describe('who may download an issued revision', () => {
   it("another account's customer gets not-found, even with a subscription of their own", async () => {
@@ -78,7 +83,9 @@ describe('who may download an issued revision', () => {
     const res = await call(issued.revisionId);
     expect(res.status).toBe(200);
     expect(res.headers.get('content-type')).toBe('application/pdf');
-    expect(res.headers.get('content-disposition')).toBe(`attachment; filename="${issued.number}-rev${issued.revision}.pdf"`);
+    expect(res.headers.get('content-disposition')).toBe(
+      `attachment; filename="${issued.number}-rev${issued.revision}.pdf"`,
+    );
     expect(res.headers.get('cache-control')).toBe('private, no-store');
     const bytes = new Uint8Array(await res.arrayBuffer());
     expect(res.headers.get('x-content-sha256')).toBe(sha256Hex(bytes));

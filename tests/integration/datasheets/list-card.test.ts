@@ -5,15 +5,39 @@ import { DatasheetCard } from '@/app/(desk)/datasheets/_components/datasheet-car
 import type { DatasheetSummary } from '@/lib/datasheets/queries';
 
 const ds: DatasheetSummary = {
-  id: '0d5f7d35-0c38-4f7e-9a8e-3b1a8d6f2c11', number: 'DS26-0777', accountId: 'a', accountName: 'Fenwick Maltings', sizingId: 's', sizingTitle: 'Kiln air heater',
-  equipmentTag: 'EH-9001', service: 'heater', createdAt: new Date('2026-03-02T10:00:00Z'),
+  id: '0d5f7d35-0c38-4f7e-9a8e-3b1a8d6f2c11',
+  number: 'DS26-0777',
+  accountId: 'a',
+  accountName: 'Fenwick Maltings',
+  sizingId: 's',
+  sizingTitle: 'Kiln air heater',
+  equipmentTag: 'EH-9001',
+  service: 'heater',
+  createdAt: new Date('2026-03-02T10:00:00Z'),
   revisions: [
-    { id: '11111111-1111-4111-8111-111111111111', revision: 'A', issuedAt: new Date('2026-03-02T10:00:00Z'), sha256: 'ab'.repeat(32), byteSize: 33_000, note: null, issuedByName: 'Ines Marlow' },
-    { id: '22222222-2222-4222-8222-222222222222', revision: 'B', issuedAt: new Date('2026-03-09T10:00:00Z'), sha256: 'cd'.repeat(32), byteSize: 34_000, note: 'Margin raised', issuedByName: 'Ines Marlow' },
+    {
+      id: '11111111-1111-4111-8111-111111111111',
+      revision: 'A',
+      issuedAt: new Date('2026-03-02T10:00:00Z'),
+      sha256: 'ab'.repeat(32),
+      byteSize: 33_000,
+      note: null,
+      issuedByName: 'Ines Marlow',
+    },
+    {
+      id: '22222222-2222-4222-8222-222222222222',
+      revision: 'B',
+      issuedAt: new Date('2026-03-09T10:00:00Z'),
+      sha256: 'cd'.repeat(32),
+      byteSize: 34_000,
+      note: 'Margin raised',
+      issuedByName: 'Ines Marlow',
+    },
   ],
 };
 
-const html = (unlocked: boolean) => renderToStaticMarkup(createElement(DatasheetCard, { ds, unlocked, showAccount: true }));
+const html = (unlocked: boolean) =>
+  renderToStaticMarkup(createElement(DatasheetCard, { ds, unlocked, showAccount: true }));
 
 describe('the datasheet list card', () => {
   it('offers one download per revision when unlocked, with dates and hash prefixes', () => {

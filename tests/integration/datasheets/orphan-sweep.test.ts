@@ -20,7 +20,10 @@ describe('the orphan sweeper', () => {
   it('deletes old unreferenced S3 objects and keeps referenced and recent ones', async () => {
     const account = await makeAccount('Sweep S3');
     const engineer = await makeUser('sales_engineer');
-    const sizing = await makeEngineSizing(engineer, account.id, nitrogenHeater, { title: 'Sweep check', tag: 'EH-7401' });
+    const sizing = await makeEngineSizing(engineer, account.id, nitrogenHeater, {
+      title: 'Sweep check',
+      tag: 'EH-7401',
+    });
     const issued = await issueDatasheet(engineer, { sizingId: sizing.id }, { store: s3Store });
     // What a crash between upload and commit leaves: an object no revision row points at.
     const oldOrphan = accountKey(account.id, 'datasheets', 'DS00-0000', `A-${randomUUID()}.pdf`);
@@ -41,7 +44,17 @@ describe('the orphan sweeper', () => {
     const account = await makeAccount('Sweep PG');
     const store = createPostgresBlobStore();
     const orphan = accountKey(account.id, 'datasheets', 'DS00-0000', `A-${randomUUID()}.pdf`);
-    await db.insert(blobs).values({ key: orphan, accountId: account.id, contentType: 'application/pdf', byteSize: pdf.byteLength, sha256: sha256Hex(pdf), data: Buffer.from(pdf), createdAt: new Date(Date.now() - 3 * HOUR) });
+    await db
+      .insert(blobs)
+      .values({
+        key: orphan,
+        accountId: account.id,
+        contentType: 'application/pdf',
+        byteSize: pdf.byteLength,
+        sha256: sha256Hex(pdf),
+        data: Buffer.from(pdf),
+        createdAt: new Date(Date.now() - 3 * HOUR),
+      });
     const report = await sweepOrphanBlobs({ store, olderThanMinutes: 120 });
     expect(report.deleted).toContain(orphan);
     expect(await db.select().from(blobs).where(eq(blobs.key, orphan))).toHaveLength(0);

@@ -14,10 +14,26 @@ function snapshot(revisions: number): DatasheetSnapshot {
     schemaVersion: 1,
     datasheet: { number: 'DS26-9001', revision: 'A', issuedAt: at, note: null, issuedByName: 'Test engineer' },
     account: { id: '5b7c1c5e-8f0e-4d5f-9a51-3f1f7c2b9e10', name: 'Numbering Works', site: null },
-    sizing: { id: 'x', number: 'S26-09001', title: 'Page numbering check', equipmentTag: 'EH-9901', service: 'heater', gasLabel: 'nitrogen', notes: null, engineVersion: result.engineVersion, revision: 1, createdAt: at },
+    sizing: {
+      id: 'x',
+      number: 'S26-09001',
+      title: 'Page numbering check',
+      equipmentTag: 'EH-9901',
+      service: 'heater',
+      gasLabel: 'nitrogen',
+      notes: null,
+      engineVersion: result.engineVersion,
+      revision: 1,
+      createdAt: at,
+    },
     input: nitrogenHeater,
     result,
-    revisions: Array.from({ length: revisions }, (_, i) => ({ revision: revisionLetterAt(i)!, issuedAt: at, note: `Revision note ${i}: reviewed with the site`, issuedByName: 'Test engineer' })),
+    revisions: Array.from({ length: revisions }, (_, i) => ({
+      revision: revisionLetterAt(i)!,
+      issuedAt: at,
+      note: `Revision note ${i}: reviewed with the site`,
+      issuedByName: 'Test engineer',
+    })),
   };
 }
 
@@ -56,8 +72,13 @@ describe('page numbers are right on every page', () => {
     const flowing = await pagesOf(await renderDatasheetPdf(snapshot(5), { layout: 'flow' }));
     expectNumbered(flowing.text, flowing.totalPages);
     // Without the running head and footer, both layouts read the same from start to end.
-    const frame = [/DUTYWISE Equipment datasheet DS26-9001 Rev\. A EH-9901/g, /DS26-9001 Rev\. A, issued 2026-04-01 for Numbering Works/g, /Page \d+ of \d+/g];
-    const body = (t: string) => frame.reduce((acc, re) => acc.replace(re, ''), t.split(PRELIMINARY_STATEMENT).join('')).replace(/\s+/g, '');
+    const frame = [
+      /DUTYWISE Equipment datasheet DS26-9001 Rev\. A EH-9901/g,
+      /DS26-9001 Rev\. A, issued 2026-04-01 for Numbering Works/g,
+      /Page \d+ of \d+/g,
+    ];
+    const body = (t: string) =>
+      frame.reduce((acc, re) => acc.replace(re, ''), t.split(PRELIMINARY_STATEMENT).join('')).replace(/\s+/g, '');
     expect(body(flowing.text)).toBe(body(planned.text));
     expect(body(planned.text)).toContain('Revisionnote4:reviewedwiththesite');
   });

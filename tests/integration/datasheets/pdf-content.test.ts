@@ -1,7 +1,15 @@
 import { extractText } from 'unpdf';
 import { describe, expect, it } from 'vitest';
 import { getRevisionDownload } from '@/lib/datasheets/download';
-import { formatAmps, formatFigure, formatFixed, formatKw, formatPercent, formatRating, formatTemperatureC } from '@/lib/datasheets/format';
+import {
+  formatAmps,
+  formatFigure,
+  formatFixed,
+  formatKw,
+  formatPercent,
+  formatRating,
+  formatTemperatureC,
+} from '@/lib/datasheets/format';
 import { issueDatasheet } from '@/lib/datasheets/issue';
 import { iecText, nemaText } from '@/lib/datasheets/pdf/compressor-results';
 import { ratingText } from '@/lib/datasheets/pdf/heater-results';
@@ -16,7 +24,10 @@ async function issuedText(kind: 'heater' | 'compressor') {
   await setAccountSite(account.id, 'Kiln house 2, north bay');
   const engineer = await makeUser('sales_engineer');
   const tag = kind === 'heater' ? 'EH-7101' : 'K-7102';
-  const sizing = await makeEngineSizing(engineer, account.id, kind === 'heater' ? nitrogenHeater : airTwoStage, { title: `Datasheet check ${kind}`, tag });
+  const sizing = await makeEngineSizing(engineer, account.id, kind === 'heater' ? nitrogenHeater : airTwoStage, {
+    title: `Datasheet check ${kind}`,
+    tag,
+  });
   const issued = await issueDatasheet(engineer, { sizingId: sizing.id });
   const dl = await getRevisionDownload(engineer, issued.revisionId);
   if (dl.status !== 'ok') throw new Error(`download ${dl.status}`);
@@ -31,13 +42,23 @@ describe('a datasheet carries the engine figures of its sizing', () => {
     const h = (result as HeaterResult).heater;
     expect(issued.revision).toBe('A');
     expect(issued.number).toMatch(/^DS\d{2}-\d{4,}$/);
-    for (const s of [`${issued.number} Rev. A`, account.name, 'Kiln house 2, north bay', tag, 'Datasheet check heater']) expect(text).toContain(s);
+    for (const s of [`${issued.number} Rev. A`, account.name, 'Kiln house 2, north bay', tag, 'Datasheet check heater'])
+      expect(text).toContain(s);
     // The engine itself against the published check value: 81.68 kW [calc from NASA polynomials].
     expect(h.absorbedDutyKw).toBeCloseTo(81.68, 1);
     const figures = [
-      formatKw(h.absorbedDutyKw), formatKw(h.averageCpDutyKw), formatPercent(h.averageCpDifferencePercent), formatKw(h.heatLossKw), formatKw(h.marginKw),
-      formatKw(h.designDutyKw), ratingText(h.selectedRatingKw), `${formatRating(h.electrical.voltageV)} V, 3-phase`, formatAmps(h.electrical.currentA),
-      formatAmps(h.electrical.continuousCurrentA), `${formatFigure(h.outletActualFlowM3PerH)} m³/h`, formatTemperatureC(h.outletTemperatureC),
+      formatKw(h.absorbedDutyKw),
+      formatKw(h.averageCpDutyKw),
+      formatPercent(h.averageCpDifferencePercent),
+      formatKw(h.heatLossKw),
+      formatKw(h.marginKw),
+      formatKw(h.designDutyKw),
+      ratingText(h.selectedRatingKw),
+      `${formatRating(h.electrical.voltageV)} V, 3-phase`,
+      formatAmps(h.electrical.currentA),
+      formatAmps(h.electrical.continuousCurrentA),
+      `${formatFigure(h.outletActualFlowM3PerH)} m³/h`,
+      formatTemperatureC(h.outletTemperatureC),
     ];
     for (const f of figures) expect(text).toContain(f);
     // I = P / (sqrt(3) V) for a balanced three-phase resistive load [calc]; conductors at 125 % [mem: NEC 424.4(B)].
@@ -62,15 +83,30 @@ describe('a datasheet carries the engine figures of its sizing', () => {
     expect(c.variableCp.specificWorkKjPerKg).toBeCloseTo(203.8, 0);
     expect(c.variableCp.totalIntercoolerDutyKw / result.massFlowKgPerS).toBeCloseTo(101.9, 0);
     for (const st of c.variableCp.stages) {
-      for (const f of [formatFixed(st.pressureRatio, 3), formatFixed(st.dischargeTemperatureC, 1), formatFigure(st.specificWorkKjPerKg), formatFigure(st.gasPowerKw)]) expect(text).toContain(f);
+      for (const f of [
+        formatFixed(st.pressureRatio, 3),
+        formatFixed(st.dischargeTemperatureC, 1),
+        formatFigure(st.specificWorkKjPerKg),
+        formatFigure(st.gasPowerKw),
+      ])
+        expect(text).toContain(f);
     }
     const figures = [
-      formatFigure(c.constantK.gasPowerKw), formatFigure(c.variableCp.gasPowerKw), formatPercent(c.methodDifferencePercent),
-      formatFigure(c.constantK.specificWorkKjPerKg), formatFigure(c.variableCp.specificWorkKjPerKg), formatKw(c.shaftPowerKw),
-      ...c.variableCp.intercoolerDutiesKw.map(formatFigure), iecText(c.motor.iecKw), nemaText(c.motor.nemaHp), formatAmps(c.drive!.lineCurrentA),
+      formatFigure(c.constantK.gasPowerKw),
+      formatFigure(c.variableCp.gasPowerKw),
+      formatPercent(c.methodDifferencePercent),
+      formatFigure(c.constantK.specificWorkKjPerKg),
+      formatFigure(c.variableCp.specificWorkKjPerKg),
+      formatKw(c.shaftPowerKw),
+      ...c.variableCp.intercoolerDutiesKw.map(formatFigure),
+      iecText(c.motor.iecKw),
+      nemaText(c.motor.nemaHp),
+      formatAmps(c.drive!.lineCurrentA),
     ];
     for (const f of figures) expect(text).toContain(f);
-    expect(text).toContain(c.suggestedStages === null ? 'no count up to 6' : `${c.suggestedStages} (fewest keeping every stage under`);
+    expect(text).toContain(
+      c.suggestedStages === null ? 'no count up to 6' : `${c.suggestedStages} (fewest keeping every stage under`,
+    );
     for (const w of result.warnings) expect(text).toContain(w.message);
     expect(text).toContain('900 Nm³/h');
   });

@@ -2,16 +2,27 @@
 // published check values (see the source named beside each).
 export const nitrogenHeater = {
   // N2, 1000 kg/h, 20 -> 300 °C absorbs 81.68 kW [calc from NASA TM-4513 polynomials; ENGINEERING.md check table].
-  service: 'heater', gas: { preset: 'nitrogen' }, flow: { value: 1000, unit: 'kg/h' },
+  service: 'heater',
+  gas: { preset: 'nitrogen' },
+  flow: { value: 1000, unit: 'kg/h' },
   inlet: { temperature: { value: 20, unit: 'degC' }, pressure: { value: 2, unit: 'barg' } },
-  outletTemperature: { value: 300, unit: 'degC' }, heatLossPercent: 4, designMarginPercent: 15, supply: { voltageV: 400, phases: 3 },
+  outletTemperature: { value: 300, unit: 'degC' },
+  heatLossPercent: 4,
+  designMarginPercent: 15,
+  supply: { voltageV: 400, phases: 3 },
 };
 
 export const airTwoStage = {
   // Air from 293.15 K, overall ratio 8, ideal stages with intercooling back to 293.15 K:
   // 203.8 kJ/kg in two stages with 101.9 kJ/kg intercooling [calc; ENGINEERING.md compressor check].
-  service: 'compressor', gas: { preset: 'air' }, flow: { value: 900, unit: 'Nm3/h' },
+  service: 'compressor',
+  gas: { preset: 'air' },
+  flow: { value: 900, unit: 'Nm3/h' },
   inlet: { temperature: { value: 293.15, unit: 'K' }, pressure: { value: 100, unit: 'kPa' } },
-  dischargePressure: { value: 800, unit: 'kPa' }, isentropicEfficiency: 1, stages: 2,
-  intercoolerOutletTemperature: { value: 293.15, unit: 'K' }, method: 'variable-cp', supply: { voltageV: 400, phases: 3 },
+  dischargePressure: { value: 800, unit: 'kPa' },
+  isentropicEfficiency: 1,
+  stages: 2,
+  intercoolerOutletTemperature: { value: 293.15, unit: 'K' },
+  method: 'variable-cp',
+  supply: { voltageV: 400, phases: 3 },
 };

@@ -15,7 +15,10 @@ const store = createPostgresBlobStore();
 async function heaterSizing() {
   const account = await makeAccount('Revision Works');
   const engineer = await makeUser('sales_engineer');
-  const sizing = await makeEngineSizing(engineer, account.id, nitrogenHeater, { title: 'Revision check', tag: 'EH-7201' });
+  const sizing = await makeEngineSizing(engineer, account.id, nitrogenHeater, {
+    title: 'Revision check',
+    tag: 'EH-7201',
+  });
   return { account, engineer, sizing };
 }
 
@@ -36,8 +39,16 @@ describe('datasheet revisions', () => {
     expect(aRow!.sha256).toBe(a.sha256);
     expect(b.sha256).not.toBe(a.sha256);
     const [listed] = await listDatasheets(engineer, { sizingId: sizing.id });
-    expect(listed!.revisions.map((r) => [r.revision, r.note])).toEqual([['A', null], ['B', 'Design margin reviewed']]);
-    const snapshotB = (await db.select({ s: datasheetRevisions.snapshot }).from(datasheetRevisions).where(eq(datasheetRevisions.id, b.revisionId)))[0]!.s as { revisions: { revision: string }[] };
+    expect(listed!.revisions.map((r) => [r.revision, r.note])).toEqual([
+      ['A', null],
+      ['B', 'Design margin reviewed'],
+    ]);
+    const snapshotB = (
+      await db
+        .select({ s: datasheetRevisions.snapshot })
+        .from(datasheetRevisions)
+        .where(eq(datasheetRevisions.id, b.revisionId))
+    )[0]!.s as { revisions: { revision: string }[] };
     expect(snapshotB.revisions.map((r) => r.revision)).toEqual(['A', 'B']);
   });
 
@@ -54,13 +65,25 @@ describe('datasheet revisions', () => {
     const { engineer, sizing } = await heaterSizing();
     const a = await issueDatasheet(engineer, { sizingId: sizing.id });
     const code = (err: unknown) => (err as { cause?: { code?: string } }).cause?.code;
-    const upd = await db.update(datasheetRevisions).set({ note: 'tampered' }).where(eq(datasheetRevisions.id, a.revisionId)).catch((e: unknown) => e);
+    const upd = await db
+      .update(datasheetRevisions)
+      .set({ note: 'tampered' })
+      .where(eq(datasheetRevisions.id, a.revisionId))
+      .catch((e: unknown) => e);
     expect(code(upd)).toBe('23001');
-    const del = await db.delete(datasheetRevisions).where(eq(datasheetRevisions.id, a.revisionId)).catch((e: unknown) => e);
+    const del = await db
+      .delete(datasheetRevisions)
+      .where(eq(datasheetRevisions.id, a.revisionId))
+      .catch((e: unknown) => e);
     expect(code(del)).toBe('23001');
-    const raw = await db.execute(sql`update datasheet_revisions set sha256 = ${'0'.repeat(64)} where id = ${a.revisionId}`).catch((e: unknown) => e);
+    const raw = await db
+      .execute(sql`update datasheet_revisions set sha256 = ${'0'.repeat(64)} where id = ${a.revisionId}`)
+      .catch((e: unknown) => e);
     expect(code(raw)).toBe('23001');
-    const [row] = await db.select({ note: datasheetRevisions.note, sha256: datasheetRevisions.sha256 }).from(datasheetRevisions).where(eq(datasheetRevisions.id, a.revisionId));
+    const [row] = await db
+      .select({ note: datasheetRevisions.note, sha256: datasheetRevisions.sha256 })
+      .from(datasheetRevisions)
+      .where(eq(datasheetRevisions.id, a.revisionId));
     expect(row).toEqual({ note: null, sha256: a.sha256 });
   });
 

@@ -6,7 +6,13 @@ import { createS3Fake } from '@/mocks/s3/handlers';
 export const s3Endpoint = 'http://s3.dutywise.test';
 export const s3Fake = createS3Fake({ endpoint: s3Endpoint, buckets: ['dutywise-test'], accessKeyId: 'AKTESTDUTYWISE' });
 export const s3Server = setupServer(...s3Fake.handlers);
-export const s3Store = createS3BlobStore({ bucket: 'dutywise-test', region: 'us-east-1', endpoint: s3Endpoint, accessKeyId: 'AKTESTDUTYWISE', secretAccessKey: 'test-secret' });
+export const s3Store = createS3BlobStore({
+  bucket: 'dutywise-test',
+  region: 'us-east-1',
+  endpoint: s3Endpoint,
+  accessKeyId: 'AKTESTDUTYWISE',
+  secretAccessKey: 'test-secret',
+});
 
 /** Keys the fake holds under one account. */
 export function s3KeysOf(accountId: string): string[] {

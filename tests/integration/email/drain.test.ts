@@ -12,7 +12,9 @@ afterAll(async () => {
 });
 
 async function queue(to: string, number: string) {
-  await rig.db.transaction((tx) => rig.enqueueEmail(tx, { template: 'datasheet-issued', to, props: datasheetProps(number) }));
+  await rig.db.transaction((tx) =>
+    rig.enqueueEmail(tx, { template: 'datasheet-issued', to, props: datasheetProps(number) }),
+  );
   const [row] = await rig.db.select().from(outbox).where(eq(outbox.toAddress, to));
   if (!row) throw new Error('not queued');
   return row;
@@ -27,7 +29,12 @@ describe('draining the outbox', () => {
     expect(result).toMatchObject({ claimed: 1, sent: 1, retried: 0, dead: 0 });
     const got = rig.received().filter((m) => m.envelope.to.includes(to));
     expect(got).toHaveLength(1);
-    expect(got[0]).toMatchObject({ subject: 'Datasheet DS-SEND-1 rev. A issued', to: [to], from: 'desk@dutywise.test', messageId: `<${row.id}@dutywise>` });
+    expect(got[0]).toMatchObject({
+      subject: 'Datasheet DS-SEND-1 rev. A issued',
+      to: [to],
+      from: 'desk@dutywise.test',
+      messageId: `<${row.id}@dutywise>`,
+    });
     expect(got[0]?.text).toContain('DS-SEND-1');
     expect(got[0]?.html).toContain('DS-SEND-1');
     const after = await rowById(row.id);
@@ -40,7 +47,9 @@ describe('draining the outbox', () => {
     const to = rig.address('lock');
     const row = await queue(to, 'DS-LOCK-2');
     // As if a worker claimed the row and died mid-send: attempt counted, lock still running.
-    await rig.db.execute(sql`update outbox set attempts = 1, locked_until = now() + interval '50 seconds' where id = ${row.id}`);
+    await rig.db.execute(
+      sql`update outbox set attempts = 1, locked_until = now() + interval '50 seconds' where id = ${row.id}`,
+    );
     expect((await rig.drain()).claimed).toBe(0);
     expect(rig.received().filter((m) => m.envelope.to.includes(to))).toHaveLength(0);
     await rig.db.execute(sql`update outbox set locked_until = now() - interval '1 second' where id = ${row.id}`);
@@ -54,16 +63,23 @@ describe('draining the outbox', () => {
     const row = await queue(to, 'DS-CRASH-3');
     await rig.drain();
     // Undo the "sent" record, as if the process died right after the SMTP server accepted the mail.
-    await rig.db.execute(sql`update outbox set status = 'pending', sent_at = null, message_id = null, locked_until = now() - interval '1 second' where id = ${row.id}`);
+    await rig.db.execute(
+      sql`update outbox set status = 'pending', sent_at = null, message_id = null, locked_until = now() - interval '1 second' where id = ${row.id}`,
+    );
     await rig.drain();
-    const ids = rig.received().filter((m) => m.envelope.to.includes(to)).map((m) => m.messageId);
+    const ids = rig
+      .received()
+      .filter((m) => m.envelope.to.includes(to))
+      .map((m) => m.messageId);
     expect(ids).toEqual([`<${row.id}@dutywise>`, `<${row.id}@dutywise>`]);
   });
 
   it('gives up at once on a stored payload that can never render, with the reason', async () => {
     const to = rig.address('poison');
     const row = await queue(to, 'DS-POISON-4');
-    await rig.db.execute(sql`update outbox set payload = ${JSON.stringify({ accountName: 'X' })}::jsonb where id = ${row.id}`);
+    await rig.db.execute(
+      sql`update outbox set payload = ${JSON.stringify({ accountName: 'X' })}::jsonb where id = ${row.id}`,
+    );
     expect(await rig.drain()).toMatchObject({ claimed: 1, sent: 0, dead: 1 });
     const after = await rowById(row.id);
     expect(after).toMatchObject({ status: 'dead', attempts: 1 });
@@ -74,7 +90,9 @@ describe('draining the outbox', () => {
   it('gives up a row whose final allowed attempt never reported back', async () => {
     const to = rig.address('abandoned');
     const row = await queue(to, 'DS-ABANDON-5');
-    await rig.db.execute(sql`update outbox set attempts = ${rig.MAX_ATTEMPTS}, locked_until = now() - interval '1 second' where id = ${row.id}`);
+    await rig.db.execute(
+      sql`update outbox set attempts = ${rig.MAX_ATTEMPTS}, locked_until = now() - interval '1 second' where id = ${row.id}`,
+    );
     expect((await rig.drain()).dead).toBe(1);
     const after = await rowById(row.id);
     expect(after?.status).toBe('dead');

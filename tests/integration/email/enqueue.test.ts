@@ -29,10 +29,25 @@ describe('queueing mail with the change that causes it', () => {
   it('stores one pending row with subject, payload and entity when the transaction commits', async () => {
     const to = rig.address('commit');
     const entityId = randomUUID();
-    await rig.db.transaction((tx) => rig.enqueueEmail(tx, { template: 'datasheet-issued', to, props: datasheetProps('DS-CM-2'), entity: { type: 'datasheet', id: entityId } }));
+    await rig.db.transaction((tx) =>
+      rig.enqueueEmail(tx, {
+        template: 'datasheet-issued',
+        to,
+        props: datasheetProps('DS-CM-2'),
+        entity: { type: 'datasheet', id: entityId },
+      }),
+    );
     const [row, ...more] = await rowsTo(to);
     expect(more).toHaveLength(0);
-    expect(row).toMatchObject({ status: 'pending', attempts: 0, subject: 'Datasheet DS-CM-2 rev. A issued', entityType: 'datasheet', entityId, lockedUntil: null, sentAt: null });
+    expect(row).toMatchObject({
+      status: 'pending',
+      attempts: 0,
+      subject: 'Datasheet DS-CM-2 rev. A issued',
+      entityType: 'datasheet',
+      entityId,
+      lockedUntil: null,
+      sentAt: null,
+    });
     expect((row?.payload as { datasheetNumber: string }).datasheetNumber).toBe('DS-CM-2');
   });
 
@@ -40,7 +55,8 @@ describe('queueing mail with the change that causes it', () => {
     const to = rig.address('dedupe');
     const dedupeKey = `invoice-failed:${randomUUID()}`;
     const props = { accountName: 'Stennick Gas Storage', billingUrl: '/billing', graceDays: 7 };
-    for (let i = 0; i < 2; i += 1) await rig.db.transaction((tx) => rig.enqueueEmail(tx, { template: 'payment-failed', to, props, dedupeKey }));
+    for (let i = 0; i < 2; i += 1)
+      await rig.db.transaction((tx) => rig.enqueueEmail(tx, { template: 'payment-failed', to, props, dedupeKey }));
     expect(await rowsTo(to)).toHaveLength(1);
   });
 
@@ -49,7 +65,11 @@ describe('queueing mail with the change that causes it', () => {
     const to = rig.address('badprops');
     await rig.db.transaction(async (tx) => {
       await rig.enqueueEmail(tx, { template: 'datasheet-issued', to: bad, props: datasheetProps('DS-BAD-1') });
-      await rig.enqueueEmail(tx, { template: 'datasheet-issued', to, props: { ...datasheetProps('DS-BAD-2'), revision: ' ' } });
+      await rig.enqueueEmail(tx, {
+        template: 'datasheet-issued',
+        to,
+        props: { ...datasheetProps('DS-BAD-2'), revision: ' ' },
+      });
     });
     const [badTo] = await rowsTo(bad);
     expect(badTo).toMatchObject({ status: 'dead', attempts: 0 });
@@ -71,14 +91,41 @@ describe('mail history and backlog', () => {
     const entity = { type: 'datasheet', id: randomUUID() };
     const first = rig.address('hist1');
     const second = rig.address('hist2');
-    await rig.db.transaction((tx) => rig.enqueueEmail(tx, { template: 'datasheet-issued', to: first, props: datasheetProps('DS-H-1'), entity }));
-    await rig.db.execute(sql`update outbox set created_at = now() - interval '1 minute', status = 'dead', attempts = 12, last_error = 'ECONNECTION gave up' where to_address = ${first}`);
-    await rig.db.transaction((tx) => rig.enqueueEmail(tx, { template: 'datasheet-issued', to: second, props: datasheetProps('DS-H-1'), entity }));
+    await rig.db.transaction((tx) =>
+      rig.enqueueEmail(tx, { template: 'datasheet-issued', to: first, props: datasheetProps('DS-H-1'), entity }),
+    );
+    await rig.db.execute(
+      sql`update outbox set created_at = now() - interval '1 minute', status = 'dead', attempts = 12, last_error = 'ECONNECTION gave up' where to_address = ${first}`,
+    );
+    await rig.db.transaction((tx) =>
+      rig.enqueueEmail(tx, { template: 'datasheet-issued', to: second, props: datasheetProps('DS-H-1'), entity }),
+    );
     const list = await listEmailsFor(entity.type, entity.id);
     expect(list.map((e) => e.to)).toEqual([second, first]);
-    expect(list[0]).toMatchObject({ status: 'pending', attempts: 0, sentAt: null, lastError: null, subject: 'Datasheet DS-H-1 rev. A issued' });
-    expect(list[1]).toMatchObject({ status: 'dead', attempts: 12, lastError: 'ECONNECTION gave up', nextAttemptAt: null });
-    expect(Object.keys(list[0] ?? {}).sort()).toEqual(['attempts', 'createdAt', 'id', 'lastError', 'nextAttemptAt', 'sentAt', 'status', 'subject', 'to']);
+    expect(list[0]).toMatchObject({
+      status: 'pending',
+      attempts: 0,
+      sentAt: null,
+      lastError: null,
+      subject: 'Datasheet DS-H-1 rev. A issued',
+    });
+    expect(list[1]).toMatchObject({
+      status: 'dead',
+      attempts: 12,
+      lastError: 'ECONNECTION gave up',
+      nextAttemptAt: null,
+    });
+    expect(Object.keys(list[0] ?? {}).sort()).toEqual([
+      'attempts',
+      'createdAt',
+      'id',
+      'lastError',
+      'nextAttemptAt',
+      'sentAt',
+      'status',
+      'subject',
+      'to',
+    ]);
     expect(await listEmailsFor(entity.type, randomUUID())).toEqual([]);
   });
 
@@ -92,7 +139,9 @@ describe('mail history and backlog', () => {
       await rig.enqueueEmail(tx, { template: 'datasheet-issued', to: given, props: datasheetProps('DS-B-2') });
     });
     // Parked far in the future so no drain anywhere sends it while this test looks at it.
-    await rig.db.execute(sql`update outbox set created_at = now() - interval '2 hours', next_attempt_at = now() + interval '1 day' where to_address = ${waiting}`);
+    await rig.db.execute(
+      sql`update outbox set created_at = now() - interval '2 hours', next_attempt_at = now() + interval '1 day' where to_address = ${waiting}`,
+    );
     await rig.db.execute(sql`update outbox set status = 'dead' where to_address = ${given}`);
     const after = await outboxBacklog();
     expect(after.pending).toBeGreaterThanOrEqual(1);

@@ -16,9 +16,13 @@ describe('reading the demo inbox', () => {
     const { readFakeInbox } = await import('@/lib/email/fake-inbox');
     const first = rig.address('inbox1');
     const second = rig.address('inbox2');
-    await rig.db.transaction((tx) => rig.enqueueEmail(tx, { template: 'datasheet-issued', to: first, props: datasheetProps('DS-INBOX-1') }));
+    await rig.db.transaction((tx) =>
+      rig.enqueueEmail(tx, { template: 'datasheet-issued', to: first, props: datasheetProps('DS-INBOX-1') }),
+    );
     await drainAll(rig);
-    await rig.db.transaction((tx) => rig.enqueueEmail(tx, { template: 'datasheet-issued', to: second, props: datasheetProps('DS-INBOX-2') }));
+    await rig.db.transaction((tx) =>
+      rig.enqueueEmail(tx, { template: 'datasheet-issued', to: second, props: datasheetProps('DS-INBOX-2') }),
+    );
     await drainAll(rig);
     const inbox = await readFakeInbox(rig.fake.httpUrl);
     if (inbox.state !== 'ok') throw new Error(`inbox state ${inbox.state}`);

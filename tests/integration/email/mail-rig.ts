@@ -33,7 +33,8 @@ export async function startMailRig() {
     domain,
     /** A recipient address unique to this file and call. */
     address: (name = 'buyer') => `${name}-${randomUUID().slice(0, 6)}@${domain}`,
-    drain: (opts: { limit?: number; workerId?: string; now?: Date } = {}) => drainOutbox({ limit: 20, ...opts, toAddressLike: scope }),
+    drain: (opts: { limit?: number; workerId?: string; now?: Date } = {}) =>
+      drainOutbox({ limit: 20, ...opts, toAddressLike: scope }),
     received: (): StoredMessage[] => fake.messages().filter((m) => m.envelope.to.some((a) => a.endsWith(`@${domain}`))),
     async close() {
       // Leave nothing behind for other files' drains to pick up.

@@ -15,7 +15,8 @@ afterAll(async () => {
 async function queueMany(prefix: string, count: number): Promise<string[]> {
   const addresses = Array.from({ length: count }, (_, i) => rig.address(`${prefix}${i}`));
   await rig.db.transaction(async (tx) => {
-    for (const [i, to] of addresses.entries()) await rig.enqueueEmail(tx, { template: 'datasheet-issued', to, props: datasheetProps(`DS-${prefix}-${i}`) });
+    for (const [i, to] of addresses.entries())
+      await rig.enqueueEmail(tx, { template: 'datasheet-issued', to, props: datasheetProps(`DS-${prefix}-${i}`) });
   });
   return addresses;
 }
@@ -38,7 +39,9 @@ describe('SMTP server down', () => {
 
     await rig.fake.startSmtp();
     // Time passing, without waiting for it: the retries fall due.
-    await rig.db.execute(sql`update outbox set next_attempt_at = now() - interval '1 second' where to_address in ${addresses}`);
+    await rig.db.execute(
+      sql`update outbox set next_attempt_at = now() - interval '1 second' where to_address in ${addresses}`,
+    );
     expect(await drainAll(rig)).toBe(6);
     const sent = await rig.db.select().from(outbox).where(inArray(outbox.toAddress, addresses));
     expect(sent.every((r) => r.status === 'sent' && r.attempts === 2)).toBe(true);
@@ -49,7 +52,10 @@ describe('SMTP server down', () => {
   it('backs off exponentially and marks the mail dead after the last allowed attempt', async () => {
     const [to] = await queueMany('dead', 1);
     await rig.fake.stopSmtp();
-    const [row] = await rig.db.select().from(outbox).where(eq(outbox.toAddress, to ?? ''));
+    const [row] = await rig.db
+      .select()
+      .from(outbox)
+      .where(eq(outbox.toAddress, to ?? ''));
     if (!row) throw new Error('not queued');
     let clock = new Date(row.nextAttemptAt.getTime() + 1_000);
     const delaysS: number[] = [];

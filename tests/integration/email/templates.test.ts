@@ -7,9 +7,16 @@ import { renderEmail } from '@/lib/email/render';
 const appUrl = 'https://desk.dutywise.test';
 
 // Props with facts that appear nowhere in the templates themselves, so a match proves they flowed through.
-const cases: { [T in EmailTemplate]: { props: EmailProps[T]; facts: string[]; subject: string; engineering: boolean } } = {
+const cases: {
+  [T in EmailTemplate]: { props: EmailProps[T]; facts: string[]; subject: string; engineering: boolean };
+} = {
   invitation: {
-    props: { accountName: 'Quorrel Compression Co-op', inviterName: 'Ilse Marrow', inviteUrl: `${appUrl}/invite/tok-7781`, expiresInDays: 9 },
+    props: {
+      accountName: 'Quorrel Compression Co-op',
+      inviterName: 'Ilse Marrow',
+      inviteUrl: `${appUrl}/invite/tok-7781`,
+      expiresInDays: 9,
+    },
     facts: ['Quorrel Compression Co-op', 'Ilse Marrow', `${appUrl}/invite/tok-7781`, '9 days'],
     subject: 'You are invited to Quorrel Compression Co-op on Dutywise',
     engineering: false,
@@ -26,12 +33,28 @@ const cases: { [T in EmailTemplate]: { props: EmailProps[T]; facts: string[]; su
         { title: 'Start-up heater', tag: null, headline: '57.5 kW duty', quantity: 1 },
       ],
     },
-    facts: ['Q-9931', 'Booster for pad 4', 'Ilse Marrow', 'K-4401', '233 kW shaft power', 'Start-up heater', '57.5 kW duty', `${appUrl}/quotes/q-9931`],
+    facts: [
+      'Q-9931',
+      'Booster for pad 4',
+      'Ilse Marrow',
+      'K-4401',
+      '233 kW shaft power',
+      'Start-up heater',
+      '57.5 kW duty',
+      `${appUrl}/quotes/q-9931`,
+    ],
     subject: 'Quote Q-9931: Booster for pad 4',
     engineering: true,
   },
   'datasheet-issued': {
-    props: { accountName: 'Quorrel Compression Co-op', datasheetNumber: 'DS-5520', revision: 'C', sizingTitle: 'Line heater, inlet', equipmentTag: 'E-118', datasheetUrl: `${appUrl}/datasheets/ds-5520` },
+    props: {
+      accountName: 'Quorrel Compression Co-op',
+      datasheetNumber: 'DS-5520',
+      revision: 'C',
+      sizingTitle: 'Line heater, inlet',
+      equipmentTag: 'E-118',
+      datasheetUrl: `${appUrl}/datasheets/ds-5520`,
+    },
     facts: ['DS-5520', 'Line heater, inlet', 'E-118', `${appUrl}/datasheets/ds-5520`],
     subject: 'Datasheet DS-5520 rev. C issued',
     engineering: true,
@@ -43,7 +66,11 @@ const cases: { [T in EmailTemplate]: { props: EmailProps[T]; facts: string[]; su
     engineering: false,
   },
   'subscription-ending': {
-    props: { accountName: 'Quorrel Compression Co-op', periodEnd: '2031-04-17', billingUrl: `${appUrl}/billing?from=mail-32` },
+    props: {
+      accountName: 'Quorrel Compression Co-op',
+      periodEnd: '2031-04-17',
+      billingUrl: `${appUrl}/billing?from=mail-32`,
+    },
     facts: ['Quorrel Compression Co-op', '2031-04-17', `${appUrl}/billing?from=mail-32`],
     subject: 'Your Dutywise subscription ends on 2031-04-17',
     engineering: false,
@@ -52,7 +79,11 @@ const cases: { [T in EmailTemplate]: { props: EmailProps[T]; facts: string[]; su
 
 // Text is compared with whitespace collapsed: the plain-text converter wraps long lines.
 const flat = (s: string) => s.replace(/\s+/g, ' ');
-const unescape = (s: string) => s.replace(/&amp;/g, '&').replace(/&quot;/g, '"').replace(/&#x27;|&#39;/g, "'");
+const unescape = (s: string) =>
+  s
+    .replace(/&amp;/g, '&')
+    .replace(/&quot;/g, '"')
+    .replace(/&#x27;|&#39;/g, "'");
 
 describe('e-mail templates', () => {
   for (const [template, c] of Object.entries(cases) as [EmailTemplate, (typeof cases)[EmailTemplate]][]) {
@@ -86,21 +117,37 @@ describe('e-mail templates', () => {
   });
 
   it('turns an app path into an absolute link against the app URL', async () => {
-    const out = await renderEmail('payment-failed', { accountName: 'Quorrel Compression Co-op', billingUrl: '/billing', graceDays: 3 }, appUrl);
+    const out = await renderEmail(
+      'payment-failed',
+      { accountName: 'Quorrel Compression Co-op', billingUrl: '/billing', graceDays: 3 },
+      appUrl,
+    );
     expect(out.html).toContain(`href="${appUrl}/billing"`);
     expect(out.text).toContain(`${appUrl}/billing`);
   });
 
   it('escapes markup in props instead of rendering it', async () => {
-    const out = await renderEmail('invitation', { ...cases.invitation.props, inviterName: '<script>alert(1)</script>' }, appUrl);
+    const out = await renderEmail(
+      'invitation',
+      { ...cases.invitation.props, inviterName: '<script>alert(1)</script>' },
+      appUrl,
+    );
     expect(out.html).not.toContain('<script>alert(1)</script>');
     expect(out.html).toContain('&lt;script&gt;');
   });
 
   it('refuses bad props with an error naming the field', async () => {
-    await expect(renderEmail('payment-failed', { accountName: 'X', billingUrl: '/billing', graceDays: -1 }, appUrl)).rejects.toThrow(EmailInputError);
-    await expect(renderEmail('payment-failed', { accountName: 'X', billingUrl: '/billing', graceDays: -1 }, appUrl)).rejects.toThrow(/props\.graceDays/);
-    await expect(renderEmail('quote-sent', { ...cases['quote-sent'].props, quoteNumber: '  ' }, appUrl)).rejects.toThrow(/props\.quoteNumber must not be empty/);
-    await expect(renderEmail('no-such' as EmailTemplate, {}, appUrl)).rejects.toThrow(/unknown e-mail template "no-such"/);
+    await expect(
+      renderEmail('payment-failed', { accountName: 'X', billingUrl: '/billing', graceDays: -1 }, appUrl),
+    ).rejects.toThrow(EmailInputError);
+    await expect(
+      renderEmail('payment-failed', { accountName: 'X', billingUrl: '/billing', graceDays: -1 }, appUrl),
+    ).rejects.toThrow(/props\.graceDays/);
+    await expect(
+      renderEmail('quote-sent', { ...cases['quote-sent'].props, quoteNumber: '  ' }, appUrl),
+    ).rejects.toThrow(/props\.quoteNumber must not be empty/);
+    await expect(renderEmail('no-such' as EmailTemplate, {}, appUrl)).rejects.toThrow(
+      /unknown e-mail template "no-such"/,
+    );
   });
 });

@@ -15,10 +15,13 @@ describe('two app instances draining one outbox', () => {
   it('delivers each of 50 queued messages exactly once', async () => {
     const addresses = Array.from({ length: 50 }, (_, i) => rig.address(`pair${i}`));
     await rig.db.transaction(async (tx) => {
-      for (const [i, to] of addresses.entries()) await rig.enqueueEmail(tx, { template: 'datasheet-issued', to, props: datasheetProps(`DS-PAIR-${i}`) });
+      for (const [i, to] of addresses.entries())
+        await rig.enqueueEmail(tx, { template: 'datasheet-issued', to, props: datasheetProps(`DS-PAIR-${i}`) });
     });
     // Two instances, each running several drain loops at once with small batches, so claims collide often.
-    const loops = ['instance-a', 'instance-b'].flatMap((workerId) => Array.from({ length: 4 }, () => drainAll(rig, { limit: 2, workerId })));
+    const loops = ['instance-a', 'instance-b'].flatMap((workerId) =>
+      Array.from({ length: 4 }, () => drainAll(rig, { limit: 2, workerId })),
+    );
     const sentPerLoop = await Promise.all(loops);
     expect(sentPerLoop.reduce((sum, n) => sum + n, 0)).toBe(50);
 
@@ -36,7 +39,8 @@ describe('two app instances draining one outbox', () => {
   it('skips rows another instance is claiming at this moment instead of waiting for them', async () => {
     const addresses = Array.from({ length: 4 }, (_, i) => rig.address(`held${i}`));
     await rig.db.transaction(async (tx) => {
-      for (const [i, to] of addresses.entries()) await rig.enqueueEmail(tx, { template: 'datasheet-issued', to, props: datasheetProps(`DS-HELD-${i}`) });
+      for (const [i, to] of addresses.entries())
+        await rig.enqueueEmail(tx, { template: 'datasheet-issued', to, props: datasheetProps(`DS-HELD-${i}`) });
     });
     const held = addresses.slice(0, 2);
     let release: () => void = () => undefined;
@@ -58,7 +62,10 @@ describe('two app instances draining one outbox', () => {
       release();
       await other;
     }
-    const got = rig.received().filter((m) => m.envelope.to.some((a) => addresses.includes(a))).flatMap((m) => m.envelope.to);
+    const got = rig
+      .received()
+      .filter((m) => m.envelope.to.some((a) => addresses.includes(a)))
+      .flatMap((m) => m.envelope.to);
     expect(got.sort()).toEqual(addresses.slice(2).sort());
     expect(await drainAll(rig)).toBe(2);
   });

@@ -11,11 +11,27 @@ let rig: MailRig;
 const workers: { child: ChildProcess; output: string[]; exit: Promise<number | null> }[] = [];
 
 function startWorker(scope: string) {
-  const child = spawn(process.execPath, ['--require', './db/script-preload.cjs', '--import', 'tsx', 'lib/email/worker.mts', '--interval-ms', '500', '--limit', '4', '--only-to', scope], {
-    cwd: root,
-    env: { ...process.env, SMTP_PORT: String(rig.fake.smtpPort), LOG_LEVEL: 'debug' },
-    stdio: ['ignore', 'pipe', 'pipe'],
-  });
+  const child = spawn(
+    process.execPath,
+    [
+      '--require',
+      './db/script-preload.cjs',
+      '--import',
+      'tsx',
+      'lib/email/worker.mts',
+      '--interval-ms',
+      '500',
+      '--limit',
+      '4',
+      '--only-to',
+      scope,
+    ],
+    {
+      cwd: root,
+      env: { ...process.env, SMTP_PORT: String(rig.fake.smtpPort), LOG_LEVEL: 'debug' },
+      stdio: ['ignore', 'pipe', 'pipe'],
+    },
+  );
   const output: string[] = [];
   child.stdout?.on('data', (d: Buffer) => output.push(d.toString()));
   child.stderr?.on('data', (d: Buffer) => output.push(d.toString()));
@@ -49,10 +65,14 @@ describe('mail worker processes', () => {
 
     const addresses = Array.from({ length: 50 }, (_, i) => rig.address(`proc${i}`));
     await rig.db.transaction(async (tx) => {
-      for (const [i, to] of addresses.entries()) await rig.enqueueEmail(tx, { template: 'datasheet-issued', to, props: datasheetProps(`DS-PROC-${i}`) });
+      for (const [i, to] of addresses.entries())
+        await rig.enqueueEmail(tx, { template: 'datasheet-issued', to, props: datasheetProps(`DS-PROC-${i}`) });
     });
     await until('all 50 to be recorded as sent', async () => {
-      const rows = await rig.db.select({ status: outbox.status }).from(outbox).where(inArray(outbox.toAddress, addresses));
+      const rows = await rig.db
+        .select({ status: outbox.status })
+        .from(outbox)
+        .where(inArray(outbox.toAddress, addresses));
       return rows.length === 50 && rows.every((r) => r.status === 'sent');
     });
 

@@ -16,7 +16,13 @@ import middleware from '@/middleware';
 import { NextRequest, type NextFetchEvent } from 'next/server';
 
 const pg = clusterFor(`down-${cfg.port}`, cfg.port);
-const body = JSON.stringify({ service: 'heater', gas: { preset: 'nitrogen' }, flow: { value: 1000, unit: 'kg/h' }, inlet: { temperature: { value: 20, unit: 'degC' }, pressure: { value: 500, unit: 'kPa' } }, outletTemperature: { value: 300, unit: 'degC' } });
+const body = JSON.stringify({
+  service: 'heater',
+  gas: { preset: 'nitrogen' },
+  flow: { value: 1000, unit: 'kg/h' },
+  inlet: { temperature: { value: 20, unit: 'degC' }, pressure: { value: 500, unit: 'kPa' } },
+  outletTemperature: { value: 300, unit: 'degC' },
+});
 
 beforeAll(() => {
   pg.start();
@@ -40,12 +46,24 @@ describe('PostgreSQL stopped mid-run', () => {
 
     // A signed-in look-up cannot load the user: an honest 503, not a hang or a stack trace.
     await actAs({ id: '00000000-0000-0000-0000-000000000009', role: 'support' });
-    const looked = await search(new Request('http://localhost/api/v1/support/search?q=EH'), { params: Promise.resolve({}) });
+    const looked = await search(new Request('http://localhost/api/v1/support/search?q=EH'), {
+      params: Promise.resolve({}),
+    });
     expect(looked.status).toBe(503);
     expect(looked.headers.get('retry-after')).toBeTruthy();
 
     // The calculation needs no database: the limiter steps aside and the sizing is answered.
-    expect((await calculate(new Request('http://localhost/api/v1/calculate', { method: 'POST', body, headers: { 'x-forwarded-for': '192.0.2.1' } }))).status).toBe(200);
+    expect(
+      (
+        await calculate(
+          new Request('http://localhost/api/v1/calculate', {
+            method: 'POST',
+            body,
+            headers: { 'x-forwarded-for': '192.0.2.1' },
+          }),
+        )
+      ).status,
+    ).toBe(200);
 
     // Pages: the middleware answers a 503 page at once (its cached ping refreshes within seconds).
     const page = () => middleware(new NextRequest('http://localhost/quotes'), {} as NextFetchEvent);

@@ -11,7 +11,8 @@ const root = path.resolve(__dirname, '../../..');
 async function transactionOpen(appName: string): Promise<boolean> {
   const res = await db.execute<{ n: number }>(
     // a statement in the child's transaction is running or it sits inside one
-    (await import('drizzle-orm')).sql`select count(*)::int as n from pg_stat_activity where application_name = ${appName} and xact_start is not null`,
+    (await import('drizzle-orm'))
+      .sql`select count(*)::int as n from pg_stat_activity where application_name = ${appName} and xact_start is not null`,
   );
   return (res.rows[0]?.n ?? 0) > 0;
 }
@@ -23,11 +24,24 @@ describe('the app process killed during a write', () => {
     const appName = `kill-${acct.id.slice(0, 8)}`;
     const url = new URL(process.env.DATABASE_URL!);
     url.searchParams.set('application_name', appName);
-    const child = spawn('node', ['--require', './db/script-preload.cjs', '--import', 'tsx', 'tests/integration/faults/kill-child.ts', acct.id, engineer.id, '4000'], {
-      cwd: root,
-      env: { ...process.env, DATABASE_URL: url.toString(), LOG_LEVEL: 'fatal' },
-      stdio: 'pipe',
-    });
+    const child = spawn(
+      'node',
+      [
+        '--require',
+        './db/script-preload.cjs',
+        '--import',
+        'tsx',
+        'tests/integration/faults/kill-child.ts',
+        acct.id,
+        engineer.id,
+        '4000',
+      ],
+      {
+        cwd: root,
+        env: { ...process.env, DATABASE_URL: url.toString(), LOG_LEVEL: 'fatal' },
+        stdio: 'pipe',
+      },
+    );
     let output = '';
     child.stdout.on('data', (d) => (output += d));
     let open = false;

@@ -6,12 +6,14 @@ const root = path.resolve(__dirname, '../../..');
 
 export function clusterFor(name: string, port: number) {
   const env = { ...process.env, PG_DATA_DIR: path.join(root, '.data', `pg-fault-${name}`), PG_PORT: String(port) };
-  const run = (...args: string[]) => execFileSync('bash', [path.join(root, 'db/postgres.sh'), ...args], { env, stdio: 'pipe' }).toString();
+  const run = (...args: string[]) =>
+    execFileSync('bash', [path.join(root, 'db/postgres.sh'), ...args], { env, stdio: 'pipe' }).toString();
   const url = `postgres://postgres@127.0.0.1:${port}/dutywise_fault`;
   return {
     url,
     start: () => run('start', '--throwaway', '--db', 'dutywise_fault'),
     stop: () => run('stop'),
-    migrate: () => execFileSync('npx', ['tsx', 'db/migrate.mts'], { cwd: root, env: { ...env, DATABASE_URL: url }, stdio: 'pipe' }),
+    migrate: () =>
+      execFileSync('npx', ['tsx', 'db/migrate.mts'], { cwd: root, env: { ...env, DATABASE_URL: url }, stdio: 'pipe' }),
   };
 }

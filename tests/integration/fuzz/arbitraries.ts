@@ -10,11 +10,35 @@ const weirdNumber = fc.oneof(
   fc.constant(null),
   fc.boolean(),
 );
-const unit = fc.oneof(fc.constantFrom('kg/h', 'degC', 'K', 'barg', 'psia', 'kPa', 'Nm3/h', 'SCFM', 'degF', 'bar', 'm3/h', 'lb/h'), fc.string(), fc.string({ unit: 'grapheme', maxLength: 8 }));
-const quantity = fc.oneof(fc.record({ value: weirdNumber, unit }), weirdNumber, fc.constant({}), fc.array(weirdNumber, { maxLength: 3 }));
+const unit = fc.oneof(
+  fc.constantFrom('kg/h', 'degC', 'K', 'barg', 'psia', 'kPa', 'Nm3/h', 'SCFM', 'degF', 'bar', 'm3/h', 'lb/h'),
+  fc.string(),
+  fc.string({ unit: 'grapheme', maxLength: 8 }),
+);
+const quantity = fc.oneof(
+  fc.record({ value: weirdNumber, unit }),
+  weirdNumber,
+  fc.constant({}),
+  fc.array(weirdNumber, { maxLength: 3 }),
+);
 const gas = fc.oneof(
-  fc.record({ preset: fc.oneof(fc.constantFrom('air', 'nitrogen', 'methane', 'humid-air', 'hydrogen', 'oxygen', 'unobtainium'), fc.string()) }),
-  fc.record({ components: fc.dictionary(fc.oneof(fc.constantFrom('CH4', 'N2', 'CO2', 'H2', 'O2', 'Ar'), fc.string({ maxLength: 6 })), weirdNumber, { maxKeys: 5 }), basis: fc.constantFrom('mole', 'mass', 'volume') }, { requiredKeys: ['components'] }),
+  fc.record({
+    preset: fc.oneof(
+      fc.constantFrom('air', 'nitrogen', 'methane', 'humid-air', 'hydrogen', 'oxygen', 'unobtainium'),
+      fc.string(),
+    ),
+  }),
+  fc.record(
+    {
+      components: fc.dictionary(
+        fc.oneof(fc.constantFrom('CH4', 'N2', 'CO2', 'H2', 'O2', 'Ar'), fc.string({ maxLength: 6 })),
+        weirdNumber,
+        { maxKeys: 5 },
+      ),
+      basis: fc.constantFrom('mole', 'mass', 'volume'),
+    },
+    { requiredKeys: ['components'] },
+  ),
   fc.record({ preset: fc.constant('humid-air'), relativeHumidityPercent: weirdNumber }),
   fc.jsonValue(),
 );
@@ -43,10 +67,24 @@ export const nearValidRequest = fc.record(
   { requiredKeys: [] },
 );
 
-const temp = (min: number, max: number) => fc.record({ value: fc.double({ min, max, noNaN: true }), unit: fc.constantFrom('degC', 'K', 'degF') });
+const temp = (min: number, max: number) =>
+  fc.record({ value: fc.double({ min, max, noNaN: true }), unit: fc.constantFrom('degC', 'K', 'degF') });
 const plausibleGas = fc.oneof(
-  fc.record({ preset: fc.constantFrom('air', 'nitrogen', 'methane', 'hydrogen', 'argon', 'helium', 'carbon-dioxide', 'natural-gas') }),
-  fc.record({ components: fc.constantFrom({ CH4: 0.9, C2H6: 0.05, N2: 0.05 }, { N2: 0.79, O2: 0.21 }, { CH4: 0.6, CO2: 0.4 }) }),
+  fc.record({
+    preset: fc.constantFrom(
+      'air',
+      'nitrogen',
+      'methane',
+      'hydrogen',
+      'argon',
+      'helium',
+      'carbon-dioxide',
+      'natural-gas',
+    ),
+  }),
+  fc.record({
+    components: fc.constantFrom({ CH4: 0.9, C2H6: 0.05, N2: 0.05 }, { N2: 0.79, O2: 0.21 }, { CH4: 0.6, CO2: 0.4 }),
+  }),
 );
 
 /** Requests in or near the valid range, so the fuzz also drives the engine's arithmetic hard. */
@@ -54,8 +92,17 @@ export const plausibleRequest = fc.oneof(
   fc.record({
     service: fc.constant('heater'),
     gas: plausibleGas,
-    flow: fc.record({ value: fc.double({ min: 1e-6, max: 1e7, noNaN: true }), unit: fc.constantFrom('kg/h', 'Nm3/h', 'SCFM', 'lb/h', 'm3/h') }),
-    inlet: fc.record({ temperature: temp(-100, 400), pressure: fc.record({ value: fc.double({ min: 0.5, max: 5000, noNaN: true }), unit: fc.constantFrom('kPa', 'barg', 'psig', 'bar') }) }),
+    flow: fc.record({
+      value: fc.double({ min: 1e-6, max: 1e7, noNaN: true }),
+      unit: fc.constantFrom('kg/h', 'Nm3/h', 'SCFM', 'lb/h', 'm3/h'),
+    }),
+    inlet: fc.record({
+      temperature: temp(-100, 400),
+      pressure: fc.record({
+        value: fc.double({ min: 0.5, max: 5000, noNaN: true }),
+        unit: fc.constantFrom('kPa', 'barg', 'psig', 'bar'),
+      }),
+    }),
     outletTemperature: temp(-50, 1500),
     heatLossPercent: fc.double({ min: 0, max: 60, noNaN: true }),
     designMarginPercent: fc.double({ min: 0, max: 120, noNaN: true }),
@@ -63,9 +110,21 @@ export const plausibleRequest = fc.oneof(
   fc.record({
     service: fc.constant('compressor'),
     gas: plausibleGas,
-    flow: fc.record({ value: fc.double({ min: 1e-6, max: 1e6, noNaN: true }), unit: fc.constantFrom('kg/h', 'Nm3/h', 'SCFM') }),
-    inlet: fc.record({ temperature: temp(-100, 200), pressure: fc.record({ value: fc.double({ min: 0.5, max: 2000, noNaN: true }), unit: fc.constantFrom('kPa', 'bar', 'psia') }) }),
-    dischargePressure: fc.record({ value: fc.double({ min: 0.5, max: 50000, noNaN: true }), unit: fc.constantFrom('kPa', 'bar', 'psia') }),
+    flow: fc.record({
+      value: fc.double({ min: 1e-6, max: 1e6, noNaN: true }),
+      unit: fc.constantFrom('kg/h', 'Nm3/h', 'SCFM'),
+    }),
+    inlet: fc.record({
+      temperature: temp(-100, 200),
+      pressure: fc.record({
+        value: fc.double({ min: 0.5, max: 2000, noNaN: true }),
+        unit: fc.constantFrom('kPa', 'bar', 'psia'),
+      }),
+    }),
+    dischargePressure: fc.record({
+      value: fc.double({ min: 0.5, max: 50000, noNaN: true }),
+      unit: fc.constantFrom('kPa', 'bar', 'psia'),
+    }),
     isentropicEfficiency: fc.double({ min: 0.01, max: 1, noNaN: true }),
     stages: fc.integer({ min: 1, max: 7 }),
     interstagePressureDropPercent: fc.double({ min: 0, max: 12, noNaN: true }),

@@ -12,18 +12,44 @@ import { makeAccount, makeUser } from '../helpers/fixtures';
 import { allFinite } from './arbitraries';
 
 const cell = fc.oneof(
-  fc.constantFrom('heater', 'compressor', 'air', 'kg/h', 'degC', 'barg', '20', '-5', '1e9', 'NaN', '=cmd|calc', '+1', '', 'CH4:0.9;N2:0.1', 'CH4:x'),
+  fc.constantFrom(
+    'heater',
+    'compressor',
+    'air',
+    'kg/h',
+    'degC',
+    'barg',
+    '20',
+    '-5',
+    '1e9',
+    'NaN',
+    '=cmd|calc',
+    '+1',
+    '',
+    'CH4:0.9;N2:0.1',
+    'CH4:x',
+  ),
   fc.string({ maxLength: 12 }),
   fc.string({ unit: 'grapheme', maxLength: 6 }),
   fc.double().map(String),
 );
 const row = fc.dictionary(fc.constantFrom(...batchColumnNames), cell, { maxKeys: batchColumnNames.length });
 const sheet = fc.oneof(
-  { weight: 4, arbitrary: fc.array(row, { minLength: 0, maxLength: 6 }).map((rows) => Papa.unparse({ fields: batchColumnNames, data: rows.map((r) => batchColumnNames.map((c) => r[c] ?? '')) })) },
+  {
+    weight: 4,
+    arbitrary: fc
+      .array(row, { minLength: 0, maxLength: 6 })
+      .map((rows) =>
+        Papa.unparse({ fields: batchColumnNames, data: rows.map((r) => batchColumnNames.map((c) => r[c] ?? '')) }),
+      ),
+  },
   { weight: 1, arbitrary: fc.string({ maxLength: 300 }) },
   { weight: 1, arbitrary: fc.uint8Array({ maxLength: 200 }).map((b) => Buffer.from(b).toString('latin1')) },
 );
-const fileName = fc.oneof(fc.constant('enquiry.csv'), fc.constantFrom('enquiry.xlsx', 'evil.csv.exe', 'noext', '../../etc/passwd.csv'));
+const fileName = fc.oneof(
+  fc.constant('enquiry.csv'),
+  fc.constantFrom('enquiry.xlsx', 'evil.csv.exe', 'noext', '../../etc/passwd.csv'),
+);
 
 function form(text: string, name: string, extra: Record<string, string> = {}) {
   const f = new FormData();
@@ -45,7 +71,9 @@ describe('batch upload under hostile input', () => {
       fc.asyncProperty(sheet, fileName, async (text, name) => {
         const res = await preview(form(text, name), { params: Promise.resolve({}) });
         expect(res.status).toBeLessThan(500);
-        const json = (await res.json()) as { rows?: { row: number; problems: { column: string }[]; result: unknown }[] };
+        const json = (await res.json()) as {
+          rows?: { row: number; problems: { column: string }[]; result: unknown }[];
+        };
         for (const r of json.rows ?? []) {
           expect(r.row).toBeGreaterThanOrEqual(2);
           if (r.result) expect(allFinite(r.result)).toBe(true);
@@ -60,8 +88,13 @@ describe('batch upload under hostile input', () => {
     await fc.assert(
       fc.asyncProperty(fc.array(row, { minLength: 1, maxLength: 4 }), async (rows) => {
         const broken = rows.map((r): Record<string, string> => ({ ...r, service: 'boiler' }));
-        const text = Papa.unparse({ fields: batchColumnNames, data: broken.map((r) => batchColumnNames.map((c) => r[c] ?? '')) });
-        const res = await commit(form(text, 'enquiry.csv', { target: JSON.stringify({ accountId }) }), { params: Promise.resolve({}) });
+        const text = Papa.unparse({
+          fields: batchColumnNames,
+          data: broken.map((r) => batchColumnNames.map((c) => r[c] ?? '')),
+        });
+        const res = await commit(form(text, 'enquiry.csv', { target: JSON.stringify({ accountId }) }), {
+          params: Promise.resolve({}),
+        });
         expect(res.status).toBeGreaterThanOrEqual(400);
         expect(res.status).toBeLessThan(500);
       }),
@@ -71,7 +104,9 @@ describe('batch upload under hostile input', () => {
   }, 120_000);
 
   it('refuses files that are too large or not CSV text', async () => {
-    expect((await preview(form('a'.repeat(2 * 1024 * 1024 + 10), 'big.csv'), { params: Promise.resolve({}) })).status).toBe(413);
+    expect(
+      (await preview(form('a'.repeat(2 * 1024 * 1024 + 10), 'big.csv'), { params: Promise.resolve({}) })).status,
+    ).toBe(413);
     expect((await preview(form('service\nheater', 'sheet.xlsx'), { params: Promise.resolve({}) })).status).toBe(415);
     expect((await preview(form('service\u0000\nheater', 'bin.csv'), { params: Promise.resolve({}) })).status).toBe(415);
   });

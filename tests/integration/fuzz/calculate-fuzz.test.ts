@@ -9,7 +9,14 @@ vi.hoisted(() => {
 import { POST } from '@/app/api/v1/calculate/route';
 import { allFinite, anyBody, nearValidRequest } from './arbitraries';
 
-const post = (body: string) => POST(new Request('http://localhost/api/v1/calculate', { method: 'POST', body, headers: { 'content-type': 'application/json', 'x-forwarded-for': '203.0.113.9' } }));
+const post = (body: string) =>
+  POST(
+    new Request('http://localhost/api/v1/calculate', {
+      method: 'POST',
+      body,
+      headers: { 'content-type': 'application/json', 'x-forwarded-for': '203.0.113.9' },
+    }),
+  );
 
 describe('calculate API under hostile input', () => {
   it('answers 10,000 generated bodies with 200 or a 4xx naming the problem, never a 500 or a non-finite figure', async () => {

@@ -10,7 +10,10 @@ export async function makeClerkKeys() {
   return { privateKey, publicPem: await exportSPKI(publicKey) };
 }
 
-export async function signClerkSession(privateKey: CryptoKey, opts: { sub: string; expiresInS?: number; iatOffsetS?: number }) {
+export async function signClerkSession(
+  privateKey: CryptoKey,
+  opts: { sub: string; expiresInS?: number; iatOffsetS?: number },
+) {
   const now = Math.floor(Date.now() / 1000) + (opts.iatOffsetS ?? 0);
   return new SignJWT({ sid: 'sess_test_1', azp: 'https://desk.dutywise.test' })
     .setProtectedHeader({ alg: 'RS256', kid: 'ins_test' })

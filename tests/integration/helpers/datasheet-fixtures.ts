@@ -7,10 +7,27 @@ import { calculate } from '@/lib/sizing';
 import { insertSizing } from '@/lib/sizings/save';
 
 /** A sizing stored exactly as the app stores one: the engine's real answer beside the request. */
-export async function makeEngineSizing(user: CurrentUser, accountId: string, request: Record<string, unknown>, meta: { title: string; tag: string }) {
+export async function makeEngineSizing(
+  user: CurrentUser,
+  accountId: string,
+  request: Record<string, unknown>,
+  meta: { title: string; tag: string },
+) {
   const result = calculate(request);
   const row = await db.transaction((tx) =>
-    insertSizing(tx, user, { accountId, title: meta.title, equipmentTag: meta.tag, notes: undefined, quoteId: undefined, revisedFromId: undefined }, { input: request, result }),
+    insertSizing(
+      tx,
+      user,
+      {
+        accountId,
+        title: meta.title,
+        equipmentTag: meta.tag,
+        notes: undefined,
+        quoteId: undefined,
+        revisedFromId: undefined,
+      },
+      { input: request, result },
+    ),
   );
   return { id: row.id, number: row.number, result };
 }

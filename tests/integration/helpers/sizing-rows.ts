@@ -3,7 +3,11 @@ import { db } from '@/db';
 import { sizings } from '@/db/schema';
 
 /** A stored sizing row for access tests that do not care about the engineering figures. */
-export async function makeSizingRow(accountId: string, userId: string, tag = `T-${randomUUID().slice(0, 6)}`): Promise<string> {
+export async function makeSizingRow(
+  accountId: string,
+  userId: string,
+  tag = `T-${randomUUID().slice(0, 6)}`,
+): Promise<string> {
   const [row] = await db
     .insert(sizings)
     .values({

@@ -56,16 +56,28 @@ describe('SMTP fake', () => {
   });
 
   it('accepts any credentials as well as none', async () => {
-    await transportTo(fake.smtpPort, { user: 'dutywise', pass: 'anything' }).sendMail({ ...datasheetMail, subject: 'with auth' });
+    await transportTo(fake.smtpPort, { user: 'dutywise', pass: 'anything' }).sendMail({
+      ...datasheetMail,
+      subject: 'with auth',
+    });
     await transportTo(fake.smtpPort).sendMail({ ...datasheetMail, subject: 'without auth' });
     expect(fake.messages().map((m) => m.subject)).toEqual(['with auth', 'without auth']);
   });
 
   it('filters by recipient, clears, and reports health', async () => {
     await transportTo(fake.smtpPort).sendMail(datasheetMail);
-    await transportTo(fake.smtpPort).sendMail({ ...datasheetMail, to: 'someone@harrow-gas.example', cc: undefined, bcc: undefined });
+    await transportTo(fake.smtpPort).sendMail({
+      ...datasheetMail,
+      to: 'someone@harrow-gas.example',
+      cc: undefined,
+      bcc: undefined,
+    });
     expect((await getJson<{ data: unknown[] }>('/messages?to=someone@harrow-gas.example')).body.data).toHaveLength(1);
-    expect((await getJson<{ ok: boolean; messages: number }>('/health')).body).toMatchObject({ ok: true, smtp: 'up', messages: 2 });
+    expect((await getJson<{ ok: boolean; messages: number }>('/health')).body).toMatchObject({
+      ok: true,
+      smtp: 'up',
+      messages: 2,
+    });
     const cleared = await fetch(`${fake.httpUrl}/messages`, { method: 'DELETE' });
     expect(await cleared.json()).toEqual({ deleted: 2 });
     expect((await getJson<{ data: unknown[] }>('/messages')).body.data).toHaveLength(0);
@@ -83,7 +95,9 @@ describe('SMTP fake', () => {
     await transportTo(fake.smtpPort).sendMail({ ...datasheetMail, subject: 'before' });
     await fake.stopSmtp();
     expect((await getJson<{ smtp: string }>('/health')).body.smtp).toBe('stopped');
-    await expect(transportTo(fake.smtpPort).sendMail({ ...datasheetMail, subject: 'during' })).rejects.toMatchObject({ code: 'ESOCKET' });
+    await expect(transportTo(fake.smtpPort).sendMail({ ...datasheetMail, subject: 'during' })).rejects.toMatchObject({
+      code: 'ESOCKET',
+    });
     await fake.startSmtp();
     await transportTo(fake.smtpPort).sendMail({ ...datasheetMail, subject: 'after' });
     expect(fake.messages().map((m) => m.subject)).toEqual(['before', 'after']);

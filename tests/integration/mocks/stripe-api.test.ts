@@ -46,7 +46,17 @@ describe('catalogue', () => {
   it('serves a configured catalogue instead of the default', async () => {
     await h.close();
     h = await startHarness({
-      prices: [{ id: 'price_bench_weekly', nickname: 'Bench weekly', productId: 'prod_bench', productName: 'Bench', unitAmountMinor: 500, currency: 'usd', interval: 'week' }],
+      prices: [
+        {
+          id: 'price_bench_weekly',
+          nickname: 'Bench weekly',
+          productId: 'prod_bench',
+          productName: 'Bench',
+          unitAmountMinor: 500,
+          currency: 'usd',
+          interval: 'week',
+        },
+      ],
     });
     const list = await h.stripe.prices.list();
     expect(list.data.map((p) => p.id)).toEqual(['price_bench_weekly']);
@@ -56,11 +66,22 @@ describe('catalogue', () => {
 
 describe('customers', () => {
   it('creates, retrieves and checks out an existing customer', async () => {
-    const customer = await h.stripe.customers.create({ email: 'ops@harrow-gas.example', name: 'Harrow Gas Works', metadata: { accountId: 'acct_91' } });
+    const customer = await h.stripe.customers.create({
+      email: 'ops@harrow-gas.example',
+      name: 'Harrow Gas Works',
+      metadata: { accountId: 'acct_91' },
+    });
     expect(customer.id).toMatch(/^cus_/);
     const fetched = await h.stripe.customers.retrieve(customer.id);
-    expect(fetched).toMatchObject({ id: customer.id, email: 'ops@harrow-gas.example', metadata: { accountId: 'acct_91' } });
-    const session = await createDeskCheckout(h.stripe, 'price_desk_monthly', { customer: customer.id, customer_email: undefined });
+    expect(fetched).toMatchObject({
+      id: customer.id,
+      email: 'ops@harrow-gas.example',
+      metadata: { accountId: 'acct_91' },
+    });
+    const session = await createDeskCheckout(h.stripe, 'price_desk_monthly', {
+      customer: customer.id,
+      customer_email: undefined,
+    });
     expect(session.customer).toBe(customer.id);
     const page = await (await fetch(session.url ?? '')).text();
     expect(page).toContain('value="ops@harrow-gas.example"');
@@ -91,14 +112,18 @@ describe('bad requests get Stripe-style errors', () => {
     ['empty line items', { line_items: [] }, 'line_items'],
     ['relative cancel_url', { cancel_url: '/pricing' }, 'cancel_url'],
   ])('refuses %s', async (_label, extra, param) => {
-    const error = await sdkError(createDeskCheckout(h.stripe, 'price_desk_monthly', extra as Partial<Stripe.Checkout.SessionCreateParams>));
+    const error = await sdkError(
+      createDeskCheckout(h.stripe, 'price_desk_monthly', extra as Partial<Stripe.Checkout.SessionCreateParams>),
+    );
     expect(error.statusCode).toBe(400);
     expect(error.type).toBe('StripeInvalidRequestError');
     expect(error.param).toBe(param);
   });
 
   it('refuses metadata keys longer than 40 characters [mem: Stripe metadata limits]', async () => {
-    const error = await sdkError(createDeskCheckout(h.stripe, 'price_desk_monthly', { metadata: { ['k'.repeat(41)]: 'v' } }));
+    const error = await sdkError(
+      createDeskCheckout(h.stripe, 'price_desk_monthly', { metadata: { ['k'.repeat(41)]: 'v' } }),
+    );
     expect(error.statusCode).toBe(400);
     expect(error.message).toContain('at most 40 characters');
   });

@@ -61,7 +61,11 @@ describe('hosted checkout with the success card', () => {
     expect(response.headers.get('location')).toBe(`http://localhost:3000/billing/complete?session=${session.id}`);
 
     await waitUntil(() => h.receiver.events.length >= 3, 'three webhook events');
-    expect(h.receiver.events.map((e) => e.type)).toEqual(['customer.subscription.created', 'checkout.session.completed', 'invoice.paid']);
+    expect(h.receiver.events.map((e) => e.type)).toEqual([
+      'customer.subscription.created',
+      'checkout.session.completed',
+      'invoice.paid',
+    ]);
     expect(h.receiver.deliveries.every((d) => d.verified)).toBe(true);
     for (const event of h.receiver.events) {
       expect(event.id).toMatch(/^evt_/);
@@ -115,7 +119,9 @@ describe('hosted checkout with the success card', () => {
     await payHostedCheckout(session.url ?? '', SUCCESS_CARD);
     const done = await h.stripe.checkout.sessions.retrieve(session.id, { expand: ['subscription'] });
     const item = (done.subscription as Stripe.Subscription).items.data[0];
-    expect(calendarParts(item?.current_period_end ?? 0)).toEqual(calendarMonthsLater(item?.current_period_start ?? 0, 12));
+    expect(calendarParts(item?.current_period_end ?? 0)).toEqual(
+      calendarMonthsLater(item?.current_period_start ?? 0, 12),
+    );
   });
 
   it('signs events so that a wrong secret fails verification', async () => {

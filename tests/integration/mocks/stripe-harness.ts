@@ -8,7 +8,13 @@ export const WEBHOOK_SECRET = 'whsec_harness_local';
 export const SUCCESS_CARD = '4242 4242 4242 4242';
 export const DECLINE_CARD = '4000 0000 0000 0002';
 
-export type Delivery = { attempt: number; status: number; eventId: string | null; eventType: string | null; verified: boolean };
+export type Delivery = {
+  attempt: number;
+  status: number;
+  eventId: string | null;
+  eventType: string | null;
+  verified: boolean;
+};
 
 /** Polls a condition; fails with `what` if it never holds (a wait, not a timing assertion). */
 export async function waitUntil(condition: () => boolean, what: string, timeoutMs = 15_000): Promise<void> {
@@ -40,7 +46,13 @@ export async function startWebhookReceiver(respond: (attempt: number) => number 
         event = null;
       }
       const status = event ? respond(deliveries.length + 1) : 400;
-      deliveries.push({ attempt: deliveries.length + 1, status, eventId: event?.id ?? null, eventType: event?.type ?? null, verified: event !== null });
+      deliveries.push({
+        attempt: deliveries.length + 1,
+        status,
+        eventId: event?.id ?? null,
+        eventType: event?.type ?? null,
+        verified: event !== null,
+      });
       if (event && status >= 200 && status < 300) events.push(event);
       res.writeHead(status, { 'content-type': 'application/json' }).end('{}');
     });
@@ -102,7 +114,11 @@ export async function startHarness(
   };
 }
 
-export function createDeskCheckout(stripe: Stripe, priceId = 'price_desk_monthly', extra: Partial<Stripe.Checkout.SessionCreateParams> = {}) {
+export function createDeskCheckout(
+  stripe: Stripe,
+  priceId = 'price_desk_monthly',
+  extra: Partial<Stripe.Checkout.SessionCreateParams> = {},
+) {
   return stripe.checkout.sessions.create({
     mode: 'subscription',
     line_items: [{ price: priceId, quantity: 1 }],

@@ -31,7 +31,13 @@ describe('state file', () => {
     const before = await first.stripe.subscriptions.retrieve(subscriptionId);
     await first.close();
 
-    const again = await startStripeFake({ port: 0, webhookUrl: 'http://127.0.0.1:9/unused', webhookSecret: WEBHOOK_SECRET, statePath, log: () => undefined });
+    const again = await startStripeFake({
+      port: 0,
+      webhookUrl: 'http://127.0.0.1:9/unused',
+      webhookSecret: WEBHOOK_SECRET,
+      statePath,
+      log: () => undefined,
+    });
     try {
       const stripe = stripeClientFor(again);
       const after = await stripe.subscriptions.retrieve(subscriptionId);
@@ -55,10 +61,20 @@ describe('state file', () => {
     await down.close();
 
     const up = await startWebhookReceiver();
-    const again = await startStripeFake({ port: 0, webhookUrl: up.url, webhookSecret: WEBHOOK_SECRET, statePath, log: () => undefined });
+    const again = await startStripeFake({
+      port: 0,
+      webhookUrl: up.url,
+      webhookSecret: WEBHOOK_SECRET,
+      statePath,
+      log: () => undefined,
+    });
     try {
       await waitUntil(() => again.events().every((e) => e.delivery.status === 'delivered'), 'the resumed deliveries');
-      expect(up.events.map((e) => e.type).sort()).toEqual(['checkout.session.completed', 'customer.subscription.created', 'invoice.paid']);
+      expect(up.events.map((e) => e.type).sort()).toEqual([
+        'checkout.session.completed',
+        'customer.subscription.created',
+        'invoice.paid',
+      ]);
       expect(again.events().every((e) => e.delivery.status === 'delivered' && e.delivery.attempts === 2)).toBe(true);
     } finally {
       await again.close();
@@ -69,12 +85,20 @@ describe('state file', () => {
   it('refuses to start over an unreadable state file', async () => {
     const statePath = join(dir, 'broken.json');
     writeFileSync(statePath, '{ not json');
-    await expect(startStripeFake({ port: 0, webhookUrl: 'http://127.0.0.1:9/', webhookSecret: WEBHOOK_SECRET, statePath })).rejects.toThrow(statePath);
+    await expect(
+      startStripeFake({ port: 0, webhookUrl: 'http://127.0.0.1:9/', webhookSecret: WEBHOOK_SECRET, statePath }),
+    ).rejects.toThrow(statePath);
   });
 
   it('refuses bad options with the field named', async () => {
-    await expect(startStripeFake({ port: 70_000, webhookUrl: 'http://127.0.0.1:9/', webhookSecret: WEBHOOK_SECRET })).rejects.toThrow(/port/);
-    await expect(startStripeFake({ port: 0, webhookUrl: 'not a url', webhookSecret: WEBHOOK_SECRET })).rejects.toThrow(/webhookUrl/);
-    await expect(startStripeFake({ port: 0, webhookUrl: 'http://127.0.0.1:9/', webhookSecret: '' })).rejects.toThrow(/webhookSecret/);
+    await expect(
+      startStripeFake({ port: 70_000, webhookUrl: 'http://127.0.0.1:9/', webhookSecret: WEBHOOK_SECRET }),
+    ).rejects.toThrow(/port/);
+    await expect(startStripeFake({ port: 0, webhookUrl: 'not a url', webhookSecret: WEBHOOK_SECRET })).rejects.toThrow(
+      /webhookUrl/,
+    );
+    await expect(startStripeFake({ port: 0, webhookUrl: 'http://127.0.0.1:9/', webhookSecret: '' })).rejects.toThrow(
+      /webhookSecret/,
+    );
   });
 });

@@ -15,7 +15,10 @@ function isoDate(seconds: number): string {
 }
 
 async function openPortal(customerId: string) {
-  const portal = await h.stripe.billingPortal.sessions.create({ customer: customerId, return_url: 'http://localhost:3000/billing' });
+  const portal = await h.stripe.billingPortal.sessions.create({
+    customer: customerId,
+    return_url: 'http://localhost:3000/billing',
+  });
   return portal;
 }
 
@@ -60,7 +63,11 @@ describe('customer portal page', () => {
     expect(sub.cancel_at_period_end).toBe(true);
     expect(sub.status).toBe('active');
     expect(sub.cancel_at).toBe(sub.items.data[0]?.current_period_end);
-    const page = await (await fetch(cancel.headers.get('location') ? new URL(cancel.headers.get('location') ?? '', portal.url) : portal.url)).text();
+    const page = await (
+      await fetch(
+        cancel.headers.get('location') ? new URL(cancel.headers.get('location') ?? '', portal.url) : portal.url,
+      )
+    ).text();
     expect(page).toContain('Resume');
     expect(page).toContain('will not renew');
     expect(page).toContain('role="status"');
@@ -72,7 +79,7 @@ describe('customer portal page', () => {
     expect((await h.stripe.subscriptions.retrieve(subscriptionId)).cancel_at).toBeNull();
   });
 
-  it('refuses to change another customer\'s subscription', async () => {
+  it("refuses to change another customer's subscription", async () => {
     const mine = await subscribe(h);
     const other = await h.stripe.customers.create({ email: 'other@fenwick-compression.example' });
     const portal = await openPortal(other.id);
@@ -144,10 +151,15 @@ describe('subscription API', () => {
     expect(canceled.status).toBe('canceled');
     await nextEvent('customer.subscription.deleted', seen);
     expect((await h.stripe.subscriptions.list({ customer: customerId })).data).toHaveLength(0);
-    await expect(h.stripe.subscriptions.update(subscriptionId, { cancel_at_period_end: false })).rejects.toMatchObject({ statusCode: 400 });
+    await expect(h.stripe.subscriptions.update(subscriptionId, { cancel_at_period_end: false })).rejects.toMatchObject({
+      statusCode: 400,
+    });
   });
 
   it('refuses a portal session for an unknown customer', async () => {
-    await expect(h.stripe.billingPortal.sessions.create({ customer: 'cus_nobody' })).rejects.toMatchObject({ statusCode: 400, param: 'customer' });
+    await expect(h.stripe.billingPortal.sessions.create({ customer: 'cus_nobody' })).rejects.toMatchObject({
+      statusCode: 400,
+      param: 'customer',
+    });
   });
 });

@@ -1,6 +1,15 @@
 import { createServer } from 'node:net';
 import { afterEach, describe, expect, it } from 'vitest';
-import { control, createDeskCheckout, type Harness, payHostedCheckout, startHarness, subscribe, SUCCESS_CARD, waitUntil } from './stripe-harness';
+import {
+  control,
+  createDeskCheckout,
+  type Harness,
+  payHostedCheckout,
+  startHarness,
+  subscribe,
+  SUCCESS_CARD,
+  waitUntil,
+} from './stripe-harness';
 
 let h: Harness | undefined;
 afterEach(async () => {
@@ -25,9 +34,16 @@ describe('webhook delivery', () => {
     const harness = h;
     const session = await createDeskCheckout(harness.stripe);
     await payHostedCheckout(session.url ?? '', SUCCESS_CARD);
-    await waitUntil(() => harness.fake.events().every((e) => e.delivery.status === 'delivered'), 'all events delivered');
+    await waitUntil(
+      () => harness.fake.events().every((e) => e.delivery.status === 'delivered'),
+      'all events delivered',
+    );
     expect(harness.receiver.deliveries.filter((d) => d.status === 500)).toHaveLength(2);
-    expect(harness.receiver.events.map((e) => e.type).sort()).toEqual(['checkout.session.completed', 'customer.subscription.created', 'invoice.paid']);
+    expect(harness.receiver.events.map((e) => e.type).sort()).toEqual([
+      'checkout.session.completed',
+      'customer.subscription.created',
+      'invoice.paid',
+    ]);
     const attempts = harness.fake.events().map((e) => e.delivery.attempts);
     expect(attempts.reduce((a, b) => a + b, 0)).toBe(5);
     expect(harness.fake.events().every((e) => e.delivery.lastStatusCode === 200)).toBe(true);
@@ -39,9 +55,13 @@ describe('webhook delivery', () => {
     await createDeskCheckout(harness.stripe).then((s) => payHostedCheckout(s.url ?? '', SUCCESS_CARD));
     expect(await harness.fake.webhooksIdle()).toBe(true);
     const listed = await control(harness.fake, 'events', 'GET');
-    const data = listed.body.data as { type: string; delivery: { status: string; attempts: number; lastStatusCode: number } }[];
+    const data = listed.body.data as {
+      type: string;
+      delivery: { status: string; attempts: number; lastStatusCode: number };
+    }[];
     expect(data).toHaveLength(3);
-    for (const event of data) expect(event.delivery).toMatchObject({ status: 'failed', attempts: 3, lastStatusCode: 503 });
+    for (const event of data)
+      expect(event.delivery).toMatchObject({ status: 'failed', attempts: 3, lastStatusCode: 503 });
   });
 
   it('records connection errors when the app is not listening', async () => {

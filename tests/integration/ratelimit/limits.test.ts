@@ -8,9 +8,16 @@ vi.hoisted(() => {
 import { POST as calculatePost } from '@/app/api/v1/calculate/route';
 import { POST as signInPost } from '@/app/api/auth/sign-in/route';
 
-const body = JSON.stringify({ service: 'heater', gas: { preset: 'air' }, flow: { value: 100, unit: 'kg/h' }, inlet: { temperature: { value: 20, unit: 'degC' }, pressure: { value: 101.325, unit: 'kPa' } }, outletTemperature: { value: 80, unit: 'degC' } });
+const body = JSON.stringify({
+  service: 'heater',
+  gas: { preset: 'air' },
+  flow: { value: 100, unit: 'kg/h' },
+  inlet: { temperature: { value: 20, unit: 'degC' }, pressure: { value: 101.325, unit: 'kPa' } },
+  outletTemperature: { value: 80, unit: 'degC' },
+});
 const addr = () => `198.51.100.${Math.floor(Math.random() * 250)}-${Math.random().toString(36).slice(2, 8)}`;
-const calc = (ip: string, post = calculatePost) => post(new Request('http://localhost/api/v1/calculate', { method: 'POST', body, headers: { 'x-forwarded-for': ip } }));
+const calc = (ip: string, post = calculatePost) =>
+  post(new Request('http://localhost/api/v1/calculate', { method: 'POST', body, headers: { 'x-forwarded-for': ip } }));
 
 describe('rate limits', () => {
   it('the public calculate API answers 429 with Retry-After past the per-address limit', async () => {
@@ -37,7 +44,14 @@ describe('rate limits', () => {
 
   it('sign-in answers 429 with Retry-After after repeated attempts from one address', async () => {
     const ip = addr();
-    const attempt = () => signInPost(new Request('http://localhost/api/auth/sign-in', { method: 'POST', body: JSON.stringify({ email: 'nobody@nowhere.example', password: 'guess' }), headers: { 'x-forwarded-for': ip } }));
+    const attempt = () =>
+      signInPost(
+        new Request('http://localhost/api/auth/sign-in', {
+          method: 'POST',
+          body: JSON.stringify({ email: 'nobody@nowhere.example', password: 'guess' }),
+          headers: { 'x-forwarded-for': ip },
+        }),
+      );
     const statuses = [];
     for (let i = 0; i < 4; i++) statuses.push((await attempt()).status);
     expect(statuses).toEqual([401, 401, 401, 429]);

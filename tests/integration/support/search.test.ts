@@ -6,7 +6,10 @@ import { toCsv, neutraliseCell } from '@/lib/csv/write';
 import { makeAccount, makeUser } from '../helpers/fixtures';
 import { makeSizingRow } from '../helpers/sizing-rows';
 
-const word = () => `kiln${randomUUID().replace(/[^a-f]/g, '').slice(0, 6)}dryer`;
+const word = () =>
+  `kiln${randomUUID()
+    .replace(/[^a-f]/g, '')
+    .slice(0, 6)}dryer`;
 const q = (over: Record<string, unknown>) => supportSearchSchema.parse(over);
 
 describe('support look-up', () => {
@@ -27,7 +30,10 @@ describe('support look-up', () => {
     const support = await makeUser('support');
     const engineer = await makeUser('sales_engineer');
     const id = await makeSizingRow(acct.id, engineer.id);
-    const byName = await searchSizings(support, q({ q: acct.name.split(' ').slice(0, 2).join(' '), accountId: acct.id }));
+    const byName = await searchSizings(
+      support,
+      q({ q: acct.name.split(' ').slice(0, 2).join(' '), accountId: acct.id }),
+    );
     expect(byName.hits.map((h) => h.id)).toEqual([id]);
     expect((await searchSizings(support, q({ accountId: acct.id, service: 'compressor' }))).hits).toHaveLength(0);
     expect((await searchSizings(support, q({ accountId: acct.id, from: '2999-01-01' }))).hits).toHaveLength(0);
@@ -59,7 +65,13 @@ describe('CSV written by the product', () => {
     expect(neutraliseCell('+1')).toBe("'+1");
     expect(neutraliseCell('@SUM(A1)')).toBe("'@SUM(A1)");
     expect(neutraliseCell(-12.5)).toBe(-12.5);
-    const csv = toCsv(['tag', 'kw'], [['-cmd', 3], ['EH-1', 4]]);
+    const csv = toCsv(
+      ['tag', 'kw'],
+      [
+        ['-cmd', 3],
+        ['EH-1', 4],
+      ],
+    );
     expect(csv.split('\r\n')).toEqual(['tag,kw', "'-cmd,3", 'EH-1,4']);
   });
 });

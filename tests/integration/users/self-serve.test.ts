@@ -21,7 +21,13 @@ describe('self-serve sign-up', () => {
   it('creates a customer, their own account and a session', async () => {
     await actAs(null);
     const email = `signup-${randomUUID().slice(0, 8)}@plant.example`;
-    const res = await signUpAction({ name: 'Ada Fenwick', email, password: 'long-enough-pw', company: 'Fenwick Kilns', site: '' });
+    const res = await signUpAction({
+      name: 'Ada Fenwick',
+      email,
+      password: 'long-enough-pw',
+      company: 'Fenwick Kilns',
+      site: '',
+    });
     if (!res.ok) throw new Error(`sign-up refused: ${res.formError}`);
     const [u] = await db.select({ id: users.id, role: users.role }).from(users).where(eq(users.email, email));
     expect(u?.role).toBe('customer');
@@ -33,9 +39,19 @@ describe('self-serve sign-up', () => {
   it('answers 409 with an e-mail field error when the address is taken, and 400 for short passwords', async () => {
     await actAs(null);
     const existing = await makeUser('sales_engineer');
-    const taken = await signUpAction({ name: 'Dup', email: existing.email.toUpperCase(), password: 'long-enough-pw', company: 'Dup Co' });
+    const taken = await signUpAction({
+      name: 'Dup',
+      email: existing.email.toUpperCase(),
+      password: 'long-enough-pw',
+      company: 'Dup Co',
+    });
     expect(taken).toMatchObject({ ok: false, status: 409, fieldErrors: { email: ['Already registered.'] } });
-    const short = await signUpAction({ name: 'Short', email: 'short@plant.example', password: 'short', company: 'Short Co' });
+    const short = await signUpAction({
+      name: 'Short',
+      email: 'short@plant.example',
+      password: 'short',
+      company: 'Short Co',
+    });
     expect(short).toMatchObject({ ok: false, status: 400 });
     if (!short.ok) expect(Object.keys(short.fieldErrors)).toEqual(['password']);
     expect(await sessionSubject()).toBeUndefined();
@@ -52,19 +68,30 @@ describe('accepting an invitation', () => {
     expect(await getInvitationPreview(token)).toMatchObject({ email, accountName: acct.name });
 
     await actAs(null);
-    expect(await acceptInviteAction({ token, name: 'New Member', password: 'long-enough-pw' })).toEqual({ ok: true, data: { joined: true } });
+    expect(await acceptInviteAction({ token, name: 'New Member', password: 'long-enough-pw' })).toEqual({
+      ok: true,
+      data: { joined: true },
+    });
     const [u] = await db.select({ id: users.id }).from(users).where(eq(users.email, email));
     const [m] = await db.select().from(memberships).where(eq(memberships.userId, u!.id));
     expect(m?.accountId).toBe(acct.id);
     expect(await sessionSubject()).toBe(u!.id);
 
     expect(await getInvitationPreview(token)).toBeNull();
-    expect(await acceptInviteAction({ token, name: 'Again', password: 'long-enough-pw' })).toMatchObject({ ok: false, status: 410 });
+    expect(await acceptInviteAction({ token, name: 'Again', password: 'long-enough-pw' })).toMatchObject({
+      ok: false,
+      status: 410,
+    });
   });
 
   it('refuses an unknown token with 410 and a malformed one with 400', async () => {
     await actAs(null);
-    expect(await acceptInviteAction({ token: 'x'.repeat(32), name: 'Nobody', password: 'long-enough-pw' })).toMatchObject({ ok: false, status: 410 });
-    expect(await acceptInviteAction({ token: 'short', name: 'Nobody', password: 'long-enough-pw' })).toMatchObject({ ok: false, status: 400 });
+    expect(
+      await acceptInviteAction({ token: 'x'.repeat(32), name: 'Nobody', password: 'long-enough-pw' }),
+    ).toMatchObject({ ok: false, status: 410 });
+    expect(await acceptInviteAction({ token: 'short', name: 'Nobody', password: 'long-enough-pw' })).toMatchObject({
+      ok: false,
+      status: 400,
+    });
   });
 });

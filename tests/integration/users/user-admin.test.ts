@@ -12,12 +12,18 @@ import { makeAccount, makeUser } from '../helpers/fixtures';
 import { actAs } from '../helpers/session';
 
 async function roleOf(userId: string) {
-  const [row] = await db.select({ role: users.role, disabledAt: users.disabledAt }).from(users).where(eq(users.id, userId));
+  const [row] = await db
+    .select({ role: users.role, disabledAt: users.disabledAt })
+    .from(users)
+    .where(eq(users.id, userId));
   return row;
 }
 
 async function auditFor(userId: string) {
-  return db.select().from(auditLog).where(and(eq(auditLog.entityType, 'user'), eq(auditLog.entityId, userId)));
+  return db
+    .select()
+    .from(auditLog)
+    .where(and(eq(auditLog.entityType, 'user'), eq(auditLog.entityId, userId)));
 }
 
 describe('people and roles', () => {
@@ -43,8 +49,12 @@ describe('people and roles', () => {
     const admin = await makeUser('admin');
     const customer = await makeUser('customer', (await makeAccount()).id);
     const engineer = await makeUser('sales_engineer');
-    await expect(changeUserRole(admin, { userId: customer.id, role: 'sales_engineer' })).rejects.toMatchObject({ status: 422 });
-    await expect(changeUserRole(admin, { userId: engineer.id, role: 'customer' })).rejects.toMatchObject({ status: 422 });
+    await expect(changeUserRole(admin, { userId: customer.id, role: 'sales_engineer' })).rejects.toMatchObject({
+      status: 422,
+    });
+    await expect(changeUserRole(admin, { userId: engineer.id, role: 'customer' })).rejects.toMatchObject({
+      status: 422,
+    });
     expect((await roleOf(customer.id))?.role).toBe('customer');
     expect((await roleOf(engineer.id))?.role).toBe('sales_engineer');
     expect(await auditFor(customer.id)).toHaveLength(0);
@@ -88,9 +98,15 @@ describe('people and roles server actions', () => {
   it('answer 403 to support and 401 when signed out, changing nothing', async () => {
     const engineer = await makeUser('sales_engineer');
     await actAs(await makeUser('support'));
-    expect(await changeUserRoleAction({ userId: engineer.id, role: 'admin' })).toMatchObject({ ok: false, status: 403 });
+    expect(await changeUserRoleAction({ userId: engineer.id, role: 'admin' })).toMatchObject({
+      ok: false,
+      status: 403,
+    });
     await actAs(null);
-    expect(await setUserDisabledAction({ userId: engineer.id, disabled: true })).toMatchObject({ ok: false, status: 401 });
+    expect(await setUserDisabledAction({ userId: engineer.id, disabled: true })).toMatchObject({
+      ok: false,
+      status: 401,
+    });
     expect(await roleOf(engineer.id)).toMatchObject({ role: 'sales_engineer', disabledAt: null });
   });
 
@@ -104,7 +120,10 @@ describe('people and roles server actions', () => {
   it('change the role for an admin', async () => {
     const engineer = await makeUser('sales_engineer');
     await actAs(await makeUser('admin'));
-    expect(await changeUserRoleAction({ userId: engineer.id, role: 'admin' })).toEqual({ ok: true, data: { changed: true } });
+    expect(await changeUserRoleAction({ userId: engineer.id, role: 'admin' })).toEqual({
+      ok: true,
+      data: { changed: true },
+    });
     expect((await roleOf(engineer.id))?.role).toBe('admin');
   });
 });

@@ -34,7 +34,10 @@ describe('heater cp chart', () => {
   });
 
   it('draws air cp rising with temperature from about 1.005 kJ/(kg K) near 300 K [mem: ideal-gas air tables in standard thermodynamics texts]', () => {
-    const chart = heaterCpChart(heater({ ...heaterRequest, inlet: { ...heaterRequest.inlet, temperature: { value: 26.85, unit: 'degC' } } }), 'si');
+    const chart = heaterCpChart(
+      heater({ ...heaterRequest, inlet: { ...heaterRequest.inlet, temperature: { value: 26.85, unit: 'degC' } } }),
+      'si',
+    );
     const first = chart.points[0]!;
     const at300 = chart.points.find((p) => Math.abs(p.t - 26.85) < 1e-6) ?? first;
     expect(at300.cp).toBeCloseTo(1.005, 2);

@@ -40,7 +40,10 @@ describe('desk defaults', () => {
 });
 
 describe('form values and requests', () => {
-  it.each([['heater', heaterRequest], ['compressor', compressorRequest]])('a reopened %s request gives the same normalised input', (_, request) => {
+  it.each([
+    ['heater', heaterRequest],
+    ['compressor', compressorRequest],
+  ])('a reopened %s request gives the same normalised input', (_, request) => {
     const input = sizingRequestSchema.parse(request);
     const { values, dropped } = valuesFromInput(input, 'si');
     expect(dropped).toEqual([]);
@@ -75,7 +78,10 @@ describe('form values and requests', () => {
   it('reports a mixture that does not sum to 1 on the mixture', () => {
     const v = defaultValues('si');
     v.gas.mode = 'mixture';
-    v.gas.components = [{ species: 'CH4', fraction: '0.8' }, { species: 'N2', fraction: '0.1' }];
+    v.gas.components = [
+      { species: 'CH4', fraction: '0.8' },
+      { species: 'N2', fraction: '0.1' },
+    ];
     const checked = validateDesk(v);
     expect(!checked.ok && checked.issues.fields['gas.components']).toMatch(/^Mixture: .*sum to 0\.9/);
   });

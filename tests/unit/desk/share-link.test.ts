@@ -6,7 +6,10 @@ import { compressorRequest, heaterRequest } from './fixtures';
 const b64url = (text: string) => Buffer.from(text, 'utf8').toString('base64url');
 
 describe('share links', () => {
-  it.each([['heater', heaterRequest], ['compressor mixture', compressorRequest]])('round-trips a %s request to the same validated input', (_, request) => {
+  it.each([
+    ['heater', heaterRequest],
+    ['compressor mixture', compressorRequest],
+  ])('round-trips a %s request to the same validated input', (_, request) => {
     const decoded = decodeShareParam(encodeShareParam(request));
     expect(decoded).toEqual({ ok: true, input: sizingRequestSchema.parse(request) });
   });
@@ -33,7 +36,13 @@ describe('share links', () => {
 
   it('refuses garbled, truncated or foreign parameters', () => {
     const good = encodeShareParam(heaterRequest);
-    const cases = [good.slice(0, good.length - 7), `${good.slice(0, 20)}!${good.slice(21)}`, good.slice(2), `1.${b64url('not json')}`, '1.'];
+    const cases = [
+      good.slice(0, good.length - 7),
+      `${good.slice(0, 20)}!${good.slice(21)}`,
+      good.slice(2),
+      `1.${b64url('not json')}`,
+      '1.',
+    ];
     for (const param of cases) expect(decodeShareParam(param).ok, param).toBe(false);
     // Bytes that are not UTF-8 are refused rather than decoded into replacement characters.
     expect(decodeShareParam(`1.${Buffer.from([0x7b, 0xff, 0xfe, 0x7d]).toString('base64url')}`).ok).toBe(false);

@@ -36,7 +36,9 @@ describe('plain-text summary', () => {
     const text = buildSummary(r, 'us');
     expect(text).toContain(`Shaft power: ${formatKw(c.shaftPowerKw)} kW`);
     expect(text).toContain(motorText(c.motor));
-    expect(text).toContain(`constant-k ${formatKw(c.constantK.gasPowerKw)} kW, variable-cp ${formatKw(c.variableCp.gasPowerKw)} kW`);
+    expect(text).toContain(
+      `constant-k ${formatKw(c.constantK.gasPowerKw)} kW, variable-cp ${formatKw(c.variableCp.gasPowerKw)} kW`,
+    );
     for (const s of c.variableCp.stages) {
       const t = showTemperature(s.dischargeTemperatureC, 'us');
       expect(t.unit).toBe('°F');

@@ -8,7 +8,10 @@ import { toSi, type QuantityKind } from '@/lib/units';
 
 const atm: SwitchContext = { barometricPressurePa: 101_325, flow: null };
 // Dry air at an ordinary inlet state, for conversions that go through density.
-const airCtx: SwitchContext = { barometricPressurePa: 101_325, flow: { molarMassKgPerKmol: 28.9647, temperatureK: 293.15, pressurePa: 201_325 } };
+const airCtx: SwitchContext = {
+  barometricPressurePa: 101_325,
+  flow: { molarMassKgPerKmol: 28.9647, temperatureK: 293.15, pressurePa: 201_325 },
+};
 const n = (r: ReturnType<typeof switchUnitValue>) => (r.ok ? Number(r.value) : NaN);
 
 describe('switching one field keeps the physical value', () => {
@@ -40,24 +43,50 @@ describe('switching one field keeps the physical value', () => {
   });
 
   it('round-trips between every pair of units of each picker', () => {
-    const samples: Record<string, string> = { flow: '1234.5', temperature: '45.6', pressure: '7.25', barometric: '99.1' };
-    const quantityKind: Record<string, QuantityKind> = { flow: 'flow', temperature: 'temperature', pressure: 'pressure', barometric: 'pressure' };
-    for (const [kind, groups] of Object.entries(UNIT_GROUPS) as [keyof typeof UNIT_GROUPS, (typeof UNIT_GROUPS)[keyof typeof UNIT_GROUPS]][]) {
+    const samples: Record<string, string> = {
+      flow: '1234.5',
+      temperature: '45.6',
+      pressure: '7.25',
+      barometric: '99.1',
+    };
+    const quantityKind: Record<string, QuantityKind> = {
+      flow: 'flow',
+      temperature: 'temperature',
+      pressure: 'pressure',
+      barometric: 'pressure',
+    };
+    for (const [kind, groups] of Object.entries(UNIT_GROUPS) as [
+      keyof typeof UNIT_GROUPS,
+      (typeof UNIT_GROUPS)[keyof typeof UNIT_GROUPS],
+    ][]) {
       const units = groups.flatMap((g) => g.units);
       const from = units[0]!;
       const start = samples[kind]!;
       for (const to of units) {
         const there = switchUnitValue(kind, start, from, to, airCtx);
         expect(there.ok, `${from} -> ${to}`).toBe(true);
-        const siStart = toSi(quantityKind[kind]!, Number(start), from, { barometricPressurePa: 101_325, flow: airCtx.flow! });
+        const siStart = toSi(quantityKind[kind]!, Number(start), from, {
+          barometricPressurePa: 101_325,
+          flow: airCtx.flow!,
+        });
         const siThere = toSi(quantityKind[kind]!, n(there), to, { barometricPressurePa: 101_325, flow: airCtx.flow! });
         expect(Math.abs(siThere / siStart - 1), `${from} -> ${to}`).toBeLessThan(1e-6);
         // Back again from the unrounded figure: exactly the text typed, however many times it is switched.
-        const back = switchUnitValue(kind, there.ok ? there.value : '', to, from, airCtx, there.ok ? there.exact : null);
+        const back = switchUnitValue(
+          kind,
+          there.ok ? there.value : '',
+          to,
+          from,
+          airCtx,
+          there.ok ? there.exact : null,
+        );
         expect(back.ok && back.value, `${to} -> ${from}`).toBe(from === to ? start : String(Number(start)));
         // Back from the rounded text alone (the field was retyped): still the same physical value.
         const retyped = switchUnitValue(kind, there.ok ? there.value : '', to, from, airCtx);
-        const siBack = toSi(quantityKind[kind]!, n(retyped), from, { barometricPressurePa: 101_325, flow: airCtx.flow! });
+        const siBack = toSi(quantityKind[kind]!, n(retyped), from, {
+          barometricPressurePa: 101_325,
+          flow: airCtx.flow!,
+        });
         expect(Math.abs(siBack / siStart - 1), `${to} -> ${from} retyped`).toBeLessThan(1e-6);
       }
     }
@@ -78,7 +107,12 @@ describe('switching the unit system', () => {
     const kind = QUANTITY_FIELDS[path];
     const ctx = switchContextOf(v);
     const qk: QuantityKind = kind === 'barometric' ? 'pressure' : kind;
-    return q.value === '' ? null : toSi(qk, Number(q.value), q.unit, { barometricPressurePa: ctx.barometricPressurePa, flow: ctx.flow ?? undefined });
+    return q.value === ''
+      ? null
+      : toSi(qk, Number(q.value), q.unit, {
+          barometricPressurePa: ctx.barometricPressurePa,
+          flow: ctx.flow ?? undefined,
+        });
   };
 
   it('converts every quantity to the other system and keeps each physical value and its family', () => {

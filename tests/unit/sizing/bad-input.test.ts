@@ -16,27 +16,38 @@ const paths = (input: unknown) => issuesOf(input).map((i) => i.path);
 
 describe('refused input names the field, why, and the allowed range', () => {
   it('negative flow', () => {
-    expect(issuesOf(heaterRequest({ flow: q(-5, 'kg/h') }))).toEqual([{ path: 'flow.value', message: expect.stringMatching(/above 0/) }]);
+    expect(issuesOf(heaterRequest({ flow: q(-5, 'kg/h') }))).toEqual([
+      { path: 'flow.value', message: expect.stringMatching(/above 0/) },
+    ]);
   });
 
   it('temperature below absolute zero', () => {
-    expect(issuesOf(heaterRequest({ outletTemperature: q(-500, 'degF') }))).toEqual([{ path: 'outletTemperature', message: expect.stringMatching(/absolute zero/) }]);
+    expect(issuesOf(heaterRequest({ outletTemperature: q(-500, 'degF') }))).toEqual([
+      { path: 'outletTemperature', message: expect.stringMatching(/absolute zero/) },
+    ]);
   });
 
   it('temperature outside the 200-6000 K property data, with the range in the user unit', () => {
     const [issue] = issuesOf(heaterRequest({ inlet: { temperature: q(-100, 'degC'), pressure: q(1, 'bar') } }));
-    expect(issue).toEqual({ path: 'inlet.temperature', message: expect.stringMatching(/-73\.15 degC to 5726\.85 degC/) });
+    expect(issue).toEqual({
+      path: 'inlet.temperature',
+      message: expect.stringMatching(/-73\.15 degC to 5726\.85 degC/),
+    });
     expect(paths(heaterRequest({ outletTemperature: q(6500, 'K') }))).toEqual(['outletTemperature']);
   });
 
   it('heater outlet not above inlet', () => {
-    expect(issuesOf(heaterRequest({ outletTemperature: q(10, 'degC') }))).toEqual([{ path: 'outletTemperature', message: expect.stringMatching(/above the inlet/) }]);
+    expect(issuesOf(heaterRequest({ outletTemperature: q(10, 'degC') }))).toEqual([
+      { path: 'outletTemperature', message: expect.stringMatching(/above the inlet/) },
+    ]);
   });
 
   it('discharge not above suction, including gauge against the site pressure', () => {
     expect(paths(compressorRequest({ dischargePressure: q(100, 'kPa') }))).toEqual(['dischargePressure']);
     // 0 barg at a 1000 m site is 89.9 kPa: below a 100 kPa suction.
-    expect(paths(compressorRequest({ dischargePressure: q(0, 'barg'), site: { altitudeM: 1000 } }))).toEqual(['dischargePressure']);
+    expect(paths(compressorRequest({ dischargePressure: q(0, 'barg'), site: { altitudeM: 1000 } }))).toEqual([
+      'dischargePressure',
+    ]);
   });
 
   it.each([0, -0.1, 1.01, 80, 'x'])('efficiency %s outside (0, 1]', (eta) => {
@@ -51,18 +62,27 @@ describe('refused input names the field, why, and the allowed range', () => {
   });
 
   it('fractions that do not sum to 1', () => {
-    expect(issuesOf(heaterRequest({ gas: { components: { CH4: 0.9, N2: 0.05 } } }))).toEqual([{ path: 'gas.components', message: expect.stringMatching(/sum to 0\.95.*within 0\.0001/) }]);
+    expect(issuesOf(heaterRequest({ gas: { components: { CH4: 0.9, N2: 0.05 } } }))).toEqual([
+      { path: 'gas.components', message: expect.stringMatching(/sum to 0\.95.*within 0\.0001/) },
+    ]);
   });
 
   it('unknown gas preset and unknown species', () => {
-    expect(issuesOf(heaterRequest({ gas: { preset: 'unobtainium' } }))[0]).toMatchObject({ path: 'gas.preset', message: expect.stringMatching(/allowed: air/) });
+    expect(issuesOf(heaterRequest({ gas: { preset: 'unobtainium' } }))[0]).toMatchObject({
+      path: 'gas.preset',
+      message: expect.stringMatching(/allowed: air/),
+    });
     expect(paths(heaterRequest({ gas: { components: { CH4: 0.5, Kr: 0.5 } } }))).toEqual(['gas.components.Kr']);
   });
 
   it('humid air without humidity, or with both', () => {
     expect(paths(heaterRequest({ gas: { preset: 'humid-air' } }))).toEqual(['gas.relativeHumidityPercent']);
-    expect(paths(heaterRequest({ gas: { preset: 'humid-air', relativeHumidityPercent: 50, dewPoint: q(5, 'degC') } }))).toEqual(['gas.relativeHumidityPercent']);
-    expect(paths(heaterRequest({ gas: { preset: 'air', relativeHumidityPercent: 50 } }))).toEqual(['gas.relativeHumidityPercent']);
+    expect(
+      paths(heaterRequest({ gas: { preset: 'humid-air', relativeHumidityPercent: 50, dewPoint: q(5, 'degC') } })),
+    ).toEqual(['gas.relativeHumidityPercent']);
+    expect(paths(heaterRequest({ gas: { preset: 'air', relativeHumidityPercent: 50 } }))).toEqual([
+      'gas.relativeHumidityPercent',
+    ]);
   });
 
   it('NaN, Infinity and empty text are refused; numeric text is accepted', () => {
@@ -80,22 +100,43 @@ describe('refused input names the field, why, and the allowed range', () => {
   });
 
   it('lists every bad field at once', () => {
-    const found = paths(heaterRequest({ flow: q(0, 'kg/h'), heatLossPercent: 90, designMarginPercent: -1, supply: { voltageV: 5, phases: 2 } }));
-    expect(found.sort()).toEqual(['designMarginPercent', 'flow.value', 'heatLossPercent', 'supply.phases', 'supply.voltageV']);
+    const found = paths(
+      heaterRequest({
+        flow: q(0, 'kg/h'),
+        heatLossPercent: 90,
+        designMarginPercent: -1,
+        supply: { voltageV: 5, phases: 2 },
+      }),
+    );
+    expect(found.sort()).toEqual([
+      'designMarginPercent',
+      'flow.value',
+      'heatLossPercent',
+      'supply.phases',
+      'supply.voltageV',
+    ]);
   });
 
   it('absolute pressure must be above vacuum, also when given as gauge', () => {
-    expect(issuesOf(heaterRequest({ inlet: { temperature: q(20, 'degC'), pressure: q(-1.5, 'barg') } }))[0]).toMatchObject({ path: 'inlet.pressure', message: expect.stringMatching(/above 0 kPa absolute/) });
+    expect(
+      issuesOf(heaterRequest({ inlet: { temperature: q(20, 'degC'), pressure: q(-1.5, 'barg') } }))[0],
+    ).toMatchObject({ path: 'inlet.pressure', message: expect.stringMatching(/above 0 kPa absolute/) });
   });
 
   it('site gives barometric pressure or altitude, not both, within range', () => {
-    expect(paths(heaterRequest({ site: { altitudeM: 500, barometricPressure: q(95, 'kPa') } }))).toEqual(['site.altitudeM']);
+    expect(paths(heaterRequest({ site: { altitudeM: 500, barometricPressure: q(95, 'kPa') } }))).toEqual([
+      'site.altitudeM',
+    ]);
     expect(paths(heaterRequest({ site: { altitudeM: 9000 } }))).toEqual(['site.altitudeM']);
-    expect(paths(heaterRequest({ site: { barometricPressure: q(5, 'barg') } }))).toEqual(['site.barometricPressure.unit']);
+    expect(paths(heaterRequest({ site: { barometricPressure: q(5, 'barg') } }))).toEqual([
+      'site.barometricPressure.unit',
+    ]);
   });
 
   it('service and body shape', () => {
-    expect(issuesOf({ service: 'pump' })).toEqual([{ path: 'service', message: expect.stringMatching(/heater.*compressor/) }]);
+    expect(issuesOf({ service: 'pump' })).toEqual([
+      { path: 'service', message: expect.stringMatching(/heater.*compressor/) },
+    ]);
     expect(paths(null)).toEqual(['']);
     expect(paths([1, 2])).toEqual(['']);
   });
@@ -112,15 +153,26 @@ describe('refused input names the field, why, and the allowed range', () => {
   // Ideal gas: cp - cv = R, so k = cp/(cp - R). For air (R 287.05 J/(kg K)) k <= 1.8 needs cp >= 2.25 R = 645.9.
   it('a cp override may not imply k above 1.8', () => {
     const low = issuesOf(compressorRequest({ cpJPerKgK: 300 }));
-    expect(low).toEqual([{ path: 'cpJPerKgK', message: expect.stringMatching(/at least 645\.\d J\/\(kg K\).*k = cp\/\(cp - R\) above 1\.8/) }]);
+    expect(low).toEqual([
+      {
+        path: 'cpJPerKgK',
+        message: expect.stringMatching(/at least 645\.\d J\/\(kg K\).*k = cp\/\(cp - R\) above 1\.8/),
+      },
+    ]);
     expect(paths(compressorRequest({ cpJPerKgK: 640 }))).toEqual(['cpJPerKgK']);
-    expect((calculate(compressorRequest({ cpJPerKgK: 650 })) as CompressorResult).compressor.constantK.stages[0]?.k).toBeCloseTo(650 / (650 - 287.05), 2);
+    expect(
+      (calculate(compressorRequest({ cpJPerKgK: 650 })) as CompressorResult).compressor.constantK.stages[0]?.k,
+    ).toBeCloseTo(650 / (650 - 287.05), 2);
   });
 
   // Air table figures cp 1.005 kJ/(kg K), k 1.400 (standard thermodynamics texts [mem]) agree with R to 0.03 %.
   it('k and cp given together must agree with the gas constant', () => {
-    expect((calculate(compressorRequest({ k: 1.4, cpJPerKgK: 1005 })) as CompressorResult).compressor.constantK.stages[0]?.k).toBe(1.4);
+    expect(
+      (calculate(compressorRequest({ k: 1.4, cpJPerKgK: 1005 })) as CompressorResult).compressor.constantK.stages[0]?.k,
+    ).toBe(1.4);
     const clash = issuesOf(compressorRequest({ k: 1.667, cpJPerKgK: 1005 }));
-    expect(clash).toEqual([{ path: 'cpJPerKgK', message: expect.stringMatching(/imply R = .* 402\.1 J\/\(kg K\).*R = 287\.05/) }]);
+    expect(clash).toEqual([
+      { path: 'cpJPerKgK', message: expect.stringMatching(/imply R = .* 402\.1 J\/\(kg K\).*R = 287\.05/) },
+    ]);
   });
 });

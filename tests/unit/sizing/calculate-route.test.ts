@@ -7,7 +7,13 @@ import { GET as getOpenApi } from '@/app/api/v1/openapi/route';
 import { heaterRequest } from './requests';
 
 const post = (body: string, headers: Record<string, string> = {}) =>
-  POST(new Request('http://localhost/api/v1/calculate', { method: 'POST', body, headers: { 'content-type': 'application/json', ...headers } }));
+  POST(
+    new Request('http://localhost/api/v1/calculate', {
+      method: 'POST',
+      body,
+      headers: { 'content-type': 'application/json', ...headers },
+    }),
+  );
 
 describe('POST /api/v1/calculate', () => {
   it('answers 200 with the result', async () => {
@@ -48,7 +54,9 @@ describe('GET /api/v1/openapi', () => {
     const doc = await (await getOpenApi()).json();
     expect(doc.openapi).toBe('3.1.0');
     const request = doc.components.schemas.SizingRequest;
-    expect(request.oneOf.map((o: { properties: { service: { const: string } } }) => o.properties.service.const)).toEqual(['heater', 'compressor']);
+    expect(
+      request.oneOf.map((o: { properties: { service: { const: string } } }) => o.properties.service.const),
+    ).toEqual(['heater', 'compressor']);
     const heater = request.oneOf[0];
     expect(heater.required).toEqual(expect.arrayContaining(['service', 'gas', 'flow', 'inlet', 'outletTemperature']));
     expect(heater.properties.flow.properties.unit.enum).toContain('Nm3/h');

@@ -31,74 +31,137 @@ function outcome(input: unknown): 'ok' | 'refused' {
 
 describe('calculate never returns NaN and never throws anything but SizingInputError', () => {
   it('for arbitrary JSON', () => {
-    fc.assert(fc.property(fc.jsonValue(), (json) => { outcome(json); }), { numRuns: 500 });
+    fc.assert(
+      fc.property(fc.jsonValue(), (json) => {
+        outcome(json);
+      }),
+      { numRuns: 500 },
+    );
   });
 
   it('for arbitrary JSON merged into valid requests (mostly-valid bodies)', () => {
     const base = fc.constantFrom(heaterRequest(), compressorRequest());
-    fc.assert(fc.property(base, fc.dictionary(fc.constantFrom('flow', 'inlet', 'gas', 'stages', 'outletTemperature', 'dischargePressure', 'heatLossPercent', 'site', 'k'), fc.jsonValue()), (b, patch) => {
-      outcome({ ...b, ...patch });
-    }), { numRuns: 500 });
+    fc.assert(
+      fc.property(
+        base,
+        fc.dictionary(
+          fc.constantFrom(
+            'flow',
+            'inlet',
+            'gas',
+            'stages',
+            'outletTemperature',
+            'dischargePressure',
+            'heatLossPercent',
+            'site',
+            'k',
+          ),
+          fc.jsonValue(),
+        ),
+        (b, patch) => {
+          outcome({ ...b, ...patch });
+        },
+      ),
+      { numRuns: 500 },
+    );
   });
 
   const presets = GAS_PRESETS.filter((p) => p.moleFractions).map((p) => p.id);
 
   it('for random duty points in any units: results are finite, heaters add heat, units do not matter', () => {
     let sized = 0;
-    fc.assert(fc.property(
-      fc.constantFrom(...presets), fc.double({ min: 1e-3, max: 100, noNaN: true }), fc.double({ min: 200, max: 2500, noNaN: true }),
-      fc.double({ min: 1, max: 3000, noNaN: true }), fc.double({ min: 2e4, max: 5e6, noNaN: true }),
-      fc.constantFrom(...FLOW_UNITS), fc.constantFrom(...TEMPERATURE_UNITS), fc.constantFrom(...PRESSURE_UNITS),
-      (preset, kgPerS, t1, dt, pa, flowUnit, tUnit, pUnit) => {
-        const m = presetGas(preset)!.molarMassKgPerKmol;
-        const ctx = { flow: { molarMassKgPerKmol: m, temperatureK: t1, pressurePa: pa } };
-        const input = heaterRequest({
-          gas: { preset },
-          flow: { value: fromSi('flow', kgPerS, flowUnit, ctx), unit: flowUnit },
-          inlet: { temperature: { value: fromSi('temperature', t1, tUnit), unit: tUnit }, pressure: { value: fromSi('pressure', pa, pUnit), unit: pUnit } },
-          outletTemperature: { value: fromSi('temperature', Math.min(t1 + dt, 6000), tUnit), unit: tUnit },
-        });
-        if (outcome(input) === 'ok') {
-          sized++;
-          const r = calculate(input) as SizingResult & { service: 'heater' };
-          expect(r.massFlowKgPerS / kgPerS).toBeCloseTo(1, 9);
-          expect(r.heater.absorbedDutyKw).toBeGreaterThan(0);
-          expect(r.heater.designDutyKw).toBeGreaterThanOrEqual(r.heater.absorbedDutyKw);
-        }
-      },
-    ), { numRuns: 300 });
+    fc.assert(
+      fc.property(
+        fc.constantFrom(...presets),
+        fc.double({ min: 1e-3, max: 100, noNaN: true }),
+        fc.double({ min: 200, max: 2500, noNaN: true }),
+        fc.double({ min: 1, max: 3000, noNaN: true }),
+        fc.double({ min: 2e4, max: 5e6, noNaN: true }),
+        fc.constantFrom(...FLOW_UNITS),
+        fc.constantFrom(...TEMPERATURE_UNITS),
+        fc.constantFrom(...PRESSURE_UNITS),
+        (preset, kgPerS, t1, dt, pa, flowUnit, tUnit, pUnit) => {
+          const m = presetGas(preset)!.molarMassKgPerKmol;
+          const ctx = { flow: { molarMassKgPerKmol: m, temperatureK: t1, pressurePa: pa } };
+          const input = heaterRequest({
+            gas: { preset },
+            flow: { value: fromSi('flow', kgPerS, flowUnit, ctx), unit: flowUnit },
+            inlet: {
+              temperature: { value: fromSi('temperature', t1, tUnit), unit: tUnit },
+              pressure: { value: fromSi('pressure', pa, pUnit), unit: pUnit },
+            },
+            outletTemperature: { value: fromSi('temperature', Math.min(t1 + dt, 6000), tUnit), unit: tUnit },
+          });
+          if (outcome(input) === 'ok') {
+            sized++;
+            const r = calculate(input) as SizingResult & { service: 'heater' };
+            expect(r.massFlowKgPerS / kgPerS).toBeCloseTo(1, 9);
+            expect(r.heater.absorbedDutyKw).toBeGreaterThan(0);
+            expect(r.heater.designDutyKw).toBeGreaterThanOrEqual(r.heater.absorbedDutyKw);
+          }
+        },
+      ),
+      { numRuns: 300 },
+    );
     expect(sized).toBeGreaterThan(250); // the generator is meant to produce valid duty points
   });
 
   it('for random compressor duties: discharge is hotter than suction and intercoolers number N-1', () => {
-    fc.assert(fc.property(
-      fc.constantFrom(...presets), fc.integer({ min: 1, max: 6 }), fc.double({ min: 1.001, max: 200, noNaN: true }),
-      fc.double({ min: 0.3, max: 1, noNaN: true }), fc.constantFrom('constant-k', 'variable-cp'),
-      (preset, stages, ratio, eta, method) => {
-        const input = compressorRequest({ gas: { preset }, stages, dischargePressure: { value: 100 * ratio, unit: 'kPa' }, isentropicEfficiency: eta, method });
-        if (outcome(input) === 'ok') {
-          const c = (calculate(input) as SizingResult & { service: 'compressor' }).compressor;
-          for (const m of [c.constantK, c.variableCp]) {
-            expect(m.intercoolerDutiesKw).toHaveLength(stages - 1);
-            for (const s of m.stages) expect(s.dischargeTemperatureC).toBeGreaterThan(s.inletTemperatureC);
+    fc.assert(
+      fc.property(
+        fc.constantFrom(...presets),
+        fc.integer({ min: 1, max: 6 }),
+        fc.double({ min: 1.001, max: 200, noNaN: true }),
+        fc.double({ min: 0.3, max: 1, noNaN: true }),
+        fc.constantFrom('constant-k', 'variable-cp'),
+        (preset, stages, ratio, eta, method) => {
+          const input = compressorRequest({
+            gas: { preset },
+            stages,
+            dischargePressure: { value: 100 * ratio, unit: 'kPa' },
+            isentropicEfficiency: eta,
+            method,
+          });
+          if (outcome(input) === 'ok') {
+            const c = (calculate(input) as SizingResult & { service: 'compressor' }).compressor;
+            for (const m of [c.constantK, c.variableCp]) {
+              expect(m.intercoolerDutiesKw).toHaveLength(stages - 1);
+              for (const s of m.stages) expect(s.dischargeTemperatureC).toBeGreaterThan(s.inletTemperatureC);
+            }
+            expect(c.shaftPowerKw).toBeGreaterThan(c.gasPowerKw);
           }
-          expect(c.shaftPowerKw).toBeGreaterThan(c.gasPowerKw);
-        }
-      },
-    ), { numRuns: 300 });
+        },
+      ),
+      { numRuns: 300 },
+    );
   });
 });
 
 describe('validated and fast paths agree', () => {
   it('calculateCore on the parsed input equals calculate', () => {
-    for (const input of [heaterRequest(), compressorRequest({ stages: 3, dischargePressure: { value: 20, unit: 'bar' } })]) {
+    for (const input of [
+      heaterRequest(),
+      compressorRequest({ stages: 3, dischargePressure: { value: 20, unit: 'bar' } }),
+    ]) {
       expect(calculateCore(sizingRequestSchema.parse(input))).toEqual(calculate(input));
     }
   });
 
   it('units on input do not change the physics: the same duty point in SI and US units', () => {
-    const si = calculate(heaterRequest({ flow: { value: 1, unit: 'kg/s' }, inlet: { temperature: { value: 20, unit: 'degC' }, pressure: { value: 2, unit: 'barg' } }, outletTemperature: { value: 200, unit: 'degC' } })) as SizingResult & { service: 'heater' };
-    const us = calculate(heaterRequest({ flow: { value: 3600 / 0.45359237, unit: 'lb/h' }, inlet: { temperature: { value: 68, unit: 'degF' }, pressure: { value: 2 * 14.503773773, unit: 'psig' } }, outletTemperature: { value: 392, unit: 'degF' } })) as SizingResult & { service: 'heater' };
+    const si = calculate(
+      heaterRequest({
+        flow: { value: 1, unit: 'kg/s' },
+        inlet: { temperature: { value: 20, unit: 'degC' }, pressure: { value: 2, unit: 'barg' } },
+        outletTemperature: { value: 200, unit: 'degC' },
+      }),
+    ) as SizingResult & { service: 'heater' };
+    const us = calculate(
+      heaterRequest({
+        flow: { value: 3600 / 0.45359237, unit: 'lb/h' },
+        inlet: { temperature: { value: 68, unit: 'degF' }, pressure: { value: 2 * 14.503773773, unit: 'psig' } },
+        outletTemperature: { value: 392, unit: 'degF' },
+      }),
+    ) as SizingResult & { service: 'heater' };
     expect(us.heater.absorbedDutyKw).toBeCloseTo(si.heater.absorbedDutyKw, 6);
     expect(us.inletActualFlowM3PerH).toBeCloseTo(si.inletActualFlowM3PerH, 4);
   });

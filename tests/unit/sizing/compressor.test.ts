@@ -8,7 +8,11 @@ const kelvin = (c: number) => c + 273.15;
 describe('constant-k method', () => {
   // Air, 300 K, r 8, k 1.4: T2s = 543.4 K [calc, ENGINEERING.md].
   it('air at 300 K, r 8, k 1.4 gives T2s = 543.4 K', () => {
-    const r = size({ inlet: { temperature: q(300, 'K'), pressure: q(1, 'bar') }, dischargePressure: q(8, 'bar'), k: 1.4 });
+    const r = size({
+      inlet: { temperature: q(300, 'K'), pressure: q(1, 'bar') },
+      dischargePressure: q(8, 'bar'),
+      k: 1.4,
+    });
     expect(kelvin(r.compressor.constantK.stages[0]!.isentropicDischargeTemperatureC)).toBeCloseTo(543.4, 1);
   });
 
@@ -40,8 +44,14 @@ describe('constant-k method', () => {
 describe('variable-cp method', () => {
   // Ideal-gas air table relative pressures [mem: Pr(300 K) 1.3860; Pr(540 K) 11.10, Pr(760 K) 39.27, Pr(780 K) 43.35;
   // h(760 K) 778.18, h(780 K) 800.03, h(300 K) 300.19 kJ/kg]: T2s where Pr2 = r Pr1, interpolated.
-  it.each([[8, 540, 244.16], [30, 771.3, 490.4]])('air 300 K, r %i, eta 1: T2s %f K within 1.5 K and work %f kJ/kg within 0.5 %%', (ratio, t2s, w) => {
-    const c = size({ inlet: { temperature: q(300, 'K'), pressure: q(100, 'kPa') }, dischargePressure: q(100 * ratio, 'kPa') }).compressor;
+  it.each([
+    [8, 540, 244.16],
+    [30, 771.3, 490.4],
+  ])('air 300 K, r %i, eta 1: T2s %f K within 1.5 K and work %f kJ/kg within 0.5 %%', (ratio, t2s, w) => {
+    const c = size({
+      inlet: { temperature: q(300, 'K'), pressure: q(100, 'kPa') },
+      dischargePressure: q(100 * ratio, 'kPa'),
+    }).compressor;
     expect(Math.abs(kelvin(c.variableCp.stages[0]!.isentropicDischargeTemperatureC) - t2s)).toBeLessThan(1.5);
     expect(Math.abs(c.variableCp.specificWorkKjPerKg / w - 1)).toBeLessThan(0.005);
   });
@@ -55,16 +65,28 @@ describe('variable-cp method', () => {
 
   // Constant k at the inlet runs hot at high ratio [calc, ENGINEERING.md: discharge temperatures several K to ~20 K high for air, r 8-30].
   it('constant-k overstates the discharge temperature, more so at high ratio', () => {
-    const low = size({ inlet: { temperature: q(300, 'K'), pressure: q(1, 'bar') }, dischargePressure: q(8, 'bar') }).compressor;
-    const high = size({ inlet: { temperature: q(300, 'K'), pressure: q(1, 'bar') }, dischargePressure: q(30, 'bar') }).compressor;
-    const dt = (c: typeof low) => c.constantK.stages[0]!.dischargeTemperatureC - c.variableCp.stages[0]!.dischargeTemperatureC;
+    const low = size({
+      inlet: { temperature: q(300, 'K'), pressure: q(1, 'bar') },
+      dischargePressure: q(8, 'bar'),
+    }).compressor;
+    const high = size({
+      inlet: { temperature: q(300, 'K'), pressure: q(1, 'bar') },
+      dischargePressure: q(30, 'bar'),
+    }).compressor;
+    const dt = (c: typeof low) =>
+      c.constantK.stages[0]!.dischargeTemperatureC - c.variableCp.stages[0]!.dischargeTemperatureC;
     expect(dt(low)).toBeGreaterThan(2);
     expect(dt(high)).toBeGreaterThan(dt(low));
     expect(Math.abs(low.methodDifferencePercent)).toBeLessThan(0.5);
   });
 
   it('intercooler duties integrate h and the energy balance closes', () => {
-    const c = size({ stages: 3, isentropicEfficiency: 0.8, aftercoolerOutletTemperature: q(20, 'degC'), dischargePressure: q(2000, 'kPa') }).compressor;
+    const c = size({
+      stages: 3,
+      isentropicEfficiency: 0.8,
+      aftercoolerOutletTemperature: q(20, 'degC'),
+      dischargePressure: q(2000, 'kPa'),
+    }).compressor;
     const v = c.variableCp;
     expect(v.intercoolerDutiesKw).toHaveLength(2);
     // Cooled back to suction each time: the gas leaves as it came, so all work is rejected in the coolers.
@@ -97,10 +119,22 @@ describe('compressor train details', () => {
   });
 
   it('suggests the fewest stages keeping every discharge under the 150 °C default [mem: API 618]', () => {
-    const c = size({ isentropicEfficiency: 0.8, dischargePressure: q(2000, 'kPa'), intercoolerOutletTemperature: q(35, 'degC') }).compressor;
+    const c = size({
+      isentropicEfficiency: 0.8,
+      dischargePressure: q(2000, 'kPa'),
+      intercoolerOutletTemperature: q(35, 'degC'),
+    }).compressor;
     expect(c.dischargeTemperatureLimitC).toBeCloseTo(150, 9);
     const n = c.suggestedStages!;
-    const check = (stages: number) => Math.max(...size({ isentropicEfficiency: 0.8, dischargePressure: q(2000, 'kPa'), intercoolerOutletTemperature: q(35, 'degC'), stages }).compressor.variableCp.stages.map((s) => s.dischargeTemperatureC));
+    const check = (stages: number) =>
+      Math.max(
+        ...size({
+          isentropicEfficiency: 0.8,
+          dischargePressure: q(2000, 'kPa'),
+          intercoolerOutletTemperature: q(35, 'degC'),
+          stages,
+        }).compressor.variableCp.stages.map((s) => s.dischargeTemperatureC),
+      );
     expect(check(n)).toBeLessThanOrEqual(150);
     expect(check(n - 1)).toBeGreaterThan(150);
   });
@@ -122,7 +156,10 @@ describe('compressor train details', () => {
       expect.unreachable();
     } catch (err) {
       expect(err).toBeInstanceOf(SizingInputError);
-      expect((err as SizingInputError).issues[0]).toMatchObject({ path: 'dischargePressure', message: expect.stringMatching(/6000 K/) });
+      expect((err as SizingInputError).issues[0]).toMatchObject({
+        path: 'dischargePressure',
+        message: expect.stringMatching(/6000 K/),
+      });
     }
   });
 });

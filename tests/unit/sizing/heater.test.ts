@@ -3,7 +3,12 @@ import psychrolib from 'psychrolib';
 import { describe, expect, it } from 'vitest';
 import { presetGas } from '@/lib/thermo';
 import {
-  DEFAULT_HEATER_RATINGS_KW, absorbedDutyKw, calculate, sizeHeater, type HeaterCase, type HeaterResult,
+  DEFAULT_HEATER_RATINGS_KW,
+  absorbedDutyKw,
+  calculate,
+  sizeHeater,
+  type HeaterCase,
+  type HeaterResult,
 } from '@/lib/sizing';
 import { heaterRequest, q } from './requests';
 
@@ -19,25 +24,41 @@ describe('heater duty', () => {
 
   // Air tables: h(1000 K) - h(300 K) = 745.85 kJ/kg [mem: ideal-gas air tables].
   it('air 1 kg/s from 300 to 1000 K absorbs 745.85 kW within 0.1 %', () => {
-    const r = heater({ flow: q(1, 'kg/s'), inlet: { temperature: q(300, 'K'), pressure: q(1, 'bar') }, outletTemperature: q(1000, 'K') });
+    const r = heater({
+      flow: q(1, 'kg/s'),
+      inlet: { temperature: q(300, 'K'), pressure: q(1, 'bar') },
+      outletTemperature: q(1000, 'K'),
+    });
     expect(Math.abs(r.heater.absorbedDutyKw / 745.85 - 1)).toBeLessThan(1e-3);
   });
 
   // Humid air: ASHRAE moist-air enthalpy h = 1.006 t + W (2501 + 1.86 t) kJ/kg dry air [pub: ASHRAE HoF 2017 ch. 1 eq. 32, via psychrolib].
   it('humid air heating duty agrees with the ASHRAE moist-air enthalpy within 0.5 %', () => {
     psychrolib.SetUnitSystem(psychrolib.SI);
-    const r = heater({ gas: { preset: 'humid-air', relativeHumidityPercent: 70 }, inlet: { temperature: q(25, 'degC'), pressure: q(101.325, 'kPa') }, outletTemperature: q(95, 'degC'), flow: q(1, 'kg/s') });
+    const r = heater({
+      gas: { preset: 'humid-air', relativeHumidityPercent: 70 },
+      inlet: { temperature: q(25, 'degC'), pressure: q(101.325, 'kPa') },
+      outletTemperature: q(95, 'degC'),
+      flow: q(1, 'kg/s'),
+    });
     const w = psychrolib.GetHumRatioFromRelHum(25, 0.7, 101_325);
     const dhPerKgDry = (psychrolib.GetMoistAirEnthalpy(95, w) - psychrolib.GetMoistAirEnthalpy(25, w)) / 1000;
     expect(Math.abs(r.heater.absorbedDutyKw / (dhPerKgDry / (1 + w)) - 1)).toBeLessThan(0.005);
   });
 
   // With cp at the mean temperature the shortcut is within about 0.5 % for a 200 K rise [calc, ENGINEERING.md].
-  it.each(['air', 'oxygen', 'carbon-dioxide', 'methane', 'propane'])('%s: average-cp estimate within 0.5 %% for 300 -> 500 K', (gas) => {
-    const r = heater({ gas: { preset: gas }, inlet: { temperature: q(300, 'K'), pressure: q(1, 'bar') }, outletTemperature: q(500, 'K') });
-    expect(Math.abs(r.heater.averageCpDifferencePercent)).toBeLessThan(0.5);
-    expect(r.heater.averageCpDutyKw).toBeCloseTo(r.massFlowKgPerS * r.heater.cpMeanJPerKgK * 200 / 1000, 9);
-  });
+  it.each(['air', 'oxygen', 'carbon-dioxide', 'methane', 'propane'])(
+    '%s: average-cp estimate within 0.5 %% for 300 -> 500 K',
+    (gas) => {
+      const r = heater({
+        gas: { preset: gas },
+        inlet: { temperature: q(300, 'K'), pressure: q(1, 'bar') },
+        outletTemperature: q(500, 'K'),
+      });
+      expect(Math.abs(r.heater.averageCpDifferencePercent)).toBeLessThan(0.5);
+      expect(r.heater.averageCpDutyKw).toBeCloseTo((r.massFlowKgPerS * r.heater.cpMeanJPerKgK * 200) / 1000, 9);
+    },
+  );
 
   it('design duty = absorbed x (1 + loss %) x (1 + margin %), and picks the next catalogue rating', () => {
     const r = heater({ heatLossPercent: 5, designMarginPercent: 10 });
@@ -75,22 +96,39 @@ describe('heater properties (fast-check)', () => {
   const t = fc.double({ min: 200, max: 6000, noNaN: true });
 
   it('energy balance: duty 1->2 plus 2->3 equals duty 1->3', () => {
-    fc.assert(fc.property(t, t, t, fc.double({ min: 1e-3, max: 1e3, noNaN: true }), (a, b, c, m) => {
-      const sum = absorbedDutyKw(air, m, a, b) + absorbedDutyKw(air, m, b, c);
-      expect(sum).toBeCloseTo(absorbedDutyKw(air, m, a, c), 6);
-    }));
+    fc.assert(
+      fc.property(t, t, t, fc.double({ min: 1e-3, max: 1e3, noNaN: true }), (a, b, c, m) => {
+        const sum = absorbedDutyKw(air, m, a, b) + absorbedDutyKw(air, m, b, c);
+        expect(sum).toBeCloseTo(absorbedDutyKw(air, m, a, c), 6);
+      }),
+    );
   });
 
   it('duty rises with flow and with temperature rise', () => {
-    fc.assert(fc.property(t, fc.double({ min: 1, max: 2000, noNaN: true }), fc.double({ min: 0.01, max: 100, noNaN: true }), (t1, dt, m) => {
-      fc.pre(t1 + 2 * dt <= 6000);
-      const base: HeaterCase = {
-        gas: air, massFlowKgPerS: m, inletTemperatureK: t1, outletTemperatureK: t1 + dt, pressurePa: 1e5,
-        heatLossPercent: 0, designMarginPercent: 0, voltageV: 400, phases: 3, ratingsKw: DEFAULT_HEATER_RATINGS_KW,
-      };
-      const d = sizeHeater(base).absorbedDutyKw;
-      expect(sizeHeater({ ...base, massFlowKgPerS: 2 * m }).absorbedDutyKw).toBeGreaterThan(d);
-      expect(sizeHeater({ ...base, outletTemperatureK: t1 + 2 * dt }).absorbedDutyKw).toBeGreaterThan(d);
-    }));
+    fc.assert(
+      fc.property(
+        t,
+        fc.double({ min: 1, max: 2000, noNaN: true }),
+        fc.double({ min: 0.01, max: 100, noNaN: true }),
+        (t1, dt, m) => {
+          fc.pre(t1 + 2 * dt <= 6000);
+          const base: HeaterCase = {
+            gas: air,
+            massFlowKgPerS: m,
+            inletTemperatureK: t1,
+            outletTemperatureK: t1 + dt,
+            pressurePa: 1e5,
+            heatLossPercent: 0,
+            designMarginPercent: 0,
+            voltageV: 400,
+            phases: 3,
+            ratingsKw: DEFAULT_HEATER_RATINGS_KW,
+          };
+          const d = sizeHeater(base).absorbedDutyKw;
+          expect(sizeHeater({ ...base, massFlowKgPerS: 2 * m }).absorbedDutyKw).toBeGreaterThan(d);
+          expect(sizeHeater({ ...base, outletTemperatureK: t1 + 2 * dt }).absorbedDutyKw).toBeGreaterThan(d);
+        },
+      ),
+    );
   });
 });

@@ -6,9 +6,13 @@ describe('standard motor ratings', () => {
   it.each([0.75, 1.1, 5.5, 18.5, 37, 75, 132, 315, 355, 1000])('%f kW is in the IEC series', (kw) => {
     expect(IEC_MOTOR_RATINGS_KW).toContain(kw);
   });
-  it.each([1.2, 6, 100, 125, 300])('%f kW is not an IEC rating', (kw) => expect(IEC_MOTOR_RATINGS_KW).not.toContain(kw));
+  it.each([1.2, 6, 100, 125, 300])('%f kW is not an IEC rating', (kw) =>
+    expect(IEC_MOTOR_RATINGS_KW).not.toContain(kw),
+  );
   // NEMA MG 1 hp series [mem, ENGINEERING.md].
-  it.each([1, 1.5, 7.5, 25, 60, 125, 350, 500])('%f hp is in the NEMA series', (hp) => expect(NEMA_MOTOR_RATINGS_HP).toContain(hp));
+  it.each([1, 1.5, 7.5, 25, 60, 125, 350, 500])('%f hp is in the NEMA series', (hp) =>
+    expect(NEMA_MOTOR_RATINGS_HP).toContain(hp),
+  );
   it.each([35, 70, 110, 175])('%f hp is not a NEMA rating', (hp) => expect(NEMA_MOTOR_RATINGS_HP).not.toContain(hp));
 
   it('series are ascending', () => {

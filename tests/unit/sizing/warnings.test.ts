@@ -8,7 +8,10 @@ const find = (r: SizingResult, code: string) => r.warnings.find((w) => w.code ==
 describe('warnings as data', () => {
   it('always carry the preliminary note, last', () => {
     for (const r of [calculate(heaterRequest()), calculate(compressorRequest())]) {
-      expect(r.warnings.at(-1)).toMatchObject({ code: 'preliminary', message: expect.stringMatching(/qualified engineer.*local codes/) });
+      expect(r.warnings.at(-1)).toMatchObject({
+        code: 'preliminary',
+        message: expect.stringMatching(/qualified engineer.*local codes/),
+      });
       for (const w of r.warnings) expect(['info', 'caution', 'warning', 'danger']).toContain(w.severity);
     }
   });
@@ -29,7 +32,9 @@ describe('warnings as data', () => {
   it('oxygen service and fuel-oxidant mixtures', () => {
     expect(find(calculate(heaterRequest({ gas: { preset: 'oxygen' } })), 'oxygen-service')?.severity).toBe('danger');
     expect(codes(calculate(heaterRequest()))).not.toContain('oxygen-service');
-    expect(codes(calculate(heaterRequest({ gas: { components: { CH4: 0.5, O2: 0.5 } } })))).toContain('fuel-oxidant-mixture');
+    expect(codes(calculate(heaterRequest({ gas: { components: { CH4: 0.5, O2: 0.5 } } })))).toContain(
+      'fuel-oxidant-mixture',
+    );
   });
 
   it('hydrogen, and its lower default discharge limit of 135 °C [mem: API 618]', () => {
@@ -42,26 +47,58 @@ describe('warnings as data', () => {
     const r = calculate(compressorRequest({ dischargePressure: q(1200, 'kPa'), isentropicEfficiency: 0.75 }));
     expect(find(r, 'high-discharge-temperature')?.message).toMatch(/stages would meet it/);
     expect(codes(r)).toContain('high-stage-ratio');
-    expect(codes(calculate(compressorRequest({ dischargePressure: q(300, 'kPa') })))).not.toContain('high-discharge-temperature');
+    expect(codes(calculate(compressorRequest({ dischargePressure: q(300, 'kPa') })))).not.toContain(
+      'high-discharge-temperature',
+    );
   });
 
-  it('ideal gas doubtful near the CO2 critical point, not for air at 1 atm [Kay\'s rule, Tc/Pc from standard tables]', () => {
-    const co2 = calculate(heaterRequest({ gas: { preset: 'carbon-dioxide' }, inlet: { temperature: q(35, 'degC'), pressure: q(70, 'bar') }, outletTemperature: q(60, 'degC') }));
+  it("ideal gas doubtful near the CO2 critical point, not for air at 1 atm [Kay's rule, Tc/Pc from standard tables]", () => {
+    const co2 = calculate(
+      heaterRequest({
+        gas: { preset: 'carbon-dioxide' },
+        inlet: { temperature: q(35, 'degC'), pressure: q(70, 'bar') },
+        outletTemperature: q(60, 'degC'),
+      }),
+    );
     expect(find(co2, 'ideal-gas-doubtful')?.severity).toBe('warning');
     expect(codes(calculate(heaterRequest()))).not.toContain('ideal-gas-doubtful');
-    const ng = calculate(compressorRequest({ gas: { preset: 'natural-gas' }, dischargePressure: q(40, 'bar'), stages: 3, isentropicEfficiency: 0.8 }));
+    const ng = calculate(
+      compressorRequest({
+        gas: { preset: 'natural-gas' },
+        dischargePressure: q(40, 'bar'),
+        stages: 3,
+        isentropicEfficiency: 0.8,
+      }),
+    );
     expect(codes(ng)).toContain('ideal-gas-doubtful');
   });
 
   it('condensation when steam or humid air reaches saturation', () => {
-    const steam = calculate(heaterRequest({ gas: { preset: 'steam' }, inlet: { temperature: q(100, 'degC'), pressure: q(2, 'bar') }, outletTemperature: q(200, 'degC') }));
+    const steam = calculate(
+      heaterRequest({
+        gas: { preset: 'steam' },
+        inlet: { temperature: q(100, 'degC'), pressure: q(2, 'bar') },
+        outletTemperature: q(200, 'degC'),
+      }),
+    );
     expect(find(steam, 'condensation')?.message).toMatch(/heater inlet/);
-    const wet = calculate(compressorRequest({ gas: { preset: 'humid-air', relativeHumidityPercent: 80 }, inlet: { temperature: q(30, 'degC'), pressure: q(1, 'bar') }, dischargePressure: q(8, 'bar'), stages: 2, intercoolerOutletTemperature: q(35, 'degC'), isentropicEfficiency: 0.8 }));
+    const wet = calculate(
+      compressorRequest({
+        gas: { preset: 'humid-air', relativeHumidityPercent: 80 },
+        inlet: { temperature: q(30, 'degC'), pressure: q(1, 'bar') },
+        dischargePressure: q(8, 'bar'),
+        stages: 2,
+        intercoolerOutletTemperature: q(35, 'degC'),
+        isentropicEfficiency: 0.8,
+      }),
+    );
     expect(find(wet, 'condensation')?.message).toMatch(/stage 2 inlet/);
   });
 
   it('heater safety controls and hot surfaces on every heater', () => {
     const r = calculate(heaterRequest());
-    expect(codes(r)).toEqual(expect.arrayContaining(['heater-safety-controls', 'hot-surface', 'temperature-class', 'supply-voltage']));
+    expect(codes(r)).toEqual(
+      expect.arrayContaining(['heater-safety-controls', 'hot-surface', 'temperature-class', 'supply-voltage']),
+    );
   });
 });

@@ -5,7 +5,7 @@ import { compressorRequest, heaterRequest } from '../sizing/requests';
 
 // Saved sizings are JSON round trips of the engine's input and result; the record page shows them with
 // the desk's breakdown only when their shape is one this engine knows.
-const roundTrip = <T,>(v: T): T => JSON.parse(JSON.stringify(v)) as T;
+const roundTrip = <T>(v: T): T => JSON.parse(JSON.stringify(v)) as T;
 
 describe('reading a saved sizing for display', () => {
   it('accepts what the engine saved, for both services, and keeps the saved figures', () => {

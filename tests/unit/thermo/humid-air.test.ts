@@ -17,13 +17,19 @@ describe('saturation pressure of water', () => {
   });
 
   // Saturation pressures [mem: IAPWS-IF97 steam tables]: 100 °C 101.418 kPa, 250 °C 3.9762 MPa, 300 °C 8.5879 MPa.
-  it.each([[100, 101_418], [250, 3_976_200], [300, 8_587_900]])('Wagner-Pruss at %i °C gives %i Pa within 0.02 %%', (c, pa) => {
+  it.each([
+    [100, 101_418],
+    [250, 3_976_200],
+    [300, 8_587_900],
+  ])('Wagner-Pruss at %i °C gives %i Pa within 0.02 %%', (c, pa) => {
     expect(Math.abs(saturationPressureWagnerPrussPa(c + 273.15) / pa - 1)).toBeLessThan(2e-4);
   });
 
   it('the two formulations agree within 0.1 % where they overlap', () => {
     for (const c of [20, 80, 150, 199]) {
-      expect(Math.abs(saturationPressureWagnerPrussPa(c + 273.15) / saturationPressureAshraePa(c + 273.15) - 1)).toBeLessThan(1e-3);
+      expect(
+        Math.abs(saturationPressureWagnerPrussPa(c + 273.15) / saturationPressureAshraePa(c + 273.15) - 1),
+      ).toBeLessThan(1e-3);
     }
   });
 
@@ -34,23 +40,31 @@ describe('saturation pressure of water', () => {
 });
 
 describe('humid air from relative humidity or dew point', () => {
-  it.each([[20, 60, 101_325], [35, 90, 101_325], [5, 30, 89_875], [60, 20, 500_000]])(
-    'at %i °C, %i %% RH, %i Pa the humidity ratio matches psychrolib within 0.01 %%',
-    (c, rh, p) => {
-      const state = humidAirAt({ relativeHumidityPercent: rh }, c + 273.15, p);
-      expect(state.ok).toBe(true);
-      if (state.ok) {
-        const reference = psychrolib.GetHumRatioFromRelHum(c, rh / 100, p);
-        expect(Math.abs(humidityRatio(state.waterMoleFraction) / reference - 1)).toBeLessThan(1e-4);
-      }
-    },
-  );
+  it.each([
+    [20, 60, 101_325],
+    [35, 90, 101_325],
+    [5, 30, 89_875],
+    [60, 20, 500_000],
+  ])('at %i °C, %i %% RH, %i Pa the humidity ratio matches psychrolib within 0.01 %%', (c, rh, p) => {
+    const state = humidAirAt({ relativeHumidityPercent: rh }, c + 273.15, p);
+    expect(state.ok).toBe(true);
+    if (state.ok) {
+      const reference = psychrolib.GetHumRatioFromRelHum(c, rh / 100, p);
+      expect(Math.abs(humidityRatio(state.waterMoleFraction) / reference - 1)).toBeLessThan(1e-4);
+    }
+  });
 
-  it.each([[10, 101_325], [-10, 101_325], [25, 300_000]])('dew point %i °C at %i Pa matches psychrolib', (dp, p) => {
+  it.each([
+    [10, 101_325],
+    [-10, 101_325],
+    [25, 300_000],
+  ])('dew point %i °C at %i Pa matches psychrolib', (dp, p) => {
     const state = humidAirAt({ dewPointK: dp + 273.15 }, 30 + 273.15, p);
     expect(state.ok).toBe(true);
     if (state.ok) {
-      expect(Math.abs(humidityRatio(state.waterMoleFraction) / psychrolib.GetHumRatioFromTDewPoint(dp, p) - 1)).toBeLessThan(1e-4);
+      expect(
+        Math.abs(humidityRatio(state.waterMoleFraction) / psychrolib.GetHumRatioFromTDewPoint(dp, p) - 1),
+      ).toBeLessThan(1e-4);
     }
   });
 

@@ -1,7 +1,13 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import {
-  GAS_PRESETS, ThermoRangeError, cpMass, enthalpyMass, presetGas, standardEntropyMass, temperatureFromEnthalpy,
+  GAS_PRESETS,
+  ThermoRangeError,
+  cpMass,
+  enthalpyMass,
+  presetGas,
+  standardEntropyMass,
+  temperatureFromEnthalpy,
   temperatureFromEntropy,
 } from '@/lib/thermo';
 
@@ -11,17 +17,21 @@ const tArb = fc.double({ min: 200, max: 6000, noNaN: true });
 
 describe('Newton inversions of h(T) and s°(T)', () => {
   it('h inversion round-trips to 1e-6 K from any starting guess', () => {
-    fc.assert(fc.property(gasArb, tArb, fc.double({ min: -1e4, max: 1e4, noNaN: true }), (id, t, guess) => {
-      const gas = presetGas(id)!;
-      expect(Math.abs(temperatureFromEnthalpy(gas, enthalpyMass(gas, t), guess) - t)).toBeLessThan(1e-6);
-    }));
+    fc.assert(
+      fc.property(gasArb, tArb, fc.double({ min: -1e4, max: 1e4, noNaN: true }), (id, t, guess) => {
+        const gas = presetGas(id)!;
+        expect(Math.abs(temperatureFromEnthalpy(gas, enthalpyMass(gas, t), guess) - t)).toBeLessThan(1e-6);
+      }),
+    );
   });
 
   it('s° inversion round-trips to 1e-6 K from any starting guess', () => {
-    fc.assert(fc.property(gasArb, tArb, fc.double({ min: 200, max: 6000, noNaN: true }), (id, t, guess) => {
-      const gas = presetGas(id)!;
-      expect(Math.abs(temperatureFromEntropy(gas, standardEntropyMass(gas, t), guess) - t)).toBeLessThan(1e-6);
-    }));
+    fc.assert(
+      fc.property(gasArb, tArb, fc.double({ min: 200, max: 6000, noNaN: true }), (id, t, guess) => {
+        const gas = presetGas(id)!;
+        expect(Math.abs(temperatureFromEntropy(gas, standardEntropyMass(gas, t), guess) - t)).toBeLessThan(1e-6);
+      }),
+    );
   });
 
   it('h is strictly increasing (cp > 0) across the whole range for every preset', () => {

@@ -1,8 +1,21 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import {
-  DRY_AIR_MOLE_FRACTIONS, FRACTION_SUM_TOLERANCE, GAS_CONSTANT_J_PER_MOL_K, GAS_PRESETS, SPECIES_IDS, checkComposition,
-  compileGas, cpMass, cpMolar, cvMass, enthalpyMass, heatCapacityRatio, mixtureGas, presetGas, type SpeciesId,
+  DRY_AIR_MOLE_FRACTIONS,
+  FRACTION_SUM_TOLERANCE,
+  GAS_CONSTANT_J_PER_MOL_K,
+  GAS_PRESETS,
+  SPECIES_IDS,
+  checkComposition,
+  compileGas,
+  cpMass,
+  cpMolar,
+  cvMass,
+  enthalpyMass,
+  heatCapacityRatio,
+  mixtureGas,
+  presetGas,
+  type SpeciesId,
 } from '@/lib/thermo';
 
 const air = presetGas('air')!;
@@ -44,20 +57,34 @@ describe('mixture rules', () => {
   const gasIds = GAS_PRESETS.filter((p) => p.moleFractions).map((p) => p.id);
 
   it('cp - cv = R for every preset at every temperature in range [ideal gas]', () => {
-    fc.assert(fc.property(fc.constantFrom(...gasIds), fc.double({ min: 200, max: 6000, noNaN: true }), (id, t) => {
-      const gas = presetGas(id)!;
-      expect(cpMass(gas, t) - cvMass(gas, t)).toBeCloseTo((GAS_CONSTANT_J_PER_MOL_K * 1000) / gas.molarMassKgPerKmol, 9);
-    }));
+    fc.assert(
+      fc.property(fc.constantFrom(...gasIds), fc.double({ min: 200, max: 6000, noNaN: true }), (id, t) => {
+        const gas = presetGas(id)!;
+        expect(cpMass(gas, t) - cvMass(gas, t)).toBeCloseTo(
+          (GAS_CONSTANT_J_PER_MOL_K * 1000) / gas.molarMassKgPerKmol,
+          9,
+        );
+      }),
+    );
   });
 
   it('mixture molar cp is the mole-fraction sum of the species values', () => {
     const species = fc.constantFrom(...SPECIES_IDS);
-    fc.assert(fc.property(species, species, fc.double({ min: 0.01, max: 0.99, noNaN: true }), fc.double({ min: 200, max: 6000, noNaN: true }), (a, b, x, t) => {
-      fc.pre(a !== b);
-      const mix = compileGas('t', 't', { [a]: x, [b]: 1 - x } as Partial<Record<SpeciesId, number>>);
-      const expected = x * cpMolar(compileGas(a, a, { [a]: 1 }), t) + (1 - x) * cpMolar(compileGas(b, b, { [b]: 1 }), t);
-      expect(cpMolar(mix, t)).toBeCloseTo(expected, 8);
-    }));
+    fc.assert(
+      fc.property(
+        species,
+        species,
+        fc.double({ min: 0.01, max: 0.99, noNaN: true }),
+        fc.double({ min: 200, max: 6000, noNaN: true }),
+        (a, b, x, t) => {
+          fc.pre(a !== b);
+          const mix = compileGas('t', 't', { [a]: x, [b]: 1 - x } as Partial<Record<SpeciesId, number>>);
+          const expected =
+            x * cpMolar(compileGas(a, a, { [a]: 1 }), t) + (1 - x) * cpMolar(compileGas(b, b, { [b]: 1 }), t);
+          expect(cpMolar(mix, t)).toBeCloseTo(expected, 8);
+        },
+      ),
+    );
   });
 
   it('converts mass fractions with the molar masses: 50/50 by mass CH4/N2 is 63.6 mol % CH4 [calc]', () => {

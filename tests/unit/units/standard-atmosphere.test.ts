@@ -12,7 +12,11 @@ describe('ISO 2533 standard atmosphere (troposphere)', () => {
 
   // ISO 2533 / U.S. Standard Atmosphere 1976 tables: 89.875 kPa at 1000 m geopotential, 89.876 kPa at 1000 m
   // geometric; 79.50 kPa at 2000 m; 54.05 kPa at 5000 m [mem].
-  it.each([[1000, 89_876], [2000, 79_501], [5000, 54_048]])('at %i m elevation is %i Pa within 10 Pa', (z, pa) => {
+  it.each([
+    [1000, 89_876],
+    [2000, 79_501],
+    [5000, 54_048],
+  ])('at %i m elevation is %i Pa within 10 Pa', (z, pa) => {
     expect(Math.abs(standardAtmospherePressurePa(z) - pa)).toBeLessThan(10);
   });
 

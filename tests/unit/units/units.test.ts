@@ -2,9 +2,25 @@ import convert from 'convert-units';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import {
-  KG_PER_LB, M3_PER_FT3, PA_PER_PSI, POWER_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS, UNITS_BY_KIND, W_PER_BTU_PER_H,
-  W_PER_HP, convertQuantity, fromSi, isGaugePressureUnit, normalizeUnit, powerToW, pressureFromPa, pressureToPa,
-  temperatureFromK, temperatureToK, toSi,
+  KG_PER_LB,
+  M3_PER_FT3,
+  PA_PER_PSI,
+  POWER_UNITS,
+  PRESSURE_UNITS,
+  TEMPERATURE_UNITS,
+  UNITS_BY_KIND,
+  W_PER_BTU_PER_H,
+  W_PER_HP,
+  convertQuantity,
+  fromSi,
+  isGaugePressureUnit,
+  normalizeUnit,
+  powerToW,
+  pressureFromPa,
+  pressureToPa,
+  temperatureFromK,
+  temperatureToK,
+  toSi,
 } from '@/lib/units';
 
 describe('accepted unit strings', () => {
@@ -28,13 +44,22 @@ describe('accepted unit strings', () => {
 });
 
 describe('temperature', () => {
-  it.each([[0, 'degC', 273.15], [32, 'degF', 273.15], [-40, 'degF', 233.15], [491.67, 'degR', 273.15], [212, 'degF', 373.15], [300, 'K', 300]] as const)(
-    '%f %s = %f K [definitions, NIST SP 811]', (v, unit, k) => expect(temperatureToK(v, unit)).toBeCloseTo(k, 9),
+  it.each([
+    [0, 'degC', 273.15],
+    [32, 'degF', 273.15],
+    [-40, 'degF', 233.15],
+    [491.67, 'degR', 273.15],
+    [212, 'degF', 373.15],
+    [300, 'K', 300],
+  ] as const)('%f %s = %f K [definitions, NIST SP 811]', (v, unit, k) =>
+    expect(temperatureToK(v, unit)).toBeCloseTo(k, 9),
   );
   it('round-trips every unit', () => {
-    fc.assert(fc.property(fc.constantFrom(...TEMPERATURE_UNITS), fc.double({ min: -500, max: 1e4, noNaN: true }), (unit, v) => {
-      expect(temperatureFromK(temperatureToK(v, unit), unit)).toBeCloseTo(v, 8);
-    }));
+    fc.assert(
+      fc.property(fc.constantFrom(...TEMPERATURE_UNITS), fc.double({ min: -500, max: 1e4, noNaN: true }), (unit, v) => {
+        expect(temperatureFromK(temperatureToK(v, unit), unit)).toBeCloseTo(v, 8);
+      }),
+    );
   });
 });
 
@@ -51,9 +76,16 @@ describe('pressure', () => {
     expect(isGaugePressureUnit('kPa')).toBe(false);
   });
   it('round-trips every unit at any site pressure', () => {
-    fc.assert(fc.property(fc.constantFrom(...PRESSURE_UNITS), fc.double({ min: -50, max: 1e5, noNaN: true }), fc.double({ min: 5e4, max: 1.1e5, noNaN: true }), (unit, v, baro) => {
-      expect(pressureFromPa(pressureToPa(v, unit, baro), unit, baro)).toBeCloseTo(v, 6);
-    }));
+    fc.assert(
+      fc.property(
+        fc.constantFrom(...PRESSURE_UNITS),
+        fc.double({ min: -50, max: 1e5, noNaN: true }),
+        fc.double({ min: 5e4, max: 1.1e5, noNaN: true }),
+        (unit, v, baro) => {
+          expect(pressureFromPa(pressureToPa(v, unit, baro), unit, baro)).toBeCloseTo(v, 6);
+        },
+      ),
+    );
   });
 });
 
@@ -65,9 +97,11 @@ describe('power [NIST SP 811: 1 hp = 745.6999 W, 1 Btu_IT/h = 0.2930711 W]', () 
     expect(powerToW(1, 'kW')).toBe(1000);
   });
   it('round-trips every unit', () => {
-    fc.assert(fc.property(fc.constantFrom(...POWER_UNITS), fc.double({ min: 1e-6, max: 1e9, noNaN: true }), (unit, v) => {
-      expect(fromSi('power', toSi('power', v, unit), unit) / v).toBeCloseTo(1, 12);
-    }));
+    fc.assert(
+      fc.property(fc.constantFrom(...POWER_UNITS), fc.double({ min: 1e-6, max: 1e9, noNaN: true }), (unit, v) => {
+        expect(fromSi('power', toSi('power', v, unit), unit) / v).toBeCloseTo(1, 12);
+      }),
+    );
   });
 });
 
@@ -89,6 +123,9 @@ describe('switching units keeps the physical value', () => {
     expect(convertQuantity('temperature', 100, 'degC', 'degF')).toBeCloseTo(212, 9);
     const ctx = { flow: { molarMassKgPerKmol: 28.014, temperatureK: 293.15, pressurePa: 101_325 } };
     expect(convertQuantity('flow', 1000, 'kg/h', 't/h', ctx)).toBeCloseTo(1, 12);
-    expect(convertQuantity('flow', convertQuantity('flow', 500, 'SCFM', 'ACFM', ctx), 'ACFM', 'SCFM', ctx)).toBeCloseTo(500, 9);
+    expect(convertQuantity('flow', convertQuantity('flow', 500, 'SCFM', 'ACFM', ctx), 'ACFM', 'SCFM', ctx)).toBeCloseTo(
+      500,
+      9,
+    );
   });
 });

@@ -13,7 +13,10 @@ export const dynamic = 'force-dynamic';
 
 function Unusable({ children }: { children: ReactNode }) {
   return (
-    <div className="mt-6 rounded-panel border border-paper-line bg-paper-raised p-4 text-sm" data-testid="invite-unusable">
+    <div
+      className="mt-6 rounded-panel border border-paper-line bg-paper-raised p-4 text-sm"
+      data-testid="invite-unusable"
+    >
       {children}
     </div>
   );
@@ -31,18 +34,27 @@ export default async function InvitePage({ params }: { params: Promise<{ token: 
       </Link>
       <h1 className="text-2xl font-semibold">Join a customer account</h1>
       {clerkEnabled ? (
-        <Unusable>Invitations on this installation are accepted through the hosted sign-up. Ask the person who invited you for help.</Unusable>
+        <Unusable>
+          Invitations on this installation are accepted through the hosted sign-up. Ask the person who invited you for
+          help.
+        </Unusable>
       ) : preview && token.success ? (
         <>
           <p className="mt-2 text-sm text-ink-soft">
-            You are invited to <strong>{preview.accountName}</strong> on Dutywise as <span className="font-mono">{preview.email}</span>. The invitation is open until {formatDate(preview.expiresAt)}.
+            You are invited to <strong>{preview.accountName}</strong> on Dutywise as{' '}
+            <span className="font-mono">{preview.email}</span>. The invitation is open until{' '}
+            {formatDate(preview.expiresAt)}.
           </p>
           <AcceptInviteForm token={token.data} email={preview.email} />
         </>
       ) : (
         <Unusable>
-          This invitation link is not valid any more: it may have been used already, have expired, or be incomplete. Ask the person who invited you for a new one, or{' '}
-          <Link href="/sign-in" className="text-tide-600 underline">sign in</Link> if you already have a Dutywise sign-in.
+          This invitation link is not valid any more: it may have been used already, have expired, or be incomplete. Ask
+          the person who invited you for a new one, or{' '}
+          <Link href="/sign-in" className="text-tide-600 underline">
+            sign in
+          </Link>{' '}
+          if you already have a Dutywise sign-in.
         </Unusable>
       )}
     </main>

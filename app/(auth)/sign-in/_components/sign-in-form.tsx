@@ -10,11 +10,18 @@ import { signInSchema, type SignInInput } from '@/lib/auth/schema';
 export function SignInForm({ next }: { next: string }) {
   const router = useRouter();
   const [formError, setFormError] = useState<string | null>(null);
-  const { register, handleSubmit, formState } = useForm<SignInInput>({ resolver: zodResolver(signInSchema), mode: 'onTouched' });
+  const { register, handleSubmit, formState } = useForm<SignInInput>({
+    resolver: zodResolver(signInSchema),
+    mode: 'onTouched',
+  });
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
-    const res = await fetch('/api/auth/sign-in', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(values) }).catch(() => null);
+    const res = await fetch('/api/auth/sign-in', {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: JSON.stringify(values),
+    }).catch(() => null);
     if (res?.ok) {
       router.push(next);
       router.refresh();
@@ -27,14 +34,34 @@ export function SignInForm({ next }: { next: string }) {
   return (
     // method and action keep credentials out of the URL if the form is submitted before it is interactive.
     <form onSubmit={onSubmit} method="post" action="/api/auth/sign-in" noValidate className="mt-6 space-y-4">
-      <TextField label="E-mail" type="email" autoComplete="username" error={formState.errors.email?.message} {...register('email')} />
-      <TextField label="Password" type="password" autoComplete="current-password" error={formState.errors.password?.message} {...register('password')} />
+      <TextField
+        label="E-mail"
+        type="email"
+        autoComplete="username"
+        error={formState.errors.email?.message}
+        {...register('email')}
+      />
+      <TextField
+        label="Password"
+        type="password"
+        autoComplete="current-password"
+        error={formState.errors.password?.message}
+        {...register('password')}
+      />
       {formError && (
-        <p data-testid="form-error" role="alert" className="rounded-md bg-copper-50 px-3 py-2 text-sm text-severity-danger">
+        <p
+          data-testid="form-error"
+          role="alert"
+          className="rounded-md bg-copper-50 px-3 py-2 text-sm text-severity-danger"
+        >
           {formError}
         </p>
       )}
-      <button type="submit" disabled={formState.isSubmitting} className="w-full rounded-md bg-tide-600 px-4 py-2.5 font-medium text-white hover:bg-tide-700 disabled:opacity-60">
+      <button
+        type="submit"
+        disabled={formState.isSubmitting}
+        className="w-full rounded-md bg-tide-600 px-4 py-2.5 font-medium text-white hover:bg-tide-700 disabled:opacity-60"
+      >
         {formState.isSubmitting ? 'Signing in…' : 'Sign in'}
       </button>
     </form>

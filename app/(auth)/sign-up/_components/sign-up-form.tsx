@@ -37,10 +37,28 @@ export function SignUpForm() {
   return (
     <form onSubmit={onSubmit} noValidate className="mt-6 space-y-4" aria-label="Create your customer account">
       <TextField label="Your name" autoComplete="name" error={e.name?.message} {...register('name')} />
-      <TextField label="Work e-mail" type="email" autoComplete="email" error={e.email?.message} {...register('email')} />
-      <TextField label="Password" type="password" autoComplete="new-password" hint="At least 10 characters." error={e.password?.message} {...register('password')} />
+      <TextField
+        label="Work e-mail"
+        type="email"
+        autoComplete="email"
+        error={e.email?.message}
+        {...register('email')}
+      />
+      <TextField
+        label="Password"
+        type="password"
+        autoComplete="new-password"
+        hint="At least 10 characters."
+        error={e.password?.message}
+        {...register('password')}
+      />
       <TextField label="Company" autoComplete="organization" error={e.company?.message} {...register('company')} />
-      <TextField label="Site (optional)" hint="The plant these duties are for; more sites can be described later." error={e.site?.message} {...register('site')} />
+      <TextField
+        label="Site (optional)"
+        hint="The plant these duties are for; more sites can be described later."
+        error={e.site?.message}
+        {...register('site')}
+      />
       <FormError message={formError} />
       <SubmitButton className="w-full py-2.5" pending={formState.isSubmitting} pendingLabel="Creating your account…">
         Create customer account

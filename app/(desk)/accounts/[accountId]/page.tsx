@@ -43,10 +43,20 @@ export default async function AccountPage({ params }: { params: Promise<{ accoun
   return (
     <PageBody>
       <PageHeader
-        eyebrow={<Link href="/accounts" className="underline">Customer accounts</Link>}
+        eyebrow={
+          <Link href="/accounts" className="underline">
+            Customer accounts
+          </Link>
+        }
         title={account.name}
         description={account.site ?? undefined}
-        actions={mayQuote && <Link href={`/quotes/new?accountId=${account.id}`} className={buttonLinkClass}>New quote for this account</Link>}
+        actions={
+          mayQuote && (
+            <Link href={`/quotes/new?accountId=${account.id}`} className={buttonLinkClass}>
+              New quote for this account
+            </Link>
+          )
+        }
       />
       <Section title="Details" id="details">
         <AccountDetails account={account} />
@@ -66,7 +76,15 @@ export default async function AccountPage({ params }: { params: Promise<{ accoun
         <QuotesTable quotes={quotes} hideAccount empty={<EmptyState title="No quotes for this account yet" />} />
       </Section>
       <Section title="Saved sizings" id="sizings">
-        <SizingsTable sizings={sizings} hideAccount empty={<EmptyState title="No sizings saved to this account yet">Size a heater or compressor and save it here.</EmptyState>} />
+        <SizingsTable
+          sizings={sizings}
+          hideAccount
+          empty={
+            <EmptyState title="No sizings saved to this account yet">
+              Size a heater or compressor and save it here.
+            </EmptyState>
+          }
+        />
       </Section>
     </PageBody>
   );

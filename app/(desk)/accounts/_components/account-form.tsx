@@ -17,18 +17,38 @@ import { PressureBasisField, type PressureBasis } from './pressure-basis-field';
 type FormValues = z.input<typeof accountInputSchema>;
 type Mode = { kind: 'create' } | { kind: 'edit'; accountId: string };
 
-const FIELDS = ['name', 'site', 'billingContactName', 'billingContactEmail', 'barometricPressureKpa', 'siteAltitudeM'] as const;
+const FIELDS = [
+  'name',
+  'site',
+  'billingContactName',
+  'billingContactEmail',
+  'barometricPressureKpa',
+  'siteAltitudeM',
+] as const;
 
 /** Customer account details, for a new prospect or to edit an existing account. */
 export function AccountForm({ mode, initial }: { mode: Mode; initial?: FormValues }) {
   const router = useRouter();
   const [formError, setFormError] = useState<string | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
-  const [basis, setBasis] = useState<PressureBasis>(initial?.siteAltitudeM !== undefined && initial.siteAltitudeM !== '' ? 'altitude' : 'pressure');
-  const { register, handleSubmit, setError, setValue, clearErrors, formState } = useForm<FormValues, unknown, AccountInput>({
+  const [basis, setBasis] = useState<PressureBasis>(
+    initial?.siteAltitudeM !== undefined && initial.siteAltitudeM !== '' ? 'altitude' : 'pressure',
+  );
+  const { register, handleSubmit, setError, setValue, clearErrors, formState } = useForm<
+    FormValues,
+    unknown,
+    AccountInput
+  >({
     resolver: zodResolver(accountInputSchema),
     mode: 'onTouched',
-    defaultValues: initial ?? { name: '', site: '', billingContactName: '', billingContactEmail: '', barometricPressureKpa: '', siteAltitudeM: '' },
+    defaultValues: initial ?? {
+      name: '',
+      site: '',
+      billingContactName: '',
+      billingContactEmail: '',
+      barometricPressureKpa: '',
+      siteAltitudeM: '',
+    },
   });
 
   // Switching basis empties the other figure so a hidden, stale value can neither block nor be saved.
@@ -43,8 +63,14 @@ export function AccountForm({ mode, initial }: { mode: Mode; initial?: FormValue
     setFormError(null);
     setNotice(null);
     // The site is described by one figure: the basis not chosen is not sent.
-    const fields = { ...values, ...(basis === 'pressure' ? { siteAltitudeM: undefined } : { barometricPressureKpa: undefined }) };
-    const res = mode.kind === 'create' ? await createAccountAction(fields) : await updateAccountAction({ ...fields, accountId: mode.accountId });
+    const fields = {
+      ...values,
+      ...(basis === 'pressure' ? { siteAltitudeM: undefined } : { barometricPressureKpa: undefined }),
+    };
+    const res =
+      mode.kind === 'create'
+        ? await createAccountAction(fields)
+        : await updateAccountAction({ ...fields, accountId: mode.accountId });
     if (!res.ok) {
       setFormError(formErrorText(res.formError, applyFieldErrors(setError, res.fieldErrors, FIELDS)));
       return;
@@ -59,11 +85,31 @@ export function AccountForm({ mode, initial }: { mode: Mode; initial?: FormValue
 
   const e = formState.errors;
   return (
-    <form onSubmit={onSubmit} noValidate className="grid gap-4 md:grid-cols-2" aria-label={mode.kind === 'create' ? 'New customer account' : 'Edit customer account'}>
+    <form
+      onSubmit={onSubmit}
+      noValidate
+      className="grid gap-4 md:grid-cols-2"
+      aria-label={mode.kind === 'create' ? 'New customer account' : 'Edit customer account'}
+    >
       <TextField label="Company" autoComplete="organization" error={e.name?.message} {...register('name')} />
-      <TextField label="Site" hint="Plant or site name, e.g. Riverside works" error={e.site?.message} {...register('site')} />
-      <TextField label="Billing contact name" error={e.billingContactName?.message} {...register('billingContactName')} />
-      <TextField label="Billing contact e-mail" type="email" hint="Quotes are sent to this address." error={e.billingContactEmail?.message} {...register('billingContactEmail')} />
+      <TextField
+        label="Site"
+        hint="Plant or site name, e.g. Riverside works"
+        error={e.site?.message}
+        {...register('site')}
+      />
+      <TextField
+        label="Billing contact name"
+        error={e.billingContactName?.message}
+        {...register('billingContactName')}
+      />
+      <TextField
+        label="Billing contact e-mail"
+        type="email"
+        hint="Quotes are sent to this address."
+        error={e.billingContactEmail?.message}
+        {...register('billingContactEmail')}
+      />
       <PressureBasisField
         className="md:col-span-2"
         basis={basis}

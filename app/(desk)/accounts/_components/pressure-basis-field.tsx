@@ -17,7 +17,15 @@ type Props = {
 };
 
 /** Site barometric pressure or site altitude: gauge pressures at this site are converted with one of them. */
-export function PressureBasisField({ basis, onBasisChange, pressure, altitude, pressureError, altitudeError, className = '' }: Props) {
+export function PressureBasisField({
+  basis,
+  onBasisChange,
+  pressure,
+  altitude,
+  pressureError,
+  altitudeError,
+  className = '',
+}: Props) {
   const name = useId();
   return (
     <fieldset className={`rounded-md border border-paper-line p-3 ${className}`}>
@@ -25,16 +33,35 @@ export function PressureBasisField({ basis, onBasisChange, pressure, altitude, p
       <div className="flex flex-wrap gap-4 text-sm">
         {(['pressure', 'altitude'] as const).map((b) => (
           <label key={b} className="inline-flex items-center gap-2">
-            <input type="radio" name={name} value={b} checked={basis === b} onChange={() => onBasisChange(b)} className="accent-tide-600" />
+            <input
+              type="radio"
+              name={name}
+              value={b}
+              checked={basis === b}
+              onChange={() => onBasisChange(b)}
+              className="accent-tide-600"
+            />
             {b === 'pressure' ? 'Barometric pressure' : 'Altitude'}
           </label>
         ))}
       </div>
       <div className="mt-3 max-w-xs">
         {basis === 'pressure' ? (
-          <TextField label="Site barometric pressure (kPa, absolute)" inputMode="decimal" hint="50 to 110 kPa; leave empty for 101.325 kPa." error={pressureError} {...pressure} />
+          <TextField
+            label="Site barometric pressure (kPa, absolute)"
+            inputMode="decimal"
+            hint="50 to 110 kPa; leave empty for 101.325 kPa."
+            error={pressureError}
+            {...pressure}
+          />
         ) : (
-          <TextField label="Site altitude (m above sea level)" inputMode="decimal" hint="-500 to 6000 m; pressure from the ISO 2533 standard atmosphere." error={altitudeError} {...altitude} />
+          <TextField
+            label="Site altitude (m above sea level)"
+            inputMode="decimal"
+            hint="-500 to 6000 m; pressure from the ISO 2533 standard atmosphere."
+            error={altitudeError}
+            {...altitude}
+          />
         )}
       </div>
     </fieldset>

@@ -11,7 +11,11 @@ export default async function NewAccountPage() {
   return (
     <PageBody>
       <PageHeader
-        eyebrow={<Link href="/accounts" className="underline">Customer accounts</Link>}
+        eyebrow={
+          <Link href="/accounts" className="underline">
+            Customer accounts
+          </Link>
+        }
         title="New customer account"
         description="A prospect’s company and site. Sizings, quotes and datasheets are saved against it; invite its people once it exists."
       />

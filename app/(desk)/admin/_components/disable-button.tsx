@@ -20,7 +20,14 @@ export function DisableButton({ userId, disabled, name }: { userId: string; disa
     });
   return (
     <div className="space-y-1">
-      <SubmitButton type="button" variant={disabled ? 'secondary' : 'danger'} onClick={toggle} pending={pending} className="px-3 py-1.5" aria-label={`${disabled ? 'Enable' : 'Disable'} ${name}`}>
+      <SubmitButton
+        type="button"
+        variant={disabled ? 'secondary' : 'danger'}
+        onClick={toggle}
+        pending={pending}
+        className="px-3 py-1.5"
+        aria-label={`${disabled ? 'Enable' : 'Disable'} ${name}`}
+      >
         {disabled ? 'Enable' : 'Disable'}
       </SubmitButton>
       <FormError message={error} />

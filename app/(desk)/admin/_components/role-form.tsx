@@ -16,7 +16,10 @@ import { changeUserRoleAction } from '../actions';
 export function RoleForm({ userId, role, name }: { userId: string; role: UserRoleChangeInput['role']; name: string }) {
   const router = useRouter();
   const [formError, setFormError] = useState<string | null>(null);
-  const { register, handleSubmit, setError, formState } = useForm<UserRoleChangeInput>({ resolver: zodResolver(userRoleChangeSchema), defaultValues: { userId, role } });
+  const { register, handleSubmit, setError, formState } = useForm<UserRoleChangeInput>({
+    resolver: zodResolver(userRoleChangeSchema),
+    defaultValues: { userId, role },
+  });
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
@@ -29,8 +32,21 @@ export function RoleForm({ userId, role, name }: { userId: string; role: UserRol
     <form onSubmit={onSubmit} noValidate aria-label={`Change the role of ${name}`} className="space-y-1">
       <input type="hidden" {...register('userId')} />
       <div className="flex items-end gap-2">
-        <SelectField label={`Role of ${name}`} className="w-44 [&>label]:sr-only" options={staffRoleValues.map((r) => ({ value: r, label: roleLabels[r] }))} error={formState.errors.role?.message} {...register('role')} />
-        <SubmitButton variant="secondary" pending={formState.isSubmitting} pendingLabel="Saving…" className="px-3 py-1.5">Change</SubmitButton>
+        <SelectField
+          label={`Role of ${name}`}
+          className="w-44 [&>label]:sr-only"
+          options={staffRoleValues.map((r) => ({ value: r, label: roleLabels[r] }))}
+          error={formState.errors.role?.message}
+          {...register('role')}
+        />
+        <SubmitButton
+          variant="secondary"
+          pending={formState.isSubmitting}
+          pendingLabel="Saving…"
+          className="px-3 py-1.5"
+        >
+          Change
+        </SubmitButton>
       </div>
       <FormError message={formError} />
     </form>

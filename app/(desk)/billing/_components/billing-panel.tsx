@@ -15,7 +15,15 @@ const statusText: Record<Entitlement['reason'], string> = {
 };
 
 /** Subscription state with checkout and portal buttons; polls while a fresh payment is being confirmed. */
-export function BillingPanel({ initial, checkout, plans }: { initial: Entitlement; checkout: 'success' | 'cancelled' | null; plans: Plan[] }) {
+export function BillingPanel({
+  initial,
+  checkout,
+  plans,
+}: {
+  initial: Entitlement;
+  checkout: 'success' | 'cancelled' | null;
+  plans: Plan[];
+}) {
   const [error, setError] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
   const { data } = useQuery({
@@ -24,7 +32,9 @@ export function BillingPanel({ initial, checkout, plans }: { initial: Entitlemen
     initialData: initial,
     refetchInterval: (q) => (checkout === 'success' && !q.state.data?.unlocked ? 1000 : false),
   });
-  const go = async (run: () => Promise<{ ok: true; data: { url: string } } | { ok: false; formError: string | null }>) => {
+  const go = async (
+    run: () => Promise<{ ok: true; data: { url: string } } | { ok: false; formError: string | null }>,
+  ) => {
     setBusy(true);
     setError(null);
     const res = await run();
@@ -37,16 +47,33 @@ export function BillingPanel({ initial, checkout, plans }: { initial: Entitlemen
   const ent = data ?? initial;
   return (
     <section className="mt-6 space-y-6">
-      {checkout === 'success' && !ent.unlocked && <p className="rounded-md bg-tide-50 p-3" role="status">Payment received; waiting for the payment service to confirm…</p>}
+      {checkout === 'success' && !ent.unlocked && (
+        <p className="rounded-md bg-tide-50 p-3" role="status">
+          Payment received; waiting for the payment service to confirm…
+        </p>
+      )}
       {checkout === 'cancelled' && !ent.unlocked && (
-        <p className="rounded-md bg-copper-50 p-3 text-severity-warning" data-testid="checkout-cancelled" role="status">Checkout was not completed, so nothing was charged and your datasheets stay locked.</p>
+        <p className="rounded-md bg-copper-50 p-3 text-severity-warning" data-testid="checkout-cancelled" role="status">
+          Checkout was not completed, so nothing was charged and your datasheets stay locked.
+        </p>
       )}
       <div className="rounded-panel border border-paper-line bg-paper-raised p-panel shadow-panel">
         <p className="text-label uppercase text-ink-muted">Status</p>
-        <p className="mt-1 text-lg font-medium" data-testid="subscription-status">{statusText[ent.reason]}</p>
-        {ent.periodEnd && <p className="mt-1 text-sm text-ink-muted">{ent.cancelAtPeriodEnd ? 'Ends' : 'Renews'} on {new Date(ent.periodEnd).toLocaleDateString('en-GB')}</p>}
+        <p className="mt-1 text-lg font-medium" data-testid="subscription-status">
+          {statusText[ent.reason]}
+        </p>
+        {ent.periodEnd && (
+          <p className="mt-1 text-sm text-ink-muted">
+            {ent.cancelAtPeriodEnd ? 'Ends' : 'Renews'} on {new Date(ent.periodEnd).toLocaleDateString('en-GB')}
+          </p>
+        )}
         {ent.status && (
-          <button type="button" disabled={busy} onClick={() => go(() => openPortalAction({}))} className="mt-4 rounded-md border border-tide-600 px-4 py-2 text-tide-700 hover:bg-tide-50">
+          <button
+            type="button"
+            disabled={busy}
+            onClick={() => go(() => openPortalAction({}))}
+            className="mt-4 rounded-md border border-tide-600 px-4 py-2 text-tide-700 hover:bg-tide-50"
+          >
             Change or cancel
           </button>
         )}
@@ -58,14 +85,23 @@ export function BillingPanel({ initial, checkout, plans }: { initial: Entitlemen
               <h2 className="font-semibold">{p.name}</h2>
               <p className="mt-1 font-mono text-lg">{p.priceLabel}</p>
               <p className="mt-2 text-sm text-ink-soft">{p.blurb}</p>
-              <button type="button" disabled={busy} onClick={() => go(() => startCheckoutAction({ plan: p.key }))} className="mt-4 rounded-md bg-copper-500 px-4 py-2 font-medium text-white hover:bg-copper-600 disabled:opacity-60">
+              <button
+                type="button"
+                disabled={busy}
+                onClick={() => go(() => startCheckoutAction({ plan: p.key }))}
+                className="mt-4 rounded-md bg-copper-500 px-4 py-2 font-medium text-white hover:bg-copper-600 disabled:opacity-60"
+              >
                 Subscribe: {p.name}
               </button>
             </div>
           ))}
         </div>
       )}
-      {error && <p data-testid="form-error" role="alert" className="text-severity-danger">{error}</p>}
+      {error && (
+        <p data-testid="form-error" role="alert" className="text-severity-danger">
+          {error}
+        </p>
+      )}
     </section>
   );
 }

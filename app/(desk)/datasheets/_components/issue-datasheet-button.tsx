@@ -60,7 +60,11 @@ export function IssueDatasheetButton({ sizingId, latestRevision }: Props) {
         <SubmitButton type="button" onClick={issue} pending={pending} pendingLabel="Issuing…">
           {latest ? 'Issue next revision' : 'Issue datasheet'}
         </SubmitButton>
-        {latest && <span className="text-sm text-ink-muted">{next ? `Revision ${next} follows ${latest}; ${latest} stays as issued.` : 'Every revision letter is used.'}</span>}
+        {latest && (
+          <span className="text-sm text-ink-muted">
+            {next ? `Revision ${next} follows ${latest}; ${latest} stays as issued.` : 'Every revision letter is used.'}
+          </span>
+        )}
       </div>
       <FormNotice message={issued} testId="datasheet-issued" />
       <FormError message={error} />

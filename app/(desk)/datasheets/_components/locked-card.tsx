@@ -5,7 +5,10 @@ type Props = { title: string; tag: string | null; number: string; revision: stri
 /** What a customer without a subscription sees in place of downloads: a blurred sheet and the way to unlock it. */
 export function LockedCard({ title, tag, number, revision }: Props) {
   return (
-    <div data-testid="datasheet-locked" className="relative overflow-hidden rounded-md border border-paper-line bg-paper-sunk/60 p-4">
+    <div
+      data-testid="datasheet-locked"
+      className="relative overflow-hidden rounded-md border border-paper-line bg-paper-sunk/60 p-4"
+    >
       <div aria-hidden="true" className="pointer-events-none select-none space-y-2 blur-[3px]">
         <div className="h-3 w-2/3 rounded bg-ink-faint/50" />
         <div className="h-2 w-full rounded bg-ink-faint/30" />

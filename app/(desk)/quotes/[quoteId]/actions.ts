@@ -10,27 +10,39 @@ function refresh(quoteId: string) {
   revalidatePath(`/quotes/${quoteId}`);
 }
 
-export const addQuoteLineAction = defineAction({ permission: 'quote:manage', schema: quoteItemSchema, name: 'quote.line_add' }, async (input, user) => {
-  await addQuoteItem(user, input.quoteId, input.sizingId, input.quantity);
-  refresh(input.quoteId);
-  return { quoteId: input.quoteId };
-});
+export const addQuoteLineAction = defineAction(
+  { permission: 'quote:manage', schema: quoteItemSchema, name: 'quote.line_add' },
+  async (input, user) => {
+    await addQuoteItem(user, input.quoteId, input.sizingId, input.quantity);
+    refresh(input.quoteId);
+    return { quoteId: input.quoteId };
+  },
+);
 
-export const removeQuoteLineAction = defineAction({ permission: 'quote:manage', schema: quoteItemRemoveSchema, name: 'quote.line_remove' }, async (input, user) => {
-  await removeQuoteItem(user, input.quoteId, input.itemId);
-  refresh(input.quoteId);
-  return { quoteId: input.quoteId };
-});
+export const removeQuoteLineAction = defineAction(
+  { permission: 'quote:manage', schema: quoteItemRemoveSchema, name: 'quote.line_remove' },
+  async (input, user) => {
+    await removeQuoteItem(user, input.quoteId, input.itemId);
+    refresh(input.quoteId);
+    return { quoteId: input.quoteId };
+  },
+);
 
-export const setQuoteStatusAction = defineAction({ permission: 'quote:manage', schema: quoteStatusSchema, name: 'quote.status' }, async (input, user) => {
-  await setQuoteStatus(user, input.quoteId, input.status);
-  refresh(input.quoteId);
-  return { status: input.status };
-});
+export const setQuoteStatusAction = defineAction(
+  { permission: 'quote:manage', schema: quoteStatusSchema, name: 'quote.status' },
+  async (input, user) => {
+    await setQuoteStatus(user, input.quoteId, input.status);
+    refresh(input.quoteId);
+    return { status: input.status };
+  },
+);
 
 /** Marks the quote sent and queues the e-mail to the account's billing contact; answers with the address. */
-export const sendQuoteAction = defineAction({ permission: 'quote:manage', schema: quoteIdSchema, name: 'quote.send' }, async (input, user) => {
-  const { to } = await sendQuote(user, input.quoteId);
-  refresh(input.quoteId);
-  return { to };
-});
+export const sendQuoteAction = defineAction(
+  { permission: 'quote:manage', schema: quoteIdSchema, name: 'quote.send' },
+  async (input, user) => {
+    const { to } = await sendQuote(user, input.quoteId);
+    refresh(input.quoteId);
+    return { to };
+  },
+);

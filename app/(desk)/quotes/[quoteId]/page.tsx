@@ -24,18 +24,31 @@ export default async function QuotePage({ params }: { params: Promise<{ quoteId:
   const mayManage = can(user.role, 'quote:manage');
   const editable = mayManage && quote.status === 'draft';
   const onQuote = new Set(quote.lines.map((l) => l.sizingId));
-  const addable = editable ? (await listSizings(user, { accountId: quote.accountId, limit: 500 })).filter((s) => !onQuote.has(s.id)).map(toSizingOption) : [];
+  const addable = editable
+    ? (await listSizings(user, { accountId: quote.accountId, limit: 500 }))
+        .filter((s) => !onQuote.has(s.id))
+        .map(toSizingOption)
+    : [];
 
   return (
     <PageBody>
-      <PageHeader eyebrow={<Link href="/quotes" className="underline">Quotes</Link>} title={quote.title} description={`Quote ${quote.number} for ${quote.accountName}`} />
+      <PageHeader
+        eyebrow={
+          <Link href="/quotes" className="underline">
+            Quotes
+          </Link>
+        }
+        title={quote.title}
+        description={`Quote ${quote.number} for ${quote.accountName}`}
+      />
       <Section title="Summary" id="summary">
         <QuoteSummary quote={quote} linkAccount={isStaff(user.role) || user.accountId === quote.accountId} />
       </Section>
       <Section title="Lines" id="lines">
         <QuoteLines quoteId={quote.id} lines={quote.lines} editable={editable} />
         <p className="mt-3 text-hint text-ink-muted">
-          Headlines come from preliminary sizings on an ideal-gas basis. Confirm the design with a qualified engineer under the local codes before ordering.
+          Headlines come from preliminary sizings on an ideal-gas basis. Confirm the design with a qualified engineer
+          under the local codes before ordering.
         </p>
         {editable && (
           <div className="mt-4 border-t border-paper-line pt-4">
@@ -43,7 +56,11 @@ export default async function QuotePage({ params }: { params: Promise<{ quoteId:
             <AddLineForm quoteId={quote.id} sizings={addable} />
           </div>
         )}
-        {mayManage && !editable && <p className="mt-3 text-sm text-ink-muted">Lines are fixed once a quote leaves draft. Mark it draft again to change them.</p>}
+        {mayManage && !editable && (
+          <p className="mt-3 text-sm text-ink-muted">
+            Lines are fixed once a quote leaves draft. Mark it draft again to change them.
+          </p>
+        )}
       </Section>
       {mayManage && (
         <div className="grid gap-6 md:grid-cols-2">
@@ -51,7 +68,12 @@ export default async function QuotePage({ params }: { params: Promise<{ quoteId:
             {quote.status === 'won' || quote.status === 'lost' ? (
               <p className="text-sm text-ink-muted">This quote is closed ({quote.status}); it is not sent again.</p>
             ) : (
-              <SendQuoteButton quoteId={quote.id} to={quote.billingContactEmail} alreadySent={quote.sentAt !== null} lineCount={quote.lines.length} />
+              <SendQuoteButton
+                quoteId={quote.id}
+                to={quote.billingContactEmail}
+                alreadySent={quote.sentAt !== null}
+                lineCount={quote.lines.length}
+              />
             )}
           </Section>
           <Section title="Status" id="status">

@@ -10,9 +10,28 @@ type Props = { filter: QuoteFilter; accounts: { id: string; name: string }[] | n
 export function QuoteFilters({ filter, accounts }: Props) {
   const statusOptions = quoteStatuses.map((s) => ({ value: s, label: quoteStatusLabels[s] ?? s }));
   return (
-    <form method="get" action="/quotes" role="search" aria-label="Filter quotes" className="flex flex-wrap items-end gap-3 rounded-panel border border-paper-line bg-paper-raised p-3">
-      <TextField label="Search number, title or account" name="q" type="search" defaultValue={filter.q ?? ''} className="min-w-56 flex-1" />
-      <SelectField label="Status" name="status" options={statusOptions} placeholder="Any status" defaultValue={filter.status ?? ''} className="w-40" />
+    <form
+      method="get"
+      action="/quotes"
+      role="search"
+      aria-label="Filter quotes"
+      className="flex flex-wrap items-end gap-3 rounded-panel border border-paper-line bg-paper-raised p-3"
+    >
+      <TextField
+        label="Search number, title or account"
+        name="q"
+        type="search"
+        defaultValue={filter.q ?? ''}
+        className="min-w-56 flex-1"
+      />
+      <SelectField
+        label="Status"
+        name="status"
+        options={statusOptions}
+        placeholder="Any status"
+        defaultValue={filter.status ?? ''}
+        className="w-40"
+      />
       {accounts && (
         <SelectField
           label="Customer account"
@@ -23,8 +42,15 @@ export function QuoteFilters({ filter, accounts }: Props) {
           className="w-56"
         />
       )}
-      <button type="submit" className="rounded-md bg-tide-600 px-4 py-2 text-sm font-medium text-white hover:bg-tide-700">Apply filters</button>
-      <Link href="/quotes" className="px-2 py-2 text-sm text-tide-600 underline">Clear</Link>
+      <button
+        type="submit"
+        className="rounded-md bg-tide-600 px-4 py-2 text-sm font-medium text-white hover:bg-tide-700"
+      >
+        Apply filters
+      </button>
+      <Link href="/quotes" className="px-2 py-2 text-sm text-tide-600 underline">
+        Clear
+      </Link>
     </form>
   );
 }

@@ -6,7 +6,15 @@ import { QuoteStatusBadge } from '@/app/_components/status-badge';
 import type { QuoteSummary } from '@/lib/quotes/queries';
 
 const columns: Column<QuoteSummary>[] = [
-  { key: 'number', header: 'Quote', cell: (q) => <Link href={`/quotes/${q.id}`} className={`${tableLinkClass} font-mono`}>{q.number}</Link> },
+  {
+    key: 'number',
+    header: 'Quote',
+    cell: (q) => (
+      <Link href={`/quotes/${q.id}`} className={`${tableLinkClass} font-mono`}>
+        {q.number}
+      </Link>
+    ),
+  },
   { key: 'title', header: 'Title', cell: (q) => q.title },
   { key: 'account', header: 'Customer account', cell: (q) => q.accountName },
   { key: 'status', header: 'Status', cell: (q) => <QuoteStatusBadge status={q.status} /> },
@@ -16,7 +24,17 @@ const columns: Column<QuoteSummary>[] = [
 ];
 
 /** Quotes as a dense list; the caller says what to show when there are none. */
-export function QuotesTable({ quotes, empty, hideAccount = false }: { quotes: QuoteSummary[]; empty: ReactNode; hideAccount?: boolean }) {
+export function QuotesTable({
+  quotes,
+  empty,
+  hideAccount = false,
+}: {
+  quotes: QuoteSummary[];
+  empty: ReactNode;
+  hideAccount?: boolean;
+}) {
   const cols = hideAccount ? columns.filter((c) => c.key !== 'account') : columns;
-  return <DataTable caption="Quotes" columns={cols} rows={quotes} rowKey={(q) => q.id} empty={empty} testId="quotes-table" />;
+  return (
+    <DataTable caption="Quotes" columns={cols} rows={quotes} rowKey={(q) => q.id} empty={empty} testId="quotes-table" />
+  );
 }

@@ -5,7 +5,13 @@ import type { SizingSummary } from '@/lib/sizings/queries';
 export type SizingOption = { id: string; number: string; title: string; equipmentTag: string | null; headline: string };
 
 export function toSizingOption(s: SizingSummary): SizingOption {
-  return { id: s.id, number: s.number, title: s.title, equipmentTag: s.equipmentTag, headline: formatHeadline(s.service, s.headlineKw) };
+  return {
+    id: s.id,
+    number: s.number,
+    title: s.title,
+    equipmentTag: s.equipmentTag,
+    headline: formatHeadline(s.service, s.headlineKw),
+  };
 }
 
 export function sizingOptionLabel(s: SizingOption): string {

@@ -21,7 +21,11 @@ export default async function NewQuotePage({ searchParams }: { searchParams: Sea
   return (
     <PageBody>
       <PageHeader
-        eyebrow={<Link href="/quotes" className="underline">Quotes</Link>}
+        eyebrow={
+          <Link href="/quotes" className="underline">
+            Quotes
+          </Link>
+        }
         title="New quote"
         description="A draft quote for one customer account. Its lines are sizings saved to that account."
       />
@@ -30,7 +34,11 @@ export default async function NewQuotePage({ searchParams }: { searchParams: Sea
           <NewQuoteForm accounts={accounts} accountId={accountId} sizings={sizings} />
         ) : (
           <p className="text-sm text-ink-muted">
-            There are no customer accounts yet. <Link href="/accounts/new" className="text-tide-600 underline">Create one</Link> first.
+            There are no customer accounts yet.{' '}
+            <Link href="/accounts/new" className="text-tide-600 underline">
+              Create one
+            </Link>{' '}
+            first.
           </p>
         )}
       </Section>

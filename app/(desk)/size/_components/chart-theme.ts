@@ -15,6 +15,14 @@ export const axisTick = { fontSize: CHART.font, fill: CHART.muted };
 
 /** Axis label props for recharts. */
 export function axisLabel(value: string, axis: 'x' | 'y' | 'y2') {
-  if (axis === 'x') return { value, position: 'insideBottom' as const, offset: -12, fontSize: CHART.font, fill: CHART.ink };
-  return { value, angle: axis === 'y' ? -90 : 90, position: axis === 'y' ? ('insideLeft' as const) : ('insideRight' as const), fontSize: CHART.font, fill: CHART.ink, style: { textAnchor: 'middle' as const } };
+  if (axis === 'x')
+    return { value, position: 'insideBottom' as const, offset: -12, fontSize: CHART.font, fill: CHART.ink };
+  return {
+    value,
+    angle: axis === 'y' ? -90 : 90,
+    position: axis === 'y' ? ('insideLeft' as const) : ('insideRight' as const),
+    fontSize: CHART.font,
+    fill: CHART.ink,
+    style: { textAnchor: 'middle' as const },
+  };
 }

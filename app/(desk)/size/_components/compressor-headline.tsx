@@ -13,24 +13,60 @@ export function CompressorHeadline({ result, system }: { result: CompressorResul
   const hot = showTemperature(hottest, system);
   return (
     <>
-      <div data-testid="result-headline" aria-live="polite" aria-atomic="true" className="rounded-md bg-tide-50 px-4 py-3 text-tide-700">
-        <p className="text-label uppercase tracking-wide">Shaft power · {c.stageCount} stage{c.stageCount > 1 ? 's' : ''}, {c.basis}</p>
+      <div
+        data-testid="result-headline"
+        aria-live="polite"
+        aria-atomic="true"
+        className="rounded-md bg-tide-50 px-4 py-3 text-tide-700"
+      >
+        <p className="text-label uppercase tracking-wide">
+          Shaft power · {c.stageCount} stage{c.stageCount > 1 ? 's' : ''}, {c.basis}
+        </p>
         <p className="text-figure-xl text-ink">
-          <span data-testid="result-shaft-power-kw" className="font-mono tabular">{formatKw(c.shaftPowerKw)}</span>
+          <span data-testid="result-shaft-power-kw" className="font-mono tabular">
+            {formatKw(c.shaftPowerKw)}
+          </span>
           <span className="ml-2 text-figure-lg text-ink-soft">kW</span>
         </p>
-        <p className="font-mono text-sm text-ink-soft" data-testid="result-shaft-power-hp">{formatHp(c.shaftPowerKw)} hp</p>
+        <p className="font-mono text-sm text-ink-soft" data-testid="result-shaft-power-hp">
+          {formatHp(c.shaftPowerKw)} hp
+        </p>
         <p className="mt-1 text-sm text-ink">
           Motor{' '}
-          {c.motor.iecKw === null ? 'above the IEC series' : <>IEC <strong data-testid="result-motor-iec-kw" className="font-mono">{c.motor.iecKw}</strong> kW</>}
+          {c.motor.iecKw === null ? (
+            'above the IEC series'
+          ) : (
+            <>
+              IEC{' '}
+              <strong data-testid="result-motor-iec-kw" className="font-mono">
+                {c.motor.iecKw}
+              </strong>{' '}
+              kW
+            </>
+          )}
           {' / '}
-          {c.motor.nemaHp === null ? 'above the NEMA series' : <>NEMA <strong data-testid="result-motor-nema-hp" className="font-mono">{c.motor.nemaHp}</strong> hp</>}
+          {c.motor.nemaHp === null ? (
+            'above the NEMA series'
+          ) : (
+            <>
+              NEMA{' '}
+              <strong data-testid="result-motor-nema-hp" className="font-mono">
+                {c.motor.nemaHp}
+              </strong>{' '}
+              hp
+            </>
+          )}
           <span className="text-ink-soft"> (≥ {c.motor.requiredMarginPercent} % over shaft)</span>
         </p>
       </div>
       <KeyFigures>
         <KeyFigure label="Gas power" value={formatKw(c.gasPowerKw)} unit="kW" testId="result-gas-power-kw" />
-        <KeyFigure label="Ratio per stage" value={fixed(c.stagePressureRatio, 3)} note={`overall ${fixed(c.overallPressureRatio, 2)}`} testId="result-stage-ratio" />
+        <KeyFigure
+          label="Ratio per stage"
+          value={fixed(c.stagePressureRatio, 3)}
+          note={`overall ${fixed(c.overallPressureRatio, 2)}`}
+          testId="result-stage-ratio"
+        />
         <KeyFigure
           label="Hottest discharge"
           value={hot.value}
@@ -43,9 +79,19 @@ export function CompressorHeadline({ result, system }: { result: CompressorResul
             </span>
           }
         />
-        <KeyFigure label="Stages to meet the limit" value={c.suggestedStages === null ? 'none ≤ 6' : String(c.suggestedStages)} testId="result-suggested-stages" />
+        <KeyFigure
+          label="Stages to meet the limit"
+          value={c.suggestedStages === null ? 'none ≤ 6' : String(c.suggestedStages)}
+          testId="result-suggested-stages"
+        />
         <KeyFigure label="Intercooling, total" value={formatKw(method.totalIntercoolerDutyKw)} unit="kW" />
-        <KeyFigure label="Constant-k vs variable-cp" value={formatPercent(c.methodDifferencePercent)} unit="%" note="gas power difference" testId="result-method-difference" />
+        <KeyFigure
+          label="Constant-k vs variable-cp"
+          value={formatPercent(c.methodDifferencePercent)}
+          unit="%"
+          note="gas power difference"
+          testId="result-method-difference"
+        />
       </KeyFigures>
     </>
   );

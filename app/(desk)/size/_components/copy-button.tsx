@@ -39,7 +39,13 @@ export function CopyButton({ text, label, testId, disabled, primary }: Props) {
       {state === 'manual' && (
         <label className="mt-2 block text-hint text-ink-muted">
           The browser blocked copying: press Ctrl+C (⌘C) to copy the selected text.
-          <textarea ref={areaRef} readOnly value={text} rows={6} className="mt-1 block w-full rounded-md border border-paper-line bg-paper-raised p-2 font-mono text-xs" />
+          <textarea
+            ref={areaRef}
+            readOnly
+            value={text}
+            rows={6}
+            className="mt-1 block w-full rounded-md border border-paper-line bg-paper-raised p-2 font-mono text-xs"
+          />
         </label>
       )}
     </div>

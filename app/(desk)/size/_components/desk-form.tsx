@@ -25,7 +25,13 @@ export function DeskForm({ errors, ready, input, issues, accent, accountChoice, 
   return (
     <div className="min-w-0 print:hidden">
       <StepNav errors={errors} ready={ready} />
-      <form noValidate onSubmit={(e) => e.preventDefault()} aria-label="Duty point" className="space-y-4" data-testid="desk-form">
+      <form
+        noValidate
+        onSubmit={(e) => e.preventDefault()}
+        aria-label="Duty point"
+        className="space-y-4"
+        data-testid="desk-form"
+      >
         <ServiceStep accountChoice={accountChoice} fixedAccountName={fixedAccountName} />
         <GasStep />
         <FlowStep />

@@ -1,7 +1,15 @@
 import type { ReactNode } from 'react';
 
 /** The desk's title row: what it does, the unit system, a fresh start; then any notices about how it opened. */
-export function DeskHeader({ toggle, onNew, notices }: { toggle: ReactNode; onNew: () => void; notices: readonly string[] }) {
+export function DeskHeader({
+  toggle,
+  onNew,
+  notices,
+}: {
+  toggle: ReactNode;
+  onNew: () => void;
+  notices: readonly string[];
+}) {
   return (
     <header className="border-b border-paper-line pb-3 print:border-0">
       <div className="flex flex-wrap items-start justify-between gap-4">
@@ -14,7 +22,12 @@ export function DeskHeader({ toggle, onNew, notices }: { toggle: ReactNode; onNe
         </div>
         <div className="flex items-start gap-3 print:hidden">
           {toggle}
-          <button type="button" onClick={onNew} className="rounded-md border border-paper-line bg-paper-raised px-3 py-1.5 text-sm text-ink hover:bg-paper-sunk" data-testid="new-sizing">
+          <button
+            type="button"
+            onClick={onNew}
+            className="rounded-md border border-paper-line bg-paper-raised px-3 py-1.5 text-sm text-ink hover:bg-paper-sunk"
+            data-testid="new-sizing"
+          >
             Start over
           </button>
         </div>
@@ -22,7 +35,12 @@ export function DeskHeader({ toggle, onNew, notices }: { toggle: ReactNode; onNe
       {notices.length > 0 && (
         <ul className="mt-3 space-y-1" data-testid="desk-notices">
           {notices.map((n) => (
-            <li key={n} className="rounded-md border border-severity-info/30 bg-paper-raised px-3 py-1.5 text-sm text-severity-info">{n}</li>
+            <li
+              key={n}
+              className="rounded-md border border-severity-info/30 bg-paper-raised px-3 py-1.5 text-sm text-severity-info"
+            >
+              {n}
+            </li>
           ))}
         </ul>
       )}

@@ -24,7 +24,11 @@ export function FieldFrame({ inputId, label, hint, error, testKey, children, cla
         </p>
       )}
       {error && (
-        <p id={`${inputId}-error`} data-testid={`error-${testKey}`} className="mt-1 flex gap-1 text-hint font-medium text-severity-danger">
+        <p
+          id={`${inputId}-error`}
+          data-testid={`error-${testKey}`}
+          className="mt-1 flex gap-1 text-hint font-medium text-severity-danger"
+        >
           <svg viewBox="0 0 12 12" aria-hidden="true" className="mt-px h-3 w-3 shrink-0">
             <path d="M6 1 11 10H1Z" fill="none" stroke="currentColor" strokeWidth="1.4" strokeLinejoin="round" />
             <path d="M6 4.5v2.5M6 8.4v.1" stroke="currentColor" strokeWidth="1.4" strokeLinecap="round" />

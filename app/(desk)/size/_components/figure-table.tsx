@@ -1,9 +1,24 @@
 import type { ReactNode } from 'react';
 
-export type FigureRow = { label: ReactNode; value: string; unit?: string; testId?: string; note?: ReactNode; strong?: boolean };
+export type FigureRow = {
+  label: ReactNode;
+  value: string;
+  unit?: string;
+  testId?: string;
+  note?: ReactNode;
+  strong?: boolean;
+};
 
 /** A two-column table of labelled figures, numbers right-aligned in tabular digits. */
-export function FigureTable({ caption, rows, testId }: { caption: string; rows: readonly FigureRow[]; testId?: string }) {
+export function FigureTable({
+  caption,
+  rows,
+  testId,
+}: {
+  caption: string;
+  rows: readonly FigureRow[];
+  testId?: string;
+}) {
   return (
     <table className="w-full text-sm" data-testid={testId}>
       <caption className="mb-1 text-left text-label uppercase tracking-wide text-ink-muted">{caption}</caption>
@@ -26,10 +41,25 @@ export function FigureTable({ caption, rows, testId }: { caption: string; rows: 
 }
 
 /** A titled block in the result details. */
-export function DetailCard({ title, id, children, className = '' }: { title: string; id: string; children: ReactNode; className?: string }) {
+export function DetailCard({
+  title,
+  id,
+  children,
+  className = '',
+}: {
+  title: string;
+  id: string;
+  children: ReactNode;
+  className?: string;
+}) {
   return (
-    <section aria-labelledby={id} className={`break-inside-avoid rounded-panel border border-paper-line bg-paper-raised p-panel shadow-panel print:shadow-none ${className}`}>
-      <h2 id={id} className="mb-3 text-base font-semibold">{title}</h2>
+    <section
+      aria-labelledby={id}
+      className={`break-inside-avoid rounded-panel border border-paper-line bg-paper-raised p-panel shadow-panel print:shadow-none ${className}`}
+    >
+      <h2 id={id} className="mb-3 text-base font-semibold">
+        {title}
+      </h2>
       {children}
     </section>
   );

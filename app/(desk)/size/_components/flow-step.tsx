@@ -18,11 +18,23 @@ export function FlowStep() {
   const values = getValues();
   const compressor = desk.service === 'compressor';
   return (
-    <StepSection step={DESK_STEPS[2]!} accent={compressor ? 'tide' : 'copper'} description="Mass, standard-volume or actual flow; inlet temperature and pressure.">
+    <StepSection
+      step={DESK_STEPS[2]!}
+      accent={compressor ? 'tide' : 'copper'}
+      description="Mass, standard-volume or actual flow; inlet temperature and pressure."
+    >
       <FieldGrid>
         <QuantityField path="flow" label="Flow" hint={flowHint(values.flow, flowContextOf(values))} />
-        <QuantityField path="inlet.temperature" label={compressor ? 'Suction temperature' : 'Inlet temperature'} hint="Gas temperature entering; 200 to 6000 K property range." />
-        <QuantityField path="inlet.pressure" label={compressor ? 'Suction pressure' : 'Inlet pressure'} hint={pressureHint(values.inlet.pressure, barometricPaOf(values))} />
+        <QuantityField
+          path="inlet.temperature"
+          label={compressor ? 'Suction temperature' : 'Inlet temperature'}
+          hint="Gas temperature entering; 200 to 6000 K property range."
+        />
+        <QuantityField
+          path="inlet.pressure"
+          label={compressor ? 'Suction pressure' : 'Inlet pressure'}
+          hint={pressureHint(values.inlet.pressure, barometricPaOf(values))}
+        />
       </FieldGrid>
     </StepSection>
   );

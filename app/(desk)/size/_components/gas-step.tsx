@@ -21,7 +21,11 @@ export function GasStep() {
   const error = desk.errors['gas.preset'];
   const hint = preset?.note ?? (preset?.moleFractions ? 'Pure component, ideal-gas properties.' : undefined);
   return (
-    <StepSection step={DESK_STEPS[1]!} accent={desk.service === 'heater' ? 'copper' : 'tide'} description="Properties come from NASA polynomials for the composition given here.">
+    <StepSection
+      step={DESK_STEPS[1]!}
+      accent={desk.service === 'heater' ? 'copper' : 'tide'}
+      description="Properties come from NASA polynomials for the composition given here."
+    >
       <div className="space-y-4">
         <ChoiceGroup
           name="gas.mode"
@@ -43,7 +47,9 @@ export function GasStep() {
                 {...register('gas.preset')}
               >
                 {GAS_PRESETS.map((p) => (
-                  <option key={p.id} value={p.id}>{p.displayName}</option>
+                  <option key={p.id} value={p.id}>
+                    {p.displayName}
+                  </option>
                 ))}
               </select>
             </FieldFrame>

@@ -21,9 +21,18 @@ export function HumidityFields() {
         ]}
       />
       {by === 'rh' ? (
-        <PlainNumberField path="gas.relativeHumidityPercent" label="Relative humidity" suffix="%" hint="At the inlet temperature and pressure; 0 to 100 %." />
+        <PlainNumberField
+          path="gas.relativeHumidityPercent"
+          label="Relative humidity"
+          suffix="%"
+          hint="At the inlet temperature and pressure; 0 to 100 %."
+        />
       ) : (
-        <QuantityField path="gas.dewPoint" label="Dew point" hint="At the inlet pressure; must not exceed the inlet temperature." />
+        <QuantityField
+          path="gas.dewPoint"
+          label="Dew point"
+          hint="At the inlet pressure; must not exceed the inlet temperature."
+        />
       )}
     </div>
   );

@@ -9,13 +9,18 @@ export function IssueList({ issues, testId }: { issues: DeskIssues; testId: stri
     <ul data-testid={testId} className="space-y-1 text-sm">
       {entries.map(([key, message]) => (
         <li key={key}>
-          <a href={`#${inputIdOf(key)}`} className="text-severity-danger underline decoration-dotted underline-offset-2">
+          <a
+            href={`#${inputIdOf(key)}`}
+            className="text-severity-danger underline decoration-dotted underline-offset-2"
+          >
             {message}
           </a>
         </li>
       ))}
       {issues.general.map((m) => (
-        <li key={m} className="text-severity-danger">{m}</li>
+        <li key={m} className="text-severity-danger">
+          {m}
+        </li>
       ))}
     </ul>
   );

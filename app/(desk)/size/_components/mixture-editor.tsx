@@ -12,7 +12,8 @@ import { MixtureSumLine } from './mixture-sum-line';
 
 // Humid air has no fixed composition to start from.
 const FIXED_PRESETS = GAS_PRESETS.filter((p) => p.moleFractions);
-const button = 'rounded-md border border-paper-line bg-paper-raised px-3 py-1.5 text-sm text-ink hover:bg-paper-sunk disabled:opacity-50';
+const button =
+  'rounded-md border border-paper-line bg-paper-raised px-3 py-1.5 text-sm text-ink hover:bg-paper-sunk disabled:opacity-50';
 
 /** Components and fractions with a live sum, Normalise, and a start from any preset's composition. */
 export function MixtureEditor() {
@@ -33,7 +34,14 @@ export function MixtureEditor() {
   return (
     <div className="space-y-3" id={inputIdOf('gas.components')} tabIndex={-1}>
       <div className="flex flex-wrap items-end gap-4">
-        <ChoiceGroup name="gas.basis" legend="Fractions are" choices={[{ value: 'mole', label: 'Mole', testId: 'basis-mole' }, { value: 'mass', label: 'Mass', testId: 'basis-mass' }]} />
+        <ChoiceGroup
+          name="gas.basis"
+          legend="Fractions are"
+          choices={[
+            { value: 'mole', label: 'Mole', testId: 'basis-mole' },
+            { value: 'mass', label: 'Mass', testId: 'basis-mass' },
+          ]}
+        />
         <label className="text-label text-ink-soft">
           Start from
           <select
@@ -43,7 +51,11 @@ export function MixtureEditor() {
             data-testid="mixture-from-preset"
           >
             <option value="">a named gas…</option>
-            {FIXED_PRESETS.map((p) => <option key={p.id} value={p.id}>{p.displayName}</option>)}
+            {FIXED_PRESETS.map((p) => (
+              <option key={p.id} value={p.id}>
+                {p.displayName}
+              </option>
+            ))}
           </select>
         </label>
       </div>
@@ -51,24 +63,51 @@ export function MixtureEditor() {
         <caption className="sr-only">Mixture components</caption>
         <thead>
           <tr className="text-left text-label text-ink-soft">
-            <th scope="col" className="pb-1 font-medium">Component</th>
-            <th scope="col" className="pb-1 font-medium">{basis === 'mass' ? 'Mass' : 'Mole'} fraction</th>
-            <th scope="col"><span className="sr-only">Remove</span></th>
+            <th scope="col" className="pb-1 font-medium">
+              Component
+            </th>
+            <th scope="col" className="pb-1 font-medium">
+              {basis === 'mass' ? 'Mass' : 'Mole'} fraction
+            </th>
+            <th scope="col">
+              <span className="sr-only">Remove</span>
+            </th>
           </tr>
         </thead>
         <tbody>
           {fields.map((f, i) => (
             <tr key={f.id} data-testid={`mixture-row-${i}`}>
               <td className="py-1 pr-2">
-                <select aria-label={`Component ${i + 1}`} className="w-full rounded-md border border-paper-line bg-paper-raised px-2 py-2 text-sm" {...register(`gas.components.${i}.species`)}>
-                  {SPECIES_OPTIONS.map((o) => <option key={o.value} value={o.value}>{o.label}</option>)}
+                <select
+                  aria-label={`Component ${i + 1}`}
+                  className="w-full rounded-md border border-paper-line bg-paper-raised px-2 py-2 text-sm"
+                  {...register(`gas.components.${i}.species`)}
+                >
+                  {SPECIES_OPTIONS.map((o) => (
+                    <option key={o.value} value={o.value}>
+                      {o.label}
+                    </option>
+                  ))}
                 </select>
               </td>
               <td className="py-1 pr-2">
-                <input aria-label={`Fraction of component ${i + 1}`} inputMode="decimal" autoComplete="off" data-testid={`mixture-fraction-${i}`} className={inputClass(false)} {...register(`gas.components.${i}.fraction`)} />
+                <input
+                  aria-label={`Fraction of component ${i + 1}`}
+                  inputMode="decimal"
+                  autoComplete="off"
+                  data-testid={`mixture-fraction-${i}`}
+                  className={inputClass(false)}
+                  {...register(`gas.components.${i}.fraction`)}
+                />
               </td>
               <td className="py-1 text-right">
-                <button type="button" className={button} onClick={() => remove(i)} disabled={fields.length <= 1} aria-label={`Remove component ${i + 1}`}>
+                <button
+                  type="button"
+                  className={button}
+                  onClick={() => remove(i)}
+                  disabled={fields.length <= 1}
+                  aria-label={`Remove component ${i + 1}`}
+                >
                   Remove
                 </button>
               </td>
@@ -77,11 +116,31 @@ export function MixtureEditor() {
         </tbody>
       </table>
       <div className="flex flex-wrap items-center gap-3">
-        <button type="button" className={button} onClick={() => append({ species: 'N2', fraction: '' })} disabled={fields.length >= 12} data-testid="mixture-add">Add component</button>
-        <button type="button" className={button} onClick={normalise} disabled={!sum.readable || !(sum.sum > 0) || sum.ok} data-testid="mixture-normalise">Normalise to 1</button>
+        <button
+          type="button"
+          className={button}
+          onClick={() => append({ species: 'N2', fraction: '' })}
+          disabled={fields.length >= 12}
+          data-testid="mixture-add"
+        >
+          Add component
+        </button>
+        <button
+          type="button"
+          className={button}
+          onClick={normalise}
+          disabled={!sum.readable || !(sum.sum > 0) || sum.ok}
+          data-testid="mixture-normalise"
+        >
+          Normalise to 1
+        </button>
         <MixtureSumLine sum={sum} tolerance={FRACTION_SUM_TOLERANCE} />
       </div>
-      {error && <p data-testid="error-gas-components" className="text-hint font-medium text-severity-danger">{error}</p>}
+      {error && (
+        <p data-testid="error-gas-components" className="text-hint font-medium text-severity-danger">
+          {error}
+        </p>
+      )}
     </div>
   );
 }

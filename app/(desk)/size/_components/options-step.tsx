@@ -17,10 +17,24 @@ export function OptionsStep() {
   const step = DESK_STEPS[4]!;
   if (desk.service === 'heater') {
     return (
-      <StepSection step={step} accent="copper" description="Allowances on the absorbed duty, the supply and the catalogue to pick a rating from.">
+      <StepSection
+        step={step}
+        accent="copper"
+        description="Allowances on the absorbed duty, the supply and the catalogue to pick a rating from."
+      >
         <FieldGrid>
-          <PlainNumberField path="heatLossPercent" label="Heat loss" suffix="%" hint="Of the absorbed duty; typically 2-10 % (0 to 50 %)." />
-          <PlainNumberField path="designMarginPercent" label="Design margin" suffix="%" hint="On absorbed duty plus loss; typically 10-25 % (0 to 100 %)." />
+          <PlainNumberField
+            path="heatLossPercent"
+            label="Heat loss"
+            suffix="%"
+            hint="Of the absorbed duty; typically 2-10 % (0 to 50 %)."
+          />
+          <PlainNumberField
+            path="designMarginPercent"
+            label="Design margin"
+            suffix="%"
+            hint="On absorbed duty plus loss; typically 10-25 % (0 to 100 %)."
+          />
           <SupplyFields forMotor={false} />
           <PlainNumberField
             path="heaterRatingsKw"
@@ -35,14 +49,31 @@ export function OptionsStep() {
     );
   }
   return (
-    <StepSection step={step} accent="tide" description="Driver losses, the discharge temperature limit and which method heads the result.">
+    <StepSection
+      step={step}
+      accent="tide"
+      description="Driver losses, the discharge temperature limit and which method heads the result."
+    >
       <FieldGrid>
-        <PlainNumberField path="mechanicalEfficiency" label="Mechanical efficiency" suffix="fraction" hint="Bearings, seals and gear; typically 0.95-0.99." />
-        <QuantityField path="dischargeTemperatureLimit" label="Discharge temperature limit" placeholder="default" hint="Blank: 150 °C, or 135 °C for hydrogen-rich gas (API 618 practice)." />
+        <PlainNumberField
+          path="mechanicalEfficiency"
+          label="Mechanical efficiency"
+          suffix="fraction"
+          hint="Bearings, seals and gear; typically 0.95-0.99."
+        />
+        <QuantityField
+          path="dischargeTemperatureLimit"
+          label="Discharge temperature limit"
+          placeholder="default"
+          hint="Blank: 150 °C, or 135 °C for hydrogen-rich gas (API 618 practice)."
+        />
         <ChoiceGroup
           name="method"
           legend="Method basis for the headline"
-          choices={[{ value: 'variable-cp', label: 'Variable cp', testId: 'method-variable-cp' }, { value: 'constant-k', label: 'Constant k', testId: 'method-constant-k' }]}
+          choices={[
+            { value: 'variable-cp', label: 'Variable cp', testId: 'method-variable-cp' },
+            { value: 'constant-k', label: 'Constant k', testId: 'method-constant-k' },
+          ]}
           hint="Both are always computed and compared; variable cp integrates the property data."
           error={desk.errors.method}
         />

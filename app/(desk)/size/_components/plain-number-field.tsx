@@ -8,7 +8,15 @@ import { inputIdOf } from '@/lib/desk/steps';
 import { useDesk } from './desk-context';
 import { FieldFrame, describedBy, inputClass } from './field-frame';
 
-type Props = { path: FieldKey; label: string; suffix?: string; hint?: ReactNode; placeholder?: string; className?: string; wide?: boolean };
+type Props = {
+  path: FieldKey;
+  label: string;
+  suffix?: string;
+  hint?: ReactNode;
+  placeholder?: string;
+  className?: string;
+  wide?: boolean;
+};
 
 /** A number in a fixed unit (%, V, a fraction), the unit shown beside it. */
 export function PlainNumberField({ path, label, suffix, hint, placeholder, className, wide }: Props) {
@@ -34,7 +42,10 @@ export function PlainNumberField({ path, label, suffix, hint, placeholder, class
           {...register(path as Path<DeskValues>)}
         />
         {suffix && (
-          <span aria-hidden="true" className="-ml-px inline-flex w-16 shrink-0 items-center justify-center rounded-r-md border border-paper-line bg-paper-sunk px-2 text-sm text-ink-soft">
+          <span
+            aria-hidden="true"
+            className="-ml-px inline-flex w-16 shrink-0 items-center justify-center rounded-r-md border border-paper-line bg-paper-sunk px-2 text-sm text-ink-soft"
+          >
             {suffix}
           </span>
         )}

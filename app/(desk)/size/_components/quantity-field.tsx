@@ -11,7 +11,13 @@ import { UNIT_GROUPS, unitLabel } from '@/lib/desk/unit-systems';
 import { useDesk } from './desk-context';
 import { FieldFrame, describedBy, inputClass } from './field-frame';
 
-type Props = { path: QuantityPath & FieldKey; label: string; hint?: ReactNode; placeholder?: string; className?: string };
+type Props = {
+  path: QuantityPath & FieldKey;
+  label: string;
+  hint?: ReactNode;
+  placeholder?: string;
+  className?: string;
+};
 
 /** A number with its unit picker; changing the unit converts the number so the physical value stays. */
 export function QuantityField({ path, label, hint, placeholder, className }: Props) {

@@ -12,7 +12,15 @@ import { StageChart } from './stage-chart';
 import { SweepChart } from './sweep-chart';
 
 /** The pictures: cp across a heater's range, or a compressor's stages and its 1-6 stage sweep. */
-export function ResultCharts({ result, input, system }: { result: SizingResult; input: SizingInput; system: UnitSystem }) {
+export function ResultCharts({
+  result,
+  input,
+  system,
+}: {
+  result: SizingResult;
+  input: SizingInput;
+  system: UnitSystem;
+}) {
   const cp = useMemo(() => (result.service === 'heater' ? heaterCpChart(result, system) : null), [result, system]);
   const stages = useMemo(() => (result.service === 'compressor' ? stageChart(result, system) : null), [result, system]);
   const sweep = useMemo(() => (input.service === 'compressor' ? stageSweep(input, system) : null), [input, system]);

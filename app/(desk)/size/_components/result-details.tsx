@@ -20,7 +20,10 @@ type Props = { result: SizingResult; input: SizingInput; system: UnitSystem; sta
 /** The full breakdown under the form: figures, pictures, warnings and basis; printable on its own. */
 export const ResultDetails = memo(function ResultDetails({ result, input, system, stale }: Props) {
   return (
-    <div data-testid="result-details" className={`mt-6 grid gap-6 transition-opacity xl:grid-cols-2 print:mt-0 print:block print:space-y-4 ${stale ? 'opacity-55' : ''}`}>
+    <div
+      data-testid="result-details"
+      className={`mt-6 grid gap-6 transition-opacity xl:grid-cols-2 print:mt-0 print:block print:space-y-4 ${stale ? 'opacity-55' : ''}`}
+    >
       <DetailCard title="Duty point" id="detail-duty-point" className="hidden print:block">
         <DutyPointTable input={input} />
       </DetailCard>
@@ -50,7 +53,9 @@ export const ResultDetails = memo(function ResultDetails({ result, input, system
       </DetailCard>
       <DetailCard title="Basis" id="detail-basis" className="xl:col-span-2">
         <BasisPanel basis={result.basis} engineVersion={result.engineVersion} />
-        <div className="mt-3"><PreliminaryStatement result={result} /></div>
+        <div className="mt-3">
+          <PreliminaryStatement result={result} />
+        </div>
       </DetailCard>
     </div>
   );

@@ -14,10 +14,16 @@ type Props = { input: SizingInput | null; issues: DeskIssues | null; accent: 'co
 export function ReviewStep({ input, issues, accent }: Props) {
   const json = input ? JSON.stringify(input, null, 2) : '';
   return (
-    <StepSection step={DESK_STEPS[5]!} accent={accent} description="What the calculator receives: canonical units, defaults filled in.">
+    <StepSection
+      step={DESK_STEPS[5]!}
+      accent={accent}
+      description="What the calculator receives: canonical units, defaults filled in."
+    >
       {input ? (
         <div className="space-y-3">
-          <p className="text-sm text-tide-700" data-testid="review-ready">Ready: the result updates as you type.</p>
+          <p className="text-sm text-tide-700" data-testid="review-ready">
+            Ready: the result updates as you type.
+          </p>
           <DutyPointTable input={input} />
           <details className="rounded-md border border-paper-line bg-paper-sunk p-3 text-sm">
             <summary className="cursor-pointer font-medium">Request for the calculate API</summary>

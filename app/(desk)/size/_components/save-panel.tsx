@@ -17,7 +17,14 @@ import { SaveOutcome, type Saved } from './save-outcome';
 const metaForm = sizingMetaSchema.pick({ title: true, equipmentTag: true, notes: true, quoteId: true });
 type MetaValues = z.input<typeof metaForm>;
 
-type Props = { input: SizingInput | null; accountId: string; accounts: readonly AccountSite[]; quotes: readonly QuoteOption[]; canQuote: boolean; reopened: ReopenedSizing | null };
+type Props = {
+  input: SizingInput | null;
+  accountId: string;
+  accounts: readonly AccountSite[];
+  quotes: readonly QuoteOption[];
+  canQuote: boolean;
+  reopened: ReopenedSizing | null;
+};
 
 /** Title, tag and notes, an optional draft quote, then the server action that recomputes and stores it. */
 export function SavePanel({ input, accountId, accounts, quotes, canQuote, reopened }: Props) {
@@ -51,22 +58,56 @@ export function SavePanel({ input, accountId, accounts, quotes, canQuote, reopen
       }
       const other: string[] = [];
       for (const [key, messages] of Object.entries(res.fieldErrors)) {
-        if (key === 'title' || key === 'equipmentTag' || key === 'notes' || key === 'quoteId') setError(key, { type: 'server', message: messages.join(' ') });
+        if (key === 'title' || key === 'equipmentTag' || key === 'notes' || key === 'quoteId')
+          setError(key, { type: 'server', message: messages.join(' ') });
         else other.push(messages.join(' '));
       }
       setFormError([res.formError, ...other].filter(Boolean).join(' '));
     });
   });
   return (
-    <section aria-labelledby="save-title" className="rounded-panel border border-paper-line bg-paper-raised p-panel shadow-panel print:hidden" data-testid="save-panel">
-      <h2 id="save-title" className="text-base font-semibold">{revisedFromId ? `Save as a revision of ${reopened?.number ?? 'the sizing'}` : 'Save this sizing'}</h2>
+    <section
+      aria-labelledby="save-title"
+      className="rounded-panel border border-paper-line bg-paper-raised p-panel shadow-panel print:hidden"
+      data-testid="save-panel"
+    >
+      <h2 id="save-title" className="text-base font-semibold">
+        {revisedFromId ? `Save as a revision of ${reopened?.number ?? 'the sizing'}` : 'Save this sizing'}
+      </h2>
       <p className="mt-1 text-hint text-ink-muted">
-        To {account ? <strong className="text-ink" data-testid="save-account-name">{account.name}</strong> : <a className="text-severity-danger underline" href="#step-service">no account chosen (step 1)</a>}
+        To{' '}
+        {account ? (
+          <strong className="text-ink" data-testid="save-account-name">
+            {account.name}
+          </strong>
+        ) : (
+          <a className="text-severity-danger underline" href="#step-service">
+            no account chosen (step 1)
+          </a>
+        )}
       </p>
       <form onSubmit={onSubmit} noValidate className="mt-3 space-y-3">
-        <TextField label="Title" data-testid="save-title" placeholder="e.g. Dryer air preheater, line 2" error={formState.errors.title?.message} {...register('title')} />
-        <TextField label="Equipment tag (optional)" data-testid="save-tag" placeholder="e.g. E-2104" error={formState.errors.equipmentTag?.message} {...register('equipmentTag')} />
-        <TextareaField label="Notes (optional)" rows={2} data-testid="save-notes" error={formState.errors.notes?.message} {...register('notes')} />
+        <TextField
+          label="Title"
+          data-testid="save-title"
+          placeholder="e.g. Dryer air preheater, line 2"
+          error={formState.errors.title?.message}
+          {...register('title')}
+        />
+        <TextField
+          label="Equipment tag (optional)"
+          data-testid="save-tag"
+          placeholder="e.g. E-2104"
+          error={formState.errors.equipmentTag?.message}
+          {...register('equipmentTag')}
+        />
+        <TextareaField
+          label="Notes (optional)"
+          rows={2}
+          data-testid="save-notes"
+          error={formState.errors.notes?.message}
+          {...register('notes')}
+        />
         {canQuote && (
           <SelectField
             label="Add to draft quote (optional)"
@@ -77,8 +118,21 @@ export function SavePanel({ input, accountId, accounts, quotes, canQuote, reopen
             {...register('quoteId')}
           />
         )}
-        {formError && <p role="alert" data-testid="save-error" className="rounded-md bg-copper-50 px-3 py-2 text-sm text-severity-danger">{formError}</p>}
-        <button type="submit" data-testid="save-submit" disabled={pending || !input} className="w-full rounded-md bg-tide-600 px-4 py-2 text-sm font-medium text-white hover:bg-tide-700 disabled:cursor-not-allowed disabled:opacity-60">
+        {formError && (
+          <p
+            role="alert"
+            data-testid="save-error"
+            className="rounded-md bg-copper-50 px-3 py-2 text-sm text-severity-danger"
+          >
+            {formError}
+          </p>
+        )}
+        <button
+          type="submit"
+          data-testid="save-submit"
+          disabled={pending || !input}
+          className="w-full rounded-md bg-tide-600 px-4 py-2 text-sm font-medium text-white hover:bg-tide-700 disabled:cursor-not-allowed disabled:opacity-60"
+        >
           {pending ? 'Saving…' : revisedFromId ? 'Save revision' : 'Save sizing'}
         </button>
       </form>
@@ -86,7 +140,12 @@ export function SavePanel({ input, accountId, accounts, quotes, canQuote, reopen
       {reopened && (
         <p className="mt-3 text-hint text-ink-muted">
           Opened from {reopened.number} (revision {reopened.revision}).{' '}
-          <Link className="text-tide-700 underline" href={`/size?sizing=${reopened.id}${reopened.revise ? '' : '&revise=1'}`}>{reopened.revise ? 'Duplicate instead' : 'Revise instead'}</Link>
+          <Link
+            className="text-tide-700 underline"
+            href={`/size?sizing=${reopened.id}${reopened.revise ? '' : '&revise=1'}`}
+          >
+            {reopened.revise ? 'Duplicate instead' : 'Revise instead'}
+          </Link>
         </p>
       )}
     </section>

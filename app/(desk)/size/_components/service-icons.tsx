@@ -3,8 +3,20 @@ export function HeaterGlyph({ className = 'h-8 w-8' }: { className?: string }) {
   return (
     <svg viewBox="0 0 32 32" className={className} aria-hidden="true">
       <rect x="3" y="11" width="26" height="12" rx="2" fill="none" stroke="currentColor" strokeWidth="1.6" />
-      <path d="M6 17h3l1.5-3 2 6 2-6 2 6 2-6 2 6 1.5-3H26" fill="none" stroke="currentColor" strokeWidth="1.6" strokeLinejoin="round" />
-      <path d="M11 8c-1-1.5 1-2.5 0-4M16 8c-1-1.5 1-2.5 0-4M21 8c-1-1.5 1-2.5 0-4" fill="none" stroke="currentColor" strokeWidth="1.3" strokeLinecap="round" />
+      <path
+        d="M6 17h3l1.5-3 2 6 2-6 2 6 2-6 2 6 1.5-3H26"
+        fill="none"
+        stroke="currentColor"
+        strokeWidth="1.6"
+        strokeLinejoin="round"
+      />
+      <path
+        d="M11 8c-1-1.5 1-2.5 0-4M16 8c-1-1.5 1-2.5 0-4M21 8c-1-1.5 1-2.5 0-4"
+        fill="none"
+        stroke="currentColor"
+        strokeWidth="1.3"
+        strokeLinecap="round"
+      />
     </svg>
   );
 }

@@ -21,12 +21,19 @@ export function ServiceStep({ accountChoice, fixedAccountName }: Props) {
     onChange: (e: { target: { value: string } }) => {
       const site = sitePressureOf(desk.accounts.find((a) => a.id === e.target.value));
       const unit = getValues('site.barometricPressure.unit');
-      const r = switchUnitValue('barometric', roundForField(site.kpa), 'kPa', unit, { barometricPressurePa: 101_325, flow: null });
+      const r = switchUnitValue('barometric', roundForField(site.kpa), 'kPa', unit, {
+        barometricPressurePa: 101_325,
+        flow: null,
+      });
       setValue('site.barometricPressure.value', r.ok ? r.value : String(site.kpa), { shouldDirty: true });
     },
   });
   return (
-    <StepSection step={DESK_STEPS[0]!} accent={desk.service === 'heater' ? 'copper' : 'tide'} description="What is sized, for which customer, and the site pressure gauge readings refer to.">
+    <StepSection
+      step={DESK_STEPS[0]!}
+      accent={desk.service === 'heater' ? 'copper' : 'tide'}
+      description="What is sized, for which customer, and the site pressure gauge readings refer to."
+    >
       <div className="space-y-4">
         <ServiceChoice />
         <FieldGrid>
@@ -43,10 +50,19 @@ export function ServiceStep({ accountChoice, fixedAccountName }: Props) {
           {accountChoice === 'fixed' && (
             <div>
               <p className="text-label text-ink-soft">Customer account</p>
-              <p className="mt-1 rounded-md border border-paper-line bg-paper-sunk px-3 py-2 text-sm" data-testid="fixed-account">{fixedAccountName}</p>
+              <p
+                className="mt-1 rounded-md border border-paper-line bg-paper-sunk px-3 py-2 text-sm"
+                data-testid="fixed-account"
+              >
+                {fixedAccountName}
+              </p>
             </div>
           )}
-          <QuantityField path="site.barometricPressure" label="Site barometric pressure" hint={`Gauge pressures are read against this; ${desk.barometricSource}.`} />
+          <QuantityField
+            path="site.barometricPressure"
+            label="Site barometric pressure"
+            hint={`Gauge pressures are read against this; ${desk.barometricSource}.`}
+          />
         </FieldGrid>
       </div>
     </StepSection>

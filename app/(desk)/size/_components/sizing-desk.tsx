@@ -24,7 +24,13 @@ import { useBarometricSource } from './use-barometric-source';
 import { useLiveResult } from './use-live-result';
 import { useUnitSystem } from './use-unit-system';
 
-export type Viewer = { signedIn: boolean; roleLabel: string | null; canSave: boolean; canQuote: boolean; customerAccountId: string | null };
+export type Viewer = {
+  signedIn: boolean;
+  roleLabel: string | null;
+  canSave: boolean;
+  canQuote: boolean;
+  customerAccountId: string | null;
+};
 
 type Props = {
   initialValues: DeskValues;
@@ -37,7 +43,15 @@ type Props = {
 };
 
 /** The sizing desk: the guided form on the left, the live result beside it, the breakdown below. */
-export function SizingDesk({ initialValues, system: initialSystem, viewer, accounts, quotes, reopened, notices }: Props) {
+export function SizingDesk({
+  initialValues,
+  system: initialSystem,
+  viewer,
+  accounts,
+  quotes,
+  reopened,
+  notices,
+}: Props) {
   const form = useForm<DeskValues>({ defaultValues: initialValues, resolver: deskResolver, mode: 'onChange' });
   const exact = useRef<ExactValues>({});
   // Browser tests wait for this before typing, so no keystroke lands before React is listening.
@@ -62,9 +76,19 @@ export function SizingDesk({ initialValues, system: initialSystem, viewer, accou
   };
   return (
     <FormProvider {...form}>
-      <DeskProvider value={{ system: units.system, service: values.service, errors, exact, accounts, barometricSource }}>
-        <main data-testid="sizing-desk" data-hydrated={hydrated} className="mx-auto w-full max-w-[96rem] px-4 py-5 md:px-6 xl:px-8">
-          <DeskHeader toggle={<UnitSystemToggle system={units.system} onChange={units.change} note={units.note} />} onNew={startOver} notices={notices} />
+      <DeskProvider
+        value={{ system: units.system, service: values.service, errors, exact, accounts, barometricSource }}
+      >
+        <main
+          data-testid="sizing-desk"
+          data-hydrated={hydrated}
+          className="mx-auto w-full max-w-[96rem] px-4 py-5 md:px-6 xl:px-8"
+        >
+          <DeskHeader
+            toggle={<UnitSystemToggle system={units.system} onChange={units.change} note={units.note} />}
+            onNew={startOver}
+            notices={notices}
+          />
           <div className="mt-4 grid items-start gap-6 lg:grid-cols-[minmax(0,1fr)_20rem] xl:grid-cols-[minmax(0,1fr)_28rem]">
             <DeskForm
               errors={errors}
@@ -75,22 +99,45 @@ export function SizingDesk({ initialValues, system: initialSystem, viewer, accou
               accountChoice={viewer.canSave ? (viewer.customerAccountId ? 'fixed' : 'pick') : 'none'}
               fixedAccountName={accounts.find((a) => a.id === viewer.customerAccountId)?.name ?? null}
             />
-            <aside aria-label="Result and actions" className="space-y-4 lg:sticky lg:top-3 lg:max-h-[calc(100vh-1.5rem)] lg:overflow-y-auto lg:pb-2 print:static print:max-h-none">
+            <aside
+              aria-label="Result and actions"
+              className="space-y-4 lg:sticky lg:top-3 lg:max-h-[calc(100vh-1.5rem)] lg:overflow-y-auto lg:pb-2 print:static print:max-h-none"
+            >
               <ResultPanel live={live} issues={issues} system={units.system} />
               {viewer.canSave ? (
-                <SavePanel input={fresh ? live.input : null} accountId={values.accountId} accounts={accounts} quotes={quotes} canQuote={viewer.canQuote} reopened={reopened} />
+                <SavePanel
+                  input={fresh ? live.input : null}
+                  accountId={values.accountId}
+                  accounts={accounts}
+                  quotes={quotes}
+                  canQuote={viewer.canQuote}
+                  reopened={reopened}
+                />
               ) : viewer.signedIn ? (
-                <p className="rounded-panel border border-paper-line bg-paper-raised p-panel text-sm text-ink-soft" data-testid="save-not-allowed">
-                  Your role ({viewer.roleLabel}) can size and look up sizings; saving is for sales engineers and customers.
+                <p
+                  className="rounded-panel border border-paper-line bg-paper-raised p-panel text-sm text-ink-soft"
+                  data-testid="save-not-allowed"
+                >
+                  Your role ({viewer.roleLabel}) can size and look up sizings; saving is for sales engineers and
+                  customers.
                 </p>
               ) : (
                 <SignInInvite nextPath={validation.ok ? sharePath(validation.input) : '/size'} />
               )}
-              <ShareActions input={validation.ok ? validation.input : null} result={fresh ? live.result : null} system={units.system} />
+              <ShareActions
+                input={validation.ok ? validation.input : null}
+                result={fresh ? live.result : null}
+                system={units.system}
+              />
             </aside>
           </div>
           {live.result && live.input && (live.state === 'ready' || live.state === 'recomputing') && (
-            <ResultDetails result={live.result} input={live.input} system={units.system} stale={live.state === 'recomputing'} />
+            <ResultDetails
+              result={live.result}
+              input={live.input}
+              system={units.system}
+              stale={live.state === 'recomputing'}
+            />
           )}
         </main>
       </DeskProvider>

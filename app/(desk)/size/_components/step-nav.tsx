@@ -6,7 +6,10 @@ type Props = { errors: Partial<Record<FieldKey, string>>; ready: boolean };
 /** The anchored stepper: every section one keystroke away, with the ones that need attention marked. */
 export function StepNav({ errors, ready }: Props) {
   return (
-    <nav aria-label="Sizing steps" className="sticky top-0 z-10 -mx-1 mb-4 bg-paper/95 px-1 py-2 backdrop-blur print:hidden">
+    <nav
+      aria-label="Sizing steps"
+      className="sticky top-0 z-10 -mx-1 mb-4 bg-paper/95 px-1 py-2 backdrop-blur print:hidden"
+    >
       <ol className="flex flex-wrap gap-1.5">
         {DESK_STEPS.map((s) => {
           const bad = s.keys.some((k) => errors[k]);
@@ -18,14 +21,18 @@ export function StepNav({ errors, ready }: Props) {
                 data-testid={`step-link-${s.number}`}
                 data-state={bad ? 'attention' : 'ok'}
                 className={`inline-flex items-center gap-1.5 rounded-full border px-2.5 py-1 text-xs font-medium ${
-                  bad ? 'border-severity-danger/40 bg-paper-raised text-severity-danger' : 'border-paper-line bg-paper-raised text-ink-soft hover:text-ink'
+                  bad
+                    ? 'border-severity-danger/40 bg-paper-raised text-severity-danger'
+                    : 'border-paper-line bg-paper-raised text-ink-soft hover:text-ink'
                 }`}
               >
                 <span className="font-mono">{s.number}</span>
                 {s.label}
                 {bad && (
                   <>
-                    <svg viewBox="0 0 10 10" aria-hidden="true" className="h-2.5 w-2.5"><circle cx="5" cy="5" r="4" fill="currentColor" /></svg>
+                    <svg viewBox="0 0 10 10" aria-hidden="true" className="h-2.5 w-2.5">
+                      <circle cx="5" cy="5" r="4" fill="currentColor" />
+                    </svg>
                     <span className="sr-only">(needs attention)</span>
                   </>
                 )}

@@ -14,7 +14,10 @@ export function StepSection({ step, description, accent, children }: Props) {
       className={`@container scroll-mt-20 rounded-panel border border-l-4 border-paper-line ${bar} bg-paper-raised p-panel shadow-panel`}
     >
       <header className="mb-4 flex items-baseline gap-3">
-        <span aria-hidden="true" className="inline-flex h-6 w-6 shrink-0 items-center justify-center rounded-full bg-ink text-xs font-semibold text-paper">
+        <span
+          aria-hidden="true"
+          className="inline-flex h-6 w-6 shrink-0 items-center justify-center rounded-full bg-ink text-xs font-semibold text-paper"
+        >
           {step.number}
         </span>
         <div>

@@ -18,14 +18,29 @@ const STAGE_CHOICES = [1, 2, 3, 4, 5, 6].map((n) => ({ value: String(n), label: 
 export function TargetStep() {
   const { control, getValues } = useFormContext<DeskValues>();
   const desk = useDesk();
-  useWatch({ control, name: ['inlet', 'outletTemperature', 'dischargePressure', 'stages', 'interstagePressureDropPercent', 'efficiencyKind', 'site'] });
+  useWatch({
+    control,
+    name: [
+      'inlet',
+      'outletTemperature',
+      'dischargePressure',
+      'stages',
+      'interstagePressureDropPercent',
+      'efficiencyKind',
+      'site',
+    ],
+  });
   const v = getValues();
   const step = DESK_STEPS[3]!;
   if (desk.service === 'heater') {
     return (
       <StepSection step={step} accent="copper" description="The temperature the gas must leave at.">
         <FieldGrid>
-          <QuantityField path="outletTemperature" label="Outlet temperature" hint={riseHint(v.inlet.temperature, v.outletTemperature, temperatureToK)} />
+          <QuantityField
+            path="outletTemperature"
+            label="Outlet temperature"
+            hint={riseHint(v.inlet.temperature, v.outletTemperature, temperatureToK)}
+          />
         </FieldGrid>
       </StepSection>
     );
@@ -33,9 +48,17 @@ export function TargetStep() {
   const baro = barometricPaOf(v);
   const polytropic = v.efficiencyKind === 'polytropic';
   return (
-    <StepSection step={step} accent="tide" description="Discharge pressure, number of stages, efficiency and intercooling.">
+    <StepSection
+      step={step}
+      accent="tide"
+      description="Discharge pressure, number of stages, efficiency and intercooling."
+    >
       <FieldGrid>
-        <QuantityField path="dischargePressure" label="Discharge pressure" hint={pressureHint(v.dischargePressure, baro)} />
+        <QuantityField
+          path="dischargePressure"
+          label="Discharge pressure"
+          hint={pressureHint(v.dischargePressure, baro)}
+        />
         <ChoiceGroup
           name="stages"
           legend="Stages"
@@ -45,16 +68,37 @@ export function TargetStep() {
           error={desk.errors.stages}
         />
         <div className="space-y-2">
-          <ChoiceGroup name="efficiencyKind" legend="Efficiency given as" choices={[{ value: 'isentropic', label: 'Isentropic', testId: 'efficiency-isentropic' }, { value: 'polytropic', label: 'Polytropic', testId: 'efficiency-polytropic' }]} />
+          <ChoiceGroup
+            name="efficiencyKind"
+            legend="Efficiency given as"
+            choices={[
+              { value: 'isentropic', label: 'Isentropic', testId: 'efficiency-isentropic' },
+              { value: 'polytropic', label: 'Polytropic', testId: 'efficiency-polytropic' },
+            ]}
+          />
           <PlainNumberField
             path="efficiency"
             label={polytropic ? 'Polytropic efficiency per stage' : 'Isentropic efficiency per stage'}
             suffix="fraction"
-            hint={polytropic ? 'e.g. 0.82; converted to isentropic at the stage ratio.' : 'e.g. 0.78; above 0 and at most 1.'}
+            hint={
+              polytropic
+                ? 'e.g. 0.82; converted to isentropic at the stage ratio.'
+                : 'e.g. 0.78; above 0 and at most 1.'
+            }
           />
         </div>
-        <QuantityField path="intercoolerOutletTemperature" label="Intercooler outlet temperature" placeholder="= suction" hint="Gas temperature after each intercooler; blank cools back to suction." />
-        <PlainNumberField path="interstagePressureDropPercent" label="Interstage pressure drop" suffix="%" hint="Per intercooler, of absolute pressure; typically 1-2 %." />
+        <QuantityField
+          path="intercoolerOutletTemperature"
+          label="Intercooler outlet temperature"
+          placeholder="= suction"
+          hint="Gas temperature after each intercooler; blank cools back to suction."
+        />
+        <PlainNumberField
+          path="interstagePressureDropPercent"
+          label="Interstage pressure drop"
+          suffix="%"
+          hint="Per intercooler, of absolute pressure; typically 1-2 %."
+        />
       </FieldGrid>
     </StepSection>
   );

@@ -37,10 +37,12 @@ export function useLiveResult(key: string | null): LiveResult {
     staleTime: Infinity,
     gcTime: 10 * 60_000,
     retry: (count, err) => err instanceof CalculateError && err.failure.kind === 'rate-limited' && count < 3,
-    retryDelay: (_, err) => (err instanceof CalculateError && err.failure.kind === 'rate-limited' ? err.failure.retryAfterS * 1000 : 1000),
+    retryDelay: (_, err) =>
+      err instanceof CalculateError && err.failure.kind === 'rate-limited' ? err.failure.retryAfterS * 1000 : 1000,
   });
   if (key === null) return { state: 'invalid', result: null, input: null, failure: null };
-  const failure = query.error instanceof CalculateError ? query.error.failure : query.error ? ({ kind: 'network' } as const) : null;
+  const failure =
+    query.error instanceof CalculateError ? query.error.failure : query.error ? ({ kind: 'network' } as const) : null;
   if (query.status === 'error' && settledKey === key) return { state: 'error', result: null, input: null, failure };
   if (!query.data) return { state: 'computing', result: null, input: null, failure: null };
   // Fresh only when the answer is for the input on screen now, not a placeholder or a settling edit.

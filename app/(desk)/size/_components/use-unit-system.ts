@@ -9,7 +9,12 @@ import type { UnitSystem } from '@/lib/desk/unit-systems';
 import { setUnitSystemAction } from '../actions';
 
 /** The desk's unit system: switching converts every field in place and, when signed in, is remembered. */
-export function useUnitSystem(initial: UnitSystem, signedIn: boolean, form: UseFormReturn<DeskValues>, exact: MutableRefObject<ExactValues>) {
+export function useUnitSystem(
+  initial: UnitSystem,
+  signedIn: boolean,
+  form: UseFormReturn<DeskValues>,
+  exact: MutableRefObject<ExactValues>,
+) {
   const [system, setSystem] = useState<UnitSystem>(initial);
   const [note, setNote] = useState<string | null>(null);
   const [, start] = useTransition();

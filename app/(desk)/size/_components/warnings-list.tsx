@@ -17,13 +17,20 @@ export function WarningsList({ warnings }: { warnings: readonly SizingWarning[] 
     <div className="space-y-4" data-testid="warnings">
       {groups.map((g) => (
         <section key={g.severity} aria-label={`${SEVERITY_LABEL[g.severity]} (${g.warnings.length})`}>
-          <h3 className={`mb-1.5 flex items-center gap-1.5 text-label uppercase tracking-wide ${SEVERITY_TEXT[g.severity]}`}>
+          <h3
+            className={`mb-1.5 flex items-center gap-1.5 text-label uppercase tracking-wide ${SEVERITY_TEXT[g.severity]}`}
+          >
             <SeverityIcon severity={g.severity} />
             {SEVERITY_LABEL[g.severity]} · {g.warnings.length}
           </h3>
           <ul className="space-y-1.5">
             {g.warnings.map((w) => (
-              <li key={w.code} data-testid={`warning-${w.code}`} data-severity={w.severity} className={`border-l-4 ${BORDER[w.severity]} bg-paper px-3 py-1.5 text-sm text-ink`}>
+              <li
+                key={w.code}
+                data-testid={`warning-${w.code}`}
+                data-severity={w.severity}
+                className={`border-l-4 ${BORDER[w.severity]} bg-paper px-3 py-1.5 text-sm text-ink`}
+              >
                 <span className="sr-only">{SEVERITY_LABEL[w.severity]}: </span>
                 {w.message}
               </li>

@@ -39,7 +39,8 @@ export function flattenJson(root: unknown): { rows: KvRow[]; truncated: boolean 
     if (isQuantity(v)) {
       rows.push({ path, depth, label, unit: v.unit, value: formatSig4(v.value) });
     } else if (Array.isArray(v)) {
-      if (isScalarList(v)) rows.push({ path, depth, label, unit, value: v.length ? v.map(scalar).join(', ') : '(none)' });
+      if (isScalarList(v))
+        rows.push({ path, depth, label, unit, value: v.length ? v.map(scalar).join(', ') : '(none)' });
       else {
         if (path) rows.push({ path, depth, label, unit, value: null });
         // "Stages" → "Stage 1", "Stage 2"…: each element is one of the plural.

@@ -13,22 +13,39 @@ export function KeyValueTable({ caption, data, testId }: { caption: string; data
         <caption className="sr-only">{caption}</caption>
         <thead className="bg-paper-sunk text-label text-ink-soft">
           <tr>
-            <th scope="col" className="px-3 py-2 font-medium">Item</th>
-            <th scope="col" className="px-3 py-2 text-right font-medium">Value</th>
-            <th scope="col" className="px-3 py-2 font-medium">Unit</th>
+            <th scope="col" className="px-3 py-2 font-medium">
+              Item
+            </th>
+            <th scope="col" className="px-3 py-2 text-right font-medium">
+              Value
+            </th>
+            <th scope="col" className="px-3 py-2 font-medium">
+              Unit
+            </th>
           </tr>
         </thead>
         <tbody>
           {rows.map((r) =>
             r.value === null ? (
               <tr key={r.path} className="border-t border-paper-line bg-paper/60">
-                <th scope="colgroup" colSpan={3} className="px-3 py-1.5 font-semibold text-ink" style={{ paddingLeft: `${0.75 + r.depth * INDENT_REM}rem` }} title={r.path}>
+                <th
+                  scope="colgroup"
+                  colSpan={3}
+                  className="px-3 py-1.5 font-semibold text-ink"
+                  style={{ paddingLeft: `${0.75 + r.depth * INDENT_REM}rem` }}
+                  title={r.path}
+                >
                   {r.label}
                 </th>
               </tr>
             ) : (
               <tr key={r.path} className="border-t border-paper-line">
-                <th scope="row" className="px-3 py-1.5 font-normal text-ink-soft" style={{ paddingLeft: `${0.75 + r.depth * INDENT_REM}rem` }} title={r.path}>
+                <th
+                  scope="row"
+                  className="px-3 py-1.5 font-normal text-ink-soft"
+                  style={{ paddingLeft: `${0.75 + r.depth * INDENT_REM}rem` }}
+                  title={r.path}
+                >
                   {r.label}
                 </th>
                 <td className="tabular px-3 py-1.5 text-right font-mono text-ink">{r.value}</td>
@@ -38,7 +55,9 @@ export function KeyValueTable({ caption, data, testId }: { caption: string; data
           )}
         </tbody>
       </table>
-      {truncated && <p className="px-3 py-2 text-hint text-severity-caution">Long record: only the first rows are shown.</p>}
+      {truncated && (
+        <p className="px-3 py-2 text-hint text-severity-caution">Long record: only the first rows are shown.</p>
+      )}
     </div>
   );
 }

@@ -40,7 +40,11 @@ export function readableKey(key: string): { label: string; unit: string | null }
   let unit: string | null = null;
   for (const [suffix, u] of UNIT_SUFFIXES) {
     // Only a suffix after a lower-case letter or digit is a unit (so "K" alone stays a key, "totalK" is kelvin).
-    if (key.length > suffix.length && key.endsWith(suffix) && /[a-z0-9]/.test(key.charAt(key.length - suffix.length - 1))) {
+    if (
+      key.length > suffix.length &&
+      key.endsWith(suffix) &&
+      /[a-z0-9]/.test(key.charAt(key.length - suffix.length - 1))
+    ) {
       base = key.slice(0, -suffix.length);
       unit = u;
       break;

@@ -10,16 +10,49 @@ import type { SizingDetail } from '@/lib/sizings/queries';
 /** The saved sizing's identity and headline as a definition list. */
 export function SizingMeta({ sizing, linkAccount }: { sizing: SizingDetail; linkAccount: boolean }) {
   const rows: [string, ReactNode][] = [
-    ['Sizing number', <span key="n" className="font-mono" data-testid="sizing-number">{sizing.number}</span>],
+    [
+      'Sizing number',
+      <span key="n" className="font-mono" data-testid="sizing-number">
+        {sizing.number}
+      </span>,
+    ],
     ['Revision', sizing.revision],
-    ['Equipment tag', sizing.equipmentTag ? <span key="t" className="font-mono">{sizing.equipmentTag}</span> : '—'],
-    ['Customer account', linkAccount ? <Link key="a" href={`/accounts/${sizing.accountId}`} className={tableLinkClass}>{sizing.accountName}</Link> : sizing.accountName],
+    [
+      'Equipment tag',
+      sizing.equipmentTag ? (
+        <span key="t" className="font-mono">
+          {sizing.equipmentTag}
+        </span>
+      ) : (
+        '—'
+      ),
+    ],
+    [
+      'Customer account',
+      linkAccount ? (
+        <Link key="a" href={`/accounts/${sizing.accountId}`} className={tableLinkClass}>
+          {sizing.accountName}
+        </Link>
+      ) : (
+        sizing.accountName
+      ),
+    ],
     ['Service', <ServiceBadge key="s" service={sizing.service} />],
     ['Gas', sizing.gasLabel],
-    ['Headline', <strong key="h" className="tabular">{formatHeadline(sizing.service, sizing.headlineKw)}</strong>],
+    [
+      'Headline',
+      <strong key="h" className="tabular">
+        {formatHeadline(sizing.service, sizing.headlineKw)}
+      </strong>,
+    ],
     ['Created by', sizing.createdByName ?? '—'],
     ['Created', formatDateTime(sizing.createdAt)],
-    ['Engine version', <span key="e" className="font-mono">{sizing.engineVersion}</span>],
+    [
+      'Engine version',
+      <span key="e" className="font-mono">
+        {sizing.engineVersion}
+      </span>,
+    ],
   ];
   return <FactList rows={rows} testId="sizing-meta" notes={sizing.notes} />;
 }

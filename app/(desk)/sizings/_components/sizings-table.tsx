@@ -7,9 +7,21 @@ import { formatHeadline } from '@/lib/sizings/headline';
 import type { SizingSummary } from '@/lib/sizings/queries';
 
 const columns: Column<SizingSummary>[] = [
-  { key: 'number', header: 'Sizing', cell: (s) => <Link href={`/sizings/${s.id}`} className={`${tableLinkClass} font-mono`}>{s.number}</Link> },
+  {
+    key: 'number',
+    header: 'Sizing',
+    cell: (s) => (
+      <Link href={`/sizings/${s.id}`} className={`${tableLinkClass} font-mono`}>
+        {s.number}
+      </Link>
+    ),
+  },
   { key: 'title', header: 'Title', cell: (s) => s.title },
-  { key: 'tag', header: 'Equipment tag', cell: (s) => (s.equipmentTag ? <span className="font-mono">{s.equipmentTag}</span> : '—') },
+  {
+    key: 'tag',
+    header: 'Equipment tag',
+    cell: (s) => (s.equipmentTag ? <span className="font-mono">{s.equipmentTag}</span> : '—'),
+  },
   { key: 'account', header: 'Customer account', cell: (s) => s.accountName },
   { key: 'service', header: 'Service', cell: (s) => <ServiceBadge service={s.service} /> },
   { key: 'gas', header: 'Gas', cell: (s) => s.gasLabel },
@@ -18,7 +30,24 @@ const columns: Column<SizingSummary>[] = [
 ];
 
 /** Saved sizings as a dense list; the caller says what to show when there are none. */
-export function SizingsTable({ sizings, empty, hideAccount = false }: { sizings: SizingSummary[]; empty: ReactNode; hideAccount?: boolean }) {
+export function SizingsTable({
+  sizings,
+  empty,
+  hideAccount = false,
+}: {
+  sizings: SizingSummary[];
+  empty: ReactNode;
+  hideAccount?: boolean;
+}) {
   const cols = hideAccount ? columns.filter((c) => c.key !== 'account') : columns;
-  return <DataTable caption="Saved sizings" columns={cols} rows={sizings} rowKey={(s) => s.id} empty={empty} testId="sizings-table" />;
+  return (
+    <DataTable
+      caption="Saved sizings"
+      columns={cols}
+      rows={sizings}
+      rowKey={(s) => s.id}
+      empty={empty}
+      testId="sizings-table"
+    />
+  );
 }

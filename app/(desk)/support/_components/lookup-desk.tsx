@@ -16,7 +16,13 @@ async function fetchResults(q: SupportSearch): Promise<SupportResults> {
 }
 
 /** Search box, filters and the paged results table; results follow the filters as they change. */
-export function LookupDesk({ initial, creators }: { initial: SupportSearch; creators: { id: string; name: string }[] }) {
+export function LookupDesk({
+  initial,
+  creators,
+}: {
+  initial: SupportSearch;
+  creators: { id: string; name: string }[];
+}) {
   const [query, update] = useUrlQuery(initial);
   const [text, setText] = useState(initial.q ?? '');
   useEffect(() => {
@@ -25,7 +31,11 @@ export function LookupDesk({ initial, creators }: { initial: SupportSearch; crea
     }, 250);
     return () => clearTimeout(t);
   }, [text, query.q, update]);
-  const results = useQuery({ queryKey: ['support-search', query], queryFn: () => fetchResults(query), placeholderData: keepPreviousData });
+  const results = useQuery({
+    queryKey: ['support-search', query],
+    queryFn: () => fetchResults(query),
+    placeholderData: keepPreviousData,
+  });
   return (
     <div className="mt-6 space-y-4">
       <div className="flex flex-wrap items-end gap-3">
@@ -40,15 +50,25 @@ export function LookupDesk({ initial, creators }: { initial: SupportSearch; crea
             data-testid="lookup-search"
             aria-describedby="lookup-hint"
           />
-          <span id="lookup-hint" className="text-hint text-ink-muted">Numbers, customer, tag, title or notes; partial words and small typos match.</span>
+          <span id="lookup-hint" className="text-hint text-ink-muted">
+            Numbers, customer, tag, title or notes; partial words and small typos match.
+          </span>
         </label>
-        <a className="rounded-md border border-tide-600 px-3 py-2 text-sm text-tide-700 hover:bg-tide-50" href={`/api/v1/support/export?${toSearchParams(query)}`} data-testid="lookup-export">
+        <a
+          className="rounded-md border border-tide-600 px-3 py-2 text-sm text-tide-700 hover:bg-tide-50"
+          href={`/api/v1/support/export?${toSearchParams(query)}`}
+          data-testid="lookup-export"
+        >
           Export CSV
         </a>
       </div>
       <LookupFilters query={query} update={update} creators={creators} />
       <p className="text-sm text-ink-muted" aria-live="polite" data-testid="lookup-count">
-        {results.isError ? (results.error as Error).message : results.data ? `${results.data.total}${results.data.totalIsEstimate ? '+' : ''} sizings${results.isFetching ? ' · updating…' : ''}` : 'Searching…'}
+        {results.isError
+          ? (results.error as Error).message
+          : results.data
+            ? `${results.data.total}${results.data.totalIsEstimate ? '+' : ''} sizings${results.isFetching ? ' · updating…' : ''}`
+            : 'Searching…'}
       </p>
       {results.data && <LookupTable data={results.data} query={query} update={update} />}
     </div>

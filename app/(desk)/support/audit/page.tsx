@@ -11,7 +11,10 @@ export const metadata: Metadata = { title: 'Audit trail' };
 export default async function AuditPage({ searchParams }: { searchParams: SearchParams }) {
   const sp = await searchParams;
   const user = await requirePageUser('/support/audit', 'audit:read');
-  const filter = auditFilterSchema.parse({ entityType: firstParam(sp.entityType) || undefined, entityId: firstParam(sp.entityId) || undefined });
+  const filter = auditFilterSchema.parse({
+    entityType: firstParam(sp.entityType) || undefined,
+    entityId: firstParam(sp.entityId) || undefined,
+  });
   const rows = await listAuditEntries(user, filter);
   const filtered = Boolean(filter.entityType || filter.entityId);
   return (

@@ -8,7 +8,11 @@ export const runtime = 'nodejs';
 
 /** Local identity sign-in: sets the session cookie. Rate limited per client address. */
 export async function POST(req: Request) {
-  if (clerkEnabled) return Response.json({ errors: [{ path: '', message: 'Sign in through the hosted sign-in form.' }] }, { status: 404 });
+  if (clerkEnabled)
+    return Response.json(
+      { errors: [{ path: '', message: 'Sign in through the hosted sign-in form.' }] },
+      { status: 404 },
+    );
   const rate = await consumeRate(`sign-in:${clientKey(req.headers)}`, env.RATE_LIMIT_SIGN_IN_PER_MIN, 60);
   if (!rate.allowed) return tooManyRequests(rate.retryAfterS, 'sign-in attempts');
   const body = await readJsonBody(req, 4 * 1024);
@@ -16,7 +20,11 @@ export async function POST(req: Request) {
   const parsed = signInSchema.safeParse(body.value);
   if (!parsed.success) return Response.json({ errors: zodErrors(parsed.error) }, { status: 400 });
   const user = await checkLocalCredentials(parsed.data.email, parsed.data.password);
-  if (!user) return Response.json({ errors: [{ path: '', message: 'That e-mail and password do not match a Dutywise user.' }] }, { status: 401 });
+  if (!user)
+    return Response.json(
+      { errors: [{ path: '', message: 'That e-mail and password do not match a Dutywise user.' }] },
+      { status: 401 },
+    );
   await startLocalSession(user.id, user.role);
   return Response.json({ signedIn: true });
 }

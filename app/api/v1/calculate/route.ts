@@ -20,6 +20,13 @@ export async function POST(req: Request): Promise<Response> {
   } catch (err) {
     if (err instanceof SizingInputError) return Response.json({ errors: err.issues }, { status: 400 });
     logger.error({ err }, 'calculate failed');
-    return Response.json({ errors: [{ path: '', message: 'The calculation failed on our side; nothing is wrong with the request format.' }] }, { status: 500 });
+    return Response.json(
+      {
+        errors: [
+          { path: '', message: 'The calculation failed on our side; nothing is wrong with the request format.' },
+        ],
+      },
+      { status: 500 },
+    );
   }
 }

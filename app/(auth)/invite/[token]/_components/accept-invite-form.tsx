@@ -39,7 +39,14 @@ export function AcceptInviteForm({ token, email }: { token: string; email: strin
       <input type="hidden" {...register('token')} />
       <TextField label="E-mail (from the invitation)" type="email" value={email} readOnly autoComplete="username" />
       <TextField label="Your name" autoComplete="name" error={formState.errors.name?.message} {...register('name')} />
-      <TextField label="Choose a password" type="password" autoComplete="new-password" hint="At least 10 characters." error={formState.errors.password?.message} {...register('password')} />
+      <TextField
+        label="Choose a password"
+        type="password"
+        autoComplete="new-password"
+        hint="At least 10 characters."
+        error={formState.errors.password?.message}
+        {...register('password')}
+      />
       <FormError message={formError} />
       <SubmitButton className="w-full py-2.5" pending={formState.isSubmitting} pendingLabel="Joining…">
         Join the customer account

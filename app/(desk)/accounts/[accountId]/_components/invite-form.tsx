@@ -41,17 +41,33 @@ export function InviteForm({ accountId }: { accountId: string }) {
   return (
     <form onSubmit={onSubmit} noValidate className="mt-2 space-y-3" aria-label="Invite a member">
       <input type="hidden" {...register('accountId')} />
-      <TextField label="E-mail of the person to invite" type="email" autoComplete="off" error={formState.errors.email?.message} {...register('email')} />
+      <TextField
+        label="E-mail of the person to invite"
+        type="email"
+        autoComplete="off"
+        error={formState.errors.email?.message}
+        {...register('email')}
+      />
       <FormError message={formError} />
       {sent && (
-        <div role="status" data-testid="invite-sent" className="rounded-md border border-tide-100 bg-tide-50 px-3 py-2 text-sm text-tide-700">
-          <p>Invitation sent to <strong>{sent.email}</strong>; link:</p>
+        <div
+          role="status"
+          data-testid="invite-sent"
+          className="rounded-md border border-tide-100 bg-tide-50 px-3 py-2 text-sm text-tide-700"
+        >
+          <p>
+            Invitation sent to <strong>{sent.email}</strong>; link:
+          </p>
           <p className="mt-1 break-all font-mono text-hint">
-            <a href={sent.inviteUrl} className="underline" data-testid="invite-link">{sent.inviteUrl}</a>
+            <a href={sent.inviteUrl} className="underline" data-testid="invite-link">
+              {sent.inviteUrl}
+            </a>
           </p>
         </div>
       )}
-      <SubmitButton pending={formState.isSubmitting} pendingLabel="Sending…">Send invitation</SubmitButton>
+      <SubmitButton pending={formState.isSubmitting} pendingLabel="Sending…">
+        Send invitation
+      </SubmitButton>
     </form>
   );
 }

@@ -20,7 +20,9 @@ export function MembersPanel({ account, mayInvite }: { account: AccountDetail; m
           </ul>
         ) : (
           <div className="mt-2">
-            <EmptyState title="No members yet">Invite the customer’s engineers so they can see their quotes and sizings.</EmptyState>
+            <EmptyState title="No members yet">
+              Invite the customer’s engineers so they can see their quotes and sizings.
+            </EmptyState>
           </div>
         )}
         <h3 className="mt-6 text-label uppercase tracking-wide text-ink-muted">Pending invitations</h3>

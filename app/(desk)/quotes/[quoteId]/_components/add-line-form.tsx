@@ -20,7 +20,11 @@ type Values = z.input<typeof quoteItemSchema>;
 export function AddLineForm({ quoteId, sizings }: { quoteId: string; sizings: SizingOption[] }) {
   const router = useRouter();
   const [formError, setFormError] = useState<string | null>(null);
-  const { register, handleSubmit, setError, reset, formState } = useForm<Values, unknown, z.output<typeof quoteItemSchema>>({
+  const { register, handleSubmit, setError, reset, formState } = useForm<
+    Values,
+    unknown,
+    z.output<typeof quoteItemSchema>
+  >({
     resolver: zodResolver(quoteItemSchema),
     mode: 'onTouched',
     defaultValues: { quoteId, sizingId: '', quantity: '1' },
@@ -37,7 +41,12 @@ export function AddLineForm({ quoteId, sizings }: { quoteId: string; sizings: Si
     router.refresh();
   });
 
-  if (!sizings.length) return <p className="text-sm text-ink-muted">Every sizing saved to this account is already on the quote. Save another sizing to the account to add it.</p>;
+  if (!sizings.length)
+    return (
+      <p className="text-sm text-ink-muted">
+        Every sizing saved to this account is already on the quote. Save another sizing to the account to add it.
+      </p>
+    );
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-3" aria-label="Add a line">
       <input type="hidden" {...register('quoteId')} />
@@ -50,10 +59,22 @@ export function AddLineForm({ quoteId, sizings }: { quoteId: string; sizings: Si
           className="min-w-72 flex-1"
           {...register('sizingId')}
         />
-        <TextField label="Quantity" type="number" inputMode="numeric" min={1} max={1000} step={1} error={formState.errors.quantity?.message} className="w-28" {...register('quantity')} />
+        <TextField
+          label="Quantity"
+          type="number"
+          inputMode="numeric"
+          min={1}
+          max={1000}
+          step={1}
+          error={formState.errors.quantity?.message}
+          className="w-28"
+          {...register('quantity')}
+        />
       </div>
       <FormError message={formError} />
-      <SubmitButton pending={formState.isSubmitting} pendingLabel="Adding…">Add line</SubmitButton>
+      <SubmitButton pending={formState.isSubmitting} pendingLabel="Adding…">
+        Add line
+      </SubmitButton>
     </form>
   );
 }

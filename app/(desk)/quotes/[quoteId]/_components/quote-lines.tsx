@@ -10,21 +10,40 @@ import { RemoveLineButton } from './remove-line-button';
 /** The quote's lines: one saved sizing each, with the quantity quoted. */
 export function QuoteLines({ quoteId, lines, editable }: { quoteId: string; lines: QuoteLine[]; editable: boolean }) {
   const columns: Column<QuoteLine>[] = [
-    { key: 'number', header: 'Sizing', cell: (l) => <Link href={`/sizings/${l.sizingId}`} className={`${tableLinkClass} font-mono`}>{l.sizingNumber}</Link> },
+    {
+      key: 'number',
+      header: 'Sizing',
+      cell: (l) => (
+        <Link href={`/sizings/${l.sizingId}`} className={`${tableLinkClass} font-mono`}>
+          {l.sizingNumber}
+        </Link>
+      ),
+    },
     { key: 'title', header: 'Title', cell: (l) => l.title },
-    { key: 'tag', header: 'Equipment tag', cell: (l) => (l.equipmentTag ? <span className="font-mono">{l.equipmentTag}</span> : '—') },
+    {
+      key: 'tag',
+      header: 'Equipment tag',
+      cell: (l) => (l.equipmentTag ? <span className="font-mono">{l.equipmentTag}</span> : '—'),
+    },
     { key: 'service', header: 'Service', cell: (l) => <ServiceBadge service={l.service} /> },
     { key: 'gas', header: 'Gas', cell: (l) => l.gasLabel },
     { key: 'headline', header: 'Headline', numeric: true, cell: (l) => formatHeadline(l.service, l.headlineKw) },
     { key: 'quantity', header: 'Qty', numeric: true, cell: (l) => l.quantity },
   ];
   if (editable) {
-    columns.push({ key: 'remove', header: 'Remove', cell: (l) => <RemoveLineButton quoteId={quoteId} itemId={l.itemId} label={`${l.sizingNumber} ${l.title}`} /> });
+    columns.push({
+      key: 'remove',
+      header: 'Remove',
+      cell: (l) => <RemoveLineButton quoteId={quoteId} itemId={l.itemId} label={`${l.sizingNumber} ${l.title}`} />,
+    });
   }
   const totals = quoteTotals(lines);
   const parts = (['heater', 'compressor'] as const)
     .filter((service) => totals[service].units > 0)
-    .map((service) => `${service === 'heater' ? 'heaters' : 'compressors'}, ${totals[service].units} ${totals[service].units === 1 ? 'unit' : 'units'}: ${formatHeadline(service, totals[service].kw)}`);
+    .map(
+      (service) =>
+        `${service === 'heater' ? 'heaters' : 'compressors'}, ${totals[service].units} ${totals[service].units === 1 ? 'unit' : 'units'}: ${formatHeadline(service, totals[service].kw)}`,
+    );
   return (
     <>
       <DataTable
@@ -33,7 +52,11 @@ export function QuoteLines({ quoteId, lines, editable }: { quoteId: string; line
         rows={lines}
         rowKey={(l) => l.itemId}
         testId="quote-lines"
-        empty={<EmptyState title="No lines on this quote yet">{editable ? 'Add a saved sizing of this account below.' : null}</EmptyState>}
+        empty={
+          <EmptyState title="No lines on this quote yet">
+            {editable ? 'Add a saved sizing of this account below.' : null}
+          </EmptyState>
+        }
       />
       {parts.length > 0 && (
         <p className="mt-3 text-sm text-ink" data-testid="quote-totals">

@@ -9,9 +9,23 @@ import type { QuoteDetail } from '@/lib/quotes/queries';
 /** The quote's identity, customer account and history as a definition list. */
 export function QuoteSummary({ quote, linkAccount }: { quote: QuoteDetail; linkAccount: boolean }) {
   const rows: [string, ReactNode][] = [
-    ['Quote number', <span key="n" className="font-mono" data-testid="quote-number">{quote.number}</span>],
+    [
+      'Quote number',
+      <span key="n" className="font-mono" data-testid="quote-number">
+        {quote.number}
+      </span>,
+    ],
     ['Status', <QuoteStatusBadge key="s" status={quote.status} />],
-    ['Customer account', linkAccount ? <Link key="a" href={`/accounts/${quote.accountId}`} className={tableLinkClass}>{quote.accountName}</Link> : quote.accountName],
+    [
+      'Customer account',
+      linkAccount ? (
+        <Link key="a" href={`/accounts/${quote.accountId}`} className={tableLinkClass}>
+          {quote.accountName}
+        </Link>
+      ) : (
+        quote.accountName
+      ),
+    ],
     ['Billing contact', quote.billingContactEmail ?? '—'],
     ['Prepared by', quote.createdByName ?? '—'],
     ['Created', formatDateTime(quote.createdAt)],

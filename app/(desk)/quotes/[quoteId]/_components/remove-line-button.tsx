@@ -18,10 +18,20 @@ export function RemoveLineButton({ quoteId, itemId, label }: { quoteId: string; 
     });
   return (
     <div>
-      <button type="button" onClick={remove} disabled={pending} aria-label={`Remove line ${label}`} className="text-sm text-severity-danger underline disabled:opacity-60">
+      <button
+        type="button"
+        onClick={remove}
+        disabled={pending}
+        aria-label={`Remove line ${label}`}
+        className="text-sm text-severity-danger underline disabled:opacity-60"
+      >
         {pending ? 'Removing…' : 'Remove'}
       </button>
-      {error && <p data-testid="form-error" role="alert" className="mt-1 text-hint text-severity-danger">{error}</p>}
+      {error && (
+        <p data-testid="form-error" role="alert" className="mt-1 text-hint text-severity-danger">
+          {error}
+        </p>
+      )}
     </div>
   );
 }

@@ -28,13 +28,21 @@ export function SendQuoteButton({ quoteId, to, alreadySent, lineCount }: Props) 
     <div className="space-y-3">
       <p className="text-sm text-ink-soft">
         {to ? (
-          <>Goes to the billing contact <strong className="font-mono">{to}</strong> with a link to this page.</>
+          <>
+            Goes to the billing contact <strong className="font-mono">{to}</strong> with a link to this page.
+          </>
         ) : (
           <>This customer account has no billing contact e-mail. Add one on the account page before sending.</>
         )}
         {lineCount === 0 && ' Add at least one line first.'}
       </p>
-      <SubmitButton type="button" onClick={send} pending={pending} pendingLabel="Sending…" disabled={!to || lineCount === 0}>
+      <SubmitButton
+        type="button"
+        onClick={send}
+        pending={pending}
+        pendingLabel="Sending…"
+        disabled={!to || lineCount === 0}
+      >
         {alreadySent ? 'Send to customer again' : 'Send to customer'}
       </SubmitButton>
       <FormNotice message={sentTo && `Quote sent to ${sentTo}.`} testId="quote-sent" />

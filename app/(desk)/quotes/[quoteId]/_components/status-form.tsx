@@ -19,7 +19,10 @@ type Values = z.input<typeof quoteStatusSchema>;
 export function StatusForm({ quoteId, status }: { quoteId: string; status: Values['status'] }) {
   const router = useRouter();
   const [formError, setFormError] = useState<string | null>(null);
-  const { register, handleSubmit, setError, formState } = useForm<Values>({ resolver: zodResolver(quoteStatusSchema), defaultValues: { quoteId, status } });
+  const { register, handleSubmit, setError, formState } = useForm<Values>({
+    resolver: zodResolver(quoteStatusSchema),
+    defaultValues: { quoteId, status },
+  });
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
@@ -32,8 +35,16 @@ export function StatusForm({ quoteId, status }: { quoteId: string; status: Value
     <form onSubmit={onSubmit} noValidate className="space-y-3" aria-label="Change status">
       <input type="hidden" {...register('quoteId')} />
       <div className="flex flex-wrap items-end gap-3">
-        <SelectField label="Mark quote as" options={quoteStatuses.map((s) => ({ value: s, label: quoteStatusLabels[s] ?? s }))} error={formState.errors.status?.message} className="w-40" {...register('status')} />
-        <SubmitButton variant="secondary" pending={formState.isSubmitting} pendingLabel="Saving…">Change status</SubmitButton>
+        <SelectField
+          label="Mark quote as"
+          options={quoteStatuses.map((s) => ({ value: s, label: quoteStatusLabels[s] ?? s }))}
+          error={formState.errors.status?.message}
+          className="w-40"
+          {...register('status')}
+        />
+        <SubmitButton variant="secondary" pending={formState.isSubmitting} pendingLabel="Saving…">
+          Change status
+        </SubmitButton>
       </div>
       <FormError message={formError} />
     </form>

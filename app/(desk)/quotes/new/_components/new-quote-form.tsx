@@ -35,7 +35,12 @@ export function NewQuoteForm({ accounts, accountId, sizings }: Props) {
     setFormError(null);
     const res = await createQuoteAction({ ...values, notes: values.notes || undefined });
     if (!res.ok) {
-      setFormError(formErrorText(res.formError, applyFieldErrors(setError, res.fieldErrors, ['accountId', 'title', 'notes', 'sizingIds'])));
+      setFormError(
+        formErrorText(
+          res.formError,
+          applyFieldErrors(setError, res.fieldErrors, ['accountId', 'title', 'notes', 'sizingIds']),
+        ),
+      );
       return;
     }
     router.push(`/quotes/${res.data.id}`);
@@ -57,8 +62,18 @@ export function NewQuoteForm({ accounts, accountId, sizings }: Props) {
           router.replace(e.target.value ? `/quotes/new?accountId=${e.target.value}` : '/quotes/new', { scroll: false });
         }}
       />
-      <TextField label="Title" hint="e.g. Regeneration gas heater and booster compressor" error={formState.errors.title?.message} {...register('title')} />
-      <TextareaField label="Notes" hint="Shown on the quote; up to 4000 characters." error={formState.errors.notes?.message} {...register('notes')} />
+      <TextField
+        label="Title"
+        hint="e.g. Regeneration gas heater and booster compressor"
+        error={formState.errors.title?.message}
+        {...register('title')}
+      />
+      <TextareaField
+        label="Notes"
+        hint="Shown on the quote; up to 4000 characters."
+        error={formState.errors.notes?.message}
+        {...register('notes')}
+      />
       {accountId && (
         <SizingChecklist
           sizings={sizings}
@@ -68,7 +83,9 @@ export function NewQuoteForm({ accounts, accountId, sizings }: Props) {
         />
       )}
       <FormError message={formError} />
-      <SubmitButton pending={formState.isSubmitting} pendingLabel="Creating…">Create draft quote</SubmitButton>
+      <SubmitButton pending={formState.isSubmitting} pendingLabel="Creating…">
+        Create draft quote
+      </SubmitButton>
     </form>
   );
 }

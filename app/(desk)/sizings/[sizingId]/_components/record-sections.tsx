@@ -4,12 +4,27 @@ import type { EmailLogEntry } from '@/lib/email/queries';
 import type { TrailEntry } from '@/lib/support/sizing-record';
 
 /** Every issued revision of the sizing's datasheet, oldest first, with its hash. */
-export function RevisionList({ datasheet, canDownload }: { datasheet: DatasheetSummary | undefined; canDownload: boolean }) {
+export function RevisionList({
+  datasheet,
+  canDownload,
+}: {
+  datasheet: DatasheetSummary | undefined;
+  canDownload: boolean;
+}) {
   if (!datasheet) return <p className="text-sm text-ink-muted">No datasheet has been issued for this sizing.</p>;
   return (
     <table className="w-full text-left text-sm" data-testid="datasheet-revisions">
       <caption className="mb-2 text-left font-mono">{datasheet.number}</caption>
-      <thead className="text-label text-ink-soft"><tr><th>Rev.</th><th>Issued (UTC)</th><th>By</th><th>Note</th><th>SHA-256</th><th /></tr></thead>
+      <thead className="text-label text-ink-soft">
+        <tr>
+          <th>Rev.</th>
+          <th>Issued (UTC)</th>
+          <th>By</th>
+          <th>Note</th>
+          <th>SHA-256</th>
+          <th />
+        </tr>
+      </thead>
       <tbody>
         {datasheet.revisions.map((r) => (
           <tr key={r.id} className="border-t border-paper-line">
@@ -18,7 +33,13 @@ export function RevisionList({ datasheet, canDownload }: { datasheet: DatasheetS
             <td>{r.issuedByName ?? '—'}</td>
             <td>{r.note ?? '—'}</td>
             <td className="font-mono text-hint">{r.sha256.slice(0, 16)}…</td>
-            <td>{canDownload && <a className="text-tide-700 underline" href={`/api/v1/datasheets/${r.id}`}>PDF</a>}</td>
+            <td>
+              {canDownload && (
+                <a className="text-tide-700 underline" href={`/api/v1/datasheets/${r.id}`}>
+                  PDF
+                </a>
+              )}
+            </td>
           </tr>
         ))}
       </tbody>
@@ -46,7 +67,8 @@ export function AuditTrail({ entries }: { entries: TrailEntry[] }) {
     <ol className="space-y-1 text-sm" data-testid="audit-trail">
       {entries.map((e) => (
         <li key={e.id}>
-          <span className="tabular text-ink-muted">{formatDateTime(e.at)}</span> · <span className="font-mono">{e.action}</span> · {e.actorName ?? 'system'}
+          <span className="tabular text-ink-muted">{formatDateTime(e.at)}</span> ·{' '}
+          <span className="font-mono">{e.action}</span> · {e.actorName ?? 'system'}
           {e.actorRole ? ` (${e.actorRole.replace('_', ' ')})` : ''}
         </li>
       ))}

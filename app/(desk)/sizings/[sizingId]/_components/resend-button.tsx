@@ -17,14 +17,25 @@ export function ResendButton({ sizingId }: { sizingId: string }) {
         onClick={() =>
           start(async () => {
             const res = await resendDatasheetEmailAction({ sizingId });
-            setMessage(res.ok ? { ok: true, text: `Queued to ${res.data.to} (${res.data.datasheetNumber} rev. ${res.data.revision}).` } : { ok: false, text: res.formError ?? 'Could not resend.' });
+            setMessage(
+              res.ok
+                ? {
+                    ok: true,
+                    text: `Queued to ${res.data.to} (${res.data.datasheetNumber} rev. ${res.data.revision}).`,
+                  }
+                : { ok: false, text: res.formError ?? 'Could not resend.' },
+            );
           })
         }
       >
         {pending ? 'Queuing…' : 'Resend datasheet e-mail'}
       </button>
       {message && (
-        <span role="status" data-testid="resend-result" className={message.ok ? 'text-sm text-tide-700' : 'text-sm text-severity-danger'}>
+        <span
+          role="status"
+          data-testid="resend-result"
+          className={message.ok ? 'text-sm text-tide-700' : 'text-sm text-severity-danger'}
+        >
           {message.text}
         </span>
       )}

@@ -21,7 +21,10 @@ function parseTarget(raw: string | null) {
     value = null;
   }
   const parsed = targetSchema.safeParse(value);
-  if (!parsed.success) throw new ActionError('Say where to save: the "target" field needs a customer account.', 400, { target: parsed.error.issues.map((i) => i.message) });
+  if (!parsed.success)
+    throw new ActionError('Say where to save: the "target" field needs a customer account.', 400, {
+      target: parsed.error.issues.map((i) => i.message),
+    });
   return parsed.data;
 }
 
@@ -29,6 +32,7 @@ function parseTarget(raw: string | null) {
 export const POST = guarded(async (req) => {
   const user = await requireUser('batch:upload');
   const { sheet, file, target } = await readBatchRequest(req);
-  if (sheet.problems.length) return Response.json({ errors: sheet.problems.map((message) => ({ path: 'file', message })) }, { status: 422 });
+  if (sheet.problems.length)
+    return Response.json({ errors: sheet.problems.map((message) => ({ path: 'file', message })) }, { status: 422 });
   return Response.json(await saveBatch(user, parseTarget(target), sheet.rows, file));
 });

@@ -9,7 +9,12 @@ export const runtime = 'nodejs';
 export const POST = guarded(async (req) => {
   await requireUser('batch:upload');
   const { sheet } = await readBatchRequest(req);
-  if (sheet.problems.length) return Response.json({ errors: sheet.problems.map((message) => ({ path: 'file', message })) }, { status: 422 });
+  if (sheet.problems.length)
+    return Response.json({ errors: sheet.problems.map((message) => ({ path: 'file', message })) }, { status: 422 });
   const rows = evaluateSheet(sheet.rows);
-  return Response.json({ rows, sized: rows.filter((r) => r.result).length, withProblems: rows.filter((r) => r.problems.length).length });
+  return Response.json({
+    rows,
+    sized: rows.filter((r) => r.result).length,
+    withProblems: rows.filter((r) => r.problems.length).length,
+  });
 });

@@ -8,10 +8,12 @@ export const dynamic = 'force-dynamic';
 export async function GET() {
   try {
     const user = await requireUser('billing:manage');
-    if (!user.accountId) return Response.json({ errors: [{ path: '', message: 'No customer account.' }] }, { status: 404 });
+    if (!user.accountId)
+      return Response.json({ errors: [{ path: '', message: 'No customer account.' }] }, { status: 404 });
     return Response.json(await getEntitlement(user.accountId), { headers: { 'Cache-Control': 'no-store' } });
   } catch (err) {
-    if (err instanceof AuthError) return Response.json({ errors: [{ path: '', message: err.message }] }, { status: err.status });
+    if (err instanceof AuthError)
+      return Response.json({ errors: [{ path: '', message: err.message }] }, { status: err.status });
     throw err;
   }
 }
