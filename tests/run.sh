@@ -27,6 +27,7 @@ trap 'bash db/postgres.sh stop >/dev/null 2>&1' EXIT
 run "migrate" npx tsx db/migrate.mts
 run "typecheck" npx tsc --noEmit
 run "lint" npx eslint . --max-warnings 0
+run "format" npx prettier --check . --log-level warn
 run "unit and integration tests" env LOG_LEVEL=fatal npx vitest run --config tests/vitest.config.ts
 
 if [ "${SKIP_E2E:-0}" != 1 ]; then
