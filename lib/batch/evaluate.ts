@@ -6,7 +6,7 @@ import {
   SizingInputError,
   type SizingInput,
   type SizingResult,
-} from '@/lib/sizing';
+} from '@/lib/engine';
 import { batchColumnNames, columnForPath } from './columns';
 import { rowToRequest, type BatchCells, type RowProblem } from './row-to-request';
 

@@ -1,4 +1,4 @@
-import { sizingRequestSchema, type SizingInput } from '@/lib/sizing';
+import { sizingRequestSchema, type SizingInput } from '@/lib/engine';
 
 type Quantity = { value: number; unit: string };
 

@@ -6,7 +6,7 @@ import { ActionError } from '@/lib/actions/define-action';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { NotFoundError } from '@/lib/auth/guards';
 import { nextNumber } from '@/lib/numbering/next-number';
-import type { SizingResult } from '@/lib/sizing';
+import type { SizingResult } from '@/lib/engine';
 import type { SizingDetail } from '@/lib/sizings/queries';
 import { compareRevisionLetters, nextRevisionLetter } from './revision-letter';
 import type { DatasheetSnapshot, RevisionEntry } from './snapshot';

@@ -1,4 +1,4 @@
-import type { SizingResult } from '@/lib/sizing';
+import type { SizingResult } from '@/lib/engine';
 
 /** One line of the revision table. */
 export type RevisionEntry = { revision: string; issuedAt: string; note: string | null; issuedByName: string | null };

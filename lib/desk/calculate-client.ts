@@ -1,4 +1,4 @@
-import type { SizingInput, SizingIssue, SizingResult } from '@/lib/sizing';
+import type { SizingInput, SizingIssue, SizingResult } from '@/lib/engine';
 
 export type CalculateFailure =
   | { kind: 'input'; issues: SizingIssue[] }

@@ -1,4 +1,4 @@
-import { parseNumeric } from '@/lib/sizing/schema-fields';
+import { parseNumeric } from '@/lib/engine/schema-fields';
 import { UnitError, convertQuantity, type FlowContext, type QuantityKind } from '@/lib/units';
 import type { FieldKind } from './form-types';
 

@@ -1,4 +1,4 @@
-import { parseNumeric } from '@/lib/sizing/schema-fields';
+import { parseNumeric } from '@/lib/engine/schema-fields';
 import {
   STANDARD_FLOW_BASES,
   flowToKgPerS,

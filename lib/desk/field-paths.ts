@@ -1,4 +1,4 @@
-import type { SizingIssue } from '@/lib/sizing';
+import type { SizingIssue } from '@/lib/engine';
 import type { DeskService } from './form-types';
 
 /** The desk's error keys: one per input (quantities keyed by their path, not ".value"). */

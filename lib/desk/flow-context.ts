@@ -1,5 +1,5 @@
-import { heaterRequestSchema } from '@/lib/sizing';
-import { parseNumeric } from '@/lib/sizing/schema-fields';
+import { heaterRequestSchema } from '@/lib/engine';
+import { parseNumeric } from '@/lib/engine/schema-fields';
 import { checkComposition } from '@/lib/thermo/composition';
 import { MAX_TEMPERATURE_K, MIN_TEMPERATURE_K } from '@/lib/thermo/constants';
 import { findPreset, humidAirGas, mixtureGas, presetGas } from '@/lib/thermo/presets';

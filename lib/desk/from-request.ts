@@ -1,4 +1,4 @@
-import type { SizingInput } from '@/lib/sizing';
+import type { SizingInput } from '@/lib/engine';
 import { standardAtmospherePressurePa } from '@/lib/units';
 import { defaultValues } from './defaults';
 import type { DeskValues, MixtureRow, QtyText } from './form-types';

@@ -1,4 +1,4 @@
-import { parseNumeric } from '@/lib/sizing/schema-fields';
+import { parseNumeric } from '@/lib/engine/schema-fields';
 import { FRACTION_SUM_TOLERANCE } from '@/lib/thermo/composition';
 import { findPreset } from '@/lib/thermo/presets';
 import { SPECIES, SPECIES_IDS, type SpeciesId } from '@/lib/thermo/species-data';

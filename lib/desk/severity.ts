@@ -1,4 +1,4 @@
-import type { Severity, SizingResult, SizingWarning } from '@/lib/sizing';
+import type { Severity, SizingResult, SizingWarning } from '@/lib/engine';
 
 /** Most severe first. */
 export const SEVERITY_ORDER: readonly Severity[] = ['danger', 'warning', 'caution', 'info'];

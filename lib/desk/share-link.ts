@@ -1,4 +1,4 @@
-import { issuesFromZod, sizingRequestSchema, type SizingInput, type SizingRequest } from '@/lib/sizing';
+import { issuesFromZod, sizingRequestSchema, type SizingInput, type SizingRequest } from '@/lib/engine';
 
 /** Longest `i` parameter accepted: a request is a few hundred bytes; anything far larger is not ours. */
 export const MAX_SHARE_PARAM_CHARS = 4096;

@@ -1,4 +1,4 @@
-import type { CompressorResult, MotorSelection } from '@/lib/sizing';
+import type { CompressorResult, MotorSelection } from '@/lib/engine';
 import { fixed, formatA, formatHp, formatKw, formatPercent, joined, showPressure, showTemperature } from './format';
 import type { UnitSystem } from './unit-systems';
 

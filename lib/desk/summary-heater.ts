@@ -1,4 +1,4 @@
-import type { HeaterResult } from '@/lib/sizing';
+import type { HeaterResult } from '@/lib/engine';
 import {
   fixed,
   formatA,

@@ -1,4 +1,4 @@
-import type { SizingResult } from '@/lib/sizing';
+import type { SizingResult } from '@/lib/engine';
 import { figure, fixed, joined, showMassFlow, showTemperature } from './format';
 import { SEVERITY_LABEL, groupWarnings, preliminaryOf } from './severity';
 import { compressorLines } from './summary-compressor';

@@ -1,4 +1,4 @@
-import type { SizingRequest } from '@/lib/sizing';
+import type { SizingRequest } from '@/lib/engine';
 import type { DeskValues, QtyText } from './form-types';
 
 type GasRequest = SizingRequest['gas'];

@@ -1,4 +1,4 @@
-import { issuesFromZod, sizingRequestSchema, type SizingInput, type SizingRequest } from '@/lib/sizing';
+import { issuesFromZod, sizingRequestSchema, type SizingInput, type SizingRequest } from '@/lib/engine';
 import { groupIssues, type DeskIssues } from './field-paths';
 import type { DeskValues } from './form-types';
 import { toRequest } from './to-request';

@@ -9,7 +9,7 @@ import { assertAccountAccess } from '@/lib/auth/guards';
 import { can } from '@/lib/auth/roles';
 import { nextNumber, nextNumbers } from '@/lib/numbering/next-number';
 import { addQuoteItem } from '@/lib/quotes/mutations';
-import { calculate, ENGINE_VERSION, SizingInputError, type SizingResult } from '@/lib/sizing';
+import { calculate, ENGINE_VERSION, SizingInputError, type SizingResult } from '@/lib/engine';
 import { gasKeyAndLabel } from './gas-label';
 import type { SizingMeta } from './schema';
 

@@ -1,4 +1,4 @@
-import { ENGINE_VERSION, sizingRequestSchema, type SizingInput, type SizingResult } from '@/lib/sizing';
+import { ENGINE_VERSION, sizingRequestSchema, type SizingInput, type SizingResult } from '@/lib/engine';
 
 export type StoredSizing = { input: SizingInput; result: SizingResult };
 

@@ -1,6 +1,6 @@
 // The yardstick for the HTTP load benchmark: the same validated calculation behind a bare node:http server.
 import { createServer } from 'node:http';
-import { calculate, SizingInputError } from '@/lib/sizing';
+import { calculate, SizingInputError } from '@/lib/engine';
 
 const port = Number(process.argv[2] ?? 3299);
 createServer((req, res) => {

@@ -7,7 +7,7 @@ import { accounts, users } from '@/db/schema';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { getBlobStore } from '@/lib/blob';
 import { issueDatasheet } from '@/lib/datasheets/issue';
-import { calculate } from '@/lib/sizing';
+import { calculate } from '@/lib/engine';
 import { insertSizing } from '@/lib/sizings/save';
 import { seedSizings } from '@/db/seed-scenario';
 import { percentile, recordResults, verdict } from './stats';

@@ -12,7 +12,7 @@ import {
   type CompressorCase,
   type HeaterCase,
   type SizingInput,
-} from '../../lib/sizing';
+} from '../../lib/engine';
 
 type Row = { name: string; value: number; wall: number; unit: string; target: number; higherIsBetter: boolean };
 

@@ -5,7 +5,7 @@ import { randomUUID } from 'node:crypto';
 import { sql } from 'drizzle-orm';
 import { db, pool } from '@/db';
 import { accounts, users } from '@/db/schema';
-import { calculate } from '@/lib/sizing';
+import { calculate } from '@/lib/engine';
 
 const target = Number(process.argv[2] ?? 1_000_000);
 const BATCH = 10_000;

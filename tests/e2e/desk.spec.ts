@@ -2,7 +2,7 @@ import path from 'node:path';
 import { expect, test, type Page } from '@playwright/test';
 import { fixed, formatA, formatKw, formatRating, showTemperature } from '@/lib/desk/format';
 import { DEMO_PASSWORD } from '@/lib/auth/demo-users';
-import { calculate, type SizingRequest } from '@/lib/sizing';
+import { calculate, type SizingRequest } from '@/lib/engine';
 import { convertQuantity } from '@/lib/units';
 
 // Journeys on the sizing desk. Expected figures always come from the engine itself (calculate() on the

@@ -5,7 +5,7 @@ import { decodeShareParam } from '@/lib/desk/share-link';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { NotFoundError } from '@/lib/auth/guards';
 import { can } from '@/lib/auth/roles';
-import { sizingRequestSchema, type SizingInput } from '@/lib/sizing';
+import { sizingRequestSchema, type SizingInput } from '@/lib/engine';
 import { getSizing } from '@/lib/sizings/queries';
 
 export type DeskStart = { input: SizingInput | null; reopened: ReopenedSizing | null; notices: string[] };

@@ -1,5 +1,5 @@
 /** @jsxRuntime automatic @jsxImportSource react */
-import type { Severity, SizingWarning } from '@/lib/sizing';
+import type { Severity, SizingWarning } from '@/lib/engine';
 import { severityLabel } from '../format';
 import { block, headingBlock, type Block } from './blocks';
 import { pdfKit } from './kit';

@@ -1,5 +1,5 @@
 /** @jsxRuntime automatic @jsxImportSource react */
-import type { CompressorResult } from '@/lib/sizing';
+import type { CompressorResult } from '@/lib/engine';
 import {
   formatAmps,
   formatFigure,

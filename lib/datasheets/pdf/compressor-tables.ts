@@ -1,4 +1,4 @@
-import type { CompressionMethodResult, CompressorBlock } from '@/lib/sizing';
+import type { CompressionMethodResult, CompressorBlock } from '@/lib/engine';
 import { formatFigure, formatFixed, formatPercent } from '../format';
 import { tableBlocks, type Block, type Column } from './blocks';
 

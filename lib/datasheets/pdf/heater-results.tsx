@@ -1,5 +1,5 @@
 /** @jsxRuntime automatic @jsxImportSource react */
-import type { HeaterResult } from '@/lib/sizing';
+import type { HeaterResult } from '@/lib/engine';
 import { formatAmps, formatFigure, formatFixed, formatKw, formatPercent, formatRating } from '../format';
 import { headingBlock, kvBlocks, type Block, type KvRow } from './blocks';
 import { highlightBlock } from './highlight';

@@ -1,4 +1,4 @@
-import type { CompressorResult } from '@/lib/sizing';
+import type { CompressorResult } from '@/lib/engine';
 import { temperatureFromK } from '@/lib/units';
 import { SYSTEM_UNITS, unitLabel, type UnitSystem } from '../unit-systems';
 

@@ -1,4 +1,4 @@
-import type { HeaterResult } from '@/lib/sizing';
+import type { HeaterResult } from '@/lib/engine';
 import { MIN_TEMPERATURE_K } from '@/lib/thermo/constants';
 import { cpMass } from '@/lib/thermo/properties';
 import { mixtureGas } from '@/lib/thermo/presets';

@@ -1,4 +1,4 @@
-import { SizingInputError, calculateCore, type CompressorInput } from '@/lib/sizing';
+import { SizingInputError, calculateCore, type CompressorInput } from '@/lib/engine';
 import { temperatureFromK } from '@/lib/units';
 import { SYSTEM_UNITS, unitLabel, type UnitSystem } from '../unit-systems';
 

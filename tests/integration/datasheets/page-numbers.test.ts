@@ -4,7 +4,7 @@ import { PRELIMINARY_STATEMENT } from '@/lib/datasheets/pdf/page-frame';
 import { countPdfPages, renderDatasheetPdf } from '@/lib/datasheets/render';
 import { revisionLetterAt } from '@/lib/datasheets/revision-letter';
 import type { DatasheetSnapshot } from '@/lib/datasheets/snapshot';
-import { calculate } from '@/lib/sizing';
+import { calculate } from '@/lib/engine';
 import { nitrogenHeater } from './requests';
 
 function snapshot(revisions: number): DatasheetSnapshot {

@@ -14,7 +14,7 @@ import { issueDatasheet } from '@/lib/datasheets/issue';
 import { iecText, nemaText } from '@/lib/datasheets/pdf/compressor-results';
 import { ratingText } from '@/lib/datasheets/pdf/heater-results';
 import { PRELIMINARY_STATEMENT } from '@/lib/datasheets/pdf/page-frame';
-import type { CompressorResult, HeaterResult } from '@/lib/sizing';
+import type { CompressorResult, HeaterResult } from '@/lib/engine';
 import { makeEngineSizing, setAccountSite } from '../helpers/datasheet-fixtures';
 import { makeAccount, makeUser } from '../helpers/fixtures';
 import { airTwoStage, nitrogenHeater } from './requests';

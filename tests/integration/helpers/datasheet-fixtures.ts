@@ -3,7 +3,7 @@ import { eq } from 'drizzle-orm';
 import { db } from '@/db';
 import { accounts, subscriptions } from '@/db/schema';
 import type { CurrentUser } from '@/lib/auth/current-user';
-import { calculate } from '@/lib/sizing';
+import { calculate } from '@/lib/engine';
 import { insertSizing } from '@/lib/sizings/save';
 
 /** A sizing stored exactly as the app stores one: the engine's real answer beside the request. */

@@ -4,7 +4,7 @@ import { batchColumnNames } from '@/lib/batch/columns';
 import { evaluateSheet, parseBatchCsv } from '@/lib/batch/evaluate';
 import { batchResultCsv } from '@/lib/batch/result-csv';
 import { batchTemplateCsv } from '@/lib/batch/template';
-import { calculate } from '@/lib/sizing';
+import { calculate } from '@/lib/engine';
 
 const heaterRow = (i: number): Record<string, string> => ({
   service: 'heater',

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { stageChart } from '@/lib/desk/charts/compressor-stages';
 import { AVERAGE_CP_SPAN_K, heaterCpChart } from '@/lib/desk/charts/heater-cp';
 import { stageSweep } from '@/lib/desk/charts/stage-sweep';
-import { calculate, compressorRequestSchema, type SizingRequest } from '@/lib/sizing';
+import { calculate, compressorRequestSchema, type SizingRequest } from '@/lib/engine';
 import { compressorRequest, heaterRequest } from './fixtures';
 
 function heater(request: SizingRequest) {

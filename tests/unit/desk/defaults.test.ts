@@ -4,7 +4,7 @@ import { valuesFromInput } from '@/lib/desk/from-request';
 import { toRequest } from '@/lib/desk/to-request';
 import { systemOfUnits } from '@/lib/desk/unit-systems';
 import { validateDesk } from '@/lib/desk/validate';
-import { calculate, sizingRequestSchema } from '@/lib/sizing';
+import { calculate, sizingRequestSchema } from '@/lib/engine';
 import { compressorRequest, heaterRequest } from './fixtures';
 
 const systems = ['si', 'us'] as const;

@@ -1,4 +1,4 @@
-import type { SizingRequest } from '@/lib/sizing';
+import type { SizingRequest } from '@/lib/engine';
 
 // Duty points used across the desk tests: invented enquiries, not any customer's.
 export const heaterRequest: Extract<SizingRequest, { service: 'heater' }> = {

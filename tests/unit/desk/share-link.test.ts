@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { sizingRequestSchema } from '@/lib/sizing';
+import { sizingRequestSchema } from '@/lib/engine';
 import { MAX_SHARE_PARAM_CHARS, decodeShareParam, encodeShareParam, sharePath } from '@/lib/desk/share-link';
 import { compressorRequest, heaterRequest } from './fixtures';
 

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { fixed, formatA, formatKw, formatRating, showTemperature } from '@/lib/desk/format';
 import { buildSummary } from '@/lib/desk/summary';
 import { motorText } from '@/lib/desk/summary-compressor';
-import { calculate } from '@/lib/sizing';
+import { calculate } from '@/lib/engine';
 import { compressorRequest, heaterRequest } from './fixtures';
 
 describe('plain-text summary', () => {

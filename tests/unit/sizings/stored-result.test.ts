@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { calculate } from '@/lib/sizing';
+import { calculate } from '@/lib/engine';
 import { readStoredSizing } from '@/lib/sizings/stored-result';
-import { compressorRequest, heaterRequest } from '../sizing/requests';
+import { compressorRequest, heaterRequest } from '../engine/requests';
 
 // Saved sizings are JSON round trips of the engine's input and result; the record page shows them with
 // the desk's breakdown only when their shape is one this engine knows.

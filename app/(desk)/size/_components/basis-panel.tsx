@@ -1,5 +1,5 @@
 import { fixed } from '@/lib/desk/format';
-import type { BasisInfo } from '@/lib/sizing';
+import type { BasisInfo } from '@/lib/engine';
 
 /** What the figures rest on: property data, composition, site pressure and the conventions used. */
 export function BasisPanel({ basis, engineVersion }: { basis: BasisInfo; engineVersion: string }) {

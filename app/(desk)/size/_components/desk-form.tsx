@@ -1,7 +1,7 @@
 'use client';
 
 import type { DeskIssues, FieldKey } from '@/lib/desk/field-paths';
-import type { SizingInput } from '@/lib/sizing';
+import type { SizingInput } from '@/lib/engine';
 import { FlowStep } from './flow-step';
 import { GasStep } from './gas-step';
 import { OptionsStep } from './options-step';

@@ -1,5 +1,5 @@
 import { fixed, formatA, formatHp, formatKw } from '@/lib/desk/format';
-import type { CompressorBlock } from '@/lib/sizing';
+import type { CompressorBlock } from '@/lib/engine';
 import { FigureTable, type FigureRow } from './figure-table';
 
 /** From gas power to the motor: mechanical losses, shaft power, standard ratings and the supply. */

@@ -1,4 +1,4 @@
-import type { SizingInput } from '@/lib/sizing';
+import type { SizingInput } from '@/lib/engine';
 import { GAS_PRESETS } from '@/lib/thermo/presets';
 import { unitLabel } from '@/lib/desk/unit-systems';
 

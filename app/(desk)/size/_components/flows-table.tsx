@@ -1,6 +1,6 @@
 import { figure, fixed, showMassFlow } from '@/lib/desk/format';
 import type { UnitSystem } from '@/lib/desk/unit-systems';
-import type { SizingResult } from '@/lib/sizing';
+import type { SizingResult } from '@/lib/engine';
 import { FigureTable, type FigureRow } from './figure-table';
 
 /** Mass flow and the standard and actual flows it equals, each basis named. */

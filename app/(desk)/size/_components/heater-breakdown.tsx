@@ -9,7 +9,7 @@ import {
   showTemperature,
 } from '@/lib/desk/format';
 import type { UnitSystem } from '@/lib/desk/unit-systems';
-import type { HeaterResult } from '@/lib/sizing';
+import type { HeaterResult } from '@/lib/engine';
 import { FigureTable, type FigureRow } from './figure-table';
 import { PropertiesTable } from './properties-table';
 import { SeverityIcon } from './severity-icon';

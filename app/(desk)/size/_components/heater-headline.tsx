@@ -8,7 +8,7 @@ import {
   showTemperatureDifference,
 } from '@/lib/desk/format';
 import type { UnitSystem } from '@/lib/desk/unit-systems';
-import type { HeaterResult } from '@/lib/sizing';
+import type { HeaterResult } from '@/lib/engine';
 import { KeyFigure, KeyFigures } from './key-figure';
 import { SeverityIcon } from './severity-icon';
 

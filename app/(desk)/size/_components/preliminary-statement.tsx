@@ -1,4 +1,4 @@
-import type { SizingResult } from '@/lib/sizing';
+import type { SizingResult } from '@/lib/engine';
 import { FALLBACK_PRELIMINARY, preliminaryOf } from '@/lib/desk/severity';
 import { SeverityIcon } from './severity-icon';
 

@@ -1,6 +1,6 @@
 import { fixed, showCp, showTemperature } from '@/lib/desk/format';
 import type { UnitSystem } from '@/lib/desk/unit-systems';
-import type { HeaterBlock } from '@/lib/sizing';
+import type { HeaterBlock } from '@/lib/engine';
 
 /** cp, cv and k at the inlet, mean and outlet temperatures. */
 export function PropertiesTable({ h, system }: { h: HeaterBlock; system: UnitSystem }) {

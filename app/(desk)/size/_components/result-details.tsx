@@ -2,7 +2,7 @@
 
 import { memo } from 'react';
 import type { UnitSystem } from '@/lib/desk/unit-systems';
-import type { SizingInput, SizingResult } from '@/lib/sizing';
+import type { SizingInput, SizingResult } from '@/lib/engine';
 import { BasisPanel } from './basis-panel';
 import { DriveTable } from './drive-table';
 import { DutyPointTable } from './duty-point-table';

@@ -9,7 +9,7 @@ import { SelectField } from '@/app/_components/select-field';
 import { TextField } from '@/app/_components/text-field';
 import { TextareaField } from '@/app/_components/textarea-field';
 import type { AccountSite, QuoteOption, ReopenedSizing } from '@/lib/desk/account-types';
-import type { SizingInput } from '@/lib/sizing';
+import type { SizingInput } from '@/lib/engine';
 import { sizingMetaSchema } from '@/lib/sizings/schema';
 import { saveSizingAction } from '../actions';
 import { SaveOutcome, type Saved } from './save-outcome';

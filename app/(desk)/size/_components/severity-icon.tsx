@@ -1,5 +1,5 @@
 import type { ReactElement } from 'react';
-import type { Severity } from '@/lib/sizing';
+import type { Severity } from '@/lib/engine';
 
 // Four shapes so severity never rests on colour alone: an octagon with a bar (danger), a triangle
 // with a stroke and dot (warning), a diamond with a dot (caution) and a circle with a stem (note).

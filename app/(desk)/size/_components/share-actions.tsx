@@ -4,7 +4,7 @@ import { useEffect, useMemo, useState } from 'react';
 import { sharePath } from '@/lib/desk/share-link';
 import { buildSummary } from '@/lib/desk/summary';
 import type { UnitSystem } from '@/lib/desk/unit-systems';
-import type { SizingInput, SizingResult } from '@/lib/sizing';
+import type { SizingInput, SizingResult } from '@/lib/engine';
 import { CopyButton } from './copy-button';
 
 type Props = { input: SizingInput | null; result: SizingResult | null; system: UnitSystem };

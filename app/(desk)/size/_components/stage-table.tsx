@@ -1,6 +1,6 @@
 import { fixed, formatKw, showPressure, showTemperature } from '@/lib/desk/format';
 import type { UnitSystem } from '@/lib/desk/unit-systems';
-import type { CompressorBlock } from '@/lib/sizing';
+import type { CompressorBlock } from '@/lib/engine';
 import { SeverityIcon } from './severity-icon';
 
 /** Stage by stage on the headline method, then the intercooler after each stage but the last. */

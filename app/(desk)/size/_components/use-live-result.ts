@@ -2,7 +2,7 @@
 
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
 import { CalculateError, postCalculate, type CalculateFailure } from '@/lib/desk/calculate-client';
-import type { SizingInput, SizingResult } from '@/lib/sizing';
+import type { SizingInput, SizingResult } from '@/lib/engine';
 import { useDebounced } from './use-debounced';
 
 export const DEBOUNCE_MS = 300;

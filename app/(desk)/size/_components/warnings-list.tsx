@@ -1,4 +1,4 @@
-import type { SizingWarning } from '@/lib/sizing';
+import type { SizingWarning } from '@/lib/engine';
 import { SEVERITY_LABEL, groupWarnings } from '@/lib/desk/severity';
 import { SEVERITY_TEXT, SeverityIcon } from './severity-icon';
 

@@ -2,7 +2,7 @@ import { env } from '@/lib/env';
 import { readJsonBody } from '@/lib/http/json';
 import { limitRequest } from '@/lib/ratelimit/guard-request';
 import { logger } from '@/lib/log/logger';
-import { SizingInputError, calculate } from '@/lib/sizing';
+import { SizingInputError, calculate } from '@/lib/engine';
 
 export const runtime = 'nodejs';
 export const dynamic = 'force-dynamic';

@@ -1,4 +1,4 @@
-import { calculateOpenApiDocument } from '@/lib/sizing/openapi';
+import { calculateOpenApiDocument } from '@/lib/engine/openapi';
 
 export const runtime = 'nodejs';
 

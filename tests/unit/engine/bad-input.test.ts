@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { SizingInputError, calculate, type CompressorResult, type SizingIssue } from '@/lib/sizing';
+import { SizingInputError, calculate, type CompressorResult, type SizingIssue } from '@/lib/engine';
 import { compressorRequest, heaterRequest, q } from './requests';
 
 function issuesOf(input: unknown): SizingIssue[] {

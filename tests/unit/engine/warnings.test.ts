@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { calculate, type SizingResult } from '@/lib/sizing';
+import { calculate, type SizingResult } from '@/lib/engine';
 import { compressorRequest, heaterRequest, q } from './requests';
 
 const codes = (r: SizingResult) => r.warnings.map((w) => w.code);

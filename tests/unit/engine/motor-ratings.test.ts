@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { IEC_MOTOR_RATINGS_KW, NEMA_MOTOR_RATINGS_HP, selectMotor } from '@/lib/sizing';
+import { IEC_MOTOR_RATINGS_KW, NEMA_MOTOR_RATINGS_HP, selectMotor } from '@/lib/engine';
 
 describe('standard motor ratings', () => {
   // IEC 60072-1 kW series [mem, ENGINEERING.md].

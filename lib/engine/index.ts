@@ -1,20 +1,8 @@
-import { calculateCore } from './calculate-core';
-import { SizingInputError, issuesFromZod } from './input-error';
-import type { SizingResult } from './result-types';
-import { sizingRequestSchema } from './schema';
-
-/** Validates `input` against the request schema and sizes it; throws SizingInputError listing every bad field. */
-export function calculate(input: unknown): SizingResult {
-  if (typeof input !== 'object' || input === null || Array.isArray(input)) {
-    throw new SizingInputError([
-      { path: '', message: 'the request must be a JSON object with a "service" field ("heater" or "compressor")' },
-    ]);
-  }
-  const parsed = sizingRequestSchema.safeParse(input);
-  if (!parsed.success) throw new SizingInputError(issuesFromZod(parsed.error));
-  return calculateCore(parsed.data);
-}
-
+/**
+ * The sizing engine's entry point: heater and compressor sizing on top of lib/thermo and lib/units.
+ * Pure: no framework, database or React imports.
+ */
+export { calculate } from './calculate';
 // Explicit re-exports (not `export *`) so ESM scripts run through tsx can import names from this package.
 export { ENGINE_VERSION, calculateCore } from './calculate-core';
 export { SizingInputError, issuesFromZod, type SizingIssue } from './input-error';
@@ -67,5 +55,3 @@ export {
   continuousCurrentA,
   lineCurrentA,
 } from './electrical';
-export { GAS_PRESETS, type GasPreset } from '../thermo/presets';
-export { UNITS_BY_KIND } from '../units';

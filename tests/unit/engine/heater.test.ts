@@ -9,7 +9,7 @@ import {
   sizeHeater,
   type HeaterCase,
   type HeaterResult,
-} from '@/lib/sizing';
+} from '@/lib/engine';
 import { heaterRequest, q } from './requests';
 
 const heater = (overrides: Record<string, unknown> = {}) => calculate(heaterRequest(overrides)) as HeaterResult;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { CONTINUOUS_LOAD_FACTOR, calculate, continuousCurrentA, lineCurrentA, type HeaterResult } from '@/lib/sizing';
+import { CONTINUOUS_LOAD_FACTOR, calculate, continuousCurrentA, lineCurrentA, type HeaterResult } from '@/lib/engine';
 import { heaterRequest, q } from './requests';
 
 describe('line current of a balanced resistive load', () => {

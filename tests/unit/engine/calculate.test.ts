@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { GAS_PRESETS, presetGas } from '@/lib/thermo';
 import { FLOW_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS, fromSi } from '@/lib/units';
-import { SizingInputError, calculate, calculateCore, sizingRequestSchema, type SizingResult } from '@/lib/sizing';
+import { SizingInputError, calculate, calculateCore, sizingRequestSchema, type SizingResult } from '@/lib/engine';
 import { compressorRequest, heaterRequest } from './requests';
 
 function allNumbersFinite(value: unknown): boolean {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { SizingInputError, calculate, isentropicFromPolytropic, type CompressorResult } from '@/lib/sizing';
+import { SizingInputError, calculate, isentropicFromPolytropic, type CompressorResult } from '@/lib/engine';
 import { compressorRequest, q } from './requests';
 
 const size = (overrides: Record<string, unknown> = {}) => calculate(compressorRequest(overrides)) as CompressorResult;
