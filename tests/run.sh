@@ -18,7 +18,7 @@ if [ ! -f node_modules/.package-lock.json ] || [ package-lock.json -nt node_modu
 fi
 
 # A private cluster on its own port, throw-away settings, a fresh database per run.
-export PG_DATA_DIR="$PWD/.data/pg-test" PG_PORT=55433
+export PG_DATA_DIR="$PWD/.data/pg-test" PG_PORT=$((55433 + ${TEST_PORT_OFFSET:-0}))
 bash db/postgres.sh start --throwaway --db postgres || exit 1
 psql -h 127.0.0.1 -p "$PG_PORT" -U postgres -qc 'drop database if exists dutywise_test with (force)' -c 'create database dutywise_test' postgres || exit 1
 export DATABASE_URL="postgres://postgres@127.0.0.1:$PG_PORT/dutywise_test"
