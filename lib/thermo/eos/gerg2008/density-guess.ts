@@ -9,9 +9,10 @@ import { newResidualDerivatives, type ResidualDerivatives } from '../types';
  *    a few 1e-4 of the root.
  *  - Liquid: a Rackett-type saturated-liquid density rho_r Z_RA^-((1 - T/T_r)^(2/7)) from the mixture's
  *    reducing point with Z_RA = 0.27 [cp: Rackett, J. Chem. Eng. Data 15 (1970) 514; 0.26-0.29 for the
- *    hydrocarbons and light gases, the low end chosen so the start lies on the dense side], times 1.05.
- *    Above T_r it is 1.05 rho_r. p(rho) is convex on the liquid branch, so Newton from the dense side
- *    falls monotonically onto the root.
+ *    hydrocarbons and light gases], times 1.05 so that it usually starts on the dense side of the root,
+ *    where the liquid isotherm is steep. Above T_r it is 1.05 rho_r. Checked in the tests: 0-11 % above
+ *    the liquid root for propane, methane, nitrogen, CO2, n-decane and hydrogen, 1 % below it for water
+ *    (Z_c = 0.23), about 35 % above for helium at 4 K.
  */
 
 const Z_MIN_VAPOUR = 0.3;

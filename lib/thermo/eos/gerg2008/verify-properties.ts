@@ -65,9 +65,12 @@ export function stateAt(eos: EquationOfState, temperatureK: number, densityMolPe
 }
 
 /**
- * The density at (T, p) by Newton's method on ln p as a function of ln rho, from the equation's own
- * starting guess for the phase. Where dp/drho <= 0 (inside the spinodal) it steps away toward the phase
- * asked for. Throws if it does not converge.
+ * The density at (T, p): Newton's method on p(T, rho) - p in ln(rho) from the equation's own starting
+ * guess for the phase, kept inside a bracket that every iterate narrows (bisection when a step would
+ * leave it). A point where dp/drho <= 0 lies inside the spinodal: the vapour root is below it, the liquid
+ * root above. Throws if no root is found (e.g. a vapour asked for at a compressed-liquid state). It
+ * does not judge phase stability: inside the two-phase region a multiparameter equation can have further
+ * roots with dp/drho > 0, and one of those may be returned; that is the property layer's job.
  */
 export function densityAt(
   eos: EquationOfState,
@@ -77,21 +80,29 @@ export function densityAt(
 ): number {
   const r = newResidualDerivatives();
   const RT = eos.gasConstantJPerMolK * temperatureK;
-  const lnTarget = Math.log(pressurePa);
-  const lnMax = Math.log(eos.residual.maxDensityMolPerM3);
+  let lo = Math.log(1e-12);
+  let hi = Math.log(eos.residual.maxDensityMolPerM3);
   let lnRho = Math.log(eos.residual.densityGuess(temperatureK, pressurePa, phase));
-  for (let iteration = 0; iteration < 100; iteration++) {
+  for (let iteration = 0; iteration < 200; iteration++) {
     const rho = Math.exp(lnRho);
     eos.residual.evaluate(temperatureK, rho, r);
-    const p = rho * RT * (1 + r.aD);
-    const dlnpdlnrho = (rho * RT * (1 + 2 * r.aD + r.aDD)) / p;
-    if (!(p > 0) || !(dlnpdlnrho > 0)) {
-      lnRho += phase === 'vapour' ? -0.1 : 0.1;
-      continue;
+    const slope = rho * RT * (1 + 2 * r.aD + r.aDD); // dp/d(ln rho)
+    let next: number;
+    if (!(slope > 0)) {
+      if (phase === 'vapour') hi = lnRho;
+      else lo = lnRho;
+      next = phase === 'vapour' ? lnRho - 0.1 : lnRho + 0.1;
+    } else {
+      const f = rho * RT * (1 + r.aD) - pressurePa;
+      if (f < 0) lo = lnRho;
+      else hi = lnRho;
+      const step = -f / slope;
+      if (Math.abs(step) < 1e-12) return Math.exp(lnRho + step);
+      next = lnRho + Math.max(-1, Math.min(1, step));
     }
-    const step = Math.max(-1, Math.min(1, (lnTarget - Math.log(p)) / dlnpdlnrho));
-    lnRho = Math.min(lnRho + step, lnMax);
-    if (Math.abs(step) < 1e-12) return Math.exp(lnRho);
+    if (!(next > lo && next < hi)) next = (lo + hi) / 2;
+    if (hi - lo < 1e-15) break;
+    lnRho = next;
   }
   throw new Error(`no ${phase} density found at ${temperatureK} K and ${pressurePa} Pa`);
 }
