@@ -6,6 +6,7 @@ import { makeDensityGuess } from './density-guess';
 import { compileIdealGas } from './ideal-gas';
 import { reducingValues } from './reducing';
 import { ResidualEvaluator } from './residual';
+import { layoutTerms } from './residual-layout';
 import { collectTerms } from './terms';
 
 /*
@@ -24,7 +25,11 @@ const DENSITY_BOUND_FACTOR = 4;
 export function compileGerg2008(moleFractions: GergMoleFractions): EquationOfState {
   const { ids, x } = checkMoleFractions(moleFractions);
   const reducing = reducingValues(ids, x);
-  const evaluator = new ResidualEvaluator(collectTerms(ids, x), reducing.temperatureK, reducing.densityMolPerM3);
+  const evaluator = new ResidualEvaluator(
+    layoutTerms(collectTerms(ids, x)),
+    reducing.temperatureK,
+    reducing.densityMolPerM3,
+  );
   const evaluate = (temperatureK: number, densityMolPerM3: number, out: ResidualDerivatives) =>
     evaluator.evaluate(temperatureK, densityMolPerM3, out);
 
