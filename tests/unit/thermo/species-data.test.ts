@@ -31,11 +31,11 @@ function rawS(a: readonly number[], t: number): number {
 }
 
 describe('NASA 7-coefficient transcription', () => {
-  it('reproduces cp(N2, 300 K) = 29.125 J/(mol K) [NIST-JANAF, Chase 1998; ENGINEERING.md check value]', () => {
+  it('reproduces cp(N2, 300 K) = 29.125 J/(mol K) [NIST-JANAF, Chase 1998] [mem]', () => {
     expect(cpMolar(pure('N2'), 300)).toBeCloseTo(29.125, 2);
   });
 
-  // NIST-JANAF Thermochemical Tables (Chase 1998) [mem, as listed in ENGINEERING.md], tolerance 0.3 %.
+  // NIST-JANAF Thermochemical Tables (Chase 1998) [mem], tolerance 0.3 %.
   const janaf: [SpeciesId, number, number][] = [
     ['N2', 300, 29.125],
     ['N2', 500, 29.58],
@@ -64,7 +64,7 @@ describe('NASA 7-coefficient transcription', () => {
   );
 
   it.each([...SPECIES_IDS])(
-    '%s: cp, h and s° are continuous at Tmid = 1000 K [NASA TM-4513 fits are constrained so]',
+    '%s: cp, h and s° are continuous at Tmid = 1000 K [NASA 7-term fits are constrained so]',
     (id) => {
       const { low, high } = SPECIES[id];
       expect(Math.abs(rawCp(low, 1000) - rawCp(high, 1000)) / rawCp(low, 1000)).toBeLessThan(1e-6);
