@@ -154,7 +154,8 @@ export function calculateOpenApiDocument(): Record<string, unknown> {
       version: ENGINE_VERSION,
       description:
         'Preliminary sizing of electric process gas heaters and gas compressors on ideal-gas properties. ' +
-        `Gas presets: ${PRESET_IDS.join(', ')}. Mixture species: ${SPECIES_IDS.join(', ')}.`,
+        `Gas presets: ${PRESET_IDS.join(', ')}. Mixture species: ${SPECIES_IDS.join(', ')} ` +
+        '(common names such as methane, nC4 or hydrogen sulfide are accepted too).',
     },
     paths: {
       '/api/v1/calculate': {
