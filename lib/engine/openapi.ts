@@ -208,7 +208,8 @@ export function calculateOpenApiDocument(): Record<string, unknown> {
         'Preliminary sizing of electric process gas heaters and gas compressors on real-gas properties ' +
         '(GERG-2008 or Peng-Robinson, chosen by "equationOfState" or by the engine) or on ideal-gas properties. ' +
         'A liquid or two-phase inlet is refused. ' +
-        `Gas presets: ${PRESET_IDS.join(', ')}. Mixture species: ${SPECIES_IDS.join(', ')}.`,
+        `Gas presets: ${PRESET_IDS.join(', ')}. Mixture species: ${SPECIES_IDS.join(', ')} ` +
+        '(common names such as methane, nC4 or hydrogen sulfide are accepted too).',
     },
     paths: {
       '/api/v1/calculate': {

@@ -31,11 +31,11 @@ function rawS(a: readonly number[], t: number): number {
 }
 
 describe('NASA 7-coefficient transcription', () => {
-  it('reproduces cp(N2, 300 K) = 29.125 J/(mol K) [NIST-JANAF, Chase 1998; ENGINEERING.md check value]', () => {
+  it('reproduces cp(N2, 300 K) = 29.125 J/(mol K) [NIST-JANAF, Chase 1998] [mem]', () => {
     expect(cpMolar(pure('N2'), 300)).toBeCloseTo(29.125, 2);
   });
 
-  // NIST-JANAF Thermochemical Tables (Chase 1998) [mem, as listed in ENGINEERING.md], tolerance 0.3 %.
+  // NIST-JANAF Thermochemical Tables (Chase 1998) [mem], tolerance 0.3 %.
   const janaf: [SpeciesId, number, number][] = [
     ['N2', 300, 29.125],
     ['N2', 500, 29.58],
@@ -64,7 +64,7 @@ describe('NASA 7-coefficient transcription', () => {
   );
 
   it.each([...SPECIES_IDS])(
-    '%s: cp, h and s° are continuous at Tmid = 1000 K [NASA TM-4513 fits are constrained so]',
+    '%s: cp, h and s° are continuous at Tmid = 1000 K [NASA 7-term fits are constrained so]',
     (id) => {
       const { low, high } = SPECIES[id];
       expect(Math.abs(rawCp(low, 1000) - rawCp(high, 1000)) / rawCp(low, 1000)).toBeLessThan(1e-6);
@@ -95,7 +95,7 @@ describe('NASA 7-coefficient transcription', () => {
     expect(Math.abs(enthalpyMolar(pure(id), 298.15) - hf)).toBeLessThan(300);
   });
 
-  // CIAAW 2021 standard atomic weights (H 1.008, C 12.011, N 14.007, O 15.999) [pub].
+  // CIAAW 2021 standard atomic weights (H 1.008, C 12.011, N 14.007, O 15.999, S 32.06) [pub].
   it.each([
     ['N2', 28.014],
     ['O2', 31.998],
@@ -107,6 +107,10 @@ describe('NASA 7-coefficient transcription', () => {
     ['NH3', 17.031],
     ['Ar', 39.948],
     ['He', 4.002602],
+    ['n-C4H10', 58.124],
+    ['i-C5H12', 72.151],
+    ['n-C10H22', 142.286],
+    ['H2S', 34.076],
   ] as const)('molar mass of %s is %f kg/kmol', (id, m) => {
     expect(SPECIES[id].molarMassKgPerKmol).toBeCloseTo(m, 6);
   });
