@@ -1,0 +1,182 @@
+import {
+  CRITICAL_REDUCED_DENSITY,
+  CRITICAL_Z,
+  fractionsOf,
+  prepareComposition,
+  type PengRobinsonComponents,
+  type PengRobinsonOptions,
+  type SpeciesFractions,
+} from '../eos/peng-robinson';
+import { R } from '../eos/peng-robinson/constants';
+import { requirePositive } from '../eos/peng-robinson/errors';
+import { dewTemperatureOf, lowerDewPressureOf } from './dew-point';
+import { flash } from './flash';
+import { pseudoCritical } from './pseudo-critical';
+import { stabilityTest } from './stability';
+import { pureSaturation } from './vapour-pressure';
+
+/** Where the dew-point numbers stop being trustworthy the result says so instead of giving a number. */
+export type InletClassification =
+  | {
+      phase: 'gas';
+      /** Dew temperature at the inlet pressure, K (absent above the critical temperature or cricondenbar). */
+      dewPointK?: number;
+      /** Inlet temperature minus dew temperature, K. */
+      dewMarginK?: number;
+      /** Dew pressure at the inlet temperature, Pa (for a pure fluid its vapour pressure). */
+      dewPressurePa?: number;
+      /** A pure fluid above its critical temperature (but below pc): it cannot condense at this temperature. */
+      aboveCriticalTemperature?: boolean;
+      /** The dew-point iteration failed near the critical region or cricondentherm; no number given. */
+      nearCritical?: boolean;
+      compressibility: number;
+    }
+  | {
+      phase: 'supercritical';
+      /** Density above the (pseudo-)critical density: a dense phase; sizing as a gas still holds with a real-gas equation. */
+      dense: boolean;
+      detail: {
+        compressibility: number;
+        criticalTemperatureK: number;
+        criticalPressurePa: number;
+        pseudoCritical: boolean;
+      };
+    }
+  | {
+      phase: 'liquid';
+      detail: {
+        compressibility: number;
+        /** Pure fluid: vapour pressure at the inlet temperature, Pa. */
+        saturationPressurePa?: number;
+        /** Mixture: dew temperature at the inlet pressure, K, when one was found. */
+        dewPointK?: number;
+      };
+    }
+  | {
+      phase: 'two-phase';
+      detail: {
+        /** Moles of vapour per mole of feed. */
+        vapourFraction: number;
+        vapour: Record<string, number>;
+        liquid: Record<string, number>;
+        zVapour: number;
+        zLiquid: number;
+        /** Dew temperature at the inlet pressure, K: the gas would need heating above this. */
+        dewPointK?: number;
+        /** Ordinary dew pressure at the inlet temperature, Pa: the pressure would need lowering below this. */
+        dewPressurePa?: number;
+        /** The flash or a dew-point iteration did not settle: near the critical region. */
+        nearCritical: boolean;
+      };
+    };
+
+function classifyPure(sys: PengRobinsonComponents, z: Float64Array, T: number, p: number): InletClassification {
+  const tc = sys.tcK[0]!;
+  const pc = sys.pcPa[0]!;
+  const stable = stabilityTest(sys, z, T, p);
+  if (T >= tc) {
+    if (p < pc) return { phase: 'gas', aboveCriticalTemperature: true, compressibility: stable.feedZ };
+    const dense = p / (stable.feedZ * T) > pc / (CRITICAL_Z * tc); // rho > rho_c of the equation
+    return {
+      phase: 'supercritical',
+      dense,
+      detail: {
+        compressibility: stable.feedZ,
+        criticalTemperatureK: tc,
+        criticalPressurePa: pc,
+        pseudoCritical: false,
+      },
+    };
+  }
+  const sat = pureSaturation(sys, T)!;
+  if (p > sat.pressurePa) {
+    return { phase: 'liquid', detail: { compressibility: sat.zLiquid, saturationPressurePa: sat.pressurePa } };
+  }
+  const dew = dewTemperatureOf(sys, z, p);
+  const dewK = 'temperatureK' in dew ? dew.temperatureK : undefined;
+  return {
+    phase: 'gas',
+    dewPointK: dewK,
+    dewMarginK: dewK === undefined ? undefined : T - dewK,
+    dewPressurePa: sat.pressurePa,
+    compressibility: stable.feedZ,
+  };
+}
+
+function classifyMixture(sys: PengRobinsonComponents, z: Float64Array, T: number, p: number): InletClassification {
+  const stability = stabilityTest(sys, z, T, p);
+  const dew = dewTemperatureOf(sys, z, p);
+  const dewK = 'temperatureK' in dew ? dew.temperatureK : undefined;
+  if (!stability.stable) {
+    const f = flash(sys, z, T, p, stability);
+    const dewP = lowerDewPressureOf(sys, z, T);
+    return {
+      phase: 'two-phase',
+      detail: {
+        vapourFraction: f.vapourFraction,
+        vapour: fractionsOf(sys.ids, f.vapour),
+        liquid: fractionsOf(sys.ids, f.liquid),
+        zVapour: f.zVapour,
+        zLiquid: f.zLiquid,
+        dewPointK: dewK,
+        dewPressurePa: 'pressurePa' in dewP ? dewP.pressurePa : undefined,
+        nearCritical: !f.converged || dewK === undefined,
+      },
+    };
+  }
+  if (dewK !== undefined && dewK <= T) {
+    const dewP = lowerDewPressureOf(sys, z, T);
+    return {
+      phase: 'gas',
+      dewPointK: dewK,
+      dewMarginK: T - dewK,
+      dewPressurePa: 'pressurePa' in dewP ? dewP.pressurePa : undefined,
+      compressibility: stability.feedZ,
+    };
+  }
+  // Stable, but not on the vapour side of the dew curve at this pressure (or no dew curve found): a liquid,
+  // a dense fluid beyond the critical region, or a gas the dew iteration could not place.
+  let b = 0;
+  for (let i = 0; i < sys.n; i++) b += z[i]! * sys.b[i]!;
+  const reducedDensity = (b * p) / (stability.feedZ * R * T);
+  const liquidLike = reducedDensity > CRITICAL_REDUCED_DENSITY;
+  const pc = pseudoCritical(sys, z);
+  if (liquidLike && T < pc.temperatureK) {
+    return { phase: 'liquid', detail: { compressibility: stability.feedZ, dewPointK: dewK } };
+  }
+  if (
+    liquidLike ||
+    (T >= pc.temperatureK && p >= pc.pressurePa && !('reason' in dew && dew.reason === 'near-critical'))
+  ) {
+    return {
+      phase: 'supercritical',
+      dense: liquidLike,
+      detail: {
+        compressibility: stability.feedZ,
+        criticalTemperatureK: pc.temperatureK,
+        criticalPressurePa: pc.pressurePa,
+        pseudoCritical: true,
+      },
+    };
+  }
+  return { phase: 'gas', nearCritical: true, compressibility: stability.feedZ };
+}
+
+/**
+ * What the inlet of a heater or compressor is, by Peng-Robinson: gas (with its dew point and margin), liquid,
+ * two-phase (with the split), or supercritical (dense or not). A pure fluid is judged by its vapour pressure, a
+ * mixture by Michelsen's stability test, then a flash or a dew-point calculation for the message.
+ */
+export function classifyInlet(
+  moleFractions: SpeciesFractions,
+  temperatureK: number,
+  pressurePa: number,
+  options?: PengRobinsonOptions,
+): InletClassification {
+  requirePositive('temperatureK', temperatureK, 'K');
+  requirePositive('pressurePa', pressurePa, 'Pa');
+  const { sys, x } = prepareComposition(moleFractions, options);
+  return sys.n === 1
+    ? classifyPure(sys, x, temperatureK, pressurePa)
+    : classifyMixture(sys, x, temperatureK, pressurePa);
+}
