@@ -23,7 +23,7 @@ export type InletClassification =
       dewPointK?: number;
       /** Inlet temperature minus dew temperature, K. */
       dewMarginK?: number;
-      /** Dew pressure at the inlet temperature, Pa (for a pure fluid its vapour pressure). */
+      /** Pure fluid: its vapour pressure at the inlet temperature, Pa (mixtures: see dewPointPressures). */
       dewPressurePa?: number;
       /** A pure fluid above its critical temperature (but below pc): it cannot condense at this temperature. */
       aboveCriticalTemperature?: boolean;
@@ -125,14 +125,9 @@ function classifyMixture(sys: PengRobinsonComponents, z: Float64Array, T: number
     };
   }
   if (dewK !== undefined && dewK <= T) {
-    const dewP = lowerDewPressureOf(sys, z, T);
-    return {
-      phase: 'gas',
-      dewPointK: dewK,
-      dewMarginK: T - dewK,
-      dewPressurePa: 'pressurePa' in dewP ? dewP.pressurePa : undefined,
-      compressibility: stability.feedZ,
-    };
+    // For a gas the margin is in temperature; the dew pressure at T is left to dewPointPressures (compression
+    // heats the gas, so an isothermal pressure margin would mislead).
+    return { phase: 'gas', dewPointK: dewK, dewMarginK: T - dewK, compressibility: stability.feedZ };
   }
   // Stable, but not on the vapour side of the dew curve at this pressure (or no dew curve found): a liquid,
   // a dense fluid beyond the critical region, or a gas the dew iteration could not place.

@@ -31,6 +31,9 @@ type Work = {
   stateW: FugacityState;
   w: Float64Array;
   lnZ: Float64Array;
+  /** The last two changes of ln w, for the dominant-eigenvalue extrapolation. */
+  delta: Float64Array;
+  previous: Float64Array;
 };
 
 function work(sys: PengRobinsonComponents, z: ArrayLike<number>, w0: ArrayLike<number>): Work {
@@ -47,13 +50,15 @@ function work(sys: PengRobinsonComponents, z: ArrayLike<number>, w0: ArrayLike<n
     stateW: newFugacityState(),
     w: Float64Array.from(w0),
     lnZ,
+    delta: new Float64Array(n),
+    previous: new Float64Array(n),
   };
 }
 
 /**
  * One substitution step at (T, p): W_i = z_i φ_i(z) / φ_i(w) with the feed on its vapour root and the incipient
  * phase w on its liquid root; w <- W / ΣW. Returns ln ΣW (0 at a dew point) and, through `change`, how far w
- * moved and how close it is to the feed (trivial solution).
+ * moved, how close it is to the feed (trivial solution) and the slope of ln ΣW in ln p or T at fixed compositions.
  */
 function substitute(
   sys: PengRobinsonComponents,
@@ -61,11 +66,12 @@ function substitute(
   T: number,
   p: number,
   k: Work,
-  withPressureSlope: boolean,
+  slopeIn: 'pressure' | 'temperature',
   change: { step: number; trivial: number; slope: number },
 ): number {
-  lnFugacityCoefficients(sys, T, p, z, 'vapour', k.lnPhiZ, k.stateZ, withPressureSlope ? k.dZ : undefined);
-  lnFugacityCoefficients(sys, T, p, k.w, 'liquid', k.lnPhiW, k.stateW, withPressureSlope ? k.dW : undefined);
+  const inP = slopeIn === 'pressure';
+  lnFugacityCoefficients(sys, T, p, z, 'vapour', k.lnPhiZ, k.stateZ, inP ? k.dZ : undefined, inP ? undefined : k.dZ);
+  lnFugacityCoefficients(sys, T, p, k.w, 'liquid', k.lnPhiW, k.stateW, inP ? k.dW : undefined, inP ? undefined : k.dW);
   let s = 0;
   for (let i = 0; i < k.n; i++) s += Math.exp(k.lnZ[i]! + k.lnPhiZ[i]! - k.lnPhiW[i]!);
   let step = 0;
@@ -73,9 +79,11 @@ function substitute(
   let slope = 0;
   for (let i = 0; i < k.n; i++) {
     const next = Math.exp(k.lnZ[i]! + k.lnPhiZ[i]! - k.lnPhiW[i]!) / s;
-    if (withPressureSlope) slope += next * (k.dZ[i]! - k.dW[i]!);
+    slope += next * (k.dZ[i]! - k.dW[i]!);
     const d = Math.log(next / k.w[i]!);
     step += d * d;
+    k.previous[i] = k.delta[i]!;
+    k.delta[i] = d;
     const t = Math.log(next) - k.lnZ[i]!;
     trivial += t * t;
     k.w[i] = next;
@@ -86,7 +94,32 @@ function substitute(
   return Math.log(s);
 }
 
+/**
+ * Every fifth step, extrapolates ln w along its dominant eigenvalue (as in the stability test), which cuts the
+ * substitution's slow tail near the cricondenbar and cricondentherm.
+ */
+function extrapolate(k: Work): void {
+  let b01 = 0;
+  let b11 = 0;
+  for (let i = 0; i < k.n; i++) {
+    b01 += k.delta[i]! * k.previous[i]!;
+    b11 += k.previous[i]! * k.previous[i]!;
+  }
+  const lambda = b01 / b11;
+  if (!(lambda > 0 && lambda < 0.98)) return;
+  const factor = lambda / (1 - lambda);
+  let s = 0;
+  for (let i = 0; i < k.n; i++) {
+    k.w[i] = k.w[i]! * Math.exp(factor * k.delta[i]!);
+    s += k.w[i]!;
+  }
+  for (let i = 0; i < k.n; i++) k.w[i] = k.w[i]! / s;
+}
+
 const TRIVIAL = 1e-5;
+/** |ln Σ W| and Σ (Δ ln w)² at convergence: dew temperatures to about 1e-7 K, pressures to 1e-9 relative. */
+const F_TOLERANCE = 1e-9;
+const W_TOLERANCE = 1e-14;
 const MAX_ITER = 300;
 
 /**
@@ -107,23 +140,22 @@ export function dewPressure(
   let lnp = Math.log(p0);
   for (let iter = 1; iter <= MAX_ITER; iter++) {
     const p = Math.exp(lnp);
-    const f = substitute(sys, z, T, p, k, true, change);
+    const f = substitute(sys, z, T, p, k, 'pressure', change);
     if (change.trivial < TRIVIAL) return { ok: false, reason: 'trivial' };
-    if (Math.abs(f) < 1e-10 && change.step < 1e-16) {
-      return done(T, p, k, change.slope, iter);
-    }
+    if (Math.abs(f) < F_TOLERANCE && change.step < W_TOLERANCE) return done(T, p, k, change.slope, iter);
     let step = change.slope !== 0 ? -f / change.slope : 0;
     if (!Number.isFinite(step)) return { ok: false, reason: 'no-convergence' };
     step = Math.max(-1, Math.min(1, step));
     lnp += step;
+    if (iter % 5 === 0) extrapolate(k);
     if (lnp < Math.log(1) || lnp > Math.log(1e9)) return { ok: false, reason: 'out-of-range' };
   }
   return { ok: false, reason: 'no-convergence' };
 }
 
 /**
- * Dew temperature of feed z at p: as `dewPressure` but Newton on T, with ∂ln Σ W/∂T at fixed compositions by a
- * forward difference (δT = 1e-6 T). A negative slope marks the ordinary dew point (heating evaporates the drop).
+ * Dew temperature of feed z at p: as `dewPressure` but Newton on T, with the exact ∂ln Σ W/∂T at fixed compositions
+ * (from ∂ln φ_i/∂T). A negative slope marks the ordinary dew point (heating evaporates the drop).
  */
 export function dewTemperature(
   sys: PengRobinsonComponents,
@@ -134,22 +166,16 @@ export function dewTemperature(
 ): SaturationPoint {
   const k = work(sys, z, w0);
   const change = { step: 0, trivial: 0, slope: 0 };
-  const probe = { step: 0, trivial: 0, slope: 0 };
-  const saved = new Float64Array(sys.n);
   let T = T0;
   for (let iter = 1; iter <= MAX_ITER; iter++) {
-    saved.set(k.w);
-    const h = 1e-6 * T;
-    const fPlus = substitute(sys, z, T + h, p, k, false, probe);
-    k.w.set(saved);
-    const f = substitute(sys, z, T, p, k, false, change);
+    const f = substitute(sys, z, T, p, k, 'temperature', change);
     if (change.trivial < TRIVIAL) return { ok: false, reason: 'trivial' };
-    const slope = (fPlus - f) / h;
-    if (Math.abs(f) < 1e-10 && change.step < 1e-16) return done(T, p, k, slope, iter);
-    let step = slope !== 0 ? -f / slope : 0;
+    if (Math.abs(f) < F_TOLERANCE && change.step < W_TOLERANCE) return done(T, p, k, change.slope, iter);
+    let step = change.slope !== 0 ? -f / change.slope : 0;
     if (!Number.isFinite(step)) return { ok: false, reason: 'no-convergence' };
     step = Math.max(-0.1 * T, Math.min(0.1 * T, step));
     T += step;
+    if (iter % 5 === 0) extrapolate(k);
     if (T < 20 || T > 3000) return { ok: false, reason: 'out-of-range' };
   }
   return { ok: false, reason: 'no-convergence' };

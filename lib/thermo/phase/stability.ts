@@ -14,7 +14,13 @@ export type StabilityResult = {
   feedZ: number;
 };
 
+/** Σ (ln W - ln z)² below this: the trial has fallen onto the feed (trivial solution). */
 const TRIVIAL = 1e-6;
+/**
+ * Σ (Δ ln W)² below this ends a trial: the sign of tm is settled long before, except within a few millikelvin of the
+ * phase boundary, where either answer is right for sizing (the dew margin is then zero to that accuracy).
+ */
+const CONVERGED = 1e-12;
 
 /**
  * Michelsen's tangent-plane-distance test [pub: M. L. Michelsen, "The isothermal flash problem. Part I.
@@ -70,7 +76,7 @@ export function stabilityTest(
         if (tm < best.tm) best = { stable: false, tm, trial: Float64Array.from(w), trialKind: kind, feedZ };
         break;
       }
-      if (err < 1e-20 || trivial < TRIVIAL) break;
+      if (err < CONVERGED || trivial < TRIVIAL) break;
       if (iter % 5 === 0) accelerate(lnW, delta, previous, n);
     }
   }

@@ -44,6 +44,8 @@ export class PengRobinsonComponents {
   readonly kappa: Float64Array;
   /** Co-volume b_i, m3/mol. */
   readonly b: Float64Array;
+  /** sqrt(Tc), sqrt(K). */
+  readonly sqrtTc: Float64Array;
   /** sqrt(Ωa R² Tc² / pc), sqrt(Pa m6/mol²). */
   readonly sqrtAc: Float64Array;
   /** 1 - k_ij, row-major n × n. */
@@ -72,6 +74,7 @@ export class PengRobinsonComponents {
     this.kappa = new Float64Array(n);
     this.b = new Float64Array(n);
     this.sqrtAc = new Float64Array(n);
+    this.sqrtTc = new Float64Array(n);
     this.oneMinusK = new Float64Array(n * n);
     this.m = new Float64Array(n);
     this.dm = new Float64Array(n);
@@ -83,6 +86,7 @@ export class PengRobinsonComponents {
       const c = criticalConstantsOf(ids[i]!, options);
       const pc = c.pcBar * 1e5;
       this.tcK[i] = c.tcK;
+      this.sqrtTc[i] = Math.sqrt(c.tcK);
       this.pcPa[i] = pc;
       this.omega[i] = c.omega;
       this.kappa[i] = kappaOf(c.omega);
@@ -99,7 +103,7 @@ export class PengRobinsonComponents {
     const sqrtT = Math.sqrt(T);
     for (let i = 0; i < n; i++) {
       const k = this.kappa[i]!;
-      const sqrtTc = Math.sqrt(this.tcK[i]!);
+      const sqrtTc = this.sqrtTc[i]!;
       let m = 1 + k * (1 - sqrtT / sqrtTc);
       let dm = -k / (2 * sqrtT * sqrtTc);
       let d2m = k / (4 * T * sqrtT * sqrtTc);

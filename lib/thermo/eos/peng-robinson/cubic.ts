@@ -1,4 +1,9 @@
-import { DELTA_1, DELTA_2, SQRT2 } from './constants';
+import { DELTA_1 as D1, DELTA_2 as D2, SQRT2 as S2 } from './constants';
+
+// Module-local copies (imported bindings are getters under tsx's CommonJS output).
+const DELTA_1 = D1;
+const DELTA_2 = D2;
+const SQRT2 = S2;
 
 /** Real roots Z > B of the Peng-Robinson cubic, filled in place. */
 export type CubicRoots = {

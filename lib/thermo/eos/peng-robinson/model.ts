@@ -2,7 +2,7 @@ import type { EquationOfState, IdealGasModel, ResidualDerivatives, ResidualModel
 import { attractionQuadratic, mixtureAttraction, type Attraction } from './attraction';
 import type { PengRobinsonComponents, PengRobinsonOptions } from './components';
 import { prepareComposition, type SpeciesFractions } from './composition';
-import { R, SQRT2, DELTA_2 } from './constants';
+import { R as GAS_R, SQRT2, DELTA_2 as D2 } from './constants';
 import { newCubicRoots, solveCubic, type CubicRoots } from './cubic';
 import { lnFugacityCoefficients as lnPhi, newFugacityState, type PhaseRoot } from './fugacity';
 import { idealGasOf, molarMassOf } from './ideal-gas';
@@ -36,6 +36,9 @@ export type PengRobinsonEquation = EquationOfState & {
   readonly covolume: number;
 };
 
+// Module-local copies (imported bindings are getters under tsx's CommonJS output, and evaluate is hot).
+const R = GAS_R;
+const DELTA_2 = D2;
 const INV_2SQRT2 = 1 / (2 * SQRT2);
 const TWO_SQRT2 = 2 * SQRT2;
 
