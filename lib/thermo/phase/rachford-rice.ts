@@ -27,11 +27,12 @@ export function rachfordRice(z: ArrayLike<number>, K: ArrayLike<number>, n: numb
       f += t;
       df -= (t * c) / d;
     }
+    if (f === 0) return beta;
     if (f > 0) lo = beta;
     else hi = beta;
     let next = beta - f / df;
     if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
-    if (Math.abs(next - beta) <= 1e-15 * Math.max(1, Math.abs(beta)) || f === 0) return next;
+    if (Math.abs(next - beta) <= 1e-15 * Math.max(1, Math.abs(beta))) return next;
     beta = next;
   }
   return beta;
