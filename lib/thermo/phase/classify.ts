@@ -9,7 +9,7 @@ import {
 } from '../eos/peng-robinson';
 import { R } from '../eos/peng-robinson/constants';
 import { requirePositive } from '../eos/peng-robinson/errors';
-import { dewTemperatureOf, lowerDewPressureOf } from './dew-point';
+import { dewTemperatureByStability, dewTemperatureOf, lowerDewPressureOf } from './dew-point';
 import { flash } from './flash';
 import { pseudoCritical } from './pseudo-critical';
 import { stabilityTest } from './stability';
@@ -27,7 +27,10 @@ export type InletClassification =
       dewPressurePa?: number;
       /** A pure fluid above its critical temperature (but below pc): it cannot condense at this temperature. */
       aboveCriticalTemperature?: boolean;
-      /** The dew-point iteration failed near the critical region or cricondentherm; no number given. */
+      /**
+       * Near the critical region (cricondenbar or cricondentherm) the dew iteration cannot be trusted; the dew
+       * temperature was then found by stability tests along the cooling path (to 0.05 K).
+       */
       nearCritical?: boolean;
       compressibility: number;
     }
@@ -129,20 +132,30 @@ function classifyMixture(sys: PengRobinsonComponents, z: Float64Array, T: number
     // heats the gas, so an isothermal pressure margin would mislead).
     return { phase: 'gas', dewPointK: dewK, dewMarginK: T - dewK, compressibility: stability.feedZ };
   }
-  // Stable, but not on the vapour side of the dew curve at this pressure (or no dew curve found): a liquid,
-  // a dense fluid beyond the critical region, or a gas the dew iteration could not place.
   let b = 0;
   for (let i = 0; i < sys.n; i++) b += z[i]! * sys.b[i]!;
-  const reducedDensity = (b * p) / (stability.feedZ * R * T);
-  const liquidLike = reducedDensity > CRITICAL_REDUCED_DENSITY;
+  const liquidLike = (b * p) / (stability.feedZ * R * T) > CRITICAL_REDUCED_DENSITY;
+  if (dewK === undefined && !liquidLike) {
+    // The dew iteration failed (cricondenbar or cricondentherm region, or no dew point at this pressure):
+    // fall back to stability tests along the cooling path.
+    const fallback = dewTemperatureByStability(sys, z, p, T);
+    if (fallback !== null) {
+      return {
+        phase: 'gas',
+        dewPointK: fallback,
+        dewMarginK: T - fallback,
+        nearCritical: true,
+        compressibility: stability.feedZ,
+      };
+    }
+  }
+  // Stable, and not on the vapour side of a dew curve at this pressure: a liquid, or a fluid above the
+  // cricondenbar (no condensation on cooling), told apart by density and the one-fluid pseudo-critical point.
   const pc = pseudoCritical(sys, z);
   if (liquidLike && T < pc.temperatureK) {
     return { phase: 'liquid', detail: { compressibility: stability.feedZ, dewPointK: dewK } };
   }
-  if (
-    liquidLike ||
-    (T >= pc.temperatureK && p >= pc.pressurePa && !('reason' in dew && dew.reason === 'near-critical'))
-  ) {
+  if (liquidLike || (T >= pc.temperatureK && p >= pc.pressurePa)) {
     return {
       phase: 'supercritical',
       dense: liquidLike,
@@ -154,7 +167,7 @@ function classifyMixture(sys: PengRobinsonComponents, z: Float64Array, T: number
       },
     };
   }
-  return { phase: 'gas', nearCritical: true, compressibility: stability.feedZ };
+  return { phase: 'gas', compressibility: stability.feedZ };
 }
 
 /**

@@ -46,6 +46,36 @@ export function dewTemperatureOf(sys: PengRobinsonComponents, z: ArrayLike<numbe
   return { temperatureK: r.temperatureK, pressurePa: p, firstDrop: fractionsOf(sys.ids, r.incipient) };
 }
 
+/**
+ * The fallback where the dew iteration cannot be trusted (near the cricondenbar or cricondentherm): cools the feed
+ * from T (where it is stable) at constant p in 3 % steps with the stability test, down to 0.4 T, then bisects the
+ * first unstable step to 0.05 K. Returns the highest dew temperature below T, or null when the feed stays one
+ * phase all the way down (p above the cricondenbar: it cannot condense on cooling).
+ */
+export function dewTemperatureByStability(
+  sys: PengRobinsonComponents,
+  z: ArrayLike<number>,
+  p: number,
+  T: number,
+): number | null {
+  let stableT = T;
+  let unstableT = NaN;
+  for (let t = T * 0.97; t >= 0.4 * T; t *= 0.97) {
+    if (!stabilityTest(sys, z, t, p).stable) {
+      unstableT = t;
+      break;
+    }
+    stableT = t;
+  }
+  if (!Number.isFinite(unstableT)) return null;
+  while (stableT - unstableT > 0.05) {
+    const mid = 0.5 * (stableT + unstableT);
+    if (stabilityTest(sys, z, mid, p).stable) stableT = mid;
+    else unstableT = mid;
+  }
+  return 0.5 * (stableT + unstableT);
+}
+
 /** Ordinary (lower) dew pressure of z at T from Wilson's estimate; see `dewTemperatureOf`. */
 export function lowerDewPressureOf(
   sys: PengRobinsonComponents,
