@@ -1,10 +1,12 @@
 import {
+  CRITICAL_REDUCED_DENSITY,
   fractionsOf,
   prepareComposition,
   type PengRobinsonComponents,
   type PengRobinsonOptions,
   type SpeciesFractions,
 } from '../eos/peng-robinson';
+import { R } from '../eos/peng-robinson/constants';
 import { requirePositive } from '../eos/peng-robinson/errors';
 import { dewPressure, dewTemperature, type SaturationPoint } from './saturation';
 import { stabilityTest } from './stability';
@@ -48,9 +50,10 @@ export function dewTemperatureOf(sys: PengRobinsonComponents, z: ArrayLike<numbe
 
 /**
  * The fallback where the dew iteration cannot be trusted (near the cricondenbar or cricondentherm): cools the feed
- * from T (where it is stable) at constant p in 3 % steps with the stability test, down to 0.4 T, then bisects the
- * first unstable step to 0.05 K. Returns the highest dew temperature below T, or null when the feed stays one
- * phase all the way down (p above the cricondenbar: it cannot condense on cooling).
+ * from T (where it is stable) at constant p in 4 % steps with the stability test, then bisects the first unstable
+ * step to 0.05 K. Returns the highest dew temperature below T, or null when the feed stays one phase until it is
+ * clearly liquid-like (1.5 times the critical b rho) or reaches 0.4 T: above the cricondenbar it cannot condense
+ * on cooling, it only grows denser.
  */
 export function dewTemperatureByStability(
   sys: PengRobinsonComponents,
@@ -58,14 +61,19 @@ export function dewTemperatureByStability(
   p: number,
   T: number,
 ): number | null {
+  let b = 0;
+  for (let i = 0; i < sys.n; i++) b += z[i]! * sys.b[i]!;
+  const denseZ = (b * p) / (1.5 * CRITICAL_REDUCED_DENSITY * R); // Z * T below which b rho > 1.5 b rho_c
   let stableT = T;
   let unstableT = NaN;
-  for (let t = T * 0.97; t >= 0.4 * T; t *= 0.97) {
-    if (!stabilityTest(sys, z, t, p).stable) {
+  for (let t = T * 0.96; t >= 0.4 * T; t *= 0.96) {
+    const s = stabilityTest(sys, z, t, p);
+    if (!s.stable) {
       unstableT = t;
       break;
     }
     stableT = t;
+    if (s.feedZ * t < denseZ) return null;
   }
   if (!Number.isFinite(unstableT)) return null;
   while (stableT - unstableT > 0.05) {
