@@ -91,7 +91,20 @@ function classifyPure(sys: PengRobinsonComponents, z: Float64Array, T: number, p
       },
     };
   }
-  const sat = pureSaturation(sys, T)!;
+  const sat = pureSaturation(sys, T);
+  if (!sat) {
+    // Within rounding of Tc the two roots merge: report the critical state itself.
+    return {
+      phase: 'supercritical',
+      dense: p / (stable.feedZ * T) > pc / (CRITICAL_Z * tc),
+      detail: {
+        compressibility: stable.feedZ,
+        criticalTemperatureK: tc,
+        criticalPressurePa: pc,
+        pseudoCritical: false,
+      },
+    };
+  }
   if (p > sat.pressurePa) {
     return { phase: 'liquid', detail: { compressibility: sat.zLiquid, saturationPressurePa: sat.pressurePa } };
   }

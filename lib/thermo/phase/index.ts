@@ -4,5 +4,6 @@ export { dewPointPressures, dewPointTemperature, type DewPoint, type NoDewPoint 
 export { vapourPressure, saturationTemperature } from './pure';
 export { stabilityTest, type StabilityResult } from './stability';
 export { flash, type FlashResult } from './flash';
+export { threePhaseFlash, type ThreePhaseResult } from './three-phase';
 export { rachfordRice } from './rachford-rice';
 export { pseudoCritical } from './pseudo-critical';

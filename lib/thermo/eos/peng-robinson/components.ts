@@ -133,17 +133,25 @@ export class PengRobinsonComponents {
 }
 
 const CACHE = new Map<string, PengRobinsonComponents>();
+const CACHE_BY_OPTIONS = new WeakMap<PengRobinsonOptions, Map<string, PengRobinsonComponents>>();
 const CACHE_LIMIT = 64;
 
-/** A component set for these ids, cached (without options) so repeated calls cost one map look-up. */
+/**
+ * A component set for these ids, cached per options object (and once for no options), so repeated calls for the
+ * same gas cost one map look-up.
+ */
 export function componentsFor(ids: readonly string[], options?: PengRobinsonOptions): PengRobinsonComponents {
-  if (options?.criticalConstants || options?.interactionParameters) return new PengRobinsonComponents(ids, options);
+  let cache = CACHE;
+  if (options) {
+    cache = CACHE_BY_OPTIONS.get(options) ?? new Map();
+    CACHE_BY_OPTIONS.set(options, cache);
+  }
   const key = ids.join(',');
-  let c = CACHE.get(key);
+  let c = cache.get(key);
   if (!c) {
-    if (CACHE.size >= CACHE_LIMIT) CACHE.delete(CACHE.keys().next().value!);
+    if (cache.size >= CACHE_LIMIT) cache.delete(cache.keys().next().value!);
     c = new PengRobinsonComponents(ids, options);
-    CACHE.set(key, c);
+    cache.set(key, c);
   }
   return c;
 }
