@@ -9,7 +9,7 @@ import type { CurrentUser } from '@/lib/auth/current-user';
 import { assertAccountAccess } from '@/lib/auth/guards';
 import { env } from '@/lib/env';
 import { enqueueEmail } from '@/lib/email/enqueue';
-import { hashPassword } from '@/mocks/identity/passwords';
+import { hashPassword } from '@/lib/auth/local/passwords';
 import type { AccountInput, InviteInput } from './schema';
 
 const INVITE_DAYS = 14;

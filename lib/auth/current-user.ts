@@ -5,7 +5,7 @@ import { cache } from 'react';
 import { db } from '@/db';
 import { memberships, users } from '@/db/schema';
 import { clerkEnabled, env } from '@/lib/env';
-import { LOCAL_SESSION_COOKIE, verifyLocalSession } from '@/mocks/identity/session-token';
+import { LOCAL_SESSION_COOKIE, verifyLocalSession } from '@/lib/auth/local/session-token';
 import type { UserRole } from './roles';
 
 /** The signed-in person as the rest of the app sees them, whichever identity provider is active. */

@@ -3,7 +3,7 @@
 import { ActionError, fieldErrorsOf, type ActionResult } from '@/lib/actions/define-action';
 import { acceptInvitation } from '@/lib/accounts/mutations';
 import { acceptInviteSchema } from '@/lib/accounts/schema';
-import { startLocalSession } from '@/lib/auth/local-session';
+import { startLocalSession } from '@/lib/auth/local/session';
 import { clerkEnabled } from '@/lib/env';
 import { logger } from '@/lib/log/logger';
 import { limitPublicAction } from '@/lib/ratelimit/action-limit';

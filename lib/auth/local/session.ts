@@ -4,8 +4,8 @@ import { cookies } from 'next/headers';
 import { db } from '@/db';
 import { users } from '@/db/schema';
 import { env } from '@/lib/env';
-import { verifyPassword } from '@/mocks/identity/passwords';
-import { LOCAL_SESSION_COOKIE, signLocalSession } from '@/mocks/identity/session-token';
+import { verifyPassword } from './passwords';
+import { LOCAL_SESSION_COOKIE, signLocalSession } from './session-token';
 
 /** Checks an e-mail and password against the local identity; null on any mismatch. */
 export async function checkLocalCredentials(email: string, password: string) {
