@@ -1,8 +1,13 @@
-import { KG_PER_LB, W_PER_HP, pressureFromPa, temperatureFromK } from '@/lib/units';
-import { SYSTEM_UNITS, unitLabel, type UnitSystem } from './unit-systems';
-
-/** J/(kg K) per Btu/(lb °F), exact [pub: NIST SP 811 (2008), B.8, International Table Btu]. */
-export const J_PER_KG_K_PER_BTU_PER_LB_F = 4186.8;
+import {
+  J_PER_KG_K_PER_BTU_PER_LB_F,
+  KG_PER_LB,
+  SYSTEM_UNITS,
+  W_PER_HP,
+  pressureFromPa,
+  temperatureFromK,
+  unitLabel,
+  type UnitSystem,
+} from '@/lib/units';
 
 const cache = new Map<number, Intl.NumberFormat>();
 

@@ -1,8 +1,7 @@
 import type { SizingInput } from '@/lib/engine';
-import { standardAtmospherePressurePa } from '@/lib/units';
+import { standardAtmospherePressurePa, type UnitSystem } from '@/lib/units';
 import { defaultValues } from './defaults';
 import type { DeskValues, MixtureRow, QtyText } from './form-types';
-import type { UnitSystem } from './unit-systems';
 
 const q = (x: { value: number; unit: string }): QtyText => ({ value: String(x.value), unit: x.unit });
 const text = (n: number | undefined, fallback: string) => (n === undefined ? fallback : String(n));

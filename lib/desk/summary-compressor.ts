@@ -1,6 +1,6 @@
 import type { CompressorResult, MotorSelection } from '@/lib/engine';
 import { fixed, formatA, formatHp, formatKw, formatPercent, joined, showPressure, showTemperature } from './format';
-import type { UnitSystem } from './unit-systems';
+import type { UnitSystem } from '@/lib/units';
 
 const kw = (v: number) => `${formatKw(v)} kW`;
 

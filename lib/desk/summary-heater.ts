@@ -10,7 +10,7 @@ import {
   showTemperature,
   type Shown,
 } from './format';
-import type { UnitSystem } from './unit-systems';
+import type { UnitSystem } from '@/lib/units';
 
 const t = (c: number, s: UnitSystem) => joined(showTemperature(c, s));
 const kw = (v: number) => `${formatKw(v)} kW`;

@@ -3,7 +3,7 @@ import { figure, fixed, joined, showMassFlow, showTemperature } from './format';
 import { SEVERITY_LABEL, groupWarnings, preliminaryOf } from './severity';
 import { compressorLines } from './summary-compressor';
 import { heaterLines } from './summary-heater';
-import type { UnitSystem } from './unit-systems';
+import type { UnitSystem } from '@/lib/units';
 
 function dutyPoint(r: SizingResult, system: UnitSystem): string[] {
   const f = r.flows;

@@ -1,7 +1,8 @@
+import type { UnitSystem } from '@/lib/units';
 import { switchUnitValue, type ExactValue, type SwitchContext } from './convert';
 import { barometricPaOf, flowContextOf } from './flow-context';
 import { QUANTITY_FIELDS, type DeskValues, type QtyText, type QuantityPath } from './form-types';
-import { systemUnitFor, type UnitSystem } from './unit-systems';
+import { systemUnitFor } from './unit-pickers';
 
 /** The quantity at a dotted path of the form values. */
 export function quantityAt(values: DeskValues, path: QuantityPath): QtyText {

@@ -4,7 +4,7 @@ import { listAccountOptions } from '@/lib/accounts/queries';
 import { defaultValues } from '@/lib/desk/defaults';
 import { valuesFromInput } from '@/lib/desk/from-request';
 import { sitePressureOf } from '@/lib/desk/site-pressure';
-import { systemOfUnits } from '@/lib/desk/unit-systems';
+import { systemOfUnits } from '@/lib/units';
 import { getCurrentUser } from '@/lib/auth/current-user';
 import { can, isStaff, roleLabels } from '@/lib/auth/roles';
 import { listOpenQuotes } from '@/lib/quotes/queries';

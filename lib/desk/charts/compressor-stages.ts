@@ -1,6 +1,5 @@
 import type { CompressorResult } from '@/lib/engine';
-import { temperatureFromK } from '@/lib/units';
-import { SYSTEM_UNITS, unitLabel, type UnitSystem } from '../unit-systems';
+import { SYSTEM_UNITS, temperatureFromK, unitLabel, type UnitSystem } from '@/lib/units';
 
 export type StageBar = { label: string; stage: number; dischargeT: number; powerKw: number; overLimit: boolean };
 

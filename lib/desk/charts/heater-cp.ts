@@ -2,9 +2,7 @@ import type { HeaterResult } from '@/lib/engine';
 import { MIN_TEMPERATURE_K } from '@/lib/thermo/constants';
 import { cpMass } from '@/lib/thermo/properties';
 import { mixtureGas } from '@/lib/thermo/presets';
-import { temperatureFromK } from '@/lib/units';
-import { J_PER_KG_K_PER_BTU_PER_LB_F } from '../format';
-import { SYSTEM_UNITS, unitLabel, type UnitSystem } from '../unit-systems';
+import { J_PER_KG_K_PER_BTU_PER_LB_F, SYSTEM_UNITS, temperatureFromK, unitLabel, type UnitSystem } from '@/lib/units';
 
 /** Temperature span the mean-temperature cp shortcut is trusted over [cp; ../shared ENGINEERING notes]. */
 export const AVERAGE_CP_SPAN_K = 200;

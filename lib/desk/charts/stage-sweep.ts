@@ -1,6 +1,5 @@
 import { SizingInputError, calculateCore, type CompressorInput } from '@/lib/engine';
-import { temperatureFromK } from '@/lib/units';
-import { SYSTEM_UNITS, unitLabel, type UnitSystem } from '../unit-systems';
+import { SYSTEM_UNITS, temperatureFromK, unitLabel, type UnitSystem } from '@/lib/units';
 
 export const SWEEP_STAGES = [1, 2, 3, 4, 5, 6] as const;
 

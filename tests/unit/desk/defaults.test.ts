@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { defaultValues } from '@/lib/desk/defaults';
 import { valuesFromInput } from '@/lib/desk/from-request';
 import { toRequest } from '@/lib/desk/to-request';
-import { systemOfUnits } from '@/lib/desk/unit-systems';
+import { systemOfUnits } from '@/lib/units';
 import { validateDesk } from '@/lib/desk/validate';
 import { calculate, sizingRequestSchema } from '@/lib/engine';
 import { compressorRequest, heaterRequest } from './fixtures';

@@ -3,7 +3,7 @@ import { switchUnitValue, type SwitchContext } from '@/lib/desk/convert';
 import { defaultValues } from '@/lib/desk/defaults';
 import { QUANTITY_FIELDS, type QuantityPath } from '@/lib/desk/form-types';
 import { quantityAt, switchContextOf, switchUnitSystem } from '@/lib/desk/switch-system';
-import { UNIT_GROUPS } from '@/lib/desk/unit-systems';
+import { UNIT_GROUPS } from '@/lib/desk/unit-pickers';
 import { toSi, type QuantityKind } from '@/lib/units';
 
 const atm: SwitchContext = { barometricPressurePa: 101_325, flow: null };

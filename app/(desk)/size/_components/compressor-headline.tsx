@@ -1,5 +1,5 @@
 import { fixed, formatHp, formatKw, formatPercent, joined, showTemperature } from '@/lib/desk/format';
-import type { UnitSystem } from '@/lib/desk/unit-systems';
+import type { UnitSystem } from '@/lib/units';
 import type { CompressorResult } from '@/lib/engine';
 import { KeyFigure, KeyFigures } from './key-figure';
 import { SeverityIcon } from './severity-icon';

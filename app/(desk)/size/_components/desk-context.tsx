@@ -5,7 +5,7 @@ import type { AccountSite } from '@/lib/desk/account-types';
 import type { ExactValues } from '@/lib/desk/switch-system';
 import type { FieldKey } from '@/lib/desk/field-paths';
 import type { DeskService } from '@/lib/desk/form-types';
-import type { UnitSystem } from '@/lib/desk/unit-systems';
+import type { UnitSystem } from '@/lib/units';
 
 export type DeskContextValue = {
   system: UnitSystem;

@@ -1,6 +1,6 @@
 import type { SizingInput } from '@/lib/engine';
 import { GAS_PRESETS } from '@/lib/thermo/presets';
-import { unitLabel } from '@/lib/desk/unit-systems';
+import { unitLabel } from '@/lib/units';
 
 const qty = (q: { value: number; unit: string } | undefined) => (q ? `${q.value} ${unitLabel(q.unit)}` : '—');
 

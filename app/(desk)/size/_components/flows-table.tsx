@@ -1,5 +1,5 @@
 import { figure, fixed, showMassFlow } from '@/lib/desk/format';
-import type { UnitSystem } from '@/lib/desk/unit-systems';
+import type { UnitSystem } from '@/lib/units';
 import type { SizingResult } from '@/lib/engine';
 import { FigureTable, type FigureRow } from './figure-table';
 

@@ -8,7 +8,7 @@ import {
   showCp,
   showTemperature,
 } from '@/lib/desk/format';
-import type { UnitSystem } from '@/lib/desk/unit-systems';
+import type { UnitSystem } from '@/lib/units';
 import type { HeaterResult } from '@/lib/engine';
 import { FigureTable, type FigureRow } from './figure-table';
 import { PropertiesTable } from './properties-table';

@@ -7,7 +7,7 @@ import {
   showMassFlow,
   showTemperatureDifference,
 } from '@/lib/desk/format';
-import type { UnitSystem } from '@/lib/desk/unit-systems';
+import type { UnitSystem } from '@/lib/units';
 import type { HeaterResult } from '@/lib/engine';
 import { KeyFigure, KeyFigures } from './key-figure';
 import { SeverityIcon } from './severity-icon';

@@ -1,5 +1,5 @@
 import { fixed, formatKw, formatPercent, joined, showTemperature } from '@/lib/desk/format';
-import type { UnitSystem } from '@/lib/desk/unit-systems';
+import type { UnitSystem } from '@/lib/units';
 import type { CompressionMethodResult, CompressorBlock } from '@/lib/engine';
 
 const hottest = (m: CompressionMethodResult) => Math.max(...m.stages.map((s) => s.dischargeTemperatureC));

@@ -1,5 +1,5 @@
 import { fixed, showCp, showTemperature } from '@/lib/desk/format';
-import type { UnitSystem } from '@/lib/desk/unit-systems';
+import type { UnitSystem } from '@/lib/units';
 import type { HeaterBlock } from '@/lib/engine';
 
 /** cp, cv and k at the inlet, mean and outlet temperatures. */

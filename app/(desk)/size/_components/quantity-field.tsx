@@ -7,7 +7,8 @@ import type { FieldKey } from '@/lib/desk/field-paths';
 import { QUANTITY_FIELDS, type DeskValues, type QuantityPath } from '@/lib/desk/form-types';
 import { inputIdOf } from '@/lib/desk/steps';
 import { quantityAt, switchContextOf } from '@/lib/desk/switch-system';
-import { UNIT_GROUPS, unitLabel } from '@/lib/desk/unit-systems';
+import { unitLabel } from '@/lib/units';
+import { UNIT_GROUPS } from '@/lib/desk/unit-pickers';
 import { useDesk } from './desk-context';
 import { FieldFrame, describedBy, inputClass } from './field-frame';
 

@@ -4,7 +4,7 @@ import { useMemo } from 'react';
 import { stageChart } from '@/lib/desk/charts/compressor-stages';
 import { heaterCpChart } from '@/lib/desk/charts/heater-cp';
 import { stageSweep } from '@/lib/desk/charts/stage-sweep';
-import type { UnitSystem } from '@/lib/desk/unit-systems';
+import type { UnitSystem } from '@/lib/units';
 import type { SizingInput, SizingResult } from '@/lib/engine';
 import { DetailCard } from './figure-table';
 import { HeaterCpChart } from './heater-cp-chart';

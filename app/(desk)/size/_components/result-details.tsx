@@ -1,7 +1,7 @@
 'use client';
 
 import { memo } from 'react';
-import type { UnitSystem } from '@/lib/desk/unit-systems';
+import type { UnitSystem } from '@/lib/units';
 import type { SizingInput, SizingResult } from '@/lib/engine';
 import { BasisPanel } from './basis-panel';
 import { DriveTable } from './drive-table';

@@ -1,6 +1,6 @@
 import { failureText } from '@/lib/desk/calculate-client';
 import type { DeskIssues } from '@/lib/desk/field-paths';
-import type { UnitSystem } from '@/lib/desk/unit-systems';
+import type { UnitSystem } from '@/lib/units';
 import { CompressorHeadline } from './compressor-headline';
 import { HeaterHeadline } from './heater-headline';
 import { IssueList } from './issue-list';

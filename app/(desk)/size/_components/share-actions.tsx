@@ -3,7 +3,7 @@
 import { useEffect, useMemo, useState } from 'react';
 import { sharePath } from '@/lib/desk/share-link';
 import { buildSummary } from '@/lib/desk/summary';
-import type { UnitSystem } from '@/lib/desk/unit-systems';
+import type { UnitSystem } from '@/lib/units';
 import type { SizingInput, SizingResult } from '@/lib/engine';
 import { CopyButton } from './copy-button';
 

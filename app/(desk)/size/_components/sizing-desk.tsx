@@ -9,7 +9,7 @@ import type { DeskValues } from '@/lib/desk/form-types';
 import { deskResolver } from '@/lib/desk/resolver';
 import { sharePath } from '@/lib/desk/share-link';
 import type { ExactValues } from '@/lib/desk/switch-system';
-import type { UnitSystem } from '@/lib/desk/unit-systems';
+import type { UnitSystem } from '@/lib/units';
 import { validateDesk } from '@/lib/desk/validate';
 import { DeskProvider } from './desk-context';
 import { DeskHeader } from './desk-header';

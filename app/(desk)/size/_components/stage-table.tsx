@@ -1,5 +1,5 @@
 import { fixed, formatKw, showPressure, showTemperature } from '@/lib/desk/format';
-import type { UnitSystem } from '@/lib/desk/unit-systems';
+import type { UnitSystem } from '@/lib/units';
 import type { CompressorBlock } from '@/lib/engine';
 import { SeverityIcon } from './severity-icon';
 

@@ -1,13 +1,4 @@
-import {
-  ABSOLUTE_PRESSURE_UNITS,
-  ACTUAL_FLOW_UNITS,
-  GAUGE_PRESSURE_UNITS,
-  MASS_FLOW_UNITS,
-  STANDARD_FLOW_UNITS,
-  TEMPERATURE_UNITS,
-  isUnitOf,
-} from '@/lib/units';
-import type { FieldKind } from './form-types';
+// The desk's two unit systems: which unit of each family a number is shown in, and how units read.
 
 export type UnitSystem = 'si' | 'us';
 
@@ -59,38 +50,6 @@ const LABELS: Readonly<Record<string, string>> = {
 /** How a unit reads beside a number: "°C", "Nm³/h", "bar g", "kPa abs". */
 export function unitLabel(unit: string): string {
   return LABELS[unit] ?? unit;
-}
-
-export type UnitGroup = { label: string; units: readonly string[] };
-
-/** The options of each kind of unit picker, grouped so gauge and absolute are never confused. */
-export const UNIT_GROUPS: Readonly<Record<FieldKind, readonly UnitGroup[]>> = {
-  flow: [
-    { label: 'Mass flow', units: MASS_FLOW_UNITS },
-    { label: 'Standard volume', units: STANDARD_FLOW_UNITS },
-    { label: 'Actual volume at inlet', units: ACTUAL_FLOW_UNITS },
-  ],
-  temperature: [{ label: 'Temperature', units: TEMPERATURE_UNITS }],
-  pressure: [
-    { label: 'Gauge (above site barometric)', units: GAUGE_PRESSURE_UNITS },
-    { label: 'Absolute', units: ABSOLUTE_PRESSURE_UNITS.filter((u) => u !== 'Pa') },
-  ],
-  barometric: [{ label: 'Absolute', units: ['kPa', 'bar', 'psia'] }],
-};
-
-/** The family of a unit in a picker of `kind`. */
-export function unitFamily(kind: FieldKind, unit: string): UnitFamily {
-  if (kind === 'temperature') return 'temperature';
-  if (kind === 'barometric') return 'barometric';
-  if (kind === 'pressure') return isUnitOf(GAUGE_PRESSURE_UNITS, unit) ? 'gaugePressure' : 'absolutePressure';
-  if (isUnitOf(STANDARD_FLOW_UNITS, unit)) return 'standardFlow';
-  if (isUnitOf(ACTUAL_FLOW_UNITS, unit)) return 'actualFlow';
-  return 'massFlow';
-}
-
-/** The unit a field of `kind` now in `unit` takes when the whole desk switches to `system`. */
-export function systemUnitFor(kind: FieldKind, unit: string, system: UnitSystem): string {
-  return SYSTEM_UNITS[system][unitFamily(kind, unit)];
 }
 
 const US_UNITS: ReadonlySet<string> = new Set([
