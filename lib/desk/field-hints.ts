@@ -6,7 +6,7 @@ import {
   pressureToPa,
   type StandardFlowUnit,
 } from '@/lib/units';
-import { fixed, figure } from './format';
+import { fixed, figure } from '@/app/_components/sizing-result/quantity-format';
 import type { FlowContext } from '@/lib/units';
 import type { QtyText } from './form-types';
 

@@ -1,5 +1,14 @@
 import type { CompressorResult, MotorSelection } from '@/lib/engine';
-import { fixed, formatA, formatHp, formatKw, formatPercent, joined, showPressure, showTemperature } from './format';
+import {
+  fixed,
+  formatA,
+  formatHp,
+  formatKw,
+  formatPercent,
+  joined,
+  showPressure,
+  showTemperature,
+} from '@/app/_components/sizing-result/quantity-format';
 import type { UnitSystem } from '@/lib/units';
 
 const kw = (v: number) => `${formatKw(v)} kW`;

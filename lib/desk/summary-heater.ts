@@ -9,7 +9,7 @@ import {
   showCp,
   showTemperature,
   type Shown,
-} from './format';
+} from '@/app/_components/sizing-result/quantity-format';
 import type { UnitSystem } from '@/lib/units';
 
 const t = (c: number, s: UnitSystem) => joined(showTemperature(c, s));

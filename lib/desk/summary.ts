@@ -1,6 +1,6 @@
 import type { SizingResult } from '@/lib/engine';
-import { figure, fixed, joined, showMassFlow, showTemperature } from './format';
-import { SEVERITY_LABEL, groupWarnings, preliminaryOf } from './severity';
+import { figure, fixed, joined, showMassFlow, showTemperature } from '@/app/_components/sizing-result/quantity-format';
+import { SEVERITY_LABEL, groupWarnings, preliminaryOf } from '@/app/_components/sizing-result/severity';
 import { compressorLines } from './summary-compressor';
 import { heaterLines } from './summary-heater';
 import type { UnitSystem } from '@/lib/units';

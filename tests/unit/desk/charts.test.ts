@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { stageChart } from '@/lib/desk/charts/compressor-stages';
-import { AVERAGE_CP_SPAN_K, heaterCpChart } from '@/lib/desk/charts/heater-cp';
-import { stageSweep } from '@/lib/desk/charts/stage-sweep';
+import { stageChart } from '@/app/_components/sizing-result/charts/compressor-stages';
+import { AVERAGE_CP_SPAN_K, heaterCpChart } from '@/app/_components/sizing-result/charts/heater-cp';
+import { stageSweep } from '@/app/_components/sizing-result/charts/stage-sweep';
 import { calculate, compressorRequestSchema, type SizingRequest } from '@/lib/engine';
 import { compressorRequest, heaterRequest } from './fixtures';
 

@@ -1,5 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { fixed, formatA, formatKw, formatRating, showTemperature } from '@/lib/desk/format';
+import {
+  fixed,
+  formatA,
+  formatKw,
+  formatRating,
+  showTemperature,
+} from '@/app/_components/sizing-result/quantity-format';
 import { buildSummary } from '@/lib/desk/summary';
 import { motorText } from '@/lib/desk/summary-compressor';
 import { calculate } from '@/lib/engine';

@@ -1,8 +1,15 @@
-import { fixed, formatHp, formatKw, formatPercent, joined, showTemperature } from '@/lib/desk/format';
+import {
+  fixed,
+  formatHp,
+  formatKw,
+  formatPercent,
+  joined,
+  showTemperature,
+} from '@/app/_components/sizing-result/quantity-format';
 import type { UnitSystem } from '@/lib/units';
 import type { CompressorResult } from '@/lib/engine';
 import { KeyFigure, KeyFigures } from './key-figure';
-import { SeverityIcon } from './severity-icon';
+import { SeverityIcon } from '@/app/_components/sizing-result/severity-icon';
 
 /** Shaft power with the IEC and NEMA motor ratings, then the figures behind it. */
 export function CompressorHeadline({ result, system }: { result: CompressorResult; system: UnitSystem }) {

@@ -4,9 +4,9 @@ import type { UnitSystem } from '@/lib/units';
 import { CompressorHeadline } from './compressor-headline';
 import { HeaterHeadline } from './heater-headline';
 import { IssueList } from './issue-list';
-import { PreliminaryStatement } from './preliminary-statement';
+import { PreliminaryStatement } from '@/app/_components/sizing-result/preliminary-statement';
 import type { LiveResult } from './use-live-result';
-import { WarningCounts } from './warnings-list';
+import { WarningCounts } from '@/app/_components/sizing-result/warnings-list';
 
 type Props = { live: LiveResult; issues: DeskIssues | null; system: UnitSystem };
 

@@ -4,7 +4,7 @@ import type { DeskIssues } from '@/lib/desk/field-paths';
 import { DESK_STEPS } from '@/lib/desk/steps';
 import type { SizingInput } from '@/lib/engine';
 import { CopyButton } from './copy-button';
-import { DutyPointTable } from './duty-point-table';
+import { DutyPointTable } from '@/app/_components/sizing-result/duty-point-table';
 import { IssueList } from './issue-list';
 import { StepSection } from './step-section';
 

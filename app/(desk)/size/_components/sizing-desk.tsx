@@ -14,7 +14,7 @@ import { validateDesk } from '@/lib/desk/validate';
 import { DeskProvider } from './desk-context';
 import { DeskHeader } from './desk-header';
 import { DeskForm } from './desk-form';
-import { ResultDetails } from './result-details';
+import { ResultDetails } from '@/app/_components/sizing-result/result-details';
 import { ResultPanel } from './result-panel';
 import { SavePanel } from './save-panel';
 import { ShareActions } from './share-actions';

@@ -13,7 +13,7 @@ import { sizingEmails, sizingTrail } from '@/lib/support/sizing-record';
 import { IssueDatasheetButton } from '../../datasheets/_components/issue-datasheet-button';
 import { AuditTrail, EmailLog, RevisionList } from './_components/record-sections';
 import { ResendButton } from './_components/resend-button';
-import { ResultDetails } from '../../size/_components/result-details';
+import { ResultDetails } from '@/app/_components/sizing-result/result-details';
 import { KeyValueTable } from '../_components/key-value-table';
 import { PreliminaryNote } from '../_components/preliminary-note';
 import { SizingMeta } from '../_components/sizing-meta';

@@ -1,4 +1,4 @@
-import { figure, fixed, showMassFlow } from '@/lib/desk/format';
+import { figure, fixed, showMassFlow } from './quantity-format';
 import type { UnitSystem } from '@/lib/units';
 import type { SizingResult } from '@/lib/engine';
 import { FigureTable, type FigureRow } from './figure-table';

@@ -12,8 +12,8 @@ import {
   XAxis,
   YAxis,
 } from 'recharts';
-import type { HeaterCpChartData } from '@/lib/desk/charts/heater-cp';
-import { fixed } from '@/lib/desk/format';
+import type { HeaterCpChartData } from './heater-cp';
+import { fixed } from '@/app/_components/sizing-result/quantity-format';
 import { CHART, axisLabel, axisTick } from './chart-theme';
 import { ChartKey } from './chart-key';
 

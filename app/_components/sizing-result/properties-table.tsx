@@ -1,4 +1,4 @@
-import { fixed, showCp, showTemperature } from '@/lib/desk/format';
+import { fixed, showCp, showTemperature } from './quantity-format';
 import type { UnitSystem } from '@/lib/units';
 import type { HeaterBlock } from '@/lib/engine';
 

@@ -11,7 +11,7 @@ import { FlowsTable } from './flows-table';
 import { HeaterBreakdown } from './heater-breakdown';
 import { MethodComparison } from './method-comparison';
 import { PreliminaryStatement } from './preliminary-statement';
-import { ResultCharts } from './result-charts';
+import { ResultCharts } from './charts/result-charts';
 import { StageTable } from './stage-table';
 import { WarningsList } from './warnings-list';
 

@@ -1,4 +1,4 @@
-import { fixed, formatA, formatHp, formatKw } from '@/lib/desk/format';
+import { fixed, formatA, formatHp, formatKw } from './quantity-format';
 import type { CompressorBlock } from '@/lib/engine';
 import { FigureTable, type FigureRow } from './figure-table';
 

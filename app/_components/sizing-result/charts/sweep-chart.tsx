@@ -1,8 +1,8 @@
 'use client';
 
 import { CartesianGrid, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
-import type { SweepData } from '@/lib/desk/charts/stage-sweep';
-import { fixed, formatKw } from '@/lib/desk/format';
+import type { SweepData } from './stage-sweep';
+import { fixed, formatKw } from '@/app/_components/sizing-result/quantity-format';
 import { CHART, axisLabel, axisTick } from './chart-theme';
 import { ChartKey } from './chart-key';
 

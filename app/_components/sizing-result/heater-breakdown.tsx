@@ -7,7 +7,7 @@ import {
   joined,
   showCp,
   showTemperature,
-} from '@/lib/desk/format';
+} from './quantity-format';
 import type { UnitSystem } from '@/lib/units';
 import type { HeaterResult } from '@/lib/engine';
 import { FigureTable, type FigureRow } from './figure-table';

@@ -1,5 +1,5 @@
 import type { SizingResult } from '@/lib/engine';
-import { FALLBACK_PRELIMINARY, preliminaryOf } from '@/lib/desk/severity';
+import { FALLBACK_PRELIMINARY, preliminaryOf } from './severity';
 import { SeverityIcon } from './severity-icon';
 
 /** The statement every result carries: preliminary, to be confirmed under local codes. */

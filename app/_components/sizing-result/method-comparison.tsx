@@ -1,4 +1,4 @@
-import { fixed, formatKw, formatPercent, joined, showTemperature } from '@/lib/desk/format';
+import { fixed, formatKw, formatPercent, joined, showTemperature } from './quantity-format';
 import type { UnitSystem } from '@/lib/units';
 import type { CompressionMethodResult, CompressorBlock } from '@/lib/engine';
 

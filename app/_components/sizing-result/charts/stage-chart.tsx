@@ -12,8 +12,8 @@ import {
   XAxis,
   YAxis,
 } from 'recharts';
-import type { StageChartData } from '@/lib/desk/charts/compressor-stages';
-import { fixed } from '@/lib/desk/format';
+import type { StageChartData } from './compressor-stages';
+import { fixed } from '@/app/_components/sizing-result/quantity-format';
 import { CHART, axisLabel, axisTick } from './chart-theme';
 import { ChartKey } from './chart-key';
 

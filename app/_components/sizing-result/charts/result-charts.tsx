@@ -1,12 +1,12 @@
 'use client';
 
 import { useMemo } from 'react';
-import { stageChart } from '@/lib/desk/charts/compressor-stages';
-import { heaterCpChart } from '@/lib/desk/charts/heater-cp';
-import { stageSweep } from '@/lib/desk/charts/stage-sweep';
+import { stageChart } from './compressor-stages';
+import { heaterCpChart } from './heater-cp';
+import { stageSweep } from './stage-sweep';
 import type { UnitSystem } from '@/lib/units';
 import type { SizingInput, SizingResult } from '@/lib/engine';
-import { DetailCard } from './figure-table';
+import { DetailCard } from '../figure-table';
 import { HeaterCpChart } from './heater-cp-chart';
 import { StageChart } from './stage-chart';
 import { SweepChart } from './sweep-chart';

@@ -1,4 +1,4 @@
-import { fixed } from '@/lib/desk/format';
+import { fixed } from './quantity-format';
 import type { BasisInfo } from '@/lib/engine';
 
 /** What the figures rest on: property data, composition, site pressure and the conventions used. */

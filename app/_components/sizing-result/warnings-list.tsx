@@ -1,5 +1,5 @@
 import type { SizingWarning } from '@/lib/engine';
-import { SEVERITY_LABEL, groupWarnings } from '@/lib/desk/severity';
+import { SEVERITY_LABEL, groupWarnings } from './severity';
 import { SEVERITY_TEXT, SeverityIcon } from './severity-icon';
 
 const BORDER: Record<string, string> = {

@@ -1,4 +1,4 @@
-import { fixed, formatKw, showPressure, showTemperature } from '@/lib/desk/format';
+import { fixed, formatKw, showPressure, showTemperature } from './quantity-format';
 import type { UnitSystem } from '@/lib/units';
 import type { CompressorBlock } from '@/lib/engine';
 import { SeverityIcon } from './severity-icon';
