@@ -1,7 +1,7 @@
 import 'server-only';
 import { z } from 'zod';
-import type { ReopenedSizing } from '@/lib/desk/account-types';
-import { decodeShareParam } from '@/lib/desk/share-link';
+import type { ReopenedSizing } from './_lib/account-types';
+import { decodeShareParam } from './_lib/share-link';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { NotFoundError } from '@/lib/auth/guards';
 import { can } from '@/lib/auth/roles';

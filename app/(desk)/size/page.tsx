@@ -1,9 +1,9 @@
 import type { Metadata } from 'next';
 import { firstParam, type SearchParams } from '@/app/_components/route-guards';
 import { listAccountOptions } from '@/lib/accounts/queries';
-import { defaultValues } from '@/lib/desk/defaults';
-import { valuesFromInput } from '@/lib/desk/from-request';
-import { sitePressureOf } from '@/lib/desk/site-pressure';
+import { defaultValues } from './_lib/defaults';
+import { valuesFromInput } from './_lib/from-request';
+import { sitePressureOf } from './_lib/site-pressure';
 import { systemOfUnits } from '@/lib/units';
 import { getCurrentUser } from '@/lib/auth/current-user';
 import { can, isStaff, roleLabels } from '@/lib/auth/roles';

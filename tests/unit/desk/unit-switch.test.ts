@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { switchUnitValue, type SwitchContext } from '@/lib/desk/convert';
-import { defaultValues } from '@/lib/desk/defaults';
-import { QUANTITY_FIELDS, type QuantityPath } from '@/lib/desk/form-types';
-import { quantityAt, switchContextOf, switchUnitSystem } from '@/lib/desk/switch-system';
-import { UNIT_GROUPS } from '@/lib/desk/unit-pickers';
+import { switchUnitValue, type SwitchContext } from '@/app/(desk)/size/_lib/convert';
+import { defaultValues } from '@/app/(desk)/size/_lib/defaults';
+import { QUANTITY_FIELDS, type QuantityPath } from '@/app/(desk)/size/_lib/form-types';
+import { quantityAt, switchContextOf, switchUnitSystem } from '@/app/(desk)/size/_lib/switch-system';
+import { UNIT_GROUPS } from '@/app/(desk)/size/_lib/unit-pickers';
 import { toSi, type QuantityKind } from '@/lib/units';
 
 const atm: SwitchContext = { barometricPressurePa: 101_325, flow: null };

@@ -1,6 +1,6 @@
 'use client';
 
-import type { DeskIssues, FieldKey } from '@/lib/desk/field-paths';
+import type { DeskIssues, FieldKey } from '../_lib/field-paths';
 import type { SizingInput } from '@/lib/engine';
 import { FlowStep } from './flow-step';
 import { GasStep } from './gas-step';

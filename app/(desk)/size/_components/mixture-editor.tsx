@@ -1,10 +1,10 @@
 'use client';
 
 import { useFieldArray, useFormContext, useWatch } from 'react-hook-form';
-import type { DeskValues } from '@/lib/desk/form-types';
+import type { DeskValues } from '../_lib/form-types';
 import { GAS_PRESETS } from '@/lib/thermo/presets';
-import { FRACTION_SUM_TOLERANCE, SPECIES_OPTIONS, mixtureSum, normaliseRows, presetRows } from '@/lib/desk/mixture';
-import { inputIdOf } from '@/lib/desk/steps';
+import { FRACTION_SUM_TOLERANCE, SPECIES_OPTIONS, mixtureSum, normaliseRows, presetRows } from '../_lib/mixture';
+import { inputIdOf } from '../_lib/steps';
 import { ChoiceGroup } from './choice-group';
 import { useDesk } from './desk-context';
 import { inputClass } from './field-frame';

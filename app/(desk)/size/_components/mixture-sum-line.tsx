@@ -1,4 +1,4 @@
-import type { MixtureSum } from '@/lib/desk/mixture';
+import type { MixtureSum } from '../_lib/mixture';
 
 /** "Sum 0.9990: must be 1 ± 0.0001", live, announced politely. */
 export function MixtureSumLine({ sum, tolerance }: { sum: MixtureSum; tolerance: number }) {

@@ -1,5 +1,5 @@
-import { failureText } from '@/lib/desk/calculate-client';
-import type { DeskIssues } from '@/lib/desk/field-paths';
+import { failureText } from '../_lib/calculate-client';
+import type { DeskIssues } from '../_lib/field-paths';
 import type { UnitSystem } from '@/lib/units';
 import { CompressorHeadline } from './compressor-headline';
 import { HeaterHeadline } from './heater-headline';

@@ -1,7 +1,7 @@
 'use client';
 
-import type { DeskIssues } from '@/lib/desk/field-paths';
-import { DESK_STEPS } from '@/lib/desk/steps';
+import type { DeskIssues } from '../_lib/field-paths';
+import { DESK_STEPS } from '../_lib/steps';
 import type { SizingInput } from '@/lib/engine';
 import { CopyButton } from './copy-button';
 import { DutyPointTable } from '@/app/_components/sizing-result/duty-point-table';

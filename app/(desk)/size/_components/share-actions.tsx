@@ -1,8 +1,8 @@
 'use client';
 
 import { useEffect, useMemo, useState } from 'react';
-import { sharePath } from '@/lib/desk/share-link';
-import { buildSummary } from '@/lib/desk/summary';
+import { sharePath } from '../_lib/share-link';
+import { buildSummary } from '../_lib/summary';
 import type { UnitSystem } from '@/lib/units';
 import type { SizingInput, SizingResult } from '@/lib/engine';
 import { CopyButton } from './copy-button';

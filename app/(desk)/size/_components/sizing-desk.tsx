@@ -2,15 +2,15 @@
 
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { FormProvider, useForm } from 'react-hook-form';
-import type { AccountSite, QuoteOption, ReopenedSizing } from '@/lib/desk/account-types';
-import { defaultValues } from '@/lib/desk/defaults';
-import { groupIssues } from '@/lib/desk/field-paths';
-import type { DeskValues } from '@/lib/desk/form-types';
-import { deskResolver } from '@/lib/desk/resolver';
-import { sharePath } from '@/lib/desk/share-link';
-import type { ExactValues } from '@/lib/desk/switch-system';
+import type { AccountSite, QuoteOption, ReopenedSizing } from '../_lib/account-types';
+import { defaultValues } from '../_lib/defaults';
+import { groupIssues } from '../_lib/field-paths';
+import type { DeskValues } from '../_lib/form-types';
+import { deskResolver } from '../_lib/resolver';
+import { sharePath } from '../_lib/share-link';
+import type { ExactValues } from '../_lib/switch-system';
 import type { UnitSystem } from '@/lib/units';
-import { validateDesk } from '@/lib/desk/validate';
+import { validateDesk } from '../_lib/validate';
 import { DeskProvider } from './desk-context';
 import { DeskHeader } from './desk-header';
 import { DeskForm } from './desk-form';

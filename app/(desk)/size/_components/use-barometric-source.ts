@@ -1,9 +1,9 @@
 'use client';
 
-import type { AccountSite } from '@/lib/desk/account-types';
-import { barometricPaOf } from '@/lib/desk/flow-context';
-import type { DeskValues } from '@/lib/desk/form-types';
-import { sitePressureOf } from '@/lib/desk/site-pressure';
+import type { AccountSite } from '../_lib/account-types';
+import { barometricPaOf } from '../_lib/flow-context';
+import type { DeskValues } from '../_lib/form-types';
+import { sitePressureOf } from '../_lib/site-pressure';
 
 /** Where the site barometric pressure on the form comes from, in words. */
 export function useBarometricSource(values: DeskValues, accounts: readonly AccountSite[]): string {

@@ -1,7 +1,7 @@
 'use client';
 
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
-import { CalculateError, postCalculate, type CalculateFailure } from '@/lib/desk/calculate-client';
+import { CalculateError, postCalculate, type CalculateFailure } from '../_lib/calculate-client';
 import type { SizingInput, SizingResult } from '@/lib/engine';
 import { useDebounced } from './use-debounced';
 

@@ -2,9 +2,9 @@
 
 import { useState, useTransition, type MutableRefObject } from 'react';
 import type { UseFormReturn } from 'react-hook-form';
-import { FIELD_LABELS } from '@/lib/desk/field-paths';
-import type { DeskValues } from '@/lib/desk/form-types';
-import { switchUnitSystem, type ExactValues } from '@/lib/desk/switch-system';
+import { FIELD_LABELS } from '../_lib/field-paths';
+import type { DeskValues } from '../_lib/form-types';
+import { switchUnitSystem, type ExactValues } from '../_lib/switch-system';
 import type { UnitSystem } from '@/lib/units';
 import { setUnitSystemAction } from '../actions';
 
