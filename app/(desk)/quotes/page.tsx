@@ -10,7 +10,7 @@ import { can, isStaff } from '@/lib/auth/roles';
 import { listQuotes } from '@/lib/quotes/queries';
 import { quoteFilterSchema } from '@/lib/quotes/schema';
 import { QuoteFilters } from './_components/quote-filters';
-import { QuotesTable } from './_components/quotes-table';
+import { QuotesTable } from '@/app/_components/quotes/quotes-table';
 
 export const metadata: Metadata = { title: 'Quotes' };
 

@@ -6,7 +6,7 @@ import { buttonLinkClass } from '@/app/_components/submit-button';
 import { requirePageUser } from '@/lib/auth/guards';
 import { can, isStaff } from '@/lib/auth/roles';
 import { listSizings } from '@/lib/sizings/queries';
-import { SizingsTable } from './_components/sizings-table';
+import { SizingsTable } from '@/app/_components/sizings/sizings-table';
 
 export const metadata: Metadata = { title: 'Sizings' };
 

@@ -10,7 +10,7 @@ import { getSizing } from '@/lib/sizings/queries';
 import { readStoredSizing } from '@/lib/sizings/stored-result';
 import { auditLookup } from '@/lib/support/audit-lookup';
 import { sizingEmails, sizingTrail } from '@/lib/support/sizing-record';
-import { IssueDatasheetButton } from '../../datasheets/_components/issue-datasheet-button';
+import { IssueDatasheetButton } from '@/app/_components/datasheets/issue-datasheet-button';
 import { AuditTrail, EmailLog, RevisionList } from './_components/record-sections';
 import { ResendButton } from './_components/resend-button';
 import { ResultDetails } from '@/app/_components/sizing-result/result-details';

@@ -6,7 +6,7 @@ import { FormError, FormNotice } from '@/app/_components/form-errors';
 import { SubmitButton } from '@/app/_components/submit-button';
 import { TextareaField } from '@/app/_components/textarea-field';
 import { nextRevisionLetter } from '@/lib/datasheets/revision-letter';
-import { issueDatasheetAction } from '../actions';
+import { issueDatasheetAction } from '@/app/(desk)/datasheets/actions';
 
 type Props = {
   sizingId: string;
