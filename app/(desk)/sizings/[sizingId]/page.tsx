@@ -14,9 +14,9 @@ import { IssueDatasheetButton } from '@/app/_components/datasheets/issue-datashe
 import { AuditTrail, EmailLog, RevisionList } from './_components/record-sections';
 import { ResendButton } from './_components/resend-button';
 import { ResultDetails } from '@/app/_components/sizing-result/result-details';
-import { KeyValueTable } from '../_components/key-value-table';
-import { PreliminaryNote } from '../_components/preliminary-note';
-import { SizingMeta } from '../_components/sizing-meta';
+import { KeyValueTable } from './_components/key-value-table';
+import { PreliminaryNote } from './_components/preliminary-note';
+import { SizingMeta } from './_components/sizing-meta';
 
 export const metadata: Metadata = { title: 'Sizing' };
 
