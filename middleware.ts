@@ -14,7 +14,6 @@ const protectedPrefixes = [
   '/billing',
   '/admin',
   '/batch',
-  '/settings',
   '/mail',
 ];
 
