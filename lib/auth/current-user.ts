@@ -4,8 +4,8 @@ import { cookies } from 'next/headers';
 import { cache } from 'react';
 import { db } from '@/db';
 import { memberships, users } from '@/db/schema';
-import { clerkEnabled, env } from '@/lib/env';
 import { LOCAL_SESSION_COOKIE, verifyLocalSession } from '@/lib/auth/local/session-token';
+import { clerkEnabled, env } from '@/lib/env';
 import type { UserRole } from './roles';
 
 /** The signed-in person as the rest of the app sees them, whichever identity provider is active. */

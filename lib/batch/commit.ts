@@ -79,18 +79,16 @@ export async function saveBatch(
   try {
     const out = await db.transaction(async (tx) => {
       if (store.transactional) await store.put(key, file.bytes, 'text/csv', tx);
-      await tx
-        .insert(uploads)
-        .values({
-          id: uploadId,
-          accountId: target.accountId,
-          uploadedByUserId: user.id,
-          fileName: file.name,
-          contentType: 'text/csv',
-          byteSize: file.bytes.byteLength,
-          blobKey: key,
-          rowCount: rows.length,
-        });
+      await tx.insert(uploads).values({
+        id: uploadId,
+        accountId: target.accountId,
+        uploadedByUserId: user.id,
+        fileName: file.name,
+        contentType: 'text/csv',
+        byteSize: file.bytes.byteLength,
+        blobKey: key,
+        rowCount: rows.length,
+      });
       const written = await writeRows(tx, user, target, sized);
       await writeAudit(tx, {
         actor: user,

@@ -1,12 +1,12 @@
 import 'server-only';
 import { z } from 'zod';
-import type { ReopenedSizing } from './_lib/account-types';
-import { decodeShareParam } from './_lib/share-link';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { NotFoundError } from '@/lib/auth/guards';
 import { can } from '@/lib/auth/roles';
 import { sizingRequestSchema, type SizingInput } from '@/lib/engine';
 import { getSizing } from '@/lib/sizings/queries';
+import type { ReopenedSizing } from './_lib/account-types';
+import { decodeShareParam } from './_lib/share-link';
 
 export type DeskStart = { input: SizingInput | null; reopened: ReopenedSizing | null; notices: string[] };
 

@@ -1,14 +1,14 @@
 import type { Metadata } from 'next';
 import { firstParam, type SearchParams } from '@/app/_components/route-guards';
 import { listAccountOptions } from '@/lib/accounts/queries';
-import { defaultValues } from './_lib/defaults';
-import { valuesFromInput } from './_lib/from-request';
-import { sitePressureOf } from './_lib/site-pressure';
-import { systemOfUnits } from '@/lib/units';
 import { getCurrentUser } from '@/lib/auth/current-user';
 import { can, isStaff, roleLabels } from '@/lib/auth/roles';
 import { listOpenQuotes } from '@/lib/quotes/queries';
+import { systemOfUnits } from '@/lib/units';
 import { SizingDesk } from './_components/sizing-desk';
+import { defaultValues } from './_lib/defaults';
+import { valuesFromInput } from './_lib/from-request';
+import { sitePressureOf } from './_lib/site-pressure';
 import { loadDeskStart } from './load-desk';
 
 export const metadata: Metadata = { title: 'Sizing desk' };

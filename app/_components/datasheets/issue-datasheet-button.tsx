@@ -2,11 +2,11 @@
 
 import { useRouter } from 'next/navigation';
 import { useEffect, useState, useTransition } from 'react';
+import { issueDatasheetAction } from '@/app/(desk)/datasheets/actions';
 import { FormError, FormNotice } from '@/app/_components/form-errors';
 import { SubmitButton } from '@/app/_components/submit-button';
 import { TextareaField } from '@/app/_components/textarea-field';
 import { nextRevisionLetter } from '@/lib/datasheets/revision-letter';
-import { issueDatasheetAction } from '@/app/(desk)/datasheets/actions';
 
 type Props = {
   sizingId: string;

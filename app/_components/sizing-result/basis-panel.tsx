@@ -1,5 +1,5 @@
-import { fixed } from './quantity-format';
 import type { BasisInfo } from '@/lib/engine';
+import { fixed } from './quantity-format';
 
 /** What the figures rest on: property data, composition, site pressure and the conventions used. */
 export function BasisPanel({ basis, engineVersion }: { basis: BasisInfo; engineVersion: string }) {

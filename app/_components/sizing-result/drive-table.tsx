@@ -1,6 +1,6 @@
-import { fixed, formatA, formatHp, formatKw } from './quantity-format';
 import type { CompressorBlock } from '@/lib/engine';
 import { FigureTable, type FigureRow } from './figure-table';
+import { fixed, formatA, formatHp, formatKw } from './quantity-format';
 
 /** From gas power to the motor: mechanical losses, shaft power, standard ratings and the supply. */
 export function DriveTable({ c }: { c: CompressorBlock }) {

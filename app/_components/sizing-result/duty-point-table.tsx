@@ -1,5 +1,5 @@
 import type { SizingInput } from '@/lib/engine';
-import { GAS_PRESETS } from '@/lib/thermo/presets';
+import { GAS_PRESETS } from '@/lib/thermo';
 import { unitLabel } from '@/lib/units';
 
 const qty = (q: { value: number; unit: string } | undefined) => (q ? `${q.value} ${unitLabel(q.unit)}` : '—');

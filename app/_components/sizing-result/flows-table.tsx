@@ -1,7 +1,7 @@
-import { figure, fixed, showMassFlow } from './quantity-format';
-import type { UnitSystem } from '@/lib/units';
 import type { SizingResult } from '@/lib/engine';
+import type { UnitSystem } from '@/lib/units';
 import { FigureTable, type FigureRow } from './figure-table';
+import { figure, fixed, showMassFlow } from './quantity-format';
 
 /** Mass flow and the standard and actual flows it equals, each basis named. */
 export function FlowsTable({ result, system }: { result: SizingResult; system: UnitSystem }) {

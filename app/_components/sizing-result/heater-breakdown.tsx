@@ -1,3 +1,7 @@
+import type { HeaterResult } from '@/lib/engine';
+import type { UnitSystem } from '@/lib/units';
+import { FigureTable, type FigureRow } from './figure-table';
+import { PropertiesTable } from './properties-table';
 import {
   fixed,
   formatA,
@@ -8,10 +12,6 @@ import {
   showCp,
   showTemperature,
 } from './quantity-format';
-import type { UnitSystem } from '@/lib/units';
-import type { HeaterResult } from '@/lib/engine';
-import { FigureTable, type FigureRow } from './figure-table';
-import { PropertiesTable } from './properties-table';
 import { SeverityIcon } from './severity-icon';
 
 /** Duty build-up from absorbed to design, the average-cp check, and the electrical figures. */

@@ -1,6 +1,6 @@
-import { fixed, formatKw, formatPercent, joined, showTemperature } from './quantity-format';
-import type { UnitSystem } from '@/lib/units';
 import type { CompressionMethodResult, CompressorBlock } from '@/lib/engine';
+import type { UnitSystem } from '@/lib/units';
+import { fixed, formatKw, formatPercent, joined, showTemperature } from './quantity-format';
 
 const hottest = (m: CompressionMethodResult) => Math.max(...m.stages.map((s) => s.dischargeTemperatureC));
 

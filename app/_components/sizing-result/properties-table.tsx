@@ -1,6 +1,6 @@
-import { fixed, showCp, showTemperature } from './quantity-format';
-import type { UnitSystem } from '@/lib/units';
 import type { HeaterBlock } from '@/lib/engine';
+import type { UnitSystem } from '@/lib/units';
+import { fixed, showCp, showTemperature } from './quantity-format';
 
 /** cp, cv and k at the inlet, mean and outlet temperatures. */
 export function PropertiesTable({ h, system }: { h: HeaterBlock; system: UnitSystem }) {

@@ -1,9 +1,10 @@
 'use client';
 
 import { memo } from 'react';
-import type { UnitSystem } from '@/lib/units';
 import type { SizingInput, SizingResult } from '@/lib/engine';
+import type { UnitSystem } from '@/lib/units';
 import { BasisPanel } from './basis-panel';
+import { ResultCharts } from './charts/result-charts';
 import { DriveTable } from './drive-table';
 import { DutyPointTable } from './duty-point-table';
 import { DetailCard } from './figure-table';
@@ -11,7 +12,6 @@ import { FlowsTable } from './flows-table';
 import { HeaterBreakdown } from './heater-breakdown';
 import { MethodComparison } from './method-comparison';
 import { PreliminaryStatement } from './preliminary-statement';
-import { ResultCharts } from './charts/result-charts';
 import { StageTable } from './stage-table';
 import { WarningsList } from './warnings-list';
 

@@ -1,6 +1,6 @@
-import { fixed, formatKw, showPressure, showTemperature } from './quantity-format';
-import type { UnitSystem } from '@/lib/units';
 import type { CompressorBlock } from '@/lib/engine';
+import type { UnitSystem } from '@/lib/units';
+import { fixed, formatKw, showPressure, showTemperature } from './quantity-format';
 import { SeverityIcon } from './severity-icon';
 
 /** Stage by stage on the headline method, then the intercooler after each stage but the last. */

@@ -6,10 +6,10 @@ import {
   joined,
   showTemperature,
 } from '@/app/_components/sizing-result/quantity-format';
-import type { UnitSystem } from '@/lib/units';
-import type { CompressorResult } from '@/lib/engine';
-import { KeyFigure, KeyFigures } from './key-figure';
 import { SeverityIcon } from '@/app/_components/sizing-result/severity-icon';
+import type { CompressorResult } from '@/lib/engine';
+import type { UnitSystem } from '@/lib/units';
+import { KeyFigure, KeyFigures } from './key-figure';
 
 /** Shaft power with the IEC and NEMA motor ratings, then the figures behind it. */
 export function CompressorHeadline({ result, system }: { result: CompressorResult; system: UnitSystem }) {

@@ -1,11 +1,11 @@
 'use client';
 
 import { createContext, useContext, type MutableRefObject } from 'react';
+import type { UnitSystem } from '@/lib/units';
 import type { AccountSite } from '../_lib/account-types';
-import type { ExactValues } from '../_lib/switch-system';
 import type { FieldKey } from '../_lib/field-paths';
 import type { DeskService } from '../_lib/form-types';
-import type { UnitSystem } from '@/lib/units';
+import type { ExactValues } from '../_lib/switch-system';
 
 export type DeskContextValue = {
   system: UnitSystem;

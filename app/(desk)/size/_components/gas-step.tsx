@@ -1,7 +1,7 @@
 'use client';
 
 import { useFormContext, useWatch } from 'react-hook-form';
-import { GAS_PRESETS, findPreset } from '@/lib/thermo/presets';
+import { GAS_PRESETS, findPreset } from '@/lib/thermo';
 import type { DeskValues } from '../_lib/form-types';
 import { DESK_STEPS, inputIdOf } from '../_lib/steps';
 import { ChoiceGroup } from './choice-group';

@@ -7,10 +7,10 @@ import {
   showMassFlow,
   showTemperatureDifference,
 } from '@/app/_components/sizing-result/quantity-format';
-import type { UnitSystem } from '@/lib/units';
-import type { HeaterResult } from '@/lib/engine';
-import { KeyFigure, KeyFigures } from './key-figure';
 import { SeverityIcon } from '@/app/_components/sizing-result/severity-icon';
+import type { HeaterResult } from '@/lib/engine';
+import type { UnitSystem } from '@/lib/units';
+import { KeyFigure, KeyFigures } from './key-figure';
 
 /** Design heater kW with the catalogue rating and current, then the figures behind it. */
 export function HeaterHeadline({ result, system }: { result: HeaterResult; system: UnitSystem }) {

@@ -1,7 +1,7 @@
 'use client';
 
 import { useFieldArray, useFormContext, useWatch } from 'react-hook-form';
-import { GAS_PRESETS } from '@/lib/thermo/presets';
+import { GAS_PRESETS } from '@/lib/thermo';
 import type { DeskValues } from '../_lib/form-types';
 import {
   FRACTION_SUM_TOLERANCE,

@@ -2,12 +2,12 @@
 
 import { useState, type ReactNode } from 'react';
 import { useController, useFormContext, type Path } from 'react-hook-form';
+import { unitLabel } from '@/lib/units';
 import { switchUnitValue } from '../_lib/convert';
 import type { FieldKey } from '../_lib/field-paths';
 import { QUANTITY_FIELDS, type DeskValues, type QuantityPath } from '../_lib/form-types';
 import { inputIdOf } from '../_lib/steps';
 import { quantityAt, switchContextOf } from '../_lib/switch-system';
-import { unitLabel } from '@/lib/units';
 import { UNIT_GROUPS } from '../_lib/unit-pickers';
 import { useDesk } from './desk-context';
 import { FieldFrame, describedBy, inputClass } from './field-frame';

@@ -1,10 +1,10 @@
 'use client';
 
 import { useEffect, useMemo, useState } from 'react';
+import type { SizingInput, SizingResult } from '@/lib/engine';
+import type { UnitSystem } from '@/lib/units';
 import { sharePath } from '../_lib/share-link';
 import { buildSummary } from '../_lib/summary';
-import type { UnitSystem } from '@/lib/units';
-import type { SizingInput, SizingResult } from '@/lib/engine';
 import { CopyButton } from './copy-button';
 
 type Props = { input: SizingInput | null; result: SizingResult | null; system: UnitSystem };

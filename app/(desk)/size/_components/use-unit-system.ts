@@ -2,10 +2,10 @@
 
 import { useState, useTransition, type MutableRefObject } from 'react';
 import type { UseFormReturn } from 'react-hook-form';
+import type { UnitSystem } from '@/lib/units';
 import { FIELD_LABELS } from '../_lib/field-paths';
 import type { DeskValues } from '../_lib/form-types';
 import { switchUnitSystem, type ExactValues } from '../_lib/switch-system';
-import type { UnitSystem } from '@/lib/units';
 import { setUnitSystemAction } from '../actions';
 
 /** The desk's unit system: switching converts every field in place and, when signed in, is remembered. */

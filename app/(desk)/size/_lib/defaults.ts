@@ -1,5 +1,5 @@
-import type { DeskValues } from './form-types';
 import type { UnitSystem } from '@/lib/units';
+import type { DeskValues } from './form-types';
 
 // Starting figures for a new enquiry: an ordinary plant-air duty that sizes straight away, in round
 // numbers of each system [cp]. Heat loss 5 % and margin 10 % sit inside the usual 2-10 % and 10-25 %.

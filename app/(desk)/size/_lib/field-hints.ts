@@ -1,3 +1,4 @@
+import { fixed, figure } from '@/app/_components/sizing-result/quantity-format';
 import { parseNumeric } from '@/lib/engine/schema-fields';
 import {
   STANDARD_FLOW_BASES,
@@ -6,7 +7,6 @@ import {
   pressureToPa,
   type StandardFlowUnit,
 } from '@/lib/units';
-import { fixed, figure } from '@/app/_components/sizing-result/quantity-format';
 import type { FlowContext } from '@/lib/units';
 import type { QtyText } from './form-types';
 

@@ -1,8 +1,14 @@
 import { heaterRequestSchema } from '@/lib/engine';
 import { parseNumeric } from '@/lib/engine/schema-fields';
-import { checkComposition } from '@/lib/thermo/composition';
-import { MAX_TEMPERATURE_K, MIN_TEMPERATURE_K } from '@/lib/thermo/constants';
-import { findPreset, humidAirGas, mixtureGas, presetGas } from '@/lib/thermo/presets';
+import {
+  MAX_TEMPERATURE_K,
+  MIN_TEMPERATURE_K,
+  checkComposition,
+  findPreset,
+  humidAirGas,
+  mixtureGas,
+  presetGas,
+} from '@/lib/thermo';
 import { STANDARD_ATMOSPHERE_PA, pressureToPa, temperatureToK, type FlowContext } from '@/lib/units';
 import type { DeskValues, QtyText } from './form-types';
 import { toRequest } from './to-request';

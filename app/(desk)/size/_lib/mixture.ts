@@ -1,7 +1,5 @@
 import { parseNumeric } from '@/lib/engine/schema-fields';
-import { FRACTION_SUM_TOLERANCE } from '@/lib/thermo/composition';
-import { findPreset } from '@/lib/thermo/presets';
-import { SPECIES, SPECIES_IDS, type SpeciesId } from '@/lib/thermo/species-data';
+import { FRACTION_SUM_TOLERANCE, SPECIES, SPECIES_IDS, findPreset, type SpeciesId } from '@/lib/thermo';
 import type { MixtureRow } from './form-types';
 
 export { FRACTION_SUM_TOLERANCE };

@@ -1,4 +1,3 @@
-import type { CompressorResult, MotorSelection } from '@/lib/engine';
 import {
   fixed,
   formatA,
@@ -9,6 +8,7 @@ import {
   showPressure,
   showTemperature,
 } from '@/app/_components/sizing-result/quantity-format';
+import type { CompressorResult, MotorSelection } from '@/lib/engine';
 import type { UnitSystem } from '@/lib/units';
 
 const kw = (v: number) => `${formatKw(v)} kW`;

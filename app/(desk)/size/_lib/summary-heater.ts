@@ -1,4 +1,3 @@
-import type { HeaterResult } from '@/lib/engine';
 import {
   fixed,
   formatA,
@@ -10,6 +9,7 @@ import {
   showTemperature,
   type Shown,
 } from '@/app/_components/sizing-result/quantity-format';
+import type { HeaterResult } from '@/lib/engine';
 import type { UnitSystem } from '@/lib/units';
 
 const t = (c: number, s: UnitSystem) => joined(showTemperature(c, s));

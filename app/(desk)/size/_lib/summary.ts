@@ -1,9 +1,9 @@
-import type { SizingResult } from '@/lib/engine';
 import { figure, fixed, joined, showMassFlow, showTemperature } from '@/app/_components/sizing-result/quantity-format';
 import { SEVERITY_LABEL, groupWarnings, preliminaryOf } from '@/app/_components/sizing-result/severity';
+import type { SizingResult } from '@/lib/engine';
+import type { UnitSystem } from '@/lib/units';
 import { compressorLines } from './summary-compressor';
 import { heaterLines } from './summary-heater';
-import type { UnitSystem } from '@/lib/units';
 
 function dutyPoint(r: SizingResult, system: UnitSystem): string[] {
   const f = r.flows;

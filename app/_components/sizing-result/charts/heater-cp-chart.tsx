@@ -12,10 +12,10 @@ import {
   XAxis,
   YAxis,
 } from 'recharts';
-import type { HeaterCpChartData } from './heater-cp';
 import { fixed } from '@/app/_components/sizing-result/quantity-format';
-import { CHART, axisLabel, axisTick } from './chart-theme';
 import { ChartKey } from './chart-key';
+import { CHART, axisLabel, axisTick } from './chart-theme';
+import type { HeaterCpChartData } from './heater-cp';
 
 /** cp across the heater's range with the mean-temperature cp, the integrated average and the 200 K band. */
 export function HeaterCpChart({ data }: { data: HeaterCpChartData }) {

@@ -1,7 +1,5 @@
 import type { HeaterResult } from '@/lib/engine';
-import { MIN_TEMPERATURE_K } from '@/lib/thermo/constants';
-import { cpMass } from '@/lib/thermo/properties';
-import { mixtureGas } from '@/lib/thermo/presets';
+import { MIN_TEMPERATURE_K, cpMass, mixtureGas } from '@/lib/thermo';
 import { J_PER_KG_K_PER_BTU_PER_LB_F, SYSTEM_UNITS, temperatureFromK, unitLabel, type UnitSystem } from '@/lib/units';
 
 /**

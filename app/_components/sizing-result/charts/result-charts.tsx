@@ -1,14 +1,14 @@
 'use client';
 
 import { useMemo } from 'react';
+import type { SizingInput, SizingResult } from '@/lib/engine';
+import type { UnitSystem } from '@/lib/units';
+import { DetailCard } from '../figure-table';
 import { stageChart } from './compressor-stages';
 import { heaterCpChart } from './heater-cp';
-import { stageSweep } from './stage-sweep';
-import type { UnitSystem } from '@/lib/units';
-import type { SizingInput, SizingResult } from '@/lib/engine';
-import { DetailCard } from '../figure-table';
 import { HeaterCpChart } from './heater-cp-chart';
 import { StageChart } from './stage-chart';
+import { stageSweep } from './stage-sweep';
 import { SweepChart } from './sweep-chart';
 
 /** The pictures: cp across a heater's range, or a compressor's stages and its 1-6 stage sweep. */

@@ -12,10 +12,10 @@ import {
   XAxis,
   YAxis,
 } from 'recharts';
-import type { StageChartData } from './compressor-stages';
 import { fixed } from '@/app/_components/sizing-result/quantity-format';
-import { CHART, axisLabel, axisTick } from './chart-theme';
 import { ChartKey } from './chart-key';
+import { CHART, axisLabel, axisTick } from './chart-theme';
+import type { StageChartData } from './compressor-stages';
 
 /** Per stage, side by side: discharge temperature against the limit (hatched when over) and gas power. */
 export function StageChart({ data }: { data: StageChartData }) {

@@ -1,10 +1,10 @@
 'use client';
 
 import { CartesianGrid, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
-import type { SweepData } from './stage-sweep';
 import { fixed, formatKw } from '@/app/_components/sizing-result/quantity-format';
-import { CHART, axisLabel, axisTick } from './chart-theme';
 import { ChartKey } from './chart-key';
+import { CHART, axisLabel, axisTick } from './chart-theme';
+import type { SweepData } from './stage-sweep';
 
 /** Shaft power and the hottest discharge for one to six stages of the same duty. */
 export function SweepChart({ data }: { data: SweepData }) {

@@ -1,7 +1,7 @@
 import Link from 'next/link';
-import { FactList } from '@/app/_components/fact-list';
 import type { ReactNode } from 'react';
 import { tableLinkClass } from '@/app/_components/data-table';
+import { FactList } from '@/app/_components/fact-list';
 import { formatDateTime } from '@/app/_components/format';
 import { ServiceBadge } from '@/app/_components/status-badge';
 import { formatHeadline } from '@/lib/sizings/headline';
