@@ -34,7 +34,8 @@ describe('switching one field keeps the physical value', () => {
     expect(n(switchUnitValue('flow', '2', 't/h', 'kg/h', atm))).toBe(2000);
   });
 
-  it('standard volume: 1 SCFM (60 °F, 14.696 psia) is 1.6075 Nm³/h [calc, ENGINEERING check values]', () => {
+  // [calc: ideal gas; ft3 and psi per NIST SP 811; 0 °C, 101.325 kPa per DIN 1343; 60 °F, 14.696 psia [cp]].
+  it('standard volume: 1 SCFM (60 °F, 14.696 psia) is 1.6075 Nm³/h', () => {
     expect(n(switchUnitValue('flow', '1', 'SCFM', 'Nm3/h', airCtx))).toBeCloseTo(1.6075, 3);
   });
 
