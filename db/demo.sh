@@ -9,9 +9,12 @@ export DATABASE_URL="${DATABASE_URL:-postgres://postgres@127.0.0.1:55432/dutywis
 export MAIL_FAKE_INBOX_URL="${MAIL_FAKE_INBOX_URL:-http://127.0.0.1:12026}"
 port="${PORT:-3000}"
 
-if [ ! -f node_modules/.package-lock.json ] || [ package-lock.json -nt node_modules/.package-lock.json ]; then
+# Reinstall only when the lock file's content changed since the last install.
+lock_hash="$(sha256sum package-lock.json | cut -d' ' -f1)"
+if [ ! -f node_modules/.package-lock.json ] || [ "$(cat node_modules/.dutywise-lock-hash 2>/dev/null)" != "$lock_hash" ]; then
   echo "Installing dependencies (npm ci)..."
   npm ci --no-audit --no-fund
+  echo "$lock_hash" > node_modules/.dutywise-lock-hash
 fi
 
 PG_DATA_DIR="$PWD/.data/pg-demo" PG_PORT=55432 bash db/postgres.sh start

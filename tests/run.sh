@@ -13,8 +13,12 @@ log="$(mktemp)"
 run() { local name="$1"; shift; step "$name"; if "$@" 2>&1 | tee -a "$log"; then echo "-- $name: ok"; else echo "-- $name: FAILED"; fail=1; fi; }
 
 step "dependencies"
-if [ ! -f node_modules/.package-lock.json ] || [ package-lock.json -nt node_modules/.package-lock.json ]; then
+# Reinstall only when the lock file's content changed since the last install (a fresh checkout has a new
+# mtime but the same content).
+lock_hash="$(sha256sum package-lock.json | cut -d' ' -f1)"
+if [ ! -f node_modules/.package-lock.json ] || [ "$(cat node_modules/.dutywise-lock-hash 2>/dev/null)" != "$lock_hash" ]; then
   npm ci --no-audit --no-fund || exit 1
+  echo "$lock_hash" > node_modules/.dutywise-lock-hash
 fi
 
 # A private cluster on its own port, throw-away settings, a fresh database per run.

@@ -1,8 +1,16 @@
+import { EosError } from '../thermo/eos/eos-error';
 import { ThermoRangeError } from '../thermo/errors';
+import { STANDARD_FLOW_BASES } from '../units/flow';
 import { flowFromKgPerS as flowFromKgPerSImported } from '../units/flow';
 import { temperatureToK } from '../units/temperature';
 import { UnitError } from '../units/unit-error';
-import { COMPRESSOR_CONVENTIONS, HEATER_CONVENTIONS, buildBasis } from './basis';
+import {
+  COMPRESSOR_CONVENTIONS,
+  HEATER_CONVENTIONS,
+  REAL_GAS_COMPRESSOR_CONVENTIONS,
+  REAL_GAS_HEATER_CONVENTIONS,
+  buildBasis,
+} from './basis';
 import {
   DEFAULT_DISCHARGE_LIMIT_K,
   HYDROGEN_DISCHARGE_LIMIT_K,
@@ -24,7 +32,7 @@ import { compressorWarnings, heaterWarnings } from './warnings';
 const flowFromKgPerS = flowFromKgPerSImported;
 
 /** Bumped whenever a figure for the same input can change; saved beside every sizing. */
-export const ENGINE_VERSION = '1.0.0';
+export const ENGINE_VERSION = '2.0.0';
 
 // Below these a duty is zero to rounding and its percentages are meaningless.
 const MIN_RISE_K = 0.01;
@@ -39,20 +47,26 @@ function commonResult(common: ResolvedCommon) {
     molarMassKgPerKmol: gas.molarMassKgPerKmol,
     temperatureK: common.inletTemperatureK,
     pressurePa: common.inletPressurePa,
+    zAt: common.zAt,
   };
   const { summary, composition } = summarizeGas(gas);
+  const sm3 = STANDARD_FLOW_BASES['Sm3/h'];
   return {
     engineVersion: ENGINE_VERSION,
     massFlowKgPerS: m,
     molarMassKgPerKmol: gas.molarMassKgPerKmol,
     inletTemperatureC: common.inletTemperatureK - 273.15,
     inletPressureKpa: common.inletPressurePa / 1000,
+    inletZ: common.inletZ,
+    inletDensityKgPerM3: common.inletDensityKgPerM3,
     inletActualFlowM3PerH: flowFromKgPerS(m, 'm3/h', ctx),
     flows: {
       normalM3PerH: flowFromKgPerS(m, 'Nm3/h', ctx),
       standardM3PerH: flowFromKgPerS(m, 'Sm3/h', ctx),
       scfm: flowFromKgPerS(m, 'SCFM', ctx),
       mmscfd: flowFromKgPerS(m, 'MMSCFD', ctx),
+      fadM3PerMin: flowFromKgPerS(m, 'FAD m3/min', ctx),
+      standardZ: common.zAt ? common.zAt(sm3.temperatureK, sm3.pressurePa) : 1,
     },
     gas: summary,
     composition,
@@ -71,6 +85,7 @@ function heaterResult(input: HeaterInput, common: ResolvedCommon, issues: Sizing
   const supply = input.supply ?? DEFAULT_SUPPLY;
   const heater = sizeHeater({
     gas: common.gas,
+    fluid: common.fluid,
     massFlowKgPerS: common.massFlowKgPerS,
     inletTemperatureK: common.inletTemperatureK,
     outletTemperatureK: outletK,
@@ -89,12 +104,14 @@ function heaterResult(input: HeaterInput, common: ResolvedCommon, issues: Sizing
     molarMassKgPerKmol: r.molarMassKgPerKmol,
     inletTemperatureC: r.inletTemperatureC,
     inletPressureKpa: r.inletPressureKpa,
+    inletZ: r.inletZ,
+    inletDensityKgPerM3: r.inletDensityKgPerM3,
     inletActualFlowM3PerH: r.inletActualFlowM3PerH,
     flows: r.flows,
     gas: r.gas,
     heater,
-    basis: buildBasis(common, r.composition, HEATER_CONVENTIONS),
-    warnings: heaterWarnings(common.gas, heater, common.inletPressurePa, common.barometricPressurePa),
+    basis: buildBasis(common, r.composition, HEATER_CONVENTIONS, REAL_GAS_HEATER_CONVENTIONS),
+    warnings: heaterWarnings(common, heater),
   };
 }
 
@@ -121,11 +138,11 @@ function compressorCase(input: CompressorInput, common: ResolvedCommon, issues: 
       : DEFAULT_DISCHARGE_LIMIT_K;
   const r = common.gas.gasConstantJPerKgK;
   checkPropertyOverrides(input.k, input.cpJPerKgK, r, issues);
-  const eta = [input.isentropicEfficiency, input.polytropicEfficiency].filter((e) => e !== undefined);
-  if (eta.length !== 1 || !eta.every((e) => e > 0 && e <= 1)) {
+  checkEfficiencies(input, issues);
+  if (issues.length === 0 && !(limitK > common.inletTemperatureK)) {
     issues.push({
-      path: 'isentropicEfficiency',
-      message: 'give exactly one of isentropicEfficiency or polytropicEfficiency, above 0 and at most 1',
+      path: 'dischargeTemperatureLimit',
+      message: `the discharge-temperature limit ${c2(limitK)} must be above the suction temperature ${c2(common.inletTemperatureK)}`,
     });
   }
   if (!(Number.isInteger(input.stages) && input.stages >= 1 && input.stages <= 6)) {
@@ -152,7 +169,29 @@ function compressorCase(input: CompressorInput, common: ResolvedCommon, issues: 
     motorEfficiency: input.motorEfficiency ?? null,
     motorPowerFactor: input.motorPowerFactor ?? null,
     supply: input.supply ?? null,
+    fluid: common.fluid,
   };
+}
+
+// Typed input (the batch path) skips the schema, so its bounds are checked again here, each on its own field.
+function checkEfficiencies(input: CompressorInput, issues: SizingIssue[]): void {
+  const given = [input.isentropicEfficiency, input.polytropicEfficiency].filter((e) => e !== undefined).length;
+  if (given !== 1) {
+    issues.push({
+      path: 'isentropicEfficiency',
+      message: 'give exactly one of isentropicEfficiency or polytropicEfficiency',
+    });
+  }
+  const fields = [
+    ['isentropicEfficiency', input.isentropicEfficiency, LIMITS.isentropicEfficiency],
+    ['polytropicEfficiency', input.polytropicEfficiency, LIMITS.polytropicEfficiency],
+    ['mechanicalEfficiency', input.mechanicalEfficiency, LIMITS.mechanicalEfficiency],
+  ] as const;
+  for (const [path, value, range] of fields) {
+    if (value !== undefined && !(value >= range.min && value <= range.max)) {
+      issues.push({ path, message: `${value} is out of range (allowed: from ${range.min} to ${range.max})` });
+    }
+  }
 }
 
 function compressorResult(input: CompressorInput, common: ResolvedCommon, issues: SizingIssue[]): CompressorResult {
@@ -161,6 +200,14 @@ function compressorResult(input: CompressorInput, common: ResolvedCommon, issues
   try {
     compressor = sizeCompressor(c);
   } catch (err) {
+    if (err instanceof EosError) {
+      throw new SizingInputError([
+        {
+          path: 'dischargePressure',
+          message: `the ${common.equation.id} equation of state has no gas-phase state along this compression (${err.message}): check that the gas stays a gas at the discharge and cooler outlets, or use fewer stages of cooling`,
+        },
+      ]);
+    }
     if (!(err instanceof ThermoRangeError)) throw err;
     throw new SizingInputError([
       {
@@ -178,12 +225,14 @@ function compressorResult(input: CompressorInput, common: ResolvedCommon, issues
     molarMassKgPerKmol: r.molarMassKgPerKmol,
     inletTemperatureC: r.inletTemperatureC,
     inletPressureKpa: r.inletPressureKpa,
+    inletZ: r.inletZ,
+    inletDensityKgPerM3: r.inletDensityKgPerM3,
     inletActualFlowM3PerH: r.inletActualFlowM3PerH,
     flows: r.flows,
     gas: r.gas,
     compressor,
-    basis: buildBasis(common, r.composition, COMPRESSOR_CONVENTIONS),
-    warnings: compressorWarnings(common.gas, compressor, common.barometricPressurePa),
+    basis: buildBasis(common, r.composition, COMPRESSOR_CONVENTIONS, REAL_GAS_COMPRESSOR_CONVENTIONS),
+    warnings: compressorWarnings(common, compressor, c),
   };
 }
 

@@ -9,7 +9,8 @@ import {
   variableCpStage as variableCpStageImported,
   type StageState,
 } from './compression';
-import type { CompressionMethodResult, CompressorStage } from './result-types';
+import type { CompressionMethodResult, CompressorStage, CoolerResult } from './result-types';
+import { idealPolytropic, stageRow } from './stage-row';
 
 // Imports used per call, re-bound to module constants once: under tsx's CommonJS output every use of an
 // imported binding is a getter call, which shows on these hot paths (tests/bench/engine.bench.mts).
@@ -100,35 +101,22 @@ export function runTrain(c: TrainCase, method: Method, stages: number, eta: numb
     }
     const dischargePa = i === stages - 1 ? c.dischargePressurePa : inletPa * ratio;
     workJPerKg += s.workJPerKg;
-    out.push({
-      stage: i + 1,
-      pressureRatio: ratio,
-      inletPressureKpa: inletPa / 1000,
-      dischargePressureKpa: dischargePa / 1000,
-      inletTemperatureC: inletK - KELVIN_OFFSET,
-      dischargeTemperatureC: s.dischargeK - KELVIN_OFFSET,
-      isentropicDischargeTemperatureC: s.isentropicDischargeK - KELVIN_OFFSET,
-      specificWorkKjPerKg: s.workJPerKg / 1000,
-      gasPowerKw: (c.massFlowKgPerS * s.workJPerKg) / 1000,
-      k: s.k,
-      cpJPerKgK: s.cpJPerKgK,
-    });
+    let cooler: CoolerResult | null = null;
+    let nextK = inletK;
     if (i < stages - 1) {
-      const nextK = cooledK(c, s.dischargeK);
+      nextK = cooledK(c, s.dischargeK);
       const duty = coolerDutyKw(c, method, s.dischargeK, nextK, s.cpJPerKgK);
       intercoolerDutiesKw.push(duty);
       coolerTotal += duty;
-      inletK = nextK;
-      inletPa = dischargePa * (1 - c.interstageDropFraction);
+      cooler = dryCooler('intercooler', nextK, dischargePa * (1 - c.interstageDropFraction), duty);
     } else if (c.aftercoolerOutletTemperatureK !== null) {
-      aftercoolerDutyKw = coolerDutyKw(
-        c,
-        method,
-        s.dischargeK,
-        Math.min(c.aftercoolerOutletTemperatureK, s.dischargeK),
-        s.cpJPerKgK,
-      );
+      const outK = Math.min(c.aftercoolerOutletTemperatureK, s.dischargeK);
+      aftercoolerDutyKw = coolerDutyKw(c, method, s.dischargeK, outK, s.cpJPerKgK);
+      cooler = dryCooler('aftercooler', outK, dischargePa, aftercoolerDutyKw);
     }
+    out.push(idealStageRow(c, method, i + 1, ratio, inletK, inletPa, dischargePa, s, cooler));
+    inletK = nextK;
+    inletPa = dischargePa * (1 - c.interstageDropFraction);
   }
   const first = out[0]!;
   return {
@@ -140,5 +128,60 @@ export function runTrain(c: TrainCase, method: Method, stages: number, eta: numb
     intercoolerDutiesKw,
     totalIntercoolerDutyKw: coolerTotal,
     aftercoolerDutyKw,
+    condensateKgPerH: 0,
+    polytropicSteps: null,
   };
+}
+
+function dryCooler(kind: CoolerResult['kind'], outletK: number, outletPa: number, dutyKw: number): CoolerResult {
+  return {
+    kind,
+    outletTemperatureC: outletK - KELVIN_OFFSET,
+    outletPressureKpa: outletPa / 1000,
+    dutyKw,
+    latentDutyKw: 0,
+    condensateKgPerH: 0,
+    condensateMoleFractions: null,
+  };
+}
+
+// An ideal-gas stage row: Z = 1, rho = p/(R T); isentropic head on the method's own property model.
+function idealStageRow(
+  c: TrainCase,
+  method: Method,
+  stage: number,
+  ratio: number,
+  inletK: number,
+  inletPa: number,
+  dischargePa: number,
+  s: StageState,
+  cooler: CoolerResult | null,
+): CompressorStage {
+  const r = c.gas.gasConstantJPerKgK;
+  const isentropicHead =
+    method === 'variable-cp'
+      ? enthalpyMass(c.gas, s.isentropicDischargeK) - enthalpyMass(c.gas, inletK)
+      : s.cpJPerKgK * (s.isentropicDischargeK - inletK);
+  const poly = idealPolytropic(r, inletK, s.dischargeK, dischargePa / inletPa);
+  return stageRow({
+    stage,
+    pressureRatio: ratio,
+    inletPa,
+    dischargePa,
+    inletK,
+    dischargeK: s.dischargeK,
+    isentropicDischargeK: s.isentropicDischargeK,
+    massFlowKgPerS: c.massFlowKgPerS,
+    inletZ: 1,
+    dischargeZ: 1,
+    inletDensityKgPerM3: inletPa / (r * inletK),
+    dischargeDensityKgPerM3: dischargePa / (r * s.dischargeK),
+    workJPerKg: s.workJPerKg,
+    isentropicHeadJPerKg: isentropicHead,
+    polytropicHeadJPerKg: poly.headJPerKg,
+    polytropicExponent: poly.n,
+    k: s.k,
+    cpJPerKgK: s.cpJPerKgK,
+    cooler,
+  });
 }

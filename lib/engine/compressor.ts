@@ -14,6 +14,9 @@ import {
 } from './compressor-train';
 import { lineCurrentA } from './electrical';
 import { selectMotor } from './motor-ratings';
+import { EosError } from '../thermo/eos/eos-error';
+import type { RealFluid } from './real-gas/fluid';
+import { realMaxDischargeK, runRealGasTrain, type StageEfficiency } from './real-gas/train';
 import type { CompressorBlock, MotorDrive } from './result-types';
 
 // Imports used per call, re-bound to module constants once: under tsx's CommonJS output every use of an
@@ -38,6 +41,8 @@ export const DEFAULT_MOTOR_POWER_FACTOR = 0.85;
 
 /** A compressor duty point in SI units, as `calculateCore` resolves it. */
 export type CompressorCase = TrainCase & {
+  /** The real-gas equation for the headline; null (or absent) when ideal gas was asked for. */
+  fluid?: RealFluid | null;
   stages: number;
   isentropicEfficiency: number | null;
   polytropicEfficiency: number | null;
@@ -59,13 +64,22 @@ export function stageIsentropicEfficiency(c: CompressorCase, stages: number): nu
   return isentropicFromPolytropic(c.polytropicEfficiency ?? 1, ratio, kScratch.k);
 }
 
+function realEfficiency(c: CompressorCase): StageEfficiency {
+  return c.isentropicEfficiency !== null
+    ? { isentropic: c.isentropicEfficiency, polytropic: null }
+    : { isentropic: null, polytropic: c.polytropicEfficiency ?? 1 };
+}
+
 /** Fewest stages (1-6) keeping every stage discharge at or below the limit, by the headline method; null if none. */
 export function suggestStages(c: CompressorCase): number | null {
   for (let n = 1; n <= MAX_STAGES; n++) {
     try {
-      if (maxDischargeK(c, c.method, n, stageIsentropicEfficiency(c, n)) <= c.dischargeLimitK) return n;
+      const maxK = c.fluid
+        ? realMaxDischargeK(c, c.fluid, n, realEfficiency(c))
+        : maxDischargeK(c, c.method, n, stageIsentropicEfficiency(c, n));
+      if (maxK <= c.dischargeLimitK) return n;
     } catch (err) {
-      if (!(err instanceof ThermoRangeError)) throw err;
+      if (!(err instanceof ThermoRangeError) && !(err instanceof EosError)) throw err;
     }
   }
   return null;
@@ -91,13 +105,14 @@ export function sizeCompressor(c: CompressorCase): CompressorBlock {
   const eta = stageIsentropicEfficiency(c, c.stages);
   const constantK = runTrain(c, 'constant-k', c.stages, eta);
   const variableCp = runTrain(c, 'variable-cp', c.stages, eta);
-  const headline = c.method === 'constant-k' ? constantK : variableCp;
+  const realGas = c.fluid ? runRealGasTrain(c, c.fluid, c.stages, realEfficiency(c)) : null;
+  const headline = realGas ?? (c.method === 'constant-k' ? constantK : variableCp);
   const shaftPowerKw = headline.gasPowerKw / c.mechanicalEfficiency;
   const driveResult = drive(c, shaftPowerKw);
   const last = headline.stages[headline.stages.length - 1]!;
   const lastDischargeK = last.dischargeTemperatureC + KELVIN_OFFSET;
   return {
-    basis: c.method,
+    basis: realGas ? 'real-gas' : c.method,
     suctionPressureKpa: c.suctionPressurePa / 1000,
     dischargePressureKpa: c.dischargePressurePa / 1000,
     overallPressureRatio: c.dischargePressurePa / c.suctionPressurePa,
@@ -109,7 +124,11 @@ export function sizeCompressor(c: CompressorCase): CompressorBlock {
     polytropicEfficiency: c.polytropicEfficiency,
     constantK,
     variableCp,
+    realGas,
     methodDifferencePercent: ((constantK.gasPowerKw - variableCp.gasPowerKw) / variableCp.gasPowerKw) * 100,
+    idealGasDifferencePercent: realGas
+      ? ((variableCp.gasPowerKw - realGas.gasPowerKw) / realGas.gasPowerKw) * 100
+      : null,
     gasPowerKw: headline.gasPowerKw,
     mechanicalEfficiency: c.mechanicalEfficiency,
     shaftPowerKw,

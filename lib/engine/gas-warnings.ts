@@ -2,8 +2,25 @@ import type { GasModel } from '../thermo/gas-model';
 import type { SpeciesId } from '../thermo/species-data';
 import type { SizingWarning } from './result-types';
 
-const FLAMMABLE: readonly SpeciesId[] = ['CH4', 'C2H6', 'C3H8', 'H2', 'CO', 'NH3'];
-const TOXIC: readonly SpeciesId[] = ['CO', 'NH3'];
+const FLAMMABLE: readonly SpeciesId[] = [
+  'CH4',
+  'C2H6',
+  'C3H8',
+  'n-C4H10',
+  'i-C4H10',
+  'n-C5H12',
+  'i-C5H12',
+  'n-C6H14',
+  'n-C7H16',
+  'n-C8H18',
+  'n-C9H20',
+  'n-C10H22',
+  'H2',
+  'CO',
+  'NH3',
+  'H2S',
+];
+const TOXIC: readonly SpeciesId[] = ['CO', 'NH3', 'H2S'];
 /** Flag fuels from 1 mol % [cp]; hydrogen likewise. */
 const FUEL_THRESHOLD = 0.01;
 /** Oxygen-enriched above 23.5 %, oxygen-deficient below 19.5 % [mem: common occupational-safety definitions]. */

@@ -6,7 +6,8 @@ import {
   continuousCurrentA as continuousCurrentAImported,
   lineCurrentA as lineCurrentAImported,
 } from './electrical';
-import { propertyPoint as propertyPointImported } from './property-point';
+import { propertyPoint as propertyPointImported, realPoint } from './property-point';
+import { gasState, type RealFluid } from './real-gas/fluid';
 import { selectRating as selectRatingImported } from './ratings';
 import type { HeaterBlock } from './result-types';
 
@@ -24,6 +25,8 @@ const SUBDIVIDE_ABOVE_A = SUBDIVISION_LIMIT_A;
 /** A heater duty point in SI units, as `calculateCore` resolves it. */
 export type HeaterCase = {
   gas: GasModel;
+  /** The real-gas equation the duty is figured on; null for an ideal gas. */
+  fluid?: RealFluid | null;
   massFlowKgPerS: number;
   inletTemperatureK: number;
   outletTemperatureK: number;
@@ -56,8 +59,27 @@ export function averageCpDutyKw(gas: GasModel, massFlowKgPerS: number, inletK: n
 export function sizeHeater(c: HeaterCase): HeaterBlock {
   const { gas, massFlowKgPerS: m, inletTemperatureK: t1, outletTemperatureK: t2 } = c;
   const meanK = 0.5 * (t1 + t2);
-  const absorbed = absorbedDutyKw(gas, m, t1, t2);
-  const cpMean = cpMass(gas, meanK);
+  const ideal = absorbedDutyKw(gas, m, t1, t2);
+  let absorbed = ideal;
+  let points: HeaterBlock['properties'];
+  let outletDensity: number;
+  if (c.fluid) {
+    // Real gas: the enthalpy change at the operating pressure, h(T_out, p) - h(T_in, p).
+    const a = gasState(c.fluid, t1, c.pressurePa);
+    const b = gasState(c.fluid, t2, c.pressurePa);
+    const mid = gasState(c.fluid, meanK, c.pressurePa);
+    absorbed = (m * (b.enthalpyJPerMol - a.enthalpyJPerMol)) / c.fluid.kgPerMol / 1000;
+    points = { inlet: realPoint(c.fluid, a), outlet: realPoint(c.fluid, b), mean: realPoint(c.fluid, mid) };
+    outletDensity = points.outlet.densityKgPerM3;
+  } else {
+    points = {
+      inlet: propertyPoint(gas, t1, c.pressurePa),
+      outlet: propertyPoint(gas, t2, c.pressurePa),
+      mean: propertyPoint(gas, meanK, c.pressurePa),
+    };
+    outletDensity = c.pressurePa / (gas.gasConstantJPerKgK * t2);
+  }
+  const cpMean = points.mean.cpJPerKgK;
   const averageCp = (m * cpMean * (t2 - t1)) / 1000;
   const heatLossKw = (absorbed * c.heatLossPercent) / 100;
   const marginKw = ((absorbed + heatLossKw) * c.designMarginPercent) / 100;
@@ -70,6 +92,8 @@ export function sizeHeater(c: HeaterCase): HeaterBlock {
     outletTemperatureC: t2 - KELVIN_OFFSET,
     temperatureRiseK: t2 - t1,
     absorbedDutyKw: absorbed,
+    idealGasDutyKw: ideal,
+    idealGasDifferencePercent: c.fluid ? ((ideal - absorbed) / absorbed) * 100 : null,
     averageCpDutyKw: averageCp,
     averageCpDifferencePercent: ((averageCp - absorbed) / absorbed) * 100,
     cpMeanJPerKgK: cpMean,
@@ -88,11 +112,7 @@ export function sizeHeater(c: HeaterCase): HeaterBlock {
       continuousCurrentA: continuousCurrentA(currentA),
       subdivisionRequired: currentA > SUBDIVIDE_ABOVE_A,
     },
-    outletActualFlowM3PerH: (3600 * m * gas.gasConstantJPerKgK * t2) / c.pressurePa,
-    properties: {
-      inlet: propertyPoint(gas, t1),
-      outlet: propertyPoint(gas, t2),
-      mean: propertyPoint(gas, meanK, cpMean),
-    },
+    outletActualFlowM3PerH: (3600 * m) / outletDensity,
+    properties: points,
   };
 }

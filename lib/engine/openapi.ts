@@ -10,22 +10,54 @@ const num = { type: 'number' };
 const stage = {
   type: 'object',
   required: ['stage', 'pressureRatio', 'inletTemperatureC', 'dischargeTemperatureC', 'gasPowerKw'],
-  properties: Object.fromEntries(
-    [
-      'stage',
-      'pressureRatio',
-      'inletPressureKpa',
-      'dischargePressureKpa',
-      'inletTemperatureC',
-      'dischargeTemperatureC',
-      'isentropicDischargeTemperatureC',
-      'specificWorkKjPerKg',
-      'gasPowerKw',
-      'k',
-      'cpJPerKgK',
-    ].map((k) => [k, num]),
-  ),
+  properties: {
+    ...Object.fromEntries(
+      [
+        'stage',
+        'pressureRatio',
+        'inletPressureKpa',
+        'dischargePressureKpa',
+        'inletTemperatureC',
+        'dischargeTemperatureC',
+        'isentropicDischargeTemperatureC',
+        'specificWorkKjPerKg',
+        'gasPowerKw',
+        'k',
+        'cpJPerKgK',
+        'massFlowKgPerS',
+        'inletZ',
+        'dischargeZ',
+        'inletDensityKgPerM3',
+        'dischargeDensityKgPerM3',
+        'inletActualFlowM3PerH',
+        'inletActualFlowAcfm',
+        'dischargeActualFlowM3PerH',
+        'isentropicHeadKjPerKg',
+        'polytropicHeadKjPerKg',
+        'isentropicHeadM',
+        'polytropicHeadM',
+        'isentropicHeadFt',
+        'polytropicHeadFt',
+        'isentropicEfficiency',
+        'polytropicEfficiency',
+        'polytropicExponent',
+      ].map((k) => [k, num]),
+    ),
+    cooler: {
+      type: ['object', 'null'],
+      description: 'the cooler after this stage (intercooler, or the aftercooler after the last), with any condensate',
+      properties: {
+        kind: { enum: ['intercooler', 'aftercooler'] },
+        outletTemperatureC: num,
+        outletPressureKpa: num,
+        dutyKw: num,
+        latentDutyKw: num,
+        condensateKgPerH: num,
+      },
+    },
+  },
 };
+
 const method = {
   type: 'object',
   required: ['k', 'cpJPerKgK', 'gasPowerKw', 'stages', 'intercoolerDutiesKw'],
@@ -38,6 +70,8 @@ const method = {
     stages: { type: 'array', items: stage },
     intercoolerDutiesKw: { type: 'array', items: num, description: 'between stages only: N-1 entries' },
     aftercoolerDutyKw: { type: ['number', 'null'] },
+    condensateKgPerH: num,
+    polytropicSteps: { type: ['integer', 'null'] },
   },
 };
 const errors = {
@@ -70,6 +104,7 @@ const result = {
         ...Object.fromEntries(
           [
             'absorbedDutyKw',
+            'idealGasDutyKw',
             'averageCpDutyKw',
             'averageCpDifferencePercent',
             'cpMeanJPerKgK',
@@ -80,14 +115,20 @@ const result = {
           ].map((k) => [k, num]),
         ),
         selectedRatingKw: { type: ['number', 'null'] },
+        idealGasDifferencePercent: { type: ['number', 'null'] },
       },
     },
     compressor: {
       type: 'object',
       properties: {
-        basis: { enum: ['constant-k', 'variable-cp'] },
+        basis: {
+          enum: ['constant-k', 'variable-cp', 'real-gas'],
+          description: 'the method of the headline figures: real-gas whenever a real-gas equation of state is used',
+        },
         constantK: method,
         variableCp: method,
+        realGas: { anyOf: [method, { type: 'null' }], description: 'on the real-gas equation of state' },
+        idealGasDifferencePercent: { type: ['number', 'null'] },
         shaftPowerKw: num,
         methodDifferencePercent: num,
         isentropicEfficiency: num,
@@ -114,7 +155,18 @@ const result = {
         },
       },
     },
-    basis: { type: 'object', additionalProperties: true },
+    inletZ: num,
+    inletDensityKgPerM3: num,
+    basis: {
+      type: 'object',
+      properties: {
+        equationOfState: { enum: ['ideal-gas', 'peng-robinson', 'gerg-2008'] },
+        equationOfStateReason: { type: 'string' },
+        equationOfStateSource: { type: 'string' },
+        standardVolumeBasis: { type: 'string' },
+      },
+      additionalProperties: true,
+    },
   },
   additionalProperties: true,
 };
@@ -153,8 +205,11 @@ export function calculateOpenApiDocument(): Record<string, unknown> {
       title: 'Dutywise sizing API',
       version: ENGINE_VERSION,
       description:
-        'Preliminary sizing of electric process gas heaters and gas compressors on ideal-gas properties. ' +
-        `Gas presets: ${PRESET_IDS.join(', ')}. Mixture species: ${SPECIES_IDS.join(', ')}.`,
+        'Preliminary sizing of electric process gas heaters and gas compressors on real-gas properties ' +
+        '(GERG-2008 or Peng-Robinson, chosen by "equationOfState" or by the engine) or on ideal-gas properties. ' +
+        'A liquid or two-phase inlet is refused. ' +
+        `Gas presets: ${PRESET_IDS.join(', ')}. Mixture species: ${SPECIES_IDS.join(', ')} ` +
+        '(common names such as methane, nC4 or hydrogen sulfide are accepted too).',
     },
     paths: {
       '/api/v1/calculate': {

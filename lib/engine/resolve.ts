@@ -13,7 +13,12 @@ import {
 import { standardAtmospherePressurePa } from '../units/standard-atmosphere';
 import { temperatureFromK, temperatureToK as temperatureToKImported } from '../units/temperature';
 import type { StandardFlowUnit } from '../units/unit-strings';
+import { EosError } from '../thermo/eos/eos-error';
+import { GAS_CONSTANT_J_PER_MOL_K } from '../thermo/constants';
 import type { SizingIssue } from './input-error';
+import { chooseEquation, outsideGerg, type EquationChoice } from './real-gas/equation-choice';
+import { compressibility, realFluid, type RealFluid } from './real-gas/fluid';
+import { checkInletPhase } from './real-gas/phase-check';
 import type { BasisInfo } from './result-types';
 import type { GasInput, QuantityInput, SizingInput } from './schema';
 
@@ -24,6 +29,7 @@ const pressureToPa = pressureToPaImported;
 const temperatureToK = temperatureToKImported;
 const T_MIN = MIN_TEMPERATURE_K;
 const T_MAX = MAX_TEMPERATURE_K;
+const R = GAS_CONSTANT_J_PER_MOL_K;
 
 /** Pressures the engine accepts, Pa absolute (the ideal-gas warnings take over long before the top). */
 export const MAX_PRESSURE_PA = 100e6;
@@ -34,6 +40,14 @@ const BAROMETRIC_RANGE_PA = [40_000, 110_000] as const;
 /** The state every sizing starts from, in SI units. */
 export type ResolvedCommon = {
   gas: GasModel;
+  equation: EquationChoice;
+  /** The real-gas equation compiled for the gas; null when ideal gas was asked for. */
+  fluid: RealFluid | null;
+  /** Z at a state on the sizing's equation (1 for ideal gas); used for standard and actual volumes. */
+  zAt: ((temperatureK: number, pressurePa: number) => number) | undefined;
+  /** Z and density at the inlet. */
+  inletZ: number;
+  inletDensityKgPerM3: number;
   massFlowKgPerS: number;
   inletTemperatureK: number;
   inletPressurePa: number;
@@ -129,10 +143,26 @@ export function resolveCommon(input: SizingInput, issues: SizingIssue[]): Resolv
   if (issues.length > before) return null;
   const gas = resolveGas(input.gas, inletTemperatureK, inletPressurePa, issues);
   if (!gas) return null;
+  const equation = chooseEquation(gas, input.equationOfState);
+  const missing = outsideGerg(gas);
+  if (equation.id === 'gerg-2008' && missing.length > 0) {
+    issues.push({
+      path: 'equationOfState',
+      message: `GERG-2008 does not cover ${missing.join(', ')}: use "peng-robinson" (or leave the field out to let the engine choose)`,
+    });
+    return null;
+  }
+  // A liquid or two-phase inlet is refused whatever equation was asked for, ideal gas included.
+  if (!checkInletPhase(gas, inletTemperatureK, inletPressurePa, issues)) return null;
+  const fluid = equation.id === 'ideal-gas' ? null : realFluid(gas, equation.id);
+  const zAt = fluid ? zFunction(fluid) : undefined;
+  const inletZ = zAt ? zAt(inletTemperatureK, inletPressurePa) : 1;
+  const inletDensityKgPerM3 = (inletPressurePa * gas.molarMassKgPerKmol) / (1000 * inletZ * R * inletTemperatureK);
   const ctx = {
     molarMassKgPerKmol: gas.molarMassKgPerKmol,
     temperatureK: inletTemperatureK,
     pressurePa: inletPressurePa,
+    zAt,
   };
   const massFlowKgPerS = flowToKgPerS(input.flow.value, input.flow.unit, ctx);
   if (!(massFlowKgPerS > 0 && massFlowKgPerS <= MAX_MASS_FLOW_KG_PER_S)) {
@@ -144,12 +174,30 @@ export function resolveCommon(input: SizingInput, issues: SizingIssue[]): Resolv
   }
   return {
     gas,
+    equation,
+    fluid,
+    zAt,
+    inletZ,
+    inletDensityKgPerM3,
     massFlowKgPerS,
     inletTemperatureK,
     inletPressurePa,
     barometricPressurePa,
     barometricSource,
     flowInputUnit: input.flow.unit,
+  };
+}
+
+// Z on the gas branch; where the equation has no gas root (a standard state below a heavy gas's dew point,
+// where the reference volume is notional anyway) the ideal gas stands in, as ISO 6976 does for such states.
+function zFunction(fluid: RealFluid): (temperatureK: number, pressurePa: number) => number {
+  return (t, p) => {
+    try {
+      return compressibility(fluid, t, p);
+    } catch (err) {
+      if (err instanceof EosError) return 1;
+      throw err;
+    }
   };
 }
 

@@ -1,3 +1,4 @@
+import type { EquationOfStateId } from '../thermo/eos/types';
 import type { MoleFractions } from '../thermo/composition';
 
 export type Severity = 'info' | 'caution' | 'warning' | 'danger';
@@ -5,13 +6,32 @@ export type Severity = 'info' | 'caution' | 'warning' | 'danger';
 /** A caution shown beside the figures; `code` is stable for the form and datasheets to key on. */
 export type SizingWarning = { code: string; severity: Severity; message: string };
 
-/** cp, cv (J/(kg K)) and k at one temperature. */
-export type PropertyPoint = { temperatureC: number; cpJPerKgK: number; cvJPerKgK: number; k: number };
+/**
+ * cp, cv (J/(kg K)) and k = cp/cv at one state; with a real-gas equation also Z and the isentropic exponent
+ * (which equals cp/cv only for an ideal gas).
+ */
+export type PropertyPoint = {
+  temperatureC: number;
+  cpJPerKgK: number;
+  cvJPerKgK: number;
+  k: number;
+  z: number;
+  isentropicExponent: number;
+  densityKgPerM3: number;
+};
 
 export type StandardFlowBasisInfo = { unit: string; temperatureC: number; pressureKpa: number; description: string };
 
 /** What the figures rest on; datasheets print it. */
 export type BasisInfo = {
+  /** The equation of state behind the headline figures. */
+  equationOfState: EquationOfStateId;
+  /** Why it was used (asked for, or the engine's choice and its reason). */
+  equationOfStateReason: string;
+  /** The equation's publication and its range of validity. */
+  equationOfStateSource: string;
+  /** How standard volumes were converted (real Z at the reference conditions, or ideal gas). */
+  standardVolumeBasis: string;
   propertySource: string;
   gasComposition: string;
   /** Basis of a standard-volume flow input, or null for mass or actual flow. */
@@ -41,6 +61,10 @@ export type FlowSummary = {
   standardM3PerH: number;
   scfm: number;
   mmscfd: number;
+  /** ISO 1217 free air delivery (20 °C, 100 kPa). */
+  fadM3PerMin: number;
+  /** Z at the Sm3 reference conditions (15 °C, 101.325 kPa); 1 for an ideal gas. */
+  standardZ: number;
 };
 
 export type HeaterElectrical = {
@@ -59,7 +83,12 @@ export type HeaterBlock = {
   inletTemperatureC: number;
   outletTemperatureC: number;
   temperatureRiseK: number;
+  /** m (h(T_out, p) - h(T_in, p)) on the sizing's equation of state. */
   absorbedDutyKw: number;
+  /** The same duty for an ideal gas (NASA polynomials). */
+  idealGasDutyKw: number;
+  /** (ideal - real) / real, %; null when ideal gas was asked for. */
+  idealGasDifferencePercent: number | null;
   averageCpDutyKw: number;
   averageCpDifferencePercent: number;
   cpMeanJPerKgK: number;
@@ -74,6 +103,20 @@ export type HeaterBlock = {
   properties: { inlet: PropertyPoint; outlet: PropertyPoint; mean: PropertyPoint };
 };
 
+export type CoolerResult = {
+  kind: 'intercooler' | 'aftercooler';
+  outletTemperatureC: number;
+  outletPressureKpa: number;
+  /** Heat removed, kW: sensible plus the latent heat of any condensate. */
+  dutyKw: number;
+  /** Part of the duty released by condensation, kW (0 when nothing condenses). */
+  latentDutyKw: number;
+  /** Liquid knocked out at the cooler outlet, kg/h (0 when nothing condenses). */
+  condensateKgPerH: number;
+  /** Mole fractions of the condensate, or null when nothing condenses. */
+  condensateMoleFractions: MoleFractions | null;
+};
+
 export type CompressorStage = {
   stage: number;
   pressureRatio: number;
@@ -82,11 +125,36 @@ export type CompressorStage = {
   inletTemperatureC: number;
   dischargeTemperatureC: number;
   isentropicDischargeTemperatureC: number;
+  /** Mass flow through the stage (less than the suction flow when an upstream cooler knocked out liquid). */
+  massFlowKgPerS: number;
+  inletZ: number;
+  dischargeZ: number;
+  inletDensityKgPerM3: number;
+  dischargeDensityKgPerM3: number;
+  inletActualFlowM3PerH: number;
+  inletActualFlowAcfm: number;
+  dischargeActualFlowM3PerH: number;
+  /** Specific work h2 - h1. */
   specificWorkKjPerKg: number;
+  /** h(p2, s1) - h1. */
+  isentropicHeadKjPerKg: number;
+  /** Integral of v dp along the path. */
+  polytropicHeadKjPerKg: number;
+  /** Heads as a height of the gas column: head / g (g = 9.80665 m/s2). */
+  isentropicHeadM: number;
+  polytropicHeadM: number;
+  isentropicHeadFt: number;
+  polytropicHeadFt: number;
+  isentropicEfficiency: number;
+  polytropicEfficiency: number;
+  /** n of p v^n = const between the stage's end states. */
+  polytropicExponent: number;
   gasPowerKw: number;
-  /** k and cp used for (constant-k) or found at (variable-cp) the stage inlet. */
+  /** k and cp used for (constant-k) or found at (variable-cp, real-gas) the stage inlet. */
   k: number;
   cpJPerKgK: number;
+  /** The cooler after this stage: an intercooler, or the aftercooler after the last stage; null if none. */
+  cooler: CoolerResult | null;
 };
 
 export type CompressionMethodResult = {
@@ -100,6 +168,10 @@ export type CompressionMethodResult = {
   intercoolerDutiesKw: number[];
   totalIntercoolerDutyKw: number;
   aftercoolerDutyKw: number | null;
+  /** Liquid knocked out by all coolers, kg/h. */
+  condensateKgPerH: number;
+  /** Steps per stage of the integrated polytropic path (real-gas with a polytropic efficiency), else null. */
+  polytropicSteps: number | null;
 };
 
 export type MotorSelection = {
@@ -121,7 +193,8 @@ export type MotorDrive = {
 };
 
 export type CompressorBlock = {
-  basis: 'constant-k' | 'variable-cp';
+  /** The method the headline figures (gas power, shaft power, motor, discharge temperatures) come from. */
+  basis: 'constant-k' | 'variable-cp' | 'real-gas';
   suctionPressureKpa: number;
   dischargePressureKpa: number;
   overallPressureRatio: number;
@@ -133,8 +206,12 @@ export type CompressorBlock = {
   polytropicEfficiency: number | null;
   constantK: CompressionMethodResult;
   variableCp: CompressionMethodResult;
+  /** On the real-gas equation of state (basis.equationOfState); null when ideal gas was asked for. */
+  realGas: CompressionMethodResult | null;
   /** (constant-k - variable-cp) / variable-cp gas power, %. */
   methodDifferencePercent: number;
+  /** (variable-cp - real-gas) / real-gas gas power, %: what assuming an ideal gas would cost; null without real gas. */
+  idealGasDifferencePercent: number | null;
   gasPowerKw: number;
   mechanicalEfficiency: number;
   shaftPowerKw: number;
@@ -153,6 +230,8 @@ type CommonResult = {
   molarMassKgPerKmol: number;
   inletTemperatureC: number;
   inletPressureKpa: number;
+  inletZ: number;
+  inletDensityKgPerM3: number;
   inletActualFlowM3PerH: number;
   flows: FlowSummary;
   gas: GasSummary;

@@ -17,7 +17,22 @@ export const LIMITS = {
   voltageV: { min: 100, max: 35_000 },
   heaterRatingKw: { min: 0, max: 100_000 },
   siteAltitudeM: { min: -500, max: 6000 },
+  // Real machines reach about 0.50-0.90 isentropic (small reciprocating to large centrifugal) and 0.70-0.90
+  // polytropic [cp]; 1 is allowed as the reversible reference for hand checks, 0.30 catches a percentage typed
+  // as a fraction's typo without refusing a poor machine.
+  isentropicEfficiency: { min: 0.3, max: 1 },
+  polytropicEfficiency: { min: 0.3, max: 1 },
+  // Bearings, seals and gear lose a few per cent [cp]; below 0.5 the figure is not a mechanical efficiency.
+  mechanicalEfficiency: { min: 0.5, max: 1 },
+  motorEfficiency: { min: 0.5, max: 1 },
+  motorPowerFactor: { min: 0.3, max: 1 },
+  // A discharge-temperature limit between 40 °C and 350 °C: below, no compressor meets it; above, the
+  // lubricants, seals and materials of process compressors are past their range [cp].
+  dischargeTemperatureLimitK: { min: 313.15, max: 623.15 },
 } as const;
+
+/** The equations of state a request may ask for. */
+export const EQUATIONS_OF_STATE = ['ideal-gas', 'peng-robinson', 'gerg-2008'] as const;
 
 type IssueList = { code: 'custom'; path: string[]; message: string; input: unknown }[];
 
@@ -25,8 +40,8 @@ function addIssue(issues: unknown[], input: unknown, path: string[], message: st
   (issues as IssueList).push({ code: 'custom', path, message, input });
 }
 
-const efficiency = (hint: string) =>
-  numberField({ min: 0, minExclusive: true, max: 1, hint: `a fraction, e.g. 0.8 for 80 %; ${hint}` });
+const efficiency = (range: { min: number; max: number }, hint: string) =>
+  numberField({ ...range, hint: `a fraction, e.g. 0.8 for 80 %; ${hint}` });
 
 const temperature = temperatureField(TEMPERATURE_UNITS);
 const pressure = quantityField(PRESSURE_UNITS, 'pressure');
@@ -80,6 +95,12 @@ const gas = z
 
 const common = {
   gas,
+  equationOfState: z
+    .enum(EQUATIONS_OF_STATE, {
+      error:
+        'equationOfState must be "ideal-gas", "peng-robinson" or "gerg-2008" (leave it out to let the engine choose)',
+    })
+    .optional(),
   flow: quantityField(FLOW_UNITS, 'flow', { min: 0, minExclusive: true }),
   inlet: z.strictObject({ temperature, pressure }),
   site: z
@@ -124,21 +145,34 @@ const compressor = z
     service: z.literal('compressor'),
     ...common,
     dischargePressure: pressure,
-    isentropicEfficiency: efficiency('isentropic (adiabatic) efficiency per stage').optional(),
-    polytropicEfficiency: efficiency('polytropic efficiency per stage').optional(),
+    isentropicEfficiency: efficiency(
+      LIMITS.isentropicEfficiency,
+      'isentropic (adiabatic) efficiency per stage; machines reach about 0.50-0.90, 1 is the reversible reference',
+    ).optional(),
+    polytropicEfficiency: efficiency(
+      LIMITS.polytropicEfficiency,
+      'polytropic efficiency per stage; machines reach about 0.70-0.90, 1 is the reversible reference',
+    ).optional(),
     stages: numberField({ ...LIMITS.stages, integer: true }).default(1),
     intercoolerOutletTemperature: temperature.optional(),
     aftercoolerOutletTemperature: temperature.optional(),
     interstagePressureDropPercent: numberField({ ...LIMITS.interstagePressureDropPercent, unit: '%' }).default(0),
-    mechanicalEfficiency: efficiency('mechanical (bearings, seals, gear)').default(DEFAULT_MECHANICAL_EFFICIENCY),
+    mechanicalEfficiency: efficiency(LIMITS.mechanicalEfficiency, 'mechanical (bearings, seals, gear)').default(
+      DEFAULT_MECHANICAL_EFFICIENCY,
+    ),
     method: z
       .enum(['constant-k', 'variable-cp'], { error: 'method must be "constant-k" or "variable-cp"' })
       .default('variable-cp'),
-    dischargeTemperatureLimit: temperature.optional(),
+    dischargeTemperatureLimit: temperatureField(
+      TEMPERATURE_UNITS,
+      LIMITS.dischargeTemperatureLimitK.min,
+      LIMITS.dischargeTemperatureLimitK.max,
+      'the range of discharge-temperature limits for process compressors',
+    ).optional(),
     k: numberField({ ...LIMITS.k, minExclusive: true, hint: 'ratio of specific heats override' }).optional(),
     cpJPerKgK: numberField({ ...LIMITS.cpJPerKgK, unit: 'J/(kg K)' }).optional(),
-    motorEfficiency: efficiency('motor efficiency at this load').optional(),
-    motorPowerFactor: efficiency('motor power factor at this load').optional(),
+    motorEfficiency: efficiency(LIMITS.motorEfficiency, 'motor efficiency at this load').optional(),
+    motorPowerFactor: efficiency(LIMITS.motorPowerFactor, 'motor power factor at this load').optional(),
     supply: supply.optional(),
   })
   .check((ctx) => {
@@ -149,7 +183,7 @@ const compressor = z
       ctx.issues.push({
         code: 'custom',
         path: [both ? 'polytropicEfficiency' : 'isentropicEfficiency'],
-        message: 'give exactly one of isentropicEfficiency or polytropicEfficiency (a fraction above 0 and at most 1)',
+        message: `give exactly one of isentropicEfficiency or polytropicEfficiency (a fraction from ${LIMITS.isentropicEfficiency.min} to 1)`,
         input: c,
       });
     }

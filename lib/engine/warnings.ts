@@ -1,7 +1,12 @@
+import type { EquationOfStateId } from '../thermo/eos/types';
 import type { GasModel } from '../thermo/gas-model';
 import { SUBDIVISION_LIMIT_A } from './electrical';
 import { gasWarnings, isFlammable } from './gas-warnings';
-import { condensationWarning, idealGasWarning, type GasState } from './ideal-gas-check';
+import type { CompressorCase } from './compressor';
+import { condensationWarning, type GasState } from './ideal-gas-check';
+import { coolerWarnings, equationWarnings } from './real-gas/equation-warnings';
+import { compressorValidity, heaterValidity } from './real-gas/validity';
+import type { ResolvedCommon } from './resolve';
 import type { CompressorBlock, CompressorStage, HeaterBlock, SizingWarning } from './result-types';
 import { bestTemperatureClass } from './temperature-class';
 
@@ -14,12 +19,20 @@ const HOT_SURFACE_C = 60;
 /** Pressure equipment rules generally start above 0.5 bar gauge [mem: EU PED 2014/68/EU art. 1]. */
 const PRESSURE_EQUIPMENT_GAUGE_PA = 50_000;
 
-export const PRELIMINARY: SizingWarning = {
-  code: 'preliminary',
-  severity: 'caution',
-  message:
-    'Preliminary sizing on ideal-gas properties. Confirm with a qualified engineer under the local codes before purchase or construction.',
+const EQUATION_WORDS: Readonly<Record<EquationOfStateId, string>> = {
+  'ideal-gas': 'ideal-gas properties',
+  'gerg-2008': 'GERG-2008 real-gas properties',
+  'peng-robinson': 'Peng-Robinson real-gas properties',
 };
+
+/** The closing note of every sizing, naming the property basis. */
+export function preliminary(equation: EquationOfStateId): SizingWarning {
+  return {
+    code: 'preliminary',
+    severity: 'caution',
+    message: `Preliminary sizing on ${EQUATION_WORDS[equation]}. Confirm with a qualified engineer under the local codes before purchase or construction.`,
+  };
+}
 
 const c1 = (v: number) => v.toFixed(1);
 
@@ -66,18 +79,15 @@ function present(...items: (SizingWarning | null)[]): SizingWarning[] {
 }
 
 /** All cautions for a heater duty; always ends with the preliminary note. */
-export function heaterWarnings(
-  gas: GasModel,
-  h: HeaterBlock,
-  pressurePa: number,
-  barometricPa: number,
-): SizingWarning[] {
+export function heaterWarnings(common: ResolvedCommon, h: HeaterBlock): SizingWarning[] {
+  const { gas, inletPressurePa: pressurePa, barometricPressurePa: barometricPa } = common;
   const states: GasState[] = [
     { label: 'heater inlet', temperatureK: h.inletTemperatureC + 273.15, pressurePa },
     { label: 'heater outlet', temperatureK: h.outletTemperatureC + 273.15, pressurePa },
   ];
   const out: SizingWarning[] = [
-    ...present(condensationWarning(gas, states), idealGasWarning(gas, states)),
+    ...present(condensationWarning(gas, states), heaterValidity(common, h)),
+    ...equationWarnings(common, states),
     ...gasWarnings(gas),
   ];
   if (Math.abs(h.temperatureRiseK) > AVERAGE_CP_LIMIT_K) {
@@ -130,7 +140,7 @@ export function heaterWarnings(
     },
     ...pressureWarning(pressurePa, barometricPa),
     ...surfaceWarnings(gas, h.outletTemperatureC, true),
-    PRELIMINARY,
+    preliminary(common.equation.id),
   );
   return out;
 }
@@ -155,11 +165,16 @@ function trainStates(stages: readonly CompressorStage[]): GasState[] {
 }
 
 /** All cautions for a compressor duty; always ends with the preliminary note. */
-export function compressorWarnings(gas: GasModel, c: CompressorBlock, barometricPa: number): SizingWarning[] {
-  const stages = (c.basis === 'constant-k' ? c.constantK : c.variableCp).stages;
+export function compressorWarnings(common: ResolvedCommon, c: CompressorBlock, cc: CompressorCase): SizingWarning[] {
+  const { gas, barometricPressurePa: barometricPa } = common;
+  const headline = c.realGas ?? (c.basis === 'constant-k' ? c.constantK : c.variableCp);
+  const stages = headline.stages;
   const states = trainStates(stages);
   const out: SizingWarning[] = [
-    ...present(condensationWarning(gas, states), idealGasWarning(gas, states)),
+    ...present(c.realGas ? null : condensationWarning(gas, states)),
+    ...compressorValidity(common, c, cc),
+    ...equationWarnings(common, states),
+    ...coolerWarnings(headline),
     ...gasWarnings(gas),
   ];
   let hottest = stages[0]!;
@@ -212,7 +227,9 @@ export function compressorWarnings(gas: GasModel, c: CompressorBlock, barometric
     out.push({
       code: 'polytropic-converted',
       severity: 'info',
-      message: `Polytropic efficiency ${c.polytropicEfficiency} converted to isentropic ${c.isentropicEfficiency.toFixed(4)} for the stage ratio at the suction k.`,
+      message: c.realGas
+        ? `Real-gas method: polytropic efficiency ${c.polytropicEfficiency} applied along the compression path (integrated in ${c.realGas.polytropicSteps ?? 0} steps per stage); the ideal-gas methods convert it to isentropic ${c.isentropicEfficiency.toFixed(4)} at the suction k.`
+        : `Polytropic efficiency ${c.polytropicEfficiency} converted to isentropic ${c.isentropicEfficiency.toFixed(4)} for the stage ratio at the suction k.`,
     });
   }
   if (c.motor.iecKw === null || c.motor.nemaHp === null) {
@@ -220,7 +237,7 @@ export function compressorWarnings(gas: GasModel, c: CompressorBlock, barometric
       code: 'motor-above-series',
       severity: 'warning',
       message:
-        'Shaft power with 10 % margin is above the standard motor series listed (IEC to 1000 kW, NEMA to 500 hp): select a large machine from a maker.',
+        'Shaft power with 10 % margin is above the motor series listed (to 10 000 kW and 10 000 hp): select a large machine, or a turbine or engine driver, with its maker.',
     });
   }
   if (c.drive) {
@@ -233,7 +250,7 @@ export function compressorWarnings(gas: GasModel, c: CompressorBlock, barometric
   out.push(
     ...pressureWarning(maxPa, barometricPa),
     ...surfaceWarnings(gas, hottest.dischargeTemperatureC, false),
-    PRELIMINARY,
+    preliminary(common.equation.id),
   );
   return out;
 }

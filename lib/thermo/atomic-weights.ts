@@ -1,9 +1,13 @@
-/** Standard atomic weights, g/mol (abridged to the conventional values) [pub: CIAAW 2021]. */
+/**
+ * Standard atomic weights, g/mol, abridged to the conventional values for elements whose weight is given as
+ * an interval (H, C, N, O, S) [pub: CIAAW 2021 standard atomic weights].
+ */
 export const ATOMIC_WEIGHTS = {
   H: 1.008,
   C: 12.011,
   N: 14.007,
   O: 15.999,
+  S: 32.06,
   Ar: 39.948,
   He: 4.002602,
 } as const;

@@ -1,4 +1,5 @@
 import { SPECIES, SPECIES_IDS, type SpeciesId } from './species-data';
+import { AMBIGUOUS_NAME, choicesFor, speciesIndexOf } from './species-names';
 
 /** Fractions must sum to 1 within this absolute tolerance, then are normalised exactly. */
 export const FRACTION_SUM_TOLERANCE = 1e-4;
@@ -13,29 +14,41 @@ const SPECIES_LIST = SPECIES_IDS.join(', ');
 
 // Module-local copy: imported bindings are getters under tsx's CommonJS output, and these loops are hot.
 const IDS: readonly SpeciesId[] = SPECIES_IDS;
-const SPECIES_INDEX: ReadonlyMap<string, number> = new Map(SPECIES_IDS.map((id, i) => [id, i]));
 const MOLAR_MASSES: readonly number[] = SPECIES_IDS.map((id) => SPECIES[id].molarMassKgPerKmol);
 const COUNT = SPECIES_IDS.length;
 const TOLERANCE = FRACTION_SUM_TOLERANCE;
-// Reused between calls (single-threaded): the fractions in species order.
+// Reused between calls (single-threaded): the fractions in species order, and the key that named each.
 const scratch = new Float64Array(COUNT);
+const namedBy: (string | undefined)[] = new Array<string | undefined>(COUNT);
 
 /**
  * Checks a component map (paths relative to it, e.g. "CH4") and converts it to normalised mole fractions.
- * Mass fractions are converted with the species molar masses.
+ * Keys are species ids or common names ("methane", "nC4", "hydrogen sulfide"; see species-names.ts); two
+ * keys for one species are refused. Mass fractions are converted with the species molar masses.
  */
 export function checkComposition(components: Record<string, unknown>, basis: CompositionBasis): CompositionCheck {
   let issues: CompositionIssue[] | null = null;
   scratch.fill(0);
+  namedBy.fill(undefined);
   let sum = 0;
   let positive = 0;
   for (const name in components) {
     if (!Object.prototype.hasOwnProperty.call(components, name)) continue;
     const value = components[name];
-    const index = SPECIES_INDEX.get(name);
-    if (index === undefined) {
-      (issues ??= []).push({ path: name, message: `unknown species "${name}"; allowed: ${SPECIES_LIST}` });
-    } else if (typeof value !== 'number' || !Number.isFinite(value) || value < 0 || value > 1) {
+    const index = speciesIndexOf(name);
+    if (index < 0) {
+      (issues ??= []).push({ path: name, message: nameMessage(name, index) });
+      continue;
+    }
+    const prior = namedBy[index];
+    if (prior !== undefined) {
+      const id = IDS[index]!;
+      const message = `"${prior}" and "${name}" both name ${id} (${SPECIES[id].name}); give each species once`;
+      (issues ??= []).push({ path: name, message });
+      continue;
+    }
+    namedBy[index] = name;
+    if (typeof value !== 'number' || !Number.isFinite(value) || value < 0 || value > 1) {
       (issues ??= []).push({ path: name, message: `${basis} fraction must be a number from 0 to 1` });
     } else {
       sum += value;
@@ -59,6 +72,12 @@ export function checkComposition(components: Record<string, unknown>, basis: Com
     };
   }
   return { ok: true, moleFractions: toMoleFractions(basis) };
+}
+
+function nameMessage(name: string, index: number): string {
+  return index === AMBIGUOUS_NAME
+    ? `"${name}" is ambiguous: give ${choicesFor(name)}`
+    : `unknown species "${name}"; allowed: ${SPECIES_LIST} (or a common name such as methane or n-butane)`;
 }
 
 function toMoleFractions(basis: CompositionBasis): MoleFractions {

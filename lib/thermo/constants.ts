@@ -15,5 +15,6 @@ export const ZERO_CELSIUS_K = 273.15;
 
 /** The one-line property-basis statement printed on datasheets. */
 export const PROPERTY_SOURCE =
-  'Ideal gas; NASA 7-coefficient polynomials, 200-1000-6000 K (McBride, Gordon & Reno, NASA TM-4513, 1993); ' +
+  'Ideal gas; NASA 7-coefficient polynomials, 200-1000-6000 K (McBride, Gordon & Reno, NASA TM-4513, 1993; ' +
+  'n-pentane, isopentane, n-hexane, n-nonane, n-decane and H2S from Burcat & Ruscic, ANL-05/20, 2005); ' +
   'R = 8.314462618 J/(mol K) (CODATA 2018); molar masses from CIAAW 2021 standard atomic weights';

@@ -49,6 +49,24 @@ export const GAS_PRESETS: readonly GasPreset[] = [
     moleFractions: { CH4: 0.95, C2H6: 0.03, C3H8: 0.005, N2: 0.01, CO2: 0.005 },
     note: 'typical lean composition for illustration (CH4 0.95, C2H6 0.03, C3H8 0.005, N2 0.01, CO2 0.005); use the site gas analysis',
   },
+  {
+    id: 'natural-gas-rich',
+    displayName: 'Natural gas (typical rich example, C4+)',
+    // An illustrative composition with butanes to hexane, not any particular supply.
+    moleFractions: {
+      CH4: 0.885,
+      C2H6: 0.055,
+      C3H8: 0.02,
+      'i-C4H10': 0.004,
+      'n-C4H10': 0.005,
+      'i-C5H12': 0.0015,
+      'n-C5H12': 0.0012,
+      'n-C6H14': 0.0008,
+      N2: 0.015,
+      CO2: 0.0125,
+    },
+    note: 'typical rich composition for illustration (CH4 0.885, C2H6 0.055, C3H8 0.02, C4 0.009, C5 0.0027, C6 0.0008, N2 0.015, CO2 0.0125); heavier ends can condense when cooled or compressed; use the site gas analysis',
+  },
 ];
 
 /** Accepted alternative spellings of preset ids. */

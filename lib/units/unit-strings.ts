@@ -1,6 +1,19 @@
 /** Accepted unit strings per quantity kind; the form builds its unit pickers from these lists. */
 export const MASS_FLOW_UNITS = ['kg/s', 'kg/h', 't/h', 'lb/h', 'lb/s'] as const;
-export const STANDARD_FLOW_UNITS = ['Nm3/h', 'Sm3/h', 'SCFM', 'SCFH', 'MMSCFD'] as const;
+export const STANDARD_FLOW_UNITS = [
+  'Nm3/h',
+  'Sm3/h',
+  'SCFM',
+  'SCFH',
+  'MMSCFD',
+  'SCFM@14.65',
+  'MMSCFD@14.65',
+  'SCFM@14.73',
+  'MMSCFD@14.73',
+  'SCFM@68F',
+  'FAD m3/min',
+  'FAD m3/h',
+] as const;
 export const ACTUAL_FLOW_UNITS = ['m3/h', 'ACFM'] as const;
 export const FLOW_UNITS = [...MASS_FLOW_UNITS, ...STANDARD_FLOW_UNITS, ...ACTUAL_FLOW_UNITS] as const;
 export const TEMPERATURE_UNITS = ['degC', 'degF', 'K', 'degR'] as const;

@@ -53,8 +53,9 @@ export function stateFromEntropy(
   entropyJPerMolK: number,
   guessK: number,
   out: FluidState,
+  guessDensity?: number,
 ): FluidState {
-  return solve(eos, pressurePa, entropyJPerMolK, 'entropy', guessK, out);
+  return solve(eos, pressurePa, entropyJPerMolK, 'entropy', guessK, out, guessDensity);
 }
 
 /** The vapour-branch state at p with enthalpy h (J/mol). */
@@ -64,6 +65,7 @@ export function stateFromEnthalpy(
   enthalpyJPerMol: number,
   guessK: number,
   out: FluidState,
+  guessDensity?: number,
 ): FluidState {
-  return solve(eos, pressurePa, enthalpyJPerMol, 'enthalpy', guessK, out);
+  return solve(eos, pressurePa, enthalpyJPerMol, 'enthalpy', guessK, out, guessDensity);
 }

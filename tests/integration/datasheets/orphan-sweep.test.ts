@@ -44,17 +44,15 @@ describe('the orphan sweeper', () => {
     const account = await makeAccount('Sweep PG');
     const store = createPostgresBlobStore();
     const orphan = accountKey(account.id, 'datasheets', 'DS00-0000', `A-${randomUUID()}.pdf`);
-    await db
-      .insert(blobs)
-      .values({
-        key: orphan,
-        accountId: account.id,
-        contentType: 'application/pdf',
-        byteSize: pdf.byteLength,
-        sha256: sha256Hex(pdf),
-        data: Buffer.from(pdf),
-        createdAt: new Date(Date.now() - 3 * HOUR),
-      });
+    await db.insert(blobs).values({
+      key: orphan,
+      accountId: account.id,
+      contentType: 'application/pdf',
+      byteSize: pdf.byteLength,
+      sha256: sha256Hex(pdf),
+      data: Buffer.from(pdf),
+      createdAt: new Date(Date.now() - 3 * HOUR),
+    });
     const report = await sweepOrphanBlobs({ store, olderThanMinutes: 120 });
     expect(report.deleted).toContain(orphan);
     expect(await db.select().from(blobs).where(eq(blobs.key, orphan))).toHaveLength(0);

@@ -62,16 +62,14 @@ describe('audit trail query', () => {
   it(`returns at most ${AUDIT_PAGE_SIZE} entries, dropping the oldest`, async () => {
     const entityId = randomUUID();
     const t0 = Date.now() - 3_600_000;
-    await db
-      .insert(auditLog)
-      .values(
-        Array.from({ length: AUDIT_PAGE_SIZE + 5 }, (_, i) => ({
-          at: new Date(t0 + i * 1000),
-          action: `probe.${i}`,
-          entityType: 'probe',
-          entityId,
-        })),
-      );
+    await db.insert(auditLog).values(
+      Array.from({ length: AUDIT_PAGE_SIZE + 5 }, (_, i) => ({
+        at: new Date(t0 + i * 1000),
+        action: `probe.${i}`,
+        entityType: 'probe',
+        entityId,
+      })),
+    );
     const rows = await listAuditEntries(await makeUser('admin'), { entityId });
     expect(rows).toHaveLength(AUDIT_PAGE_SIZE);
     expect(rows[0]?.action).toBe(`probe.${AUDIT_PAGE_SIZE + 4}`);

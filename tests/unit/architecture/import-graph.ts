@@ -2,11 +2,15 @@ import { existsSync, readdirSync, readFileSync, statSync } from 'node:fs';
 import { dirname, join, normalize } from 'node:path';
 import ts from 'typescript';
 
-// The import graph of the product code, read with the TypeScript compiler's own pre-processor so
-// every form counts: static and dynamic imports, `import type`, and re-exports (`export ... from`).
+// The import graph of the product code, read with the TypeScript parser so every form counts: static and
+// dynamic imports, re-exports (`export ... from`) and type-only imports, which are marked as such.
 
+/** An import of a repository file; `typeOnly` when the compiler erases it (`import type`, `export type`). */
+export type ImportEdge = { to: string; typeOnly: boolean };
 /** Repository-relative paths with forward slashes; an edge per import that resolves to a file of the repository. */
-export type ImportGraph = Map<string, string[]>;
+export type ImportGraph = Map<string, ImportEdge[]>;
+/** Files and the files they load at run time: the graph without its type-only edges. */
+export type RuntimeGraph = Map<string, string[]>;
 
 const SOURCE = /\.(ts|tsx|mts)$/;
 const CANDIDATES = ['', '.ts', '.tsx', '.mts', '.js', '.mjs', '.cjs', '/index.ts', '/index.tsx'];
@@ -31,21 +35,71 @@ function resolveImport(root: string, from: string, specifier: string): string | 
   return null;
 }
 
+function isTypeOnlyImport(node: ts.ImportDeclaration): boolean {
+  const clause = node.importClause;
+  if (!clause) return false; // `import 'x'` runs the module
+  if (clause.isTypeOnly) return true;
+  const named = clause.namedBindings;
+  return !clause.name && !!named && ts.isNamedImports(named) && named.elements.every((e) => e.isTypeOnly);
+}
+
+function isTypeOnlyExport(node: ts.ExportDeclaration): boolean {
+  const clause = node.exportClause;
+  return node.isTypeOnly || (!!clause && ts.isNamedExports(clause) && clause.elements.every((e) => e.isTypeOnly));
+}
+
+/** The module specifiers a file names, with whether each is erased by the compiler. */
+export function importsOf(file: string, text: string): { specifier: string; typeOnly: boolean }[] {
+  const source = ts.createSourceFile(file, text, ts.ScriptTarget.Latest, false, ts.ScriptKind.TSX);
+  const found: { specifier: string; typeOnly: boolean }[] = [];
+  const visit = (node: ts.Node): void => {
+    if (ts.isImportDeclaration(node) && ts.isStringLiteral(node.moduleSpecifier))
+      found.push({ specifier: node.moduleSpecifier.text, typeOnly: isTypeOnlyImport(node) });
+    else if (ts.isExportDeclaration(node) && node.moduleSpecifier && ts.isStringLiteral(node.moduleSpecifier))
+      found.push({ specifier: node.moduleSpecifier.text, typeOnly: isTypeOnlyExport(node) });
+    else if (
+      ts.isImportTypeNode(node) &&
+      ts.isLiteralTypeNode(node.argument) &&
+      ts.isStringLiteral(node.argument.literal)
+    )
+      found.push({ specifier: node.argument.literal.text, typeOnly: true });
+    else if (
+      ts.isCallExpression(node) &&
+      node.expression.kind === ts.SyntaxKind.ImportKeyword &&
+      node.arguments[0] &&
+      ts.isStringLiteral(node.arguments[0])
+    )
+      found.push({ specifier: node.arguments[0].text, typeOnly: false });
+    ts.forEachChild(node, visit);
+  };
+  visit(source);
+  return found;
+}
+
 /** Every import of the source files under `entries` (folders or files, relative to `root`). */
 export function buildImportGraph(root: string, entries: readonly string[]): ImportGraph {
   const graph: ImportGraph = new Map();
   for (const file of entries.flatMap((e) => sourceFiles(root, e))) {
-    const info = ts.preProcessFile(readFileSync(join(root, file), 'utf8'), true, true);
-    const targets = info.importedFiles
-      .map((ref) => resolveImport(root, file, ref.fileName))
-      .filter((t): t is string => t !== null);
-    graph.set(file, [...new Set(targets)]);
+    const edges = new Map<string, boolean>();
+    for (const { specifier, typeOnly } of importsOf(file, readFileSync(join(root, file), 'utf8'))) {
+      const to = resolveImport(root, file, specifier);
+      if (to) edges.set(to, (edges.get(to) ?? true) && typeOnly);
+    }
+    graph.set(
+      file,
+      [...edges].map(([to, typeOnly]) => ({ to, typeOnly })),
+    );
   }
   return graph;
 }
 
+/** The graph of what loads what at run time: type-only imports are erased and cannot form a loading cycle. */
+export function runtimeGraph(graph: ImportGraph): RuntimeGraph {
+  return new Map([...graph].map(([file, edges]) => [file, edges.filter((e) => !e.typeOnly).map((e) => e.to)]));
+}
+
 /** Strongly connected groups of two or more files (or a file importing itself): each is an import cycle. */
-export function findCycles(graph: ImportGraph): string[][] {
+export function findCycles(graph: RuntimeGraph): string[][] {
   const index = new Map<string, number>();
   const low = new Map<string, number>();
   const stack: string[] = [];
@@ -103,22 +157,22 @@ export function privateOwner(file: string): string | null {
 
 export type Offence = { file: string; imports: string };
 
-/** Imports of a route's private folder from outside that route. */
+/** Imports (type-only ones too) of a route's private folder from outside that route. */
 export function privateImports(graph: ImportGraph): Offence[] {
-  return [...graph].flatMap(([file, targets]) =>
-    targets
-      .filter((t) => {
-        const owner = privateOwner(t);
+  return [...graph].flatMap(([file, edges]) =>
+    edges
+      .filter(({ to }) => {
+        const owner = privateOwner(to);
         return owner !== null && !file.startsWith(`${owner}/`);
       })
-      .map((t) => ({ file, imports: t })),
+      .map(({ to }) => ({ file, imports: to })),
   );
 }
 
-/** Imports from `file`s matching `from` into paths under `into`. */
+/** Imports (type-only ones too) from `file`s matching `from` into paths under `into`. */
 export function importsInto(graph: ImportGraph, from: (file: string) => boolean, into: string): Offence[] {
-  return [...graph].flatMap(([file, targets]) =>
-    from(file) ? targets.filter((t) => t.startsWith(into)).map((t) => ({ file, imports: t })) : [],
+  return [...graph].flatMap(([file, edges]) =>
+    from(file) ? edges.filter(({ to }) => to.startsWith(into)).map(({ to }) => ({ file, imports: to })) : [],
   );
 }
 

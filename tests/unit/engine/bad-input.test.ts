@@ -50,10 +50,29 @@ describe('refused input names the field, why, and the allowed range', () => {
     ]);
   });
 
-  it.each([0, -0.1, 1.01, 80, 'x'])('efficiency %s outside (0, 1]', (eta) => {
+  it.each([0, 0.001, 0.29, -0.1, 1.01, 80, 'x'])('efficiency %s outside [0.3, 1], blamed on the efficiency', (eta) => {
     const [issue] = issuesOf(compressorRequest({ isentropicEfficiency: eta }));
     expect(issue!.path).toBe('isentropicEfficiency');
-    expect(issue!.message).toMatch(/above 0 and at most 1/);
+    expect(issue!.message).toMatch(/from 0\.3 to 1/);
+  });
+
+  it('a polytropic or mechanical efficiency out of range names its own field', () => {
+    const poly = issuesOf(compressorRequest({ isentropicEfficiency: undefined, polytropicEfficiency: 0.05 }));
+    expect(poly.map((i) => i.path)).toEqual(['polytropicEfficiency']);
+    expect(paths(compressorRequest({ mechanicalEfficiency: 0.4 }))).toEqual(['mechanicalEfficiency']);
+  });
+
+  it('a discharge-temperature limit outside 40-350 °C, or below the suction temperature, is refused on that field', () => {
+    expect(paths(compressorRequest({ dischargeTemperatureLimit: q(20, 'degC') }))).toEqual([
+      'dischargeTemperatureLimit',
+    ]);
+    expect(paths(compressorRequest({ dischargeTemperatureLimit: q(900, 'degC') }))).toEqual([
+      'dischargeTemperatureLimit',
+    ]);
+    const hotSuction = { temperature: q(90, 'degC'), pressure: q(100, 'kPa') };
+    expect(paths(compressorRequest({ inlet: hotSuction, dischargeTemperatureLimit: q(80, 'degC') }))).toEqual([
+      'dischargeTemperatureLimit',
+    ]);
   });
 
   it('both or neither efficiency', () => {

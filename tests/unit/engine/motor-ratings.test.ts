@@ -36,7 +36,12 @@ describe('motor selection with at least 10 % margin [mem: API machinery standard
       expect(smaller.every((r) => r < kw * 1.1)).toBe(true);
     }
   });
+  it('continues past 1000 kW and 500 hp: a 600 kW compressor gets a motor [mem: ISO 3 R20; NEMA MG 1 Part 20]', () => {
+    expect(selectMotor(600)).toMatchObject({ iecKw: 710, nemaHp: 900 });
+    expect(selectMotor(950)).toMatchObject({ iecKw: 1120, nemaHp: 1500 });
+  });
+
   it('returns null above the series', () => {
-    expect(selectMotor(950)).toMatchObject({ iecKw: null, nemaHp: null });
+    expect(selectMotor(9500)).toMatchObject({ iecKw: null, nemaHp: null });
   });
 });

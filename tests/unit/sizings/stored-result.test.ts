@@ -20,7 +20,8 @@ describe('reading a saved sizing for display', () => {
   it('refuses a result from another engine major version, of another service, or missing its block', () => {
     const request = heaterRequest();
     const result = roundTrip(calculate(request)) as unknown as Record<string, unknown>;
-    expect(readStoredSizing(request, { ...result, engineVersion: '2.0.0' })).toBeNull();
+    expect(readStoredSizing(request, { ...result, engineVersion: '1.0.0' })).toBeNull();
+    expect(readStoredSizing(request, { ...result, engineVersion: '3.0.0' })).toBeNull();
     expect(readStoredSizing(compressorRequest(), result)).toBeNull();
     expect(readStoredSizing(request, { ...result, heater: undefined })).toBeNull();
     expect(readStoredSizing(request, { ...result, warnings: 'none' })).toBeNull();

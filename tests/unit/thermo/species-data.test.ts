@@ -65,7 +65,7 @@ describe('NASA 7-coefficient transcription', () => {
   );
 
   it.each([...SPECIES_IDS])(
-    '%s: cp, h and s° are continuous at Tmid = 1000 K [NASA TM-4513 fits are constrained so]',
+    '%s: cp, h and s° are continuous at Tmid = 1000 K [NASA 7-term fits are constrained so]',
     (id) => {
       const { low, high } = SPECIES[id];
       expect(Math.abs(rawCp(low, 1000) - rawCp(high, 1000)) / rawCp(low, 1000)).toBeLessThan(1e-6);
@@ -96,7 +96,7 @@ describe('NASA 7-coefficient transcription', () => {
     expect(Math.abs(enthalpyMolar(pure(id), 298.15) - hf)).toBeLessThan(300);
   });
 
-  // CIAAW 2021 standard atomic weights (H 1.008, C 12.011, N 14.007, O 15.999) [pub].
+  // CIAAW 2021 standard atomic weights (H 1.008, C 12.011, N 14.007, O 15.999, S 32.06) [pub].
   it.each([
     ['N2', 28.014],
     ['O2', 31.998],
@@ -108,6 +108,10 @@ describe('NASA 7-coefficient transcription', () => {
     ['NH3', 17.031],
     ['Ar', 39.948],
     ['He', 4.002602],
+    ['n-C4H10', 58.124],
+    ['i-C5H12', 72.151],
+    ['n-C10H22', 142.286],
+    ['H2S', 34.076],
   ] as const)('molar mass of %s is %f kg/kmol', (id, m) => {
     expect(SPECIES[id].molarMassKgPerKmol).toBeCloseTo(m, 6);
   });

@@ -26,7 +26,20 @@ import {
 describe('accepted unit strings', () => {
   it('lists exactly the documented spellings per kind', () => {
     expect(UNITS_BY_KIND.massFlow).toEqual(['kg/s', 'kg/h', 't/h', 'lb/h', 'lb/s']);
-    expect(UNITS_BY_KIND.standardFlow).toEqual(['Nm3/h', 'Sm3/h', 'SCFM', 'SCFH', 'MMSCFD']);
+    expect(UNITS_BY_KIND.standardFlow).toEqual([
+      'Nm3/h',
+      'Sm3/h',
+      'SCFM',
+      'SCFH',
+      'MMSCFD',
+      'SCFM@14.65',
+      'MMSCFD@14.65',
+      'SCFM@14.73',
+      'MMSCFD@14.73',
+      'SCFM@68F',
+      'FAD m3/min',
+      'FAD m3/h',
+    ]);
     expect(UNITS_BY_KIND.actualFlow).toEqual(['m3/h', 'ACFM']);
     expect(UNITS_BY_KIND.temperature).toEqual(['degC', 'degF', 'K', 'degR']);
     expect(UNITS_BY_KIND.absolutePressure).toEqual(['kPa', 'MPa', 'Pa', 'bar', 'psia']);

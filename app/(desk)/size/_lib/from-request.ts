@@ -1,4 +1,5 @@
 import type { SizingInput } from '@/lib/engine';
+import { speciesIdOf } from '@/lib/thermo/species-names';
 import { standardAtmospherePressurePa, type UnitSystem } from '@/lib/units';
 import { defaultValues } from './defaults';
 import type { DeskValues, MixtureRow, QtyText } from './form-types';
@@ -11,8 +12,9 @@ const NOT_ON_DESK = ['k', 'cpJPerKgK', 'motorEfficiency', 'motorPowerFactor', 'a
 
 function gasValues(g: SizingInput['gas'], base: DeskValues['gas']): DeskValues['gas'] {
   if (g.components) {
+    // The API also takes common names ("methane"); the desk's picker lists ids only.
     const components: MixtureRow[] = Object.entries(g.components).map(([species, x]) => ({
-      species,
+      species: speciesIdOf(species) ?? species,
       fraction: String(x),
     }));
     return { ...base, mode: 'mixture', basis: g.basis ?? 'mole', components };

@@ -1,0 +1,102 @@
+import { EosError } from '../../thermo/eos/eos-error';
+import { ThermoRangeError } from '../../thermo/errors';
+import type { CompressorCase } from '../compressor';
+import type { ResolvedCommon } from '../resolve';
+import type { CompressionMethodResult, CompressorBlock, HeaterBlock, SizingWarning } from '../result-types';
+import { chooseEquation } from './equation-choice';
+import { gasState, realFluid, type RealFluid } from './fluid';
+import { runRealGasTrain } from './train';
+
+/** Real and ideal gas are judged by the figures: beyond this difference ideal gas is not good enough [cp]. */
+export const REAL_GAS_DIFFERENCE_PERCENT = 2;
+
+const f1 = (v: number) => v.toFixed(1);
+const NAMES = { 'gerg-2008': 'GERG-2008', 'peng-robinson': 'Peng-Robinson', 'ideal-gas': 'ideal gas' } as const;
+
+// The equation the engine would have chosen, for judging an ideal-gas request; null if it cannot be built.
+function referenceFluid(common: ResolvedCommon): RealFluid | null {
+  const auto = chooseEquation(common.gas, undefined);
+  if (auto.id === 'ideal-gas') return null;
+  try {
+    return realFluid(common.gas, auto.id);
+  } catch {
+    return null;
+  }
+}
+
+/** `percent` is (ideal - real) / real x 100 for the quantity named by `what`. */
+function differenceWarning(what: string, idealAsked: boolean, eq: string, percent: number, detail = ''): SizingWarning {
+  const direction = `${percent > 0 ? 'overstates' : 'understates'} the ${what} by ${f1(Math.abs(percent))} %${detail}`;
+  return {
+    code: 'real-gas-effect',
+    severity: Math.abs(percent) > 2 * REAL_GAS_DIFFERENCE_PERCENT ? 'warning' : 'caution',
+    message: idealAsked
+      ? `Sized on ideal gas as asked, but against ${eq} ideal gas ${direction}: size on a real-gas equation for a quote.`
+      : `Ideal gas ${direction}; the headline figures use ${eq}.`,
+  };
+}
+
+/** Compares the heater's ideal-gas duty with the real-gas one. */
+export function heaterValidity(common: ResolvedCommon, h: HeaterBlock): SizingWarning | null {
+  if (common.fluid) {
+    const d = h.idealGasDifferencePercent ?? 0;
+    if (Math.abs(d) <= REAL_GAS_DIFFERENCE_PERCENT) return null;
+    return differenceWarning('absorbed duty', false, NAMES[common.fluid.id], d);
+  }
+  const ref = referenceFluid(common);
+  if (!ref) return null;
+  try {
+    const p = common.inletPressurePa;
+    const a = gasState(ref, h.inletTemperatureC + 273.15, p);
+    const b = gasState(ref, h.outletTemperatureC + 273.15, p);
+    const real = (common.massFlowKgPerS * (b.enthalpyJPerMol - a.enthalpyJPerMol)) / ref.kgPerMol / 1000;
+    const d = ((h.absorbedDutyKw - real) / real) * 100;
+    return Math.abs(d) > REAL_GAS_DIFFERENCE_PERCENT
+      ? differenceWarning('absorbed duty', true, NAMES[ref.id], d)
+      : null;
+  } catch (err) {
+    if (err instanceof EosError || err instanceof ThermoRangeError) return null;
+    throw err;
+  }
+}
+
+// Largest discharge-temperature difference as a share of the stage's temperature rise, %.
+function temperatureDifference(ideal: CompressionMethodResult, real: CompressionMethodResult): number {
+  let worst = 0;
+  for (let i = 0; i < real.stages.length; i++) {
+    const r = real.stages[i]!;
+    const id = ideal.stages[i]!;
+    const rise = r.dischargeTemperatureC - r.inletTemperatureC;
+    const d = ((id.dischargeTemperatureC - r.dischargeTemperatureC) / rise) * 100;
+    if (Math.abs(d) > Math.abs(worst)) worst = d;
+  }
+  return worst;
+}
+
+/** Compares the compressor's ideal-gas (variable-cp) figures with the real-gas ones. */
+export function compressorValidity(common: ResolvedCommon, c: CompressorBlock, cc: CompressorCase): SizingWarning[] {
+  let real = c.realGas;
+  let eq = common.fluid ? NAMES[common.fluid.id] : '';
+  const idealAsked = !common.fluid;
+  if (!real) {
+    const ref = referenceFluid(common);
+    if (!ref) return [];
+    eq = NAMES[ref.id];
+    try {
+      const eff =
+        cc.isentropicEfficiency !== null
+          ? { isentropic: cc.isentropicEfficiency, polytropic: null }
+          : { isentropic: null, polytropic: cc.polytropicEfficiency ?? 1 };
+      real = runRealGasTrain(cc, ref, cc.stages, eff);
+    } catch (err) {
+      if (err instanceof EosError || err instanceof ThermoRangeError) return [];
+      throw err;
+    }
+  }
+  const ideal = c.basis === 'constant-k' ? c.constantK : c.variableCp;
+  const power = ((ideal.gasPowerKw - real.gasPowerKw) / real.gasPowerKw) * 100;
+  const temperature = temperatureDifference(ideal, real);
+  if (Math.abs(power) <= REAL_GAS_DIFFERENCE_PERCENT && Math.abs(temperature) <= REAL_GAS_DIFFERENCE_PERCENT) return [];
+  const detail = ` (discharge temperatures ${temperature > 0 ? 'higher' : 'lower'} by up to ${f1(Math.abs(temperature))} % of the temperature rise)`;
+  return [differenceWarning('gas power', idealAsked, eq, power, detail)];
+}

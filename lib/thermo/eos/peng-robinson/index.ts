@@ -1,0 +1,10 @@
+export { compilePengRobinson, type PengRobinsonBuildOptions, type PengRobinsonEquation } from './model';
+export { PengRobinsonComponents, componentsFor, criticalConstantsOf, type PengRobinsonOptions } from './components';
+export { prepareComposition, fractionsOf, type PreparedComposition, type SpeciesFractions } from './composition';
+export { lnFugacityCoefficients, newFugacityState, type FugacityState, type PhaseRoot } from './fugacity';
+export { solveCubic, newCubicRoots, lnPhiOfRoot, pickRoot, type CubicRoots } from './cubic';
+export { mixtureAttraction, type Attraction } from './attraction';
+export { interactionParameter, interactionParameterSource, INTERACTION_ROWS } from './binary-interaction';
+export { idealGasFromGasModel, idealGasOf, type IdealGasWithMass } from './ideal-gas';
+export { EosInputError } from './errors';
+export { CRITICAL_REDUCED_DENSITY, CRITICAL_Z, OMEGA_A, OMEGA_B, kappaOf } from './constants';
