@@ -8,8 +8,8 @@ import { systemOfUnits } from '@/lib/units';
 import { SizingDesk } from './_components/sizing-desk';
 import { defaultValues } from './_lib/defaults';
 import { valuesFromInput } from './_lib/from-request';
+import { loadDeskStart } from './_lib/load-desk';
 import { sitePressureOf } from './_lib/site-pressure';
-import { loadDeskStart } from './load-desk';
 
 export const metadata: Metadata = { title: 'Sizing desk' };
 

@@ -5,8 +5,8 @@ import { NotFoundError } from '@/lib/auth/guards';
 import { can } from '@/lib/auth/roles';
 import { sizingRequestSchema, type SizingInput } from '@/lib/engine';
 import { getSizing } from '@/lib/sizings/queries';
-import type { ReopenedSizing } from './_lib/account-types';
-import { decodeShareParam } from './_lib/share-link';
+import type { ReopenedSizing } from './account-types';
+import { decodeShareParam } from './share-link';
 
 export type DeskStart = { input: SizingInput | null; reopened: ReopenedSizing | null; notices: string[] };
 
