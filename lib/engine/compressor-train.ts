@@ -10,6 +10,7 @@ import {
   type StageState,
 } from './compression';
 import type { CompressionMethodResult, CompressorStage, CoolerResult } from './result-types';
+import { condensateLiquids, coolerSplit, liquidState, vapourGas } from './real-gas/condensation';
 import { idealPolytropic, stageRow } from './stage-row';
 
 // Imports used per call, re-bound to module constants once: under tsx's CommonJS output every use of an
@@ -81,40 +82,93 @@ function coolerDutyKw(c: TrainCase, method: Method, fromK: number, toK: number, 
   return (c.massFlowKgPerS * dh) / 1000;
 }
 
+/** What a cooler on ideal-gas properties does to the stream: duty, condensate and what goes on. */
+type IdealCooled = { cooler: CoolerResult; next: TrainCase };
+
+// Sensible duty on the method's own property model; when the outlet is below the dew point (Peng-Robinson
+// stability test and flash) the condensate's latent heat is added: its ideal-gas enthalpy minus its liquid
+// enthalpy from Peng-Robinson, and the vapour alone goes on to the next stage.
+function idealCooler(
+  c: TrainCase,
+  method: Method,
+  kind: CoolerResult['kind'],
+  fromK: number,
+  toK: number,
+  outletPa: number,
+  cpJPerKgK: number,
+): IdealCooled {
+  const sensible = coolerDutyKw(c, method, fromK, toK, cpJPerKgK);
+  const split = toK < fromK ? coolerSplit(c.gas, toK, outletPa) : null;
+  if (!split) return { cooler: dryCooler(kind, toK, outletPa, sensible), next: c };
+  const molPerS = c.massFlowKgPerS / (c.gas.molarMassKgPerKmol / 1000);
+  const liquidMolPerS = molPerS * (1 - split.vapourFraction);
+  let latentPerMol = 0;
+  let liquidKgPerMol = 0;
+  for (const liquid of condensateLiquids(split)) {
+    const { fluid, state } = liquidState(liquid.gas, 'peng-robinson', toK, outletPa);
+    latentPerMol -= liquid.share * state.enthalpyDepartureJPerMol;
+    liquidKgPerMol += liquid.share * fluid.kgPerMol;
+  }
+  const vapour = vapourGas(split);
+  const latentKw = (liquidMolPerS * latentPerMol) / 1000;
+  const cooler: CoolerResult = {
+    ...dryCooler(kind, toK, outletPa, sensible + latentKw),
+    latentDutyKw: latentKw,
+    condensateKgPerH: liquidMolPerS * liquidKgPerMol * 3600,
+    condensateMoleFractions: split.condensate as CoolerResult['condensateMoleFractions'],
+  };
+  const vapourKgPerS = molPerS * split.vapourFraction * (vapour.molarMassKgPerKmol / 1000);
+  return { cooler, next: { ...c, gas: vapour, massFlowKgPerS: vapourKgPerS } };
+}
+
 /** Full stage-by-stage result for one method. */
-export function runTrain(c: TrainCase, method: Method, stages: number, eta: number): CompressionMethodResult {
-  const ratio = stagePressureRatio(stages, c.suctionPressurePa, c.dischargePressurePa, c.interstageDropFraction);
+export function runTrain(suction: TrainCase, method: Method, stages: number, eta: number): CompressionMethodResult {
+  const ratio = stagePressureRatio(
+    stages,
+    suction.suctionPressurePa,
+    suction.dischargePressurePa,
+    suction.interstageDropFraction,
+  );
+  let c = suction;
   const out: CompressorStage[] = [];
   const intercoolerDutiesKw: number[] = [];
   let inletK = c.suctionTemperatureK;
   let inletPa = c.suctionPressurePa;
-  let workJPerKg = 0;
+  let gasPowerKw = 0;
   let coolerTotal = 0;
+  let condensateKgPerH = 0;
   let aftercoolerDutyKw: number | null = null;
   const s = newStageState();
   let computedForK = NaN;
   for (let i = 0; i < stages; i++) {
-    // Stages that start at the same temperature (same ratio and efficiency) give the same result.
+    // Stages that start at the same temperature (same gas, ratio and efficiency) give the same result.
     if (inletK !== computedForK) {
       runStage(c, method, inletK, ratio, eta, s);
       computedForK = inletK;
     }
     const dischargePa = i === stages - 1 ? c.dischargePressurePa : inletPa * ratio;
-    workJPerKg += s.workJPerKg;
-    let cooler: CoolerResult | null = null;
+    gasPowerKw += (c.massFlowKgPerS * s.workJPerKg) / 1000;
+    let cooled: IdealCooled | null = null;
     let nextK = inletK;
     if (i < stages - 1) {
       nextK = cooledK(c, s.dischargeK);
-      const duty = coolerDutyKw(c, method, s.dischargeK, nextK, s.cpJPerKgK);
-      intercoolerDutiesKw.push(duty);
-      coolerTotal += duty;
-      cooler = dryCooler('intercooler', nextK, dischargePa * (1 - c.interstageDropFraction), duty);
+      const outPa = dischargePa * (1 - c.interstageDropFraction);
+      cooled = idealCooler(c, method, 'intercooler', s.dischargeK, nextK, outPa, s.cpJPerKgK);
+      intercoolerDutiesKw.push(cooled.cooler.dutyKw);
+      coolerTotal += cooled.cooler.dutyKw;
     } else if (c.aftercoolerOutletTemperatureK !== null) {
       const outK = Math.min(c.aftercoolerOutletTemperatureK, s.dischargeK);
-      aftercoolerDutyKw = coolerDutyKw(c, method, s.dischargeK, outK, s.cpJPerKgK);
-      cooler = dryCooler('aftercooler', outK, dischargePa, aftercoolerDutyKw);
+      cooled = idealCooler(c, method, 'aftercooler', s.dischargeK, outK, dischargePa, s.cpJPerKgK);
+      aftercoolerDutyKw = cooled.cooler.dutyKw;
     }
-    out.push(idealStageRow(c, method, i + 1, ratio, inletK, inletPa, dischargePa, s, cooler));
+    out.push(idealStageRow(c, method, i + 1, ratio, inletK, inletPa, dischargePa, s, cooled?.cooler ?? null));
+    if (cooled) {
+      condensateKgPerH += cooled.cooler.condensateKgPerH;
+      if (cooled.next !== c) {
+        c = cooled.next;
+        computedForK = NaN;
+      }
+    }
     inletK = nextK;
     inletPa = dischargePa * (1 - c.interstageDropFraction);
   }
@@ -122,13 +176,13 @@ export function runTrain(c: TrainCase, method: Method, stages: number, eta: numb
   return {
     k: first.k,
     cpJPerKgK: first.cpJPerKgK,
-    gasPowerKw: (c.massFlowKgPerS * workJPerKg) / 1000,
-    specificWorkKjPerKg: workJPerKg / 1000,
+    gasPowerKw,
+    specificWorkKjPerKg: gasPowerKw / suction.massFlowKgPerS,
     stages: out,
     intercoolerDutiesKw,
     totalIntercoolerDutyKw: coolerTotal,
     aftercoolerDutyKw,
-    condensateKgPerH: 0,
+    condensateKgPerH,
     polytropicSteps: null,
   };
 }

@@ -3,7 +3,7 @@ import { DRY_AIR_SOURCE } from '../thermo/dry-air';
 import type { GasModel } from '../thermo/gas-model';
 import { GAS_PRESETS } from '../thermo/presets';
 import { SPECIES_IDS } from '../thermo/species-data';
-import { pseudoCritical } from './ideal-gas-check';
+import { pseudoCritical } from './pseudo-critical';
 import type { GasSummary } from './result-types';
 
 // One summary per compiled gas (gases are cached), frozen because results share it.

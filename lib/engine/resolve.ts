@@ -19,6 +19,7 @@ import type { SizingIssue } from './input-error';
 import { chooseEquation, outsideGerg, type EquationChoice } from './real-gas/equation-choice';
 import { compressibility, realFluid, type RealFluid } from './real-gas/fluid';
 import { checkInletPhase } from './real-gas/phase-check';
+import type { InletClassification } from '../thermo/phase';
 import type { BasisInfo } from './result-types';
 import type { GasInput, QuantityInput, SizingInput } from './schema';
 
@@ -40,6 +41,8 @@ const BAROMETRIC_RANGE_PA = [40_000, 110_000] as const;
 /** The state every sizing starts from, in SI units. */
 export type ResolvedCommon = {
   gas: GasModel;
+  /** The inlet's phase (gas or supercritical here; liquid and two-phase inlets are refused), with its dew point. */
+  inletClass: InletClassification;
   equation: EquationChoice;
   /** The real-gas equation compiled for the gas; null when ideal gas was asked for. */
   fluid: RealFluid | null;
@@ -153,7 +156,8 @@ export function resolveCommon(input: SizingInput, issues: SizingIssue[]): Resolv
     return null;
   }
   // A liquid or two-phase inlet is refused whatever equation was asked for, ideal gas included.
-  if (!checkInletPhase(gas, inletTemperatureK, inletPressurePa, issues)) return null;
+  const inletClass = checkInletPhase(gas, inletTemperatureK, inletPressurePa, issues);
+  if (!inletClass) return null;
   const fluid = equation.id === 'ideal-gas' ? null : realFluid(gas, equation.id);
   const zAt = fluid ? zFunction(fluid) : undefined;
   const inletZ = zAt ? zAt(inletTemperatureK, inletPressurePa) : 1;
@@ -174,6 +178,7 @@ export function resolveCommon(input: SizingInput, issues: SizingIssue[]): Resolv
   }
   return {
     gas,
+    inletClass,
     equation,
     fluid,
     zAt,

@@ -3,8 +3,8 @@ import type { GasModel } from '../thermo/gas-model';
 import { SUBDIVISION_LIMIT_A } from './electrical';
 import { gasWarnings, isFlammable } from './gas-warnings';
 import type { CompressorCase } from './compressor';
-import { condensationWarning, type GasState } from './ideal-gas-check';
-import { coolerWarnings, equationWarnings } from './real-gas/equation-warnings';
+import type { GasState } from './pseudo-critical';
+import { coolerWarnings, dewMarginWarning, equationWarnings } from './real-gas/equation-warnings';
 import { compressorValidity, heaterValidity } from './real-gas/validity';
 import type { ResolvedCommon } from './resolve';
 import type { CompressorBlock, CompressorStage, HeaterBlock, SizingWarning } from './result-types';
@@ -86,7 +86,7 @@ export function heaterWarnings(common: ResolvedCommon, h: HeaterBlock): SizingWa
     { label: 'heater outlet', temperatureK: h.outletTemperatureC + 273.15, pressurePa },
   ];
   const out: SizingWarning[] = [
-    ...present(condensationWarning(gas, states), heaterValidity(common, h)),
+    ...present(heaterValidity(common, h), dewMarginWarning(common)),
     ...equationWarnings(common, states),
     ...gasWarnings(gas),
   ];
@@ -171,7 +171,7 @@ export function compressorWarnings(common: ResolvedCommon, c: CompressorBlock, c
   const stages = headline.stages;
   const states = trainStates(stages);
   const out: SizingWarning[] = [
-    ...present(c.realGas ? null : condensationWarning(gas, states)),
+    ...present(dewMarginWarning(common)),
     ...compressorValidity(common, c, cc),
     ...equationWarnings(common, states),
     ...coolerWarnings(headline),

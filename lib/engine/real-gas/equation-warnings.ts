@@ -1,4 +1,4 @@
-import type { GasState } from '../ideal-gas-check';
+import type { GasState } from '../pseudo-critical';
 import type { ResolvedCommon } from '../resolve';
 import type { CompressionMethodResult, SizingWarning } from '../result-types';
 
@@ -87,4 +87,19 @@ export function coolerWarnings(method: CompressionMethodResult): SizingWarning[]
     });
   }
   return out;
+}
+
+/** Suction or heater inlets closer than this to their dew point are flagged [cp: a common design margin]. */
+export const DEW_MARGIN_K = 10;
+
+/** A caution when the inlet is a gas within 10 K of its dew point: a little cooling or a pressure swing condenses it. */
+export function dewMarginWarning(common: ResolvedCommon): SizingWarning | null {
+  const c = common.inletClass;
+  if (c.phase !== 'gas' || c.dewMarginK === undefined || c.dewPointK === undefined) return null;
+  if (c.dewMarginK >= DEW_MARGIN_K) return null;
+  return {
+    code: 'near-dew-point',
+    severity: 'warning',
+    message: `The inlet is only ${f1(c.dewMarginK)} K above its dew point (${f1(c.dewPointK - 273.15)} °C at ${f1(common.inletPressurePa / 1000)} kPa, Peng-Robinson): liquid can form with a little cooling or a pressure change upstream. Keep at least ${DEW_MARGIN_K} K of superheat, e.g. with a knock-out drum and a preheater.`,
+  };
 }

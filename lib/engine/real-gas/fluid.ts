@@ -32,12 +32,7 @@ export function realFluid(gas: GasModel, id: RealEquationId): RealFluid {
   const hit = entry[id];
   if (hit) return hit;
   const eos = compileEquation(id, gas);
-  let guide = eos;
-  try {
-    if (id !== 'peng-robinson') guide = realFluid(gas, 'peng-robinson').eos;
-  } catch {
-    guide = eos;
-  }
+  const guide = id === 'peng-robinson' ? eos : realFluid(gas, 'peng-robinson').eos;
   const fluid: RealFluid = { id, gas, eos, guide, kgPerMol: eos.molarMassKgPerKmol / 1000 };
   entry[id] = fluid;
   return fluid;

@@ -13,12 +13,16 @@ export const REAL_GAS_DIFFERENCE_PERCENT = 2;
 const f1 = (v: number) => v.toFixed(1);
 const NAMES = { 'gerg-2008': 'GERG-2008', 'peng-robinson': 'Peng-Robinson', 'ideal-gas': 'ideal gas' } as const;
 
-// The equation the engine would have chosen, for judging an ideal-gas request; null if it cannot be built.
+// The equation an ideal-gas request is judged against: Peng-Robinson, which is cheap and good to a fraction of
+// the 2 % threshold for most gases, but the engine's own choice where hydrogen or helium matter, which
+// Peng-Robinson gets wrong at pressure.
 function referenceFluid(common: ResolvedCommon): RealFluid | null {
-  const auto = chooseEquation(common.gas, undefined);
-  if (auto.id === 'ideal-gas') return null;
+  const x = common.gas.moleFractions;
+  const quantum = (x.H2 ?? 0) + (x.He ?? 0) >= 0.1;
+  const id = quantum ? chooseEquation(common.gas, undefined).id : 'peng-robinson';
+  if (id === 'ideal-gas') return null;
   try {
-    return realFluid(common.gas, auto.id);
+    return realFluid(common.gas, id);
   } catch {
     return null;
   }

@@ -33,14 +33,15 @@ const HEAVY_GAS = {
 };
 
 describe('heaters for gases with the heavier alkanes and H2S', () => {
-  const duty = { flow: q(5000, 'kg/h'), inlet: { temperature: q(15, 'degC'), pressure: q(5, 'barg') } };
+  // 60 °C keeps the gas above its dew point (about 43 °C at 6 bar by Peng-Robinson): a gas inlet.
+  const duty = { flow: q(5000, 'kg/h'), inlet: { temperature: q(60, 'degC'), pressure: q(5, 'barg') } };
 
   it('sizes a gas carrying n-C10H22 with finite figures and duty = m (h2 - h1)', () => {
     const r = heater({ ...duty, gas: { components: HEAVY_GAS }, outletTemperature: q(120, 'degC') });
     expect(allNumbersFinite(r)).toBe(true);
     expect(r.gas.moleFractions['n-C10H22']).toBeCloseTo(0.0005, 12);
     const gas = mixtureGas(r.gas.moleFractions);
-    const dhKw = ((5000 / 3600) * (enthalpyMass(gas, 393.15) - enthalpyMass(gas, 288.15))) / 1000;
+    const dhKw = ((5000 / 3600) * (enthalpyMass(gas, 393.15) - enthalpyMass(gas, 333.15))) / 1000;
     expect(r.heater.absorbedDutyKw).toBeCloseTo(dhKw, 6);
     expect(r.gas.molarMassKgPerKmol).toBeGreaterThan(19);
   });

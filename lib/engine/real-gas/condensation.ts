@@ -1,0 +1,63 @@
+import type { MoleFractions } from '../../thermo/composition';
+import { densityAt, newFluidState, stateAtDensity, type FluidState } from '../../thermo/eos/state';
+import type { GasModel } from '../../thermo/gas-model';
+import { flashCooler, type CoolerFlash } from '../../thermo/phase';
+import { mixtureGas } from '../../thermo/presets';
+import { realFluid, type RealEquationId, type RealFluid } from './fluid';
+
+/** Below this liquid share (moles per mole of feed) a cooler is taken as dry [cp: beyond any drain's resolution]. */
+const MIN_LIQUID_FRACTION = 1e-7;
+const MAX_ENTRIES = 2048;
+const cache = new Map<string, CoolerFlash | null>();
+
+/**
+ * The phase split at a cooler outlet by Peng-Robinson's stability test and flash, or null when nothing
+ * condenses. Cached by gas and state: trains and desks repeat the same coolers.
+ */
+export function coolerSplit(gas: GasModel, temperatureK: number, pressurePa: number): CoolerFlash | null {
+  const key = `${gas.key}|${temperatureK}|${pressurePa}`;
+  if (cache.has(key)) return cache.get(key)!;
+  if (cache.size >= MAX_ENTRIES) cache.clear();
+  const split = flashCooler(gas.moleFractions, temperatureK, pressurePa);
+  const wet = split.condensate !== null && 1 - split.vapourFraction > MIN_LIQUID_FRACTION && split.vapourFraction > 0;
+  const result = wet ? split : null;
+  cache.set(key, result);
+  return result;
+}
+
+/** One liquid of a condensate: its share of the condensate moles and its gas model. */
+export type CondensateLiquid = { share: number; gas: GasModel };
+
+/** The liquids a split leaves (one, or water and hydrocarbon apart). */
+export function condensateLiquids(split: CoolerFlash): CondensateLiquid[] {
+  if (split.condensatePhases) {
+    return split.condensatePhases.map((ph) => ({
+      share: ph.fractionOfCondensate,
+      gas: mixtureGas(ph.composition as MoleFractions, 'Condensate'),
+    }));
+  }
+  return [{ share: 1, gas: mixtureGas(split.condensate as MoleFractions, 'Condensate') }];
+}
+
+/** The gas leaving a knock-out drum. */
+export function vapourGas(split: CoolerFlash): GasModel {
+  return mixtureGas(split.vapour as MoleFractions, 'Vapour after knock-out');
+}
+
+/** A liquid state of `gas` at (T, p) on the given equation, started from Peng-Robinson's liquid root. */
+export function liquidState(
+  gas: GasModel,
+  id: RealEquationId,
+  temperatureK: number,
+  pressurePa: number,
+): {
+  fluid: RealFluid;
+  state: FluidState;
+} {
+  const fluid = realFluid(gas, id);
+  const guess = fluid.guide.residual.densityGuess(temperatureK, pressurePa, 'liquid');
+  const rho = densityAt(fluid.eos, temperatureK, pressurePa, 'liquid', guess);
+  const state = stateAtDensity(fluid.eos, temperatureK, rho, newFluidState());
+  state.pressurePa = pressurePa;
+  return { fluid, state };
+}
