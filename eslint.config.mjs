@@ -29,6 +29,18 @@ const config = [
       '@typescript-eslint/no-explicit-any': 'error',
       '@typescript-eslint/consistent-type-definitions': ['error', 'type'],
       'no-console': ['error', { allow: ['warn', 'error'] }],
+      // The local fakes stand in for hosted services in the demo and tests; product code never depends on them.
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              group: ['@/mocks/*', '**/mocks/**'],
+              message: 'mocks/ holds the local fakes: only tests/, db/ scripts and mocks/ itself may import them.',
+            },
+          ],
+        },
+      ],
     },
   },
   {
@@ -42,6 +54,11 @@ const config = [
     // Scripts, fakes and tests run outside Next and read their own process environment.
     files: ['lib/env.ts', 'db/**', 'mocks/**', 'tests/**', 'drizzle.config.ts', 'next.config.ts'],
     rules: { 'no-restricted-properties': 'off', 'no-console': 'off' },
+  },
+  {
+    // Tests, database scripts and the fakes themselves start and drive the fakes.
+    files: ['tests/**', 'db/**', 'mocks/**'],
+    rules: { 'no-restricted-imports': 'off' },
   },
 ];
 

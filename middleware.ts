@@ -1,8 +1,8 @@
 import { clerkMiddleware } from '@clerk/nextjs/server';
 import { NextResponse, type NextFetchEvent, type NextRequest } from 'next/server';
+import { LOCAL_SESSION_COOKIE, verifyLocalSession } from '@/lib/auth/local/session-token';
 import { clerkEnabled, env } from '@/lib/env';
 import { databaseUp } from '@/lib/ops/db-status';
-import { LOCAL_SESSION_COOKIE, verifyLocalSession } from '@/mocks/identity/session-token';
 
 // Coarse gate only: every page, action and handler checks the user and role again on the server.
 const protectedPrefixes = [
@@ -14,7 +14,6 @@ const protectedPrefixes = [
   '/billing',
   '/admin',
   '/batch',
-  '/settings',
   '/mail',
 ];
 

@@ -6,7 +6,7 @@ import type { CurrentUser } from '@/lib/auth/current-user';
 import { DEMO_PASSWORD } from '@/lib/auth/demo-users';
 import { createQuote, setQuoteStatus } from '@/lib/quotes/mutations';
 import { computeForSave, insertSizing } from '@/lib/sizings/save';
-import { hashPassword } from '@/mocks/identity/passwords';
+import { hashPassword } from '@/lib/auth/local/passwords';
 import { issueDatasheet } from '@/lib/datasheets/issue';
 import { seedAccounts, seedDatasheets, seedQuotes, seedSizings, seedUsers } from './seed-scenario';
 

@@ -2,9 +2,22 @@ import Link from 'next/link';
 import type { ReactNode } from 'react';
 import { signOutAction } from '@/app/(auth)/sign-in/actions';
 import type { CurrentUser } from '@/lib/auth/current-user';
-import { can, roleLabels } from '@/lib/auth/roles';
-import { deskNav } from './desk-nav';
+import { can, roleLabels, type Permission } from '@/lib/auth/roles';
 import { Logo } from './logo';
+
+type NavItem = { href: string; label: string; permission?: Permission };
+
+/** The signed-in shell's sections; each shows only to roles holding its permission. */
+const deskNav: NavItem[] = [
+  { href: '/size', label: 'Size' },
+  { href: '/sizings', label: 'Sizings', permission: 'sizing:read' },
+  { href: '/quotes', label: 'Quotes', permission: 'quote:read' },
+  { href: '/accounts', label: 'Accounts', permission: 'account:read' },
+  { href: '/datasheets', label: 'Datasheets', permission: 'datasheet:read' },
+  { href: '/support', label: 'Look-up', permission: 'support:search' },
+  { href: '/billing', label: 'Subscription', permission: 'billing:manage' },
+  { href: '/admin', label: 'People', permission: 'users:manage' },
+];
 
 /** The signed-in workspace frame: a left rail of sections and the page beside it. */
 export function DeskShell({ user, children }: { user: CurrentUser | null; children: ReactNode }) {

@@ -1,15 +1,15 @@
 import 'server-only';
-import { createHash, randomBytes } from 'node:crypto';
 import { and, eq, isNull, sql } from 'drizzle-orm';
+import { createHash, randomBytes } from 'node:crypto';
 import { db } from '@/db';
 import { accounts, invitations, memberships, users } from '@/db/schema';
 import { ActionError } from '@/lib/actions/define-action';
 import { writeAudit } from '@/lib/audit/write';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { assertAccountAccess } from '@/lib/auth/guards';
-import { env } from '@/lib/env';
+import { hashPassword } from '@/lib/auth/local/passwords';
 import { enqueueEmail } from '@/lib/email/enqueue';
-import { hashPassword } from '@/mocks/identity/passwords';
+import { env } from '@/lib/env';
 import type { AccountInput, InviteInput } from './schema';
 
 const INVITE_DAYS = 14;

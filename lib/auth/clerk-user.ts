@@ -4,7 +4,7 @@ import { db } from '@/db';
 import { users } from '@/db/schema';
 import { userRoles, type UserRole } from '@/db/schema/enums';
 import { writeAudit } from '@/lib/audit/write';
-import { loadUser, type CurrentUser } from './current-user';
+import { loadUser, type CurrentUser } from './load-user';
 
 /** Role from Clerk public metadata; anything unknown becomes a customer (least privilege). */
 export function roleFromMetadata(meta: unknown): UserRole {

@@ -12,8 +12,8 @@ import { addQuoteItems, createQuote } from '@/lib/quotes/mutations';
 import { insertSizings } from '@/lib/sizings/save';
 import { evaluateSheet, type BatchRow } from './evaluate';
 import type { BatchCells } from './row-to-request';
+import type { BatchTarget } from './schema';
 
-export type BatchTarget = { accountId: string; quoteId?: string; newQuoteTitle?: string };
 export type BatchSaved = {
   saved: number;
   skipped: number;

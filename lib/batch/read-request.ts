@@ -2,6 +2,7 @@ import 'server-only';
 import { z } from 'zod';
 import { ActionError } from '@/lib/actions/define-action';
 import { BATCH_MAX_ROWS, parseBatchCsv, type ParsedSheet } from './evaluate';
+import { batchTargetSchema, type BatchTarget } from './schema';
 import { checkUpload, looksLikeText } from './upload-limits';
 
 const cellsSchema = z.array(z.record(z.string().max(40), z.string().max(400))).max(BATCH_MAX_ROWS);
@@ -42,6 +43,16 @@ export async function readBatchRequest(req: Request): Promise<BatchUpload> {
     file: { name: file.name.slice(0, 200), type: file.type || 'text/csv', bytes },
     target: typeof target === 'string' ? target : null,
   };
+}
+
+/** Reads the request's "target" field (JSON) as a BatchTarget; a 400 naming the field when it is missing or wrong. */
+export function parseBatchTarget(raw: string | null): BatchTarget {
+  const parsed = batchTargetSchema.safeParse(raw ? safeJson(raw) : null);
+  if (!parsed.success)
+    throw new ActionError('Say where to save: the "target" field needs a customer account.', 400, {
+      target: parsed.error.issues.map((i) => i.message),
+    });
+  return parsed.data;
 }
 
 function safeJson(text: string): unknown {

@@ -83,13 +83,13 @@ export function rowToRequest(cells: BatchCells): {
   }
   const gas = parseGas(cells.gas ?? '', problems);
   if (gas) request.gas = { ...((request.gas as object) ?? {}), ...gas };
-  for (const [value, unit] of [
-    ['flow', 'flow'],
-    ['inlet.temperature', 'inlet_temperature'],
-    ['inlet.pressure', 'inlet_pressure'],
-    ['outletTemperature', 'outlet_temperature'],
-    ['dischargePressure', 'discharge_pressure'],
-    ['intercoolerOutletTemperature', 'intercooler_outlet_temperature'],
+  for (const unit of [
+    'flow',
+    'inlet_temperature',
+    'inlet_pressure',
+    'outlet_temperature',
+    'discharge_pressure',
+    'intercooler_outlet_temperature',
   ] as const) {
     const hasValue = (cells[`${unit}_value`] ?? '').trim() !== '';
     const hasUnit = (cells[`${unit}_unit`] ?? '').trim() !== '';
@@ -98,7 +98,6 @@ export function rowToRequest(cells: BatchCells): {
         column: `${unit}_unit`,
         message: `give the unit for ${unit.replace(/_/g, ' ')} (the value ${cells[`${unit}_value`]} has none)`,
       });
-    void value;
   }
   return { request, meta: meta as { title: string; equipmentTag?: string; notes?: string }, problems };
 }

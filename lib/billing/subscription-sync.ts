@@ -39,7 +39,7 @@ export async function storeSubscription(
   accountId: string,
   sub: Stripe.Subscription,
   eventCreated: number,
-): Promise<{ previousStatus: string | null }> {
+): Promise<void> {
   const customer = typeof sub.customer === 'string' ? sub.customer : (sub.customer?.id ?? null);
   const [prev] = await tx
     .select({ status: subscriptions.status })
@@ -79,5 +79,4 @@ export async function storeSubscription(
       detail: { subscription: sub.id, from: prev?.status ?? null, to: sub.status },
     });
   }
-  return { previousStatus: prev?.status ?? null };
 }

@@ -58,7 +58,7 @@ export async function applyStripeEvent(event: Stripe.Event): Promise<'applied' |
     if (!sub) return 'applied';
     const accountId = await accountIdFor(tx, sub, hint);
     if (!accountId) throw new Error(`no Dutywise account for subscription ${sub.id}`);
-    const { previousStatus } = await storeSubscription(tx, accountId, sub, event.created);
+    await storeSubscription(tx, accountId, sub, event.created);
     const [acct] = await tx
       .select({ name: accounts.name, email: accounts.billingContactEmail })
       .from(accounts)
@@ -91,7 +91,6 @@ export async function applyStripeEvent(event: Stripe.Event): Promise<'applied' |
         });
       }
     }
-    void previousStatus;
     return 'applied';
   });
 }

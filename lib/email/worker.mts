@@ -8,7 +8,7 @@ import type { PoolClient } from 'pg';
 import { pool } from '@/db';
 import { logger } from '@/lib/log/logger';
 import { drainOutbox } from './drain';
-import { sweepOrphanBlobs } from '@/lib/blob/sweep';
+import { sweepOrphanBlobs } from '@/lib/blob';
 import { env } from '@/lib/env';
 import { outboxChannel } from './enqueue';
 

@@ -32,6 +32,8 @@ export const M3_PER_FT3 = 0.028316846592;
 export const W_PER_HP = 550 * 0.3048 * KG_PER_LB * STANDARD_GRAVITY;
 /** 1 Btu_IT/h = 0.2930711 W [pub: NIST SP 811]. */
 export const W_PER_BTU_PER_H = 1055.05585262 / 3600;
+/** J/(kg K) per Btu/(lb °F), exact [pub: NIST SP 811 (2008), B.8, International Table Btu]. */
+export const J_PER_KG_K_PER_BTU_PER_LB_F = 4186.8;
 
 /**
  * Linear map unit -> kelvin (K = slope * value + offset), taken from convert-units over a 1000-degree

@@ -24,7 +24,16 @@ export {
   type UnitListKind,
 } from './unit-strings';
 export { UnitError } from './unit-error';
-export { KG_PER_LB, M3_PER_FT3, PA_PER_BAR, PA_PER_KPA, PA_PER_PSI, W_PER_BTU_PER_H, W_PER_HP } from './factors';
+export {
+  J_PER_KG_K_PER_BTU_PER_LB_F,
+  KG_PER_LB,
+  M3_PER_FT3,
+  PA_PER_BAR,
+  PA_PER_KPA,
+  PA_PER_PSI,
+  W_PER_BTU_PER_H,
+  W_PER_HP,
+} from './factors';
 export { temperatureFromK, temperatureToK } from './temperature';
 export { STANDARD_ATMOSPHERE_PA, isGaugePressureUnit, pressureFromPa, pressureToPa } from './pressure';
 export {
@@ -37,3 +46,4 @@ export {
 export { powerFromW, powerToW } from './power';
 export { STANDARD_FLOW_BASES, flowFromKgPerS, flowToKgPerS, type FlowContext, type StandardFlowBasis } from './flow';
 export { SI_UNIT_BY_KIND, convertQuantity, fromSi, toSi, type ConversionContext, type QuantityKind } from './quantity';
+export { SYSTEM_UNITS, systemOfUnits, unitLabel, type UnitFamily, type UnitSystem } from './unit-systems';

@@ -7,7 +7,7 @@ import { writeAudit } from '@/lib/audit/write';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { AuthError } from '@/lib/auth/guards';
 import { can, roleLabels } from '@/lib/auth/roles';
-import type { UserDisableInput, UserRoleChangeInput } from './schema';
+import type { UnitSystemInput, UserDisableInput, UserRoleChangeInput } from './schema';
 
 function assertManager(actor: CurrentUser): void {
   if (!can(actor.role, 'users:manage')) throw new AuthError(403, 'Your role does not allow this.');
@@ -107,4 +107,10 @@ export async function setUserDisabled(actor: CurrentUser, input: UserDisableInpu
     });
     return { changed: true };
   });
+}
+
+/** Stores the signed-in user's unit system; the desk opens in it next time. */
+export async function setUnitSystem(user: CurrentUser, input: UnitSystemInput): Promise<UnitSystemInput> {
+  await db.update(users).set({ unitSystem: input.unitSystem, updatedAt: new Date() }).where(eq(users.id, user.id));
+  return { unitSystem: input.unitSystem };
 }

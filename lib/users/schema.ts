@@ -20,3 +20,8 @@ export const userDisableSchema = z.object({
   disabled: z.boolean({ message: 'Say whether the user is disabled (true) or enabled (false).' }),
 });
 export type UserDisableInput = z.output<typeof userDisableSchema>;
+
+export const unitSystemSchema = z.object({
+  unitSystem: z.enum(['si', 'us'], { error: 'Unit system must be "si" or "us".' }),
+});
+export type UnitSystemInput = z.output<typeof unitSystemSchema>;

@@ -1,6 +1,7 @@
 import { createServer, type IncomingMessage, type Server, type ServerResponse } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { renderInboxPage } from './inbox-page';
+import { inboxLimit, inboxView } from './inbox-view';
 import type { MessageStore, StoredMessage } from './message-store';
 
 export type InboxApi = { port: number; close(): Promise<void> };
@@ -35,6 +36,8 @@ function handle(req: IncomingMessage, res: ServerResponse, store: MessageStore, 
       .filter((m) => !to || [...m.to, ...m.cc, ...m.envelope.to].some((a) => a.toLowerCase() === to));
     return sendJson(res, 200, { data: messages.map(summary) });
   }
+  if (method === 'GET' && path === '/inbox')
+    return sendJson(res, 200, inboxView(store.list(), inboxLimit(url.searchParams.get('limit'))));
   if (method === 'DELETE' && path === '/messages') return sendJson(res, 200, { deleted: store.clear() });
   if (method === 'GET' && one) {
     const message = store.get(one[1] ?? '');
@@ -57,7 +60,7 @@ function handle(req: IncomingMessage, res: ServerResponse, store: MessageStore, 
     return;
   }
   sendJson(res, 404, {
-    error: `No route ${method} ${url.pathname}. Try GET /messages, GET /messages/:id, DELETE /messages, GET /health.`,
+    error: `No route ${method} ${url.pathname}. Try GET /messages, GET /messages/:id, GET /inbox, DELETE /messages, GET /health.`,
   });
 }
 

@@ -1,6 +1,12 @@
 import path from 'node:path';
 import { expect, test, type Page } from '@playwright/test';
-import { fixed, formatA, formatKw, formatRating, showTemperature } from '@/lib/desk/format';
+import {
+  fixed,
+  formatA,
+  formatKw,
+  formatRating,
+  showTemperature,
+} from '@/app/_components/sizing-result/quantity-format';
 import { DEMO_PASSWORD } from '@/lib/auth/demo-users';
 import { calculate, type SizingRequest } from '@/lib/engine';
 import { convertQuantity } from '@/lib/units';

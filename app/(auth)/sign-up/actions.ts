@@ -1,8 +1,8 @@
 'use server';
 
-import { ActionError, fieldErrorsOf, type ActionResult } from '@/lib/actions/define-action';
 import { signUpCustomer } from '@/lib/accounts/mutations';
-import { startLocalSession } from '@/lib/auth/local-session';
+import { ActionError, fieldErrorsOf, type ActionResult } from '@/lib/actions/define-action';
+import { startLocalSession } from '@/lib/auth/local/session';
 import { signUpSchema } from '@/lib/auth/schema';
 import { clerkEnabled } from '@/lib/env';
 import { logger } from '@/lib/log/logger';

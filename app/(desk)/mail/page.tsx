@@ -3,12 +3,12 @@ import { EmptyState } from '@/app/_components/empty-state';
 import { formatDateTime } from '@/app/_components/format';
 import { PageBody, PageHeader, Section } from '@/app/_components/page-header';
 import { requirePageUser } from '@/lib/auth/guards';
-import { readFakeInbox, type FakeInboxMessage } from '@/lib/email/fake-inbox';
+import { readDemoInbox, type DemoInboxMessage } from '@/lib/email/demo-inbox';
 
 export const metadata: Metadata = { title: 'Demo mail inbox' };
 export const dynamic = 'force-dynamic';
 
-function MessageItem({ m }: { m: FakeInboxMessage }) {
+function MessageItem({ m }: { m: DemoInboxMessage }) {
   return (
     <li className="border-t border-paper-line py-3 first:border-t-0" data-testid="mail-message">
       <div className="flex flex-wrap items-baseline justify-between gap-2">
@@ -32,7 +32,7 @@ function MessageItem({ m }: { m: FakeInboxMessage }) {
 // The demo's window on the local SMTP fake: what Dutywise would have delivered to people's mailboxes.
 export default async function MailPage() {
   await requirePageUser('/mail', 'audit:read');
-  const inbox = await readFakeInbox();
+  const inbox = await readDemoInbox();
   return (
     <PageBody>
       <PageHeader

@@ -2,6 +2,7 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { EmptyState } from '@/app/_components/empty-state';
 import { PageBody, PageHeader } from '@/app/_components/page-header';
+import { QuotesTable } from '@/app/_components/quotes/quotes-table';
 import { firstParam, type SearchParams } from '@/app/_components/route-guards';
 import { buttonLinkClass } from '@/app/_components/submit-button';
 import { listAccountOptions } from '@/lib/accounts/queries';
@@ -10,7 +11,6 @@ import { can, isStaff } from '@/lib/auth/roles';
 import { listQuotes } from '@/lib/quotes/queries';
 import { quoteFilterSchema } from '@/lib/quotes/schema';
 import { QuoteFilters } from './_components/quote-filters';
-import { QuotesTable } from './_components/quotes-table';
 
 export const metadata: Metadata = { title: 'Quotes' };
 

@@ -2,9 +2,10 @@
 
 import { revalidatePath } from 'next/cache';
 import { defineAction } from '@/lib/actions/define-action';
-import { setUnitSystem, unitSystemSchema } from '@/lib/desk/preferences';
 import { saveSizing } from '@/lib/sizings/save';
 import { saveSizingSchema } from '@/lib/sizings/schema';
+import { setUnitSystem } from '@/lib/users/mutations';
+import { unitSystemSchema } from '@/lib/users/schema';
 
 /** Saves the desk's input with its title, tag and notes to an account (and a draft quote); the engine recomputes it. */
 export const saveSizingAction = defineAction(

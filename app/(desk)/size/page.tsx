@@ -1,15 +1,15 @@
 import type { Metadata } from 'next';
 import { firstParam, type SearchParams } from '@/app/_components/route-guards';
 import { listAccountOptions } from '@/lib/accounts/queries';
-import { defaultValues } from '@/lib/desk/defaults';
-import { valuesFromInput } from '@/lib/desk/from-request';
-import { sitePressureOf } from '@/lib/desk/site-pressure';
-import { systemOfUnits } from '@/lib/desk/unit-systems';
 import { getCurrentUser } from '@/lib/auth/current-user';
 import { can, isStaff, roleLabels } from '@/lib/auth/roles';
 import { listOpenQuotes } from '@/lib/quotes/queries';
+import { systemOfUnits } from '@/lib/units';
 import { SizingDesk } from './_components/sizing-desk';
-import { loadDeskStart } from './load-desk';
+import { defaultValues } from './_lib/defaults';
+import { valuesFromInput } from './_lib/from-request';
+import { loadDeskStart } from './_lib/load-desk';
+import { sitePressureOf } from './_lib/site-pressure';
 
 export const metadata: Metadata = { title: 'Sizing desk' };
 

@@ -2,11 +2,11 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { EmptyState } from '@/app/_components/empty-state';
 import { PageBody, PageHeader } from '@/app/_components/page-header';
+import { SizingsTable } from '@/app/_components/sizings/sizings-table';
 import { buttonLinkClass } from '@/app/_components/submit-button';
 import { requirePageUser } from '@/lib/auth/guards';
 import { can, isStaff } from '@/lib/auth/roles';
 import { listSizings } from '@/lib/sizings/queries';
-import { SizingsTable } from './_components/sizings-table';
 
 export const metadata: Metadata = { title: 'Sizings' };
 

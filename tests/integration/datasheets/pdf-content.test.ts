@@ -79,7 +79,8 @@ describe('a datasheet carries the engine figures of its sizing', () => {
     const { issued, result, text } = await issuedText('compressor');
     const c = (result as CompressorResult).compressor;
     expect(text).toContain(`${issued.number} Rev. A`);
-    // Two ideal stages with intercooling: 203.8 kJ/kg and 101.9 kJ/kg removed [calc; ENGINEERING.md].
+    // Two ideal stages with intercooling: 203.8 kJ/kg and 101.9 kJ/kg removed [calc: w = cp T1 (r^((k-1)/k) - 1)
+    // per stage with k 1.4, cp 1.005 kJ/(kg K), the air values of the standard thermodynamics texts [mem]].
     expect(c.variableCp.specificWorkKjPerKg).toBeCloseTo(203.8, 0);
     expect(c.variableCp.totalIntercoolerDutyKw / result.massFlowKgPerS).toBeCloseTo(101.9, 0);
     for (const st of c.variableCp.stages) {

@@ -1,7 +1,7 @@
 // Invented duty points for datasheet tests, chosen so the engine's answer can also be held against
 // published check values (see the source named beside each).
 export const nitrogenHeater = {
-  // N2, 1000 kg/h, 20 -> 300 °C absorbs 81.68 kW [calc from NASA TM-4513 polynomials; ENGINEERING.md check table].
+  // N2, 1000 kg/h, 20 -> 300 °C absorbs 81.68 kW [calc from the NASA TM-4513 polynomials (McBride et al. 1993)].
   service: 'heater',
   gas: { preset: 'nitrogen' },
   flow: { value: 1000, unit: 'kg/h' },
@@ -14,7 +14,8 @@ export const nitrogenHeater = {
 
 export const airTwoStage = {
   // Air from 293.15 K, overall ratio 8, ideal stages with intercooling back to 293.15 K:
-  // 203.8 kJ/kg in two stages with 101.9 kJ/kg intercooling [calc; ENGINEERING.md compressor check].
+  // 203.8 kJ/kg in two stages with 101.9 kJ/kg intercooling [calc: w = cp T1 (r^((k-1)/k) - 1) per stage,
+  // k 1.4 and cp 1.005 kJ/(kg K) for air from the standard thermodynamics texts [mem]].
   service: 'compressor',
   gas: { preset: 'air' },
   flow: { value: 900, unit: 'Nm3/h' },

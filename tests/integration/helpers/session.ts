@@ -1,6 +1,6 @@
 import { vi } from 'vitest';
 import { env } from '@/lib/env';
-import { LOCAL_SESSION_COOKIE, signLocalSession } from '@/mocks/identity/session-token';
+import { LOCAL_SESSION_COOKIE, signLocalSession } from '@/lib/auth/local/session-token';
 
 // Server actions read the session from next/headers; outside a request the test supplies the cookie jar.
 const jar = new Map<string, string>();

@@ -84,6 +84,22 @@ describe('SMTP fake', () => {
     expect((await getJson<{ error: string }>('/messages/nope')).status).toBe(404);
   });
 
+  it('serves the demo inbox view: newest first, with text, capped by ?limit=', async () => {
+    for (const subject of ['first', 'second', 'third'])
+      await transportTo(fake.smtpPort).sendMail({ ...datasheetMail, subject });
+    type View = { total: number; messages: { id: string; subject: string; text: string | null; htmlPath: string }[] };
+    const all = await getJson<View>('/inbox');
+    expect(all.body.total).toBe(3);
+    expect(all.body.messages.map((m) => m.subject)).toEqual(['third', 'second', 'first']);
+    expect(all.body.messages[0]?.text?.trim()).toBe(datasheetMail.text);
+    const html = await fetch(`${fake.httpUrl}${all.body.messages[0]?.htmlPath}`);
+    expect(await html.text()).toContain('<strong>DS-0042</strong>');
+    const two = await getJson<View>('/inbox?limit=2');
+    expect(two.body).toMatchObject({ total: 3 });
+    expect(two.body.messages.map((m) => m.subject)).toEqual(['third', 'second']);
+    expect((await getJson<View>('/inbox?limit=zero')).body.messages).toHaveLength(3);
+  });
+
   it('lists mail on an HTML page with subjects escaped', async () => {
     await transportTo(fake.smtpPort).sendMail({ ...datasheetMail, subject: 'Quote <Q-7> & terms' });
     const page = await (await fetch(`${fake.httpUrl}/`)).text();

@@ -9,7 +9,7 @@ import { memberships, users } from '@/db/schema';
 import { inviteMember } from '@/lib/accounts/mutations';
 import { env } from '@/lib/env';
 import { getInvitationPreview } from '@/lib/users/invitation-preview';
-import { LOCAL_SESSION_COOKIE, verifyLocalSession } from '@/mocks/identity/session-token';
+import { LOCAL_SESSION_COOKIE, verifyLocalSession } from '@/lib/auth/local/session-token';
 import { makeAccount, makeUser } from '../helpers/fixtures';
 import { actAs, currentCookie } from '../helpers/session';
 

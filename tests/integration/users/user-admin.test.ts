@@ -4,7 +4,7 @@ import '../helpers/session';
 import { changeUserRoleAction, setUserDisabledAction } from '@/app/(desk)/admin/actions';
 import { db } from '@/db';
 import { auditLog, users } from '@/db/schema';
-import { loadUser } from '@/lib/auth/current-user';
+import { loadUser } from '@/lib/auth/load-user';
 import { AuthError } from '@/lib/auth/guards';
 import { changeUserRole, setUserDisabled } from '@/lib/users/mutations';
 import { listUsers } from '@/lib/users/queries';

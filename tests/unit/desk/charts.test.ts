@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { stageChart } from '@/lib/desk/charts/compressor-stages';
-import { AVERAGE_CP_SPAN_K, heaterCpChart } from '@/lib/desk/charts/heater-cp';
-import { stageSweep } from '@/lib/desk/charts/stage-sweep';
+import { stageChart } from '@/app/_components/sizing-result/charts/compressor-stages';
+import { AVERAGE_CP_SPAN_K, heaterCpChart } from '@/app/_components/sizing-result/charts/heater-cp';
+import { stageSweep } from '@/app/_components/sizing-result/charts/stage-sweep';
 import { calculate, compressorRequestSchema, type SizingRequest } from '@/lib/engine';
 import { compressorRequest, heaterRequest } from './fixtures';
 
@@ -74,7 +74,8 @@ describe('compressor charts', () => {
     }
   });
 
-  it('reproduces the one- and two-stage work of air at r = 8 [calc, ENGINEERING check values: 239.1 and 203.8 kJ/kg]', () => {
+  // 239.1 and 203.8 kJ/kg [calc: w = cp T1 (r^((k-1)/k) - 1) per stage, k 1.4, cp 1.005 kJ/(kg K)].
+  it('reproduces the one- and two-stage work of air at r = 8', () => {
     const input = compressorRequestSchema.parse({
       service: 'compressor',
       gas: { preset: 'air' },

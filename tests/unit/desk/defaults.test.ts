@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { defaultValues } from '@/lib/desk/defaults';
-import { valuesFromInput } from '@/lib/desk/from-request';
-import { toRequest } from '@/lib/desk/to-request';
-import { systemOfUnits } from '@/lib/desk/unit-systems';
-import { validateDesk } from '@/lib/desk/validate';
+import { defaultValues } from '@/app/(desk)/size/_lib/defaults';
+import { valuesFromInput } from '@/app/(desk)/size/_lib/from-request';
+import { toRequest } from '@/app/(desk)/size/_lib/to-request';
+import { systemOfUnits } from '@/lib/units';
+import { validateDesk } from '@/app/(desk)/size/_lib/validate';
 import { calculate, sizingRequestSchema } from '@/lib/engine';
 import { compressorRequest, heaterRequest } from './fixtures';
 

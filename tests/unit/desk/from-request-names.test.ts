@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { valuesFromInput } from '@/lib/desk/from-request';
-import { toRequest } from '@/lib/desk/to-request';
+import { valuesFromInput } from '@/app/(desk)/size/_lib/from-request';
+import { toRequest } from '@/app/(desk)/size/_lib/to-request';
 import { calculate, sizingRequestSchema } from '@/lib/engine';
 import { compressorRequest } from './fixtures';
 

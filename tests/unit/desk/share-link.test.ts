@@ -1,6 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { sizingRequestSchema } from '@/lib/engine';
-import { MAX_SHARE_PARAM_CHARS, decodeShareParam, encodeShareParam, sharePath } from '@/lib/desk/share-link';
+import {
+  MAX_SHARE_PARAM_CHARS,
+  decodeShareParam,
+  encodeShareParam,
+  sharePath,
+} from '@/app/(desk)/size/_lib/share-link';
 import { compressorRequest, heaterRequest } from './fixtures';
 
 const b64url = (text: string) => Buffer.from(text, 'utf8').toString('base64url');

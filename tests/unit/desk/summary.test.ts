@@ -1,7 +1,13 @@
 import { describe, expect, it } from 'vitest';
-import { fixed, formatA, formatKw, formatRating, showTemperature } from '@/lib/desk/format';
-import { buildSummary } from '@/lib/desk/summary';
-import { motorText } from '@/lib/desk/summary-compressor';
+import {
+  fixed,
+  formatA,
+  formatKw,
+  formatRating,
+  showTemperature,
+} from '@/app/_components/sizing-result/quantity-format';
+import { buildSummary } from '@/app/(desk)/size/_lib/summary';
+import { motorText } from '@/app/(desk)/size/_lib/summary-compressor';
 import { calculate } from '@/lib/engine';
 import { compressorRequest, heaterRequest } from './fixtures';
 

@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { switchUnitValue, type SwitchContext } from '@/lib/desk/convert';
-import { defaultValues } from '@/lib/desk/defaults';
-import { QUANTITY_FIELDS, type QuantityPath } from '@/lib/desk/form-types';
-import { quantityAt, switchContextOf, switchUnitSystem } from '@/lib/desk/switch-system';
-import { UNIT_GROUPS } from '@/lib/desk/unit-systems';
+import { switchUnitValue, type SwitchContext } from '@/app/(desk)/size/_lib/convert';
+import { defaultValues } from '@/app/(desk)/size/_lib/defaults';
+import { QUANTITY_FIELDS, type QuantityPath } from '@/app/(desk)/size/_lib/form-types';
+import { quantityAt, switchContextOf, switchUnitSystem } from '@/app/(desk)/size/_lib/switch-system';
+import { UNIT_GROUPS } from '@/app/(desk)/size/_lib/unit-pickers';
 import { toSi, type QuantityKind } from '@/lib/units';
 
 const atm: SwitchContext = { barometricPressurePa: 101_325, flow: null };
@@ -34,7 +34,8 @@ describe('switching one field keeps the physical value', () => {
     expect(n(switchUnitValue('flow', '2', 't/h', 'kg/h', atm))).toBe(2000);
   });
 
-  it('standard volume: 1 SCFM (60 °F, 14.696 psia) is 1.6075 Nm³/h [calc, ENGINEERING check values]', () => {
+  // [calc: ideal gas; ft3 and psi per NIST SP 811; 0 °C, 101.325 kPa per DIN 1343; 60 °F, 14.696 psia [cp]].
+  it('standard volume: 1 SCFM (60 °F, 14.696 psia) is 1.6075 Nm³/h', () => {
     expect(n(switchUnitValue('flow', '1', 'SCFM', 'Nm3/h', airCtx))).toBeCloseTo(1.6075, 3);
   });
 

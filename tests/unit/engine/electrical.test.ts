@@ -3,7 +3,7 @@ import { CONTINUOUS_LOAD_FACTOR, calculate, continuousCurrentA, lineCurrentA, ty
 import { heaterRequest, q } from './requests';
 
 describe('line current of a balanced resistive load', () => {
-  // I = P / (√3 V): 100 kW is 144.3 A at 400 V and 120.3 A at 480 V [calc, ENGINEERING.md].
+  // I = P / (√3 V): 100 kW is 144.3 A at 400 V and 120.3 A at 480 V [calc: balanced three-phase power P = √3 V I].
   it('100 kW three-phase: 144.3 A at 400 V, 120.3 A at 480 V', () => {
     expect(lineCurrentA(100, 400, 3)).toBeCloseTo(144.3, 1);
     expect(lineCurrentA(100, 480, 3)).toBeCloseTo(120.3, 1);

@@ -15,7 +15,7 @@ import { heaterRequest, q } from './requests';
 const heater = (overrides: Record<string, unknown> = {}) => calculate(heaterRequest(overrides)) as HeaterResult;
 
 describe('heater duty', () => {
-  // N2, 1000 kg/h, 20 -> 300 °C: 81.68 kW [calc from NASA polynomials, ENGINEERING.md].
+  // N2, 1000 kg/h, 20 -> 300 °C: 81.68 kW [calc from the NASA TM-4513 polynomials (McBride et al. 1993)].
   it('nitrogen 1000 kg/h from 20 to 300 °C absorbs 81.68 kW', () => {
     const r = heater({ gas: { preset: 'nitrogen' }, flow: q(1000, 'kg/h'), outletTemperature: q(300, 'degC') });
     expect(r.heater.absorbedDutyKw).toBeCloseTo(81.68, 2);
@@ -46,7 +46,8 @@ describe('heater duty', () => {
     expect(Math.abs(r.heater.absorbedDutyKw / (dhPerKgDry / (1 + w)) - 1)).toBeLessThan(0.005);
   });
 
-  // With cp at the mean temperature the shortcut is within about 0.5 % for a 200 K rise [calc, ENGINEERING.md].
+  // With cp at the mean temperature the shortcut is within about 0.5 % for a 200 K rise [calc from the NASA
+  // TM-4513 polynomials: cp at the mean temperature against the integrated enthalpy rise].
   it.each(['air', 'oxygen', 'carbon-dioxide', 'methane', 'propane'])(
     '%s: average-cp estimate within 0.5 %% for 300 -> 500 K',
     (gas) => {

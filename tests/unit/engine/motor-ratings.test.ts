@@ -2,14 +2,14 @@ import { describe, expect, it } from 'vitest';
 import { IEC_MOTOR_RATINGS_KW, NEMA_MOTOR_RATINGS_HP, selectMotor } from '@/lib/engine';
 
 describe('standard motor ratings', () => {
-  // IEC 60072-1 kW series [mem, ENGINEERING.md].
+  // IEC 60072-1 kW series [mem: IEC 60072-1 rated outputs].
   it.each([0.75, 1.1, 5.5, 18.5, 37, 75, 132, 315, 355, 1000])('%f kW is in the IEC series', (kw) => {
     expect(IEC_MOTOR_RATINGS_KW).toContain(kw);
   });
   it.each([1.2, 6, 100, 125, 300])('%f kW is not an IEC rating', (kw) =>
     expect(IEC_MOTOR_RATINGS_KW).not.toContain(kw),
   );
-  // NEMA MG 1 hp series [mem, ENGINEERING.md].
+  // NEMA MG 1 hp series [mem: NEMA MG 1 standard horsepower ratings].
   it.each([1, 1.5, 7.5, 25, 60, 125, 350, 500])('%f hp is in the NEMA series', (hp) =>
     expect(NEMA_MOTOR_RATINGS_HP).toContain(hp),
   );

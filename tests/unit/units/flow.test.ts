@@ -11,7 +11,9 @@ const atInlet = (temperatureK: number, pressurePa: number): FlowContext => ({
 });
 
 describe('standard and actual volume flow', () => {
-  // 1 SCFM (60 °F, 14.696 psia) = 1.6075 Nm3/h (0 °C, 101.325 kPa) [calc, ENGINEERING.md].
+  // 1 SCFM (60 °F, 14.696 psia) = 1.6075 Nm3/h (0 °C, 101.325 kPa) [calc: ideal gas; 1 ft3 = 0.028316846592 m3
+  // and 1 psi = 6894.757 Pa (NIST SP 811); normal conditions 0 °C, 101.325 kPa (DIN 1343, ISO 13443);
+  // 60 °F, 14.696 psia the US gas-industry standard condition [cp]].
   it('1 SCFM is 1.6075 Nm3/h', () => {
     const kgPerS = flowToKgPerS(1, 'SCFM', atInlet(300, 1e5));
     expect(flowFromKgPerS(kgPerS, 'Nm3/h', atInlet(300, 1e5))).toBeCloseTo(1.6075, 4);

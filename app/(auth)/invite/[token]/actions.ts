@@ -1,9 +1,9 @@
 'use server';
 
-import { ActionError, fieldErrorsOf, type ActionResult } from '@/lib/actions/define-action';
 import { acceptInvitation } from '@/lib/accounts/mutations';
 import { acceptInviteSchema } from '@/lib/accounts/schema';
-import { startLocalSession } from '@/lib/auth/local-session';
+import { ActionError, fieldErrorsOf, type ActionResult } from '@/lib/actions/define-action';
+import { startLocalSession } from '@/lib/auth/local/session';
 import { clerkEnabled } from '@/lib/env';
 import { logger } from '@/lib/log/logger';
 import { limitPublicAction } from '@/lib/ratelimit/action-limit';

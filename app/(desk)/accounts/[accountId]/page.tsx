@@ -1,19 +1,37 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { EmptyState } from '@/app/_components/empty-state';
+import { FactList } from '@/app/_components/fact-list';
 import { PageBody, PageHeader, Section } from '@/app/_components/page-header';
+import { QuotesTable } from '@/app/_components/quotes/quotes-table';
 import { orNotFound, uuidOrNotFound } from '@/app/_components/route-guards';
+import { SizingsTable } from '@/app/_components/sizings/sizings-table';
 import { buttonLinkClass } from '@/app/_components/submit-button';
 import { getAccount, type AccountDetail } from '@/lib/accounts/queries';
 import { requirePageUser } from '@/lib/auth/guards';
 import { can } from '@/lib/auth/roles';
 import { listQuotes } from '@/lib/quotes/queries';
 import { listSizings } from '@/lib/sizings/queries';
-import { QuotesTable } from '../../quotes/_components/quotes-table';
-import { SizingsTable } from '../../sizings/_components/sizings-table';
 import { AccountForm } from '../_components/account-form';
-import { AccountDetails } from './_components/account-details';
 import { MembersPanel } from './_components/members-panel';
+
+function siteAtmosphere(a: AccountDetail): string {
+  if (a.barometricPressureKpa !== null) return `${a.barometricPressureKpa} kPa barometric`;
+  if (a.siteAltitudeM !== null) return `${a.siteAltitudeM} m altitude (ISO 2533 standard atmosphere)`;
+  return 'Not given: 101.325 kPa is assumed';
+}
+
+/** The account's identity, billing contact and site atmosphere as a definition list. */
+function AccountDetails({ account }: { account: AccountDetail }) {
+  const rows: [string, string][] = [
+    ['Company', account.name],
+    ['Site', account.site ?? '—'],
+    ['Billing contact', account.billingContactName ?? '—'],
+    ['Billing contact e-mail', account.billingContactEmail ?? 'None: quotes cannot be sent until one is added'],
+    ['Site atmosphere', siteAtmosphere(account)],
+  ];
+  return <FactList rows={rows} testId="account-details" />;
+}
 
 export const metadata: Metadata = { title: 'Customer account' };
 

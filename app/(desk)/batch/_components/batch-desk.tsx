@@ -4,8 +4,9 @@ import { useMutation } from '@tanstack/react-query';
 import { useState } from 'react';
 import type { BatchRow } from '@/lib/batch/evaluate';
 import { batchResultCsv } from '@/lib/batch/result-csv';
+import type { BatchTarget } from '@/lib/batch/schema';
 import { BatchRowsTable } from './batch-rows-table';
-import { BatchSavePanel, type SaveTarget } from './batch-save-panel';
+import { BatchSavePanel } from './batch-save-panel';
 
 type Preview = { rows: BatchRow[]; sized: number; withProblems: number };
 
@@ -48,7 +49,7 @@ export function BatchDesk(props: {
       ) as Promise<Preview>,
   });
   const save = useMutation({
-    mutationFn: (target: SaveTarget) =>
+    mutationFn: (target: BatchTarget) =>
       post('/api/v1/batch/commit', file!, {
         rows: JSON.stringify(check.data!.rows.map((r) => ({ ...r.cells, ...edits[r.row] }))),
         target: JSON.stringify(target),

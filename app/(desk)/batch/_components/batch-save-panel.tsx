@@ -1,8 +1,7 @@
 'use client';
 
 import { useState } from 'react';
-
-export type SaveTarget = { accountId: string; quoteId?: string; newQuoteTitle?: string };
+import type { BatchTarget } from '@/lib/batch/schema';
 
 type Props = {
   accounts: { id: string; name: string }[];
@@ -12,7 +11,7 @@ type Props = {
   sized: number;
   withProblems: number;
   pending: boolean;
-  onSave: (t: SaveTarget) => void;
+  onSave: (t: BatchTarget) => void;
 };
 
 /** Where the sized rows go: an account and, for vendor staff, a new or existing draft quote. */

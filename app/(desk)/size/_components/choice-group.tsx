@@ -2,7 +2,7 @@
 
 import { useId, type ReactNode } from 'react';
 import { useFormContext, type Path } from 'react-hook-form';
-import type { DeskValues } from '@/lib/desk/form-types';
+import type { DeskValues } from '../_lib/form-types';
 
 export type Choice = { value: string; label: ReactNode; testId?: string };
 

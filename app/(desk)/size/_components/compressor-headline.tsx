@@ -1,8 +1,15 @@
-import { fixed, formatHp, formatKw, formatPercent, joined, showTemperature } from '@/lib/desk/format';
-import type { UnitSystem } from '@/lib/desk/unit-systems';
+import {
+  fixed,
+  formatHp,
+  formatKw,
+  formatPercent,
+  joined,
+  showTemperature,
+} from '@/app/_components/sizing-result/quantity-format';
+import { SeverityIcon } from '@/app/_components/sizing-result/severity-icon';
 import type { CompressorResult } from '@/lib/engine';
+import type { UnitSystem } from '@/lib/units';
 import { KeyFigure, KeyFigures } from './key-figure';
-import { SeverityIcon } from './severity-icon';
 
 /** Shaft power with the IEC and NEMA motor ratings, then the figures behind it. */
 export function CompressorHeadline({ result, system }: { result: CompressorResult; system: UnitSystem }) {

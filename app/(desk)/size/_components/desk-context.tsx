@@ -1,11 +1,11 @@
 'use client';
 
 import { createContext, useContext, type MutableRefObject } from 'react';
-import type { AccountSite } from '@/lib/desk/account-types';
-import type { ExactValues } from '@/lib/desk/switch-system';
-import type { FieldKey } from '@/lib/desk/field-paths';
-import type { DeskService } from '@/lib/desk/form-types';
-import type { UnitSystem } from '@/lib/desk/unit-systems';
+import type { UnitSystem } from '@/lib/units';
+import type { AccountSite } from '../_lib/account-types';
+import type { FieldKey } from '../_lib/field-paths';
+import type { DeskService } from '../_lib/form-types';
+import type { ExactValues } from '../_lib/switch-system';
 
 export type DeskContextValue = {
   system: UnitSystem;

@@ -1,7 +1,7 @@
 'use client';
 
-import type { DeskIssues, FieldKey } from '@/lib/desk/field-paths';
 import type { SizingInput } from '@/lib/engine';
+import type { DeskIssues, FieldKey } from '../_lib/field-paths';
 import { FlowStep } from './flow-step';
 import { GasStep } from './gas-step';
 import { OptionsStep } from './options-step';

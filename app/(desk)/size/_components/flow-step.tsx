@@ -1,10 +1,10 @@
 'use client';
 
 import { useFormContext, useWatch } from 'react-hook-form';
-import { flowHint, pressureHint } from '@/lib/desk/field-hints';
-import { barometricPaOf, flowContextOf } from '@/lib/desk/flow-context';
-import type { DeskValues } from '@/lib/desk/form-types';
-import { DESK_STEPS } from '@/lib/desk/steps';
+import { flowHint, pressureHint } from '../_lib/field-hints';
+import { barometricPaOf, flowContextOf } from '../_lib/flow-context';
+import type { DeskValues } from '../_lib/form-types';
+import { DESK_STEPS } from '../_lib/steps';
 import { useDesk } from './desk-context';
 import { QuantityField } from './quantity-field';
 import { FieldGrid, StepSection } from './step-section';

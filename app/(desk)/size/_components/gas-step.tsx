@@ -1,9 +1,9 @@
 'use client';
 
 import { useFormContext, useWatch } from 'react-hook-form';
-import { GAS_PRESETS, findPreset } from '@/lib/thermo/presets';
-import type { DeskValues } from '@/lib/desk/form-types';
-import { DESK_STEPS, inputIdOf } from '@/lib/desk/steps';
+import { GAS_PRESETS, findPreset } from '@/lib/thermo';
+import type { DeskValues } from '../_lib/form-types';
+import { DESK_STEPS, inputIdOf } from '../_lib/steps';
 import { ChoiceGroup } from './choice-group';
 import { useDesk } from './desk-context';
 import { FieldFrame, describedBy } from './field-frame';

@@ -6,11 +6,11 @@ import {
   formatRating,
   showMassFlow,
   showTemperatureDifference,
-} from '@/lib/desk/format';
-import type { UnitSystem } from '@/lib/desk/unit-systems';
+} from '@/app/_components/sizing-result/quantity-format';
+import { SeverityIcon } from '@/app/_components/sizing-result/severity-icon';
 import type { HeaterResult } from '@/lib/engine';
+import type { UnitSystem } from '@/lib/units';
 import { KeyFigure, KeyFigures } from './key-figure';
-import { SeverityIcon } from './severity-icon';
 
 /** Design heater kW with the catalogue rating and current, then the figures behind it. */
 export function HeaterHeadline({ result, system }: { result: HeaterResult; system: UnitSystem }) {

@@ -1,7 +1,7 @@
 'use client';
 
 import { useFormContext, useWatch } from 'react-hook-form';
-import type { DeskValues } from '@/lib/desk/form-types';
+import type { DeskValues } from '../_lib/form-types';
 import { ChoiceGroup } from './choice-group';
 import { PlainNumberField } from './plain-number-field';
 import { QuantityField } from './quantity-field';

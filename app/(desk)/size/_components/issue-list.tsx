@@ -1,5 +1,5 @@
-import type { DeskIssues, FieldKey } from '@/lib/desk/field-paths';
-import { inputIdOf } from '@/lib/desk/steps';
+import type { DeskIssues, FieldKey } from '../_lib/field-paths';
+import { inputIdOf } from '../_lib/steps';
 
 /** Every problem with a link to its field: the keyboard route from the summary to the fix. */
 export function IssueList({ issues, testId }: { issues: DeskIssues; testId: string }) {

@@ -1,19 +1,42 @@
 'use client';
 
 import { useFieldArray, useFormContext, useWatch } from 'react-hook-form';
-import type { DeskValues } from '@/lib/desk/form-types';
-import { GAS_PRESETS } from '@/lib/thermo/presets';
-import { FRACTION_SUM_TOLERANCE, SPECIES_OPTIONS, mixtureSum, normaliseRows, presetRows } from '@/lib/desk/mixture';
-import { inputIdOf } from '@/lib/desk/steps';
+import { GAS_PRESETS } from '@/lib/thermo';
+import type { DeskValues } from '../_lib/form-types';
+import {
+  FRACTION_SUM_TOLERANCE,
+  SPECIES_OPTIONS,
+  mixtureSum,
+  normaliseRows,
+  presetRows,
+  type MixtureSum,
+} from '../_lib/mixture';
+import { inputIdOf } from '../_lib/steps';
 import { ChoiceGroup } from './choice-group';
 import { useDesk } from './desk-context';
 import { inputClass } from './field-frame';
-import { MixtureSumLine } from './mixture-sum-line';
 
 // Humid air has no fixed composition to start from.
 const FIXED_PRESETS = GAS_PRESETS.filter((p) => p.moleFractions);
 const button =
   'rounded-md border border-paper-line bg-paper-raised px-3 py-1.5 text-sm text-ink hover:bg-paper-sunk disabled:opacity-50';
+
+/** "Sum 0.9990: must be 1 ± 0.0001", live, announced politely. */
+function MixtureSumLine({ sum, tolerance }: { sum: MixtureSum; tolerance: number }) {
+  const text = !sum.readable ? 'Sum: enter numbers in every row' : `Sum ${sum.sum.toFixed(4)}`;
+  return (
+    <p
+      aria-live="polite"
+      data-testid="mixture-sum"
+      data-ok={sum.ok}
+      className={`font-mono text-sm ${sum.ok ? 'text-tide-700' : 'text-severity-caution'}`}
+    >
+      {text}
+      {sum.readable && !sum.ok && <span className="font-sans"> · must be 1 ± {tolerance}</span>}
+      {sum.ok && <span className="font-sans"> · sums to 1</span>}
+    </p>
+  );
+}
 
 /** Components and fractions with a live sum, Normalise, and a start from any preset's composition. */
 export function MixtureEditor() {

@@ -1,7 +1,7 @@
 'use client';
 
-import { DEFAULT_HEATER_RATINGS_KW } from '@/lib/engine/ratings';
-import { DESK_STEPS } from '@/lib/desk/steps';
+import { DEFAULT_HEATER_RATINGS_KW } from '@/lib/engine';
+import { DESK_STEPS } from '../_lib/steps';
 import { ChoiceGroup } from './choice-group';
 import { useDesk } from './desk-context';
 import { PlainNumberField } from './plain-number-field';

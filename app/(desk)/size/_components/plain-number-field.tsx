@@ -2,9 +2,9 @@
 
 import type { ReactNode } from 'react';
 import { useFormContext, type Path } from 'react-hook-form';
-import type { FieldKey } from '@/lib/desk/field-paths';
-import type { DeskValues } from '@/lib/desk/form-types';
-import { inputIdOf } from '@/lib/desk/steps';
+import type { FieldKey } from '../_lib/field-paths';
+import type { DeskValues } from '../_lib/form-types';
+import { inputIdOf } from '../_lib/steps';
 import { useDesk } from './desk-context';
 import { FieldFrame, describedBy, inputClass } from './field-frame';
 

@@ -2,12 +2,13 @@
 
 import { useState, type ReactNode } from 'react';
 import { useController, useFormContext, type Path } from 'react-hook-form';
-import { switchUnitValue } from '@/lib/desk/convert';
-import type { FieldKey } from '@/lib/desk/field-paths';
-import { QUANTITY_FIELDS, type DeskValues, type QuantityPath } from '@/lib/desk/form-types';
-import { inputIdOf } from '@/lib/desk/steps';
-import { quantityAt, switchContextOf } from '@/lib/desk/switch-system';
-import { UNIT_GROUPS, unitLabel } from '@/lib/desk/unit-systems';
+import { unitLabel } from '@/lib/units';
+import { switchUnitValue } from '../_lib/convert';
+import type { FieldKey } from '../_lib/field-paths';
+import { QUANTITY_FIELDS, type DeskValues, type QuantityPath } from '../_lib/form-types';
+import { inputIdOf } from '../_lib/steps';
+import { quantityAt, switchContextOf } from '../_lib/switch-system';
+import { UNIT_GROUPS } from '../_lib/unit-pickers';
 import { useDesk } from './desk-context';
 import { FieldFrame, describedBy, inputClass } from './field-frame';
 

@@ -1,12 +1,12 @@
-import { failureText } from '@/lib/desk/calculate-client';
-import type { DeskIssues } from '@/lib/desk/field-paths';
-import type { UnitSystem } from '@/lib/desk/unit-systems';
+import { PreliminaryStatement } from '@/app/_components/sizing-result/preliminary-statement';
+import { WarningCounts } from '@/app/_components/sizing-result/warnings-list';
+import type { UnitSystem } from '@/lib/units';
+import { failureText } from '../_lib/calculate-client';
+import type { DeskIssues } from '../_lib/field-paths';
 import { CompressorHeadline } from './compressor-headline';
 import { HeaterHeadline } from './heater-headline';
 import { IssueList } from './issue-list';
-import { PreliminaryStatement } from './preliminary-statement';
 import type { LiveResult } from './use-live-result';
-import { WarningCounts } from './warnings-list';
 
 type Props = { live: LiveResult; issues: DeskIssues | null; system: UnitSystem };
 

@@ -1,10 +1,10 @@
 'use client';
 
-import type { DeskIssues } from '@/lib/desk/field-paths';
-import { DESK_STEPS } from '@/lib/desk/steps';
+import { DutyPointTable } from '@/app/_components/sizing-result/duty-point-table';
 import type { SizingInput } from '@/lib/engine';
+import type { DeskIssues } from '../_lib/field-paths';
+import { DESK_STEPS } from '../_lib/steps';
 import { CopyButton } from './copy-button';
-import { DutyPointTable } from './duty-point-table';
 import { IssueList } from './issue-list';
 import { StepSection } from './step-section';
 

@@ -8,9 +8,9 @@ import type { z } from 'zod';
 import { SelectField } from '@/app/_components/select-field';
 import { TextField } from '@/app/_components/text-field';
 import { TextareaField } from '@/app/_components/textarea-field';
-import type { AccountSite, QuoteOption, ReopenedSizing } from '@/lib/desk/account-types';
 import type { SizingInput } from '@/lib/engine';
 import { sizingMetaSchema } from '@/lib/sizings/schema';
+import type { AccountSite, QuoteOption, ReopenedSizing } from '../_lib/account-types';
 import { saveSizingAction } from '../actions';
 import { SaveOutcome, type Saved } from './save-outcome';
 

@@ -1,7 +1,7 @@
 'use client';
 
 import { useFormContext } from 'react-hook-form';
-import type { DeskValues } from '@/lib/desk/form-types';
+import type { DeskValues } from '../_lib/form-types';
 import { CompressorGlyph, HeaterGlyph } from './service-icons';
 
 const OPTIONS = [

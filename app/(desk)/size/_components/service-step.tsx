@@ -2,10 +2,10 @@
 
 import { useFormContext } from 'react-hook-form';
 import { SelectField } from '@/app/_components/select-field';
-import type { DeskValues } from '@/lib/desk/form-types';
-import { sitePressureOf } from '@/lib/desk/site-pressure';
-import { DESK_STEPS } from '@/lib/desk/steps';
-import { roundForField, switchUnitValue } from '@/lib/desk/convert';
+import { roundForField, switchUnitValue } from '../_lib/convert';
+import type { DeskValues } from '../_lib/form-types';
+import { sitePressureOf } from '../_lib/site-pressure';
+import { DESK_STEPS } from '../_lib/steps';
 import { useDesk } from './desk-context';
 import { QuantityField } from './quantity-field';
 import { ServiceChoice } from './service-choice';

@@ -1,10 +1,10 @@
 'use client';
 
 import { useEffect, useMemo, useState } from 'react';
-import { sharePath } from '@/lib/desk/share-link';
-import { buildSummary } from '@/lib/desk/summary';
-import type { UnitSystem } from '@/lib/desk/unit-systems';
 import type { SizingInput, SizingResult } from '@/lib/engine';
+import type { UnitSystem } from '@/lib/units';
+import { sharePath } from '../_lib/share-link';
+import { buildSummary } from '../_lib/summary';
 import { CopyButton } from './copy-button';
 
 type Props = { input: SizingInput | null; result: SizingResult | null; system: UnitSystem };

@@ -2,27 +2,37 @@
 
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { FormProvider, useForm } from 'react-hook-form';
-import type { AccountSite, QuoteOption, ReopenedSizing } from '@/lib/desk/account-types';
-import { defaultValues } from '@/lib/desk/defaults';
-import { groupIssues } from '@/lib/desk/field-paths';
-import type { DeskValues } from '@/lib/desk/form-types';
-import { deskResolver } from '@/lib/desk/resolver';
-import { sharePath } from '@/lib/desk/share-link';
-import type { ExactValues } from '@/lib/desk/switch-system';
-import type { UnitSystem } from '@/lib/desk/unit-systems';
-import { validateDesk } from '@/lib/desk/validate';
+import { ResultDetails } from '@/app/_components/sizing-result/result-details';
+import type { UnitSystem } from '@/lib/units';
+import type { AccountSite, QuoteOption, ReopenedSizing } from '../_lib/account-types';
+import { defaultValues } from '../_lib/defaults';
+import { groupIssues } from '../_lib/field-paths';
+import { barometricPaOf } from '../_lib/flow-context';
+import type { DeskValues } from '../_lib/form-types';
+import { deskResolver } from '../_lib/resolver';
+import { sharePath } from '../_lib/share-link';
+import { sitePressureOf } from '../_lib/site-pressure';
+import type { ExactValues } from '../_lib/switch-system';
+import { validateDesk } from '../_lib/validate';
 import { DeskProvider } from './desk-context';
-import { DeskHeader } from './desk-header';
 import { DeskForm } from './desk-form';
-import { ResultDetails } from './result-details';
+import { DeskHeader } from './desk-header';
 import { ResultPanel } from './result-panel';
 import { SavePanel } from './save-panel';
 import { ShareActions } from './share-actions';
 import { SignInInvite } from './sign-in-invite';
 import { UnitSystemToggle } from './unit-system-toggle';
-import { useBarometricSource } from './use-barometric-source';
 import { useLiveResult } from './use-live-result';
 import { useUnitSystem } from './use-unit-system';
+
+/** Where the site barometric pressure on the form comes from, in words. */
+function useBarometricSource(values: DeskValues, accounts: readonly AccountSite[]): string {
+  const account = accounts.find((a) => a.id === values.accountId);
+  const expected = sitePressureOf(account);
+  const edited = Math.abs(barometricPaOf(values) / 1000 - expected.kpa) > 0.0005;
+  if (edited) return 'entered for this sizing';
+  return account ? `${account.name}: ${expected.source}` : expected.source;
+}
 
 export type Viewer = {
   signedIn: boolean;

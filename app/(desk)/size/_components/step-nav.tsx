@@ -1,5 +1,5 @@
-import type { FieldKey } from '@/lib/desk/field-paths';
-import { DESK_STEPS } from '@/lib/desk/steps';
+import type { FieldKey } from '../_lib/field-paths';
+import { DESK_STEPS } from '../_lib/steps';
 
 type Props = { errors: Partial<Record<FieldKey, string>>; ready: boolean };
 

@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import type { DeskStep } from '@/lib/desk/steps';
+import type { DeskStep } from '../_lib/steps';
 
 type Props = { step: DeskStep; description: ReactNode; accent: 'copper' | 'tide'; children: ReactNode };
 

@@ -2,10 +2,10 @@
 
 import { useFormContext, useWatch } from 'react-hook-form';
 import { temperatureToK } from '@/lib/units';
-import { pressureHint, riseHint, stageRatioHint } from '@/lib/desk/field-hints';
-import { barometricPaOf } from '@/lib/desk/flow-context';
-import type { DeskValues } from '@/lib/desk/form-types';
-import { DESK_STEPS } from '@/lib/desk/steps';
+import { pressureHint, riseHint, stageRatioHint } from '../_lib/field-hints';
+import { barometricPaOf } from '../_lib/flow-context';
+import type { DeskValues } from '../_lib/form-types';
+import { DESK_STEPS } from '../_lib/steps';
 import { ChoiceGroup } from './choice-group';
 import { useDesk } from './desk-context';
 import { PlainNumberField } from './plain-number-field';

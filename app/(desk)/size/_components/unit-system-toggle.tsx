@@ -1,6 +1,6 @@
 'use client';
 
-import type { UnitSystem } from '@/lib/desk/unit-systems';
+import type { UnitSystem } from '@/lib/units';
 
 type Props = { system: UnitSystem; onChange: (s: UnitSystem) => void; note: string | null };
 

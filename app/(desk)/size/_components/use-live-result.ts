@@ -1,9 +1,19 @@
 'use client';
 
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
-import { CalculateError, postCalculate, type CalculateFailure } from '@/lib/desk/calculate-client';
+import { useEffect, useState } from 'react';
 import type { SizingInput, SizingResult } from '@/lib/engine';
-import { useDebounced } from './use-debounced';
+import { CalculateError, postCalculate, type CalculateFailure } from '../_lib/calculate-client';
+
+/** `value`, but only after it has held still for `delayMs`. */
+function useDebounced<T>(value: T, delayMs: number): T {
+  const [settled, setSettled] = useState(value);
+  useEffect(() => {
+    const t = setTimeout(() => setSettled(value), delayMs);
+    return () => clearTimeout(t);
+  }, [value, delayMs]);
+  return settled;
+}
 
 export const DEBOUNCE_MS = 300;
 

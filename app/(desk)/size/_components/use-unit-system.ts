@@ -2,10 +2,10 @@
 
 import { useState, useTransition, type MutableRefObject } from 'react';
 import type { UseFormReturn } from 'react-hook-form';
-import { FIELD_LABELS } from '@/lib/desk/field-paths';
-import type { DeskValues } from '@/lib/desk/form-types';
-import { switchUnitSystem, type ExactValues } from '@/lib/desk/switch-system';
-import type { UnitSystem } from '@/lib/desk/unit-systems';
+import type { UnitSystem } from '@/lib/units';
+import { FIELD_LABELS } from '../_lib/field-paths';
+import type { DeskValues } from '../_lib/form-types';
+import { switchUnitSystem, type ExactValues } from '../_lib/switch-system';
 import { setUnitSystemAction } from '../actions';
 
 /** The desk's unit system: switching converts every field in place and, when signed in, is remembered. */

@@ -1,22 +1,33 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { IssueDatasheetButton } from '@/app/_components/datasheets/issue-datasheet-button';
 import { PageBody, PageHeader, Section } from '@/app/_components/page-header';
 import { orNotFound, uuidOrNotFound } from '@/app/_components/route-guards';
+import { ResultDetails } from '@/app/_components/sizing-result/result-details';
 import { requirePageUser } from '@/lib/auth/guards';
-import { isStaff } from '@/lib/auth/roles';
-import { can } from '@/lib/auth/roles';
+import { can, isStaff } from '@/lib/auth/roles';
 import { downloadAccess, listDatasheets } from '@/lib/datasheets/queries';
 import { getSizing } from '@/lib/sizings/queries';
 import { readStoredSizing } from '@/lib/sizings/stored-result';
 import { auditLookup } from '@/lib/support/audit-lookup';
 import { sizingEmails, sizingTrail } from '@/lib/support/sizing-record';
-import { IssueDatasheetButton } from '../../datasheets/_components/issue-datasheet-button';
+import { KeyValueTable } from './_components/key-value-table';
 import { AuditTrail, EmailLog, RevisionList } from './_components/record-sections';
 import { ResendButton } from './_components/resend-button';
-import { ResultDetails } from '../../size/_components/result-details';
-import { KeyValueTable } from '../_components/key-value-table';
-import { PreliminaryNote } from '../_components/preliminary-note';
-import { SizingMeta } from '../_components/sizing-meta';
+import { SizingMeta } from './_components/sizing-meta';
+
+/** Every saved sizing is a preliminary figure; this says so wherever one is shown in full. */
+function PreliminaryNote() {
+  return (
+    <p
+      role="note"
+      className="rounded-md border border-severity-caution/40 bg-paper-raised px-3 py-2 text-sm text-severity-caution"
+    >
+      Preliminary sizing on an ideal-gas basis. Confirm the design with a qualified engineer under the local
+      pressure-equipment and electrical codes before ordering or installing equipment.
+    </p>
+  );
+}
 
 export const metadata: Metadata = { title: 'Sizing' };
 

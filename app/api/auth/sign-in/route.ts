@@ -1,4 +1,4 @@
-import { checkLocalCredentials, startLocalSession } from '@/lib/auth/local-session';
+import { checkLocalCredentials, startLocalSession } from '@/lib/auth/local/session';
 import { signInSchema } from '@/lib/auth/schema';
 import { clerkEnabled, env } from '@/lib/env';
 import { readJsonBody, tooManyRequests, zodErrors } from '@/lib/http/json';

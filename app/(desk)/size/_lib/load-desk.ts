@@ -1,0 +1,60 @@
+import 'server-only';
+import { z } from 'zod';
+import type { CurrentUser } from '@/lib/auth/current-user';
+import { NotFoundError } from '@/lib/auth/guards';
+import { can } from '@/lib/auth/roles';
+import { sizingRequestSchema, type SizingInput } from '@/lib/engine';
+import { getSizing } from '@/lib/sizings/queries';
+import type { ReopenedSizing } from './account-types';
+import { decodeShareParam } from './share-link';
+
+export type DeskStart = { input: SizingInput | null; reopened: ReopenedSizing | null; notices: string[] };
+
+async function fromSaved(user: CurrentUser | null, id: string, revise: boolean): Promise<DeskStart> {
+  if (!user) return { input: null, reopened: null, notices: ['Sign in to reopen a saved sizing.'] };
+  if (!can(user.role, 'sizing:read') || !z.uuid().safeParse(id).success) {
+    return { input: null, reopened: null, notices: ['That saved sizing could not be opened.'] };
+  }
+  try {
+    const s = await getSizing(user, id);
+    const parsed = sizingRequestSchema.safeParse(s.input);
+    if (!parsed.success)
+      return {
+        input: null,
+        reopened: null,
+        notices: [
+          `Sizing ${s.number} was saved with inputs this engine no longer accepts; start again from its record.`,
+        ],
+      };
+    const reopened: ReopenedSizing = {
+      id: s.id,
+      number: s.number,
+      title: s.title,
+      equipmentTag: s.equipmentTag,
+      notes: s.notes,
+      accountId: s.accountId,
+      accountName: s.accountName,
+      revision: s.revision,
+      revise,
+    };
+    return { input: parsed.data, reopened, notices: [] };
+  } catch (err) {
+    if (err instanceof NotFoundError)
+      return { input: null, reopened: null, notices: ['That saved sizing could not be opened.'] };
+    throw err;
+  }
+}
+
+/** What the desk opens with: a saved sizing (revise or duplicate), shared inputs, or nothing. */
+export async function loadDeskStart(
+  user: CurrentUser | null,
+  params: { sizing?: string; revise?: string; i?: string },
+): Promise<DeskStart> {
+  if (params.sizing) return fromSaved(user, params.sizing, params.revise === '1');
+  if (params.i) {
+    const decoded = decodeShareParam(params.i);
+    if (decoded.ok) return { input: decoded.input, reopened: null, notices: ['Opened from a shared link.'] };
+    return { input: null, reopened: null, notices: [`The shared link could not be opened: ${decoded.reason}.`] };
+  }
+  return { input: null, reopened: null, notices: [] };
+}
