@@ -3,6 +3,7 @@ import type { GasModel } from '../thermo/gas-model';
 import { SUBDIVISION_LIMIT_A } from './electrical';
 import { gasWarnings, isFlammable } from './gas-warnings';
 import type { CompressorCase } from './compressor';
+import { headlineMethod } from './headline-method';
 import type { GasState } from './pseudo-critical';
 import { coolerWarnings, dewMarginWarning, equationWarnings } from './real-gas/equation-warnings';
 import { compressorValidity, heaterValidity } from './real-gas/validity';
@@ -167,7 +168,7 @@ function trainStates(stages: readonly CompressorStage[]): GasState[] {
 /** All cautions for a compressor duty; always ends with the preliminary note. */
 export function compressorWarnings(common: ResolvedCommon, c: CompressorBlock, cc: CompressorCase): SizingWarning[] {
   const { gas, barometricPressurePa: barometricPa } = common;
-  const headline = c.realGas ?? (c.basis === 'constant-k' ? c.constantK : c.variableCp);
+  const headline = headlineMethod(c);
   const stages = headline.stages;
   const states = trainStates(stages);
   const out: SizingWarning[] = [
