@@ -80,6 +80,15 @@ export function coolerWarnings(method: CompressionMethodResult): SizingWarning[]
     const cooler = s.cooler;
     if (!cooler || !(cooler.condensateKgPerH > 0)) continue;
     const where = cooler.kind === 'aftercooler' ? 'aftercooler' : `intercooler after stage ${s.stage}`;
+    const all = cooler.condensateKgPerH >= 0.999 * s.massFlowKgPerS * 3600;
+    if (all) {
+      out.push({
+        code: 'cooler-condensate',
+        severity: 'warning',
+        message: `The ${where} condenses the whole stream (${f1(cooler.condensateKgPerH)} kg/h) at ${f1(cooler.outletTemperatureC)} °C: it leaves as a liquid, and its duty includes ${f1(cooler.latentDutyKw)} kW of condensation. Design the cooler and what follows it for liquid.`,
+      });
+      continue;
+    }
     out.push({
       code: 'cooler-condensate',
       severity: 'warning',
