@@ -4,6 +4,7 @@ import type { GasModel } from '../../thermo/gas-model';
 import { flashCooler, type CoolerFlash } from '../../thermo/phase';
 import { mixtureGas } from '../../thermo/presets';
 import { realFluid, type RealEquationId, type RealFluid } from './fluid';
+import { humidGasSplit, isHumidLightGas } from './humid-gas';
 
 /** Below this liquid share (moles per mole of feed) a cooler is taken as dry [cp: beyond any drain's resolution]. */
 const MIN_LIQUID_FRACTION = 1e-7;
@@ -18,7 +19,13 @@ export function coolerSplit(gas: GasModel, temperatureK: number, pressurePa: num
   const key = `${gas.key}|${temperatureK}|${pressurePa}`;
   if (cache.has(key)) return cache.get(key)!;
   if (cache.size >= MAX_ENTRIES) cache.clear();
-  const split = flashCooler(gas.moleFractions, temperatureK, pressurePa);
+  const split = isHumidLightGas(gas, pressurePa)
+    ? humidGasSplit(gas, temperatureK, pressurePa)
+    : flashCooler(gas.moleFractions, temperatureK, pressurePa);
+  if (!split) {
+    cache.set(key, null);
+    return null;
+  }
   const wet = split.condensate !== null && 1 - split.vapourFraction > MIN_LIQUID_FRACTION;
   const result = wet ? split : null;
   cache.set(key, result);

@@ -99,16 +99,17 @@ export function coolerWarnings(method: CompressionMethodResult): SizingWarning[]
 }
 
 /** Suction or heater inlets closer than this to their dew point are flagged [cp: a common design margin]. */
-export const DEW_MARGIN_K = 10;
+export const DEW_MARGIN_K = 5;
 
 /** A caution when the inlet is a gas within 10 K of its dew point: a little cooling or a pressure swing condenses it. */
 export function dewMarginWarning(common: ResolvedCommon): SizingWarning | null {
   const c = common.inletClass;
   if (c.phase !== 'gas' || c.dewMarginK === undefined || c.dewPointK === undefined) return null;
   if (c.dewMarginK >= DEW_MARGIN_K) return null;
+  const water = Object.keys(common.gas.moleFractions).length > 1 && common.gas.moleFractions.H2O !== undefined;
   return {
     code: 'near-dew-point',
-    severity: 'warning',
-    message: `The inlet is only ${f1(c.dewMarginK)} K above its dew point (${f1(c.dewPointK - 273.15)} °C at ${f1(common.inletPressurePa / 1000)} kPa, Peng-Robinson): liquid can form with a little cooling or a pressure change upstream. Keep at least ${DEW_MARGIN_K} K of superheat, e.g. with a knock-out drum and a preheater.`,
+    severity: 'caution',
+    message: `The inlet is only ${f1(c.dewMarginK)} K above its dew point (${f1(c.dewPointK - 273.15)} °C at ${f1(common.inletPressurePa / 1000)} kPa${water ? '' : ', Peng-Robinson'}): liquid can form with a little cooling or a pressure change upstream. Keep at least ${DEW_MARGIN_K} K of superheat, e.g. with a knock-out drum and a preheater.`,
   };
 }

@@ -252,3 +252,23 @@ describe('coolers that condense carbon dioxide', () => {
     ]);
   });
 });
+
+// Moist air condenses where the water's partial pressure reaches its saturation pressure [pub: ASHRAE Handbook
+// Fundamentals, ch. 1]: at 30 °C and 101.325 kPa that is 100 % relative humidity, dew point 30 °C.
+describe('humid air', () => {
+  it.each([60, 90, 97, 100])(
+    'is a gas at %i %% relative humidity, with its dew point from the saturation curve',
+    (rh) => {
+      const r = heater({
+        gas: { preset: 'humid-air', relativeHumidityPercent: rh },
+        inlet: { temperature: q(30, 'degC'), pressure: q(101.325, 'kPa') },
+        equationOfState: undefined,
+      });
+      expect(r.basis.equationOfState).toBe('gerg-2008');
+      const near = r.warnings.find((w) => w.code === 'near-dew-point');
+      // 90 % RH at 30 °C has its dew point at 28.2 °C [calc: ASHRAE saturation pressure].
+      if (rh >= 90) expect(near?.message).toMatch(/above its dew point \((28\.2|29\.\d|30\.0) °C/);
+      else expect(near).toBeUndefined();
+    },
+  );
+});
