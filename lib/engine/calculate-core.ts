@@ -140,7 +140,7 @@ function compressorCase(input: CompressorInput, common: ResolvedCommon, issues: 
   const r = common.gas.gasConstantJPerKgK;
   checkPropertyOverrides(input.k, input.cpJPerKgK, r, issues);
   checkEfficiencies(input, issues);
-  if (issues.length === 0 && !(limitK > common.inletTemperatureK)) {
+  if (issues.length === 0 && input.dischargeTemperatureLimit && !(limitK > common.inletTemperatureK)) {
     issues.push({
       path: 'dischargeTemperatureLimit',
       message: `the discharge-temperature limit ${c2(limitK)} must be above the suction temperature ${c2(common.inletTemperatureK)}`,

@@ -5,6 +5,7 @@ import { flashCooler, type CoolerFlash } from '../../thermo/phase';
 import { mixtureGas } from '../../thermo/presets';
 import { realFluid, type RealEquationId, type RealFluid } from './fluid';
 import { humidGasSplit, isHumidLightGas } from './humid-gas';
+import { inletPhase } from './phase-check';
 
 /** Below this liquid share (moles per mole of feed) a cooler is taken as dry [cp: beyond any drain's resolution]. */
 const MIN_LIQUID_FRACTION = 1e-7;
@@ -26,7 +27,12 @@ export function coolerSplit(gas: GasModel, temperatureK: number, pressurePa: num
     cache.set(key, null);
     return null;
   }
-  const wet = split.condensate !== null && 1 - split.vapourFraction > MIN_LIQUID_FRACTION;
+  let wet = split.condensate !== null && 1 - split.vapourFraction > MIN_LIQUID_FRACTION;
+  // One stable dense phase is a liquid only below its critical region; above it (a pure fluid above Tc, a
+  // mixture above its pseudo-critical temperature) it is a dense supercritical fluid that goes on compressing.
+  if (wet && split.vapourFraction <= MIN_VAPOUR_FRACTION && split.condensatePhases === null) {
+    wet = inletPhase(gas, temperatureK, pressurePa).phase === 'liquid';
+  }
   const result = wet ? split : null;
   cache.set(key, result);
   return result;
