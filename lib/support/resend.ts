@@ -5,7 +5,6 @@ import { accounts, datasheetRevisions, datasheets, sizings } from '@/db/schema';
 import { writeAudit } from '@/lib/audit/write';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { enqueueEmail } from '@/lib/email/enqueue';
-import { kickOutbox } from '@/lib/email/kick';
 import { env } from '@/lib/env';
 import { AppError } from '@/lib/errors';
 
@@ -63,6 +62,5 @@ export async function resendDatasheetEmail(
     });
     return { to: row.to, datasheetNumber: row.number, revision: rev.revision };
   });
-  kickOutbox();
   return out;
 }
