@@ -1,7 +1,7 @@
 #!/usr/bin/env bash
 # `npm run demo`: everything a fresh machine needs to show Dutywise with its invented demo scenario.
 # Installs dependencies when missing, starts PostgreSQL (port 55432), migrates, seeds once, starts the
-# local Stripe and SMTP fakes and the mail worker, builds when sources changed, serves on :3000.
+# local Stripe and SMTP fakes and the job worker, builds when sources changed, serves on :3000.
 set -euo pipefail
 cd "$(dirname "${BASH_SOURCE[0]}")/.."
 export NEXT_TELEMETRY_DISABLED=1 NEXT_PUBLIC_CLERK_TELEMETRY_DISABLED=1
@@ -36,8 +36,9 @@ if [ ! -f .next/BUILD_ID ] || [ -n "$(git ls-files -z 2>/dev/null | xargs -0 -I{
   npx next build
 fi
 
-# The mail worker sends what the app queues in the outbox (retrying while SMTP is down).
-node --require ./db/script-preload.cjs --import tsx lib/email/worker.mts > .data/mail-worker.log 2>&1 &
+# The job worker runs every background job: it sends the mail the app queues (retrying while SMTP is
+# down) and sweeps orphaned blobs.
+node --require ./db/script-preload.cjs --import tsx lib/jobs/worker.mts > .data/job-worker.log 2>&1 &
 pids+=($!)
 
 node node_modules/next/dist/bin/next start -p "$port" &

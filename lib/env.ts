@@ -48,6 +48,12 @@ export const env = createEnv({
     MAIL_FROM: z.string().default('Dutywise <desk@dutywise.invalid>'),
     MAIL_FAKE_INBOX_URL: z.url().optional(),
 
+    // Background jobs: the PostgreSQL schema pg-boss keeps its queues in (tests use one per file).
+    JOBS_SCHEMA: z
+      .string()
+      .regex(/^[a-z_][a-z0-9_]{0,49}$/, 'a lower-case PostgreSQL schema name')
+      .default('pgboss'),
+
     // Datasheet and upload storage.
     BLOB_STORE: z.enum(['postgres', 's3']).default('postgres'),
     S3_ENDPOINT: z.url().optional(),
@@ -94,6 +100,7 @@ export const env = createEnv({
     SMTP_PASSWORD: process.env.SMTP_PASSWORD,
     MAIL_FROM: process.env.MAIL_FROM,
     MAIL_FAKE_INBOX_URL: process.env.MAIL_FAKE_INBOX_URL,
+    JOBS_SCHEMA: process.env.JOBS_SCHEMA,
     BLOB_STORE: process.env.BLOB_STORE,
     S3_ENDPOINT: process.env.S3_ENDPOINT,
     S3_REGION: process.env.S3_REGION,

@@ -1,25 +1,34 @@
 import type { FieldValues, Path, UseFormSetError } from 'react-hook-form';
-import type { FieldErrors } from '@/lib/actions/define-action';
+import type { Issue } from '@/lib/errors';
 
 /**
- * Puts a server action's field errors next to the matching inputs; returns the messages that have no
- * input on this form so the caller can show them with the form error instead of dropping them.
+ * Puts a failed action's issues next to the matching inputs; returns the text for the form-level error: the
+ * messages at path "" and those with no input on this form, so none is dropped.
  */
-export function applyFieldErrors<T extends FieldValues>(
+export function showActionErrors<T extends FieldValues>(
   setError: UseFormSetError<T>,
-  fieldErrors: FieldErrors,
+  errors: readonly Issue[],
   fields: readonly string[],
-): string[] {
+): string {
   const unplaced: string[] = [];
-  for (const [key, messages] of Object.entries(fieldErrors)) {
-    const message = messages.join(' ');
-    if (fields.includes(key)) setError(key as Path<T>, { type: 'server', message });
+  for (const path of new Set(errors.map((e) => e.path))) {
+    if (!path) continue;
+    const message = messagesAt(errors, path);
+    if (fields.includes(path)) setError(path as Path<T>, { type: 'server', message });
     else unplaced.push(message);
   }
-  return unplaced;
+  return [summaryOf(errors, 'Some fields need attention.'), ...unplaced].join(' ');
 }
 
-/** The text for the form-level error element. */
-export function formErrorText(formError: string | null, unplaced: string[]): string {
-  return [formError ?? 'Check the fields below.', ...unplaced].join(' ');
+/** Every message about one field (or about the request as a whole, for ""), joined. */
+export function messagesAt(errors: readonly Issue[], path: string): string {
+  return errors
+    .filter((e) => e.path === path)
+    .map((e) => e.message)
+    .join(' ');
+}
+
+/** The failure's own message (path ""), or `fallback` when it names fields only. */
+export function summaryOf(errors: readonly Issue[], fallback: string): string {
+  return messagesAt(errors, '') || fallback;
 }

@@ -1,7 +1,7 @@
 import 'server-only';
 import { notFound } from 'next/navigation';
 import { z } from 'zod';
-import { NotFoundError } from '@/lib/auth/guards';
+import { isAppError } from '@/lib/errors';
 
 /** A route id that is not a UUID can name nothing: answer 404 before it reaches PostgreSQL. */
 export function uuidOrNotFound(value: string): string {
@@ -10,12 +10,12 @@ export function uuidOrNotFound(value: string): string {
   return parsed.data;
 }
 
-/** Missing and cross-account rows both surface as NotFoundError; a page shows them as Next's 404. */
+/** Missing and cross-account rows both surface as a not_found AppError; a page shows them as Next's 404. */
 export async function orNotFound<T>(load: Promise<T>): Promise<T> {
   try {
     return await load;
   } catch (err) {
-    if (err instanceof NotFoundError) notFound();
+    if (isAppError(err, 'not_found')) notFound();
     throw err;
   }
 }

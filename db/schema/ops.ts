@@ -36,7 +36,10 @@ export const auditLog = pgTable(
   ],
 );
 
-/** Outgoing e-mail queue: rows are claimed with SKIP LOCKED and retried with backoff. */
+/**
+ * Outgoing e-mail: one row per message, the record support sees (status, attempts, last error). Delivery
+ * runs as a job on pg-boss's mail queue whose id is the row's id (lib/email/enqueue.ts).
+ */
 export const outbox = pgTable(
   'outbox',
   {
@@ -51,17 +54,12 @@ export const outbox = pgTable(
     dedupeKey: text('dedupe_key'),
     status: outboxStatus('status').notNull().default('pending'),
     attempts: integer('attempts').notNull().default(0),
-    nextAttemptAt: timestamp('next_attempt_at', { withTimezone: true }).notNull().defaultNow(),
-    lockedUntil: timestamp('locked_until', { withTimezone: true }),
     lastError: text('last_error'),
     messageId: text('message_id'),
     sentAt: timestamp('sent_at', { withTimezone: true }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [
-    index('outbox_due_idx')
-      .on(t.nextAttemptAt)
-      .where(sql`${t.status} = 'pending'`),
     index('outbox_entity_idx').on(t.entityType, t.entityId),
     uniqueIndex('outbox_dedupe_uq').on(t.dedupeKey),
     check('outbox_attempts_nonneg', sql`${t.attempts} >= 0`),

@@ -3,13 +3,13 @@ import { and, eq, isNull, sql } from 'drizzle-orm';
 import { createHash, randomBytes } from 'node:crypto';
 import { db } from '@/db';
 import { accounts, invitations, memberships, users } from '@/db/schema';
-import { ActionError } from '@/lib/actions/define-action';
 import { writeAudit } from '@/lib/audit/write';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { assertAccountAccess } from '@/lib/auth/guards';
 import { hashPassword } from '@/lib/auth/local/passwords';
 import { enqueueEmail } from '@/lib/email/enqueue';
 import { env } from '@/lib/env';
+import { AppError } from '@/lib/errors';
 import type { AccountInput, InviteInput } from './schema';
 
 const INVITE_DAYS = 14;
@@ -55,7 +55,7 @@ export async function updateAccount(user: CurrentUser, accountId: string, input:
       .set({ ...values, updatedAt: new Date() })
       .where(eq(accounts.id, accountId))
       .returning({ id: accounts.id });
-    if (!res[0]) throw new ActionError('That account no longer exists.', 404);
+    if (!res[0]) throw new AppError('not_found', 'That account no longer exists.');
     await writeAudit(tx, {
       actor: user,
       action: 'account.updated',
@@ -78,7 +78,7 @@ export async function inviteMember(user: CurrentUser, input: InviteInput): Promi
       .from(accounts)
       .where(eq(accounts.id, input.accountId))
       .limit(1);
-    if (!acct) throw new ActionError('That account no longer exists.', 404);
+    if (!acct) throw new AppError('not_found', 'That account no longer exists.');
     const [inv] = await tx
       .insert(invitations)
       .values({
@@ -129,13 +129,13 @@ export async function acceptInvitation(
       )
       .for('update')
       .limit(1);
-    if (!inv) throw new ActionError('This invitation is not valid any more. Ask for a new one.', 410);
+    if (!inv) throw new AppError('gone', 'This invitation is not valid any more. Ask for a new one.');
     const [taken] = await tx
       .select({ id: users.id })
       .from(users)
       .where(eq(sql`lower(${users.email})`, inv.email.toLowerCase()))
       .limit(1);
-    if (taken) throw new ActionError('A Dutywise user with this e-mail already exists; sign in instead.', 409);
+    if (taken) throw new AppError('conflict', 'A Dutywise user with this e-mail already exists; sign in instead.');
     const [u] = await tx
       .insert(users)
       .values({ email: inv.email, name, role: 'customer', passwordHash })
@@ -171,9 +171,9 @@ export async function signUpCustomer(input: {
       .where(eq(sql`lower(${users.email})`, input.email.toLowerCase()))
       .limit(1);
     if (taken)
-      throw new ActionError('A Dutywise user with this e-mail already exists; sign in instead.', 409, {
-        email: ['Already registered.'],
-      });
+      throw new AppError('conflict', 'A Dutywise user with this e-mail already exists; sign in instead.', [
+        { path: 'email', message: 'Already registered.' },
+      ]);
     const [u] = await tx
       .insert(users)
       .values({ email: input.email, name: input.name, role: 'customer', passwordHash })

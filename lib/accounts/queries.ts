@@ -3,7 +3,8 @@ import { and, asc, desc, eq, isNull, sql } from 'drizzle-orm';
 import { db } from '@/db';
 import { accounts, invitations, memberships, quotes, subscriptions, users } from '@/db/schema';
 import type { CurrentUser } from '@/lib/auth/current-user';
-import { accountScope, assertAccountAccess, NotFoundError } from '@/lib/auth/guards';
+import { accountScope, assertAccountAccess } from '@/lib/auth/guards';
+import { AppError } from '@/lib/errors';
 
 export type AccountSummary = {
   id: string;
@@ -61,7 +62,7 @@ export async function getAccount(user: CurrentUser, accountId: string): Promise<
     .from(accounts)
     .where(eq(accounts.id, accountId))
     .limit(1);
-  if (!row) throw new NotFoundError();
+  if (!row) throw new AppError('not_found', 'Not found');
   const members = await db
     .select({ id: users.id, name: users.name, email: users.email })
     .from(memberships)

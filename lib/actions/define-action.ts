@@ -1,68 +1,69 @@
 import 'server-only';
 import type { z } from 'zod';
-import { AuthError, NotFoundError, requireUser } from '@/lib/auth/guards';
+import { requireUser } from '@/lib/auth/guards';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import type { Permission } from '@/lib/auth/roles';
+import { AppError, errorBody, parseOrThrow, type ErrorBody } from '@/lib/errors';
+import { expectedError } from '@/lib/http/respond';
 import { logger } from '@/lib/log/logger';
 
-export type FieldErrors = Record<string, string[]>;
-export type ActionResult<T> =
-  { ok: true; data: T } | { ok: false; fieldErrors: FieldErrors; formError: string | null; status: number };
+/** A failed action: its status and the same `errors` list a route handler answers with. */
+export type ActionFailure = { ok: false; status: number } & ErrorBody;
+export type ActionResult<T> = { ok: true; data: T } | ActionFailure;
 
-/** An expected failure inside a handler (conflict, payment needed...): returned, not thrown. */
-export class ActionError extends Error {
-  constructor(
-    message: string,
-    readonly status = 409,
-    readonly fieldErrors: FieldErrors = {},
-  ) {
-    super(message);
-  }
+type ActionOptions<S extends z.ZodType> = {
+  schema: S;
+  /** `<concern>.<verb>_<object>` in snake case, as it appears in logs. */
+  name: string;
+  /** What the caller reads when something unexpected fails. */
+  failure?: string;
+};
+
+function failureOf(err: AppError): ActionFailure {
+  return { ok: false, status: err.status, ...errorBody(err) };
 }
 
-export function fieldErrorsOf(error: z.ZodError): FieldErrors {
-  const out: FieldErrors = {};
-  for (const issue of error.issues) {
-    const key = issue.path.map(String).join('.') || '_form';
-    (out[key] ??= []).push(issue.message);
+async function run<S extends z.ZodType, T>(
+  opts: ActionOptions<S>,
+  work: (raw: unknown) => Promise<T>,
+  raw: unknown,
+): Promise<ActionResult<T>> {
+  try {
+    return { ok: true, data: await work(raw) };
+  } catch (err) {
+    const known = expectedError(err);
+    if (known) return failureOf(known);
+    logger.error({ err, action: opts.name }, 'server action failed');
+    return failureOf(
+      new AppError('internal', opts.failure ?? 'Something went wrong on our side; nothing was saved. Try again.'),
+    );
   }
-  return out;
 }
 
 /**
- * The one wrapper for server actions: authenticate, authorise, parse with the shared zod schema,
- * call the domain code. Expected failures come back as values; anything else is logged and reported generically.
+ * The one wrapper for server actions: authenticate, authorise, parse with the shared zod schema, call the
+ * domain code. Expected failures (AppError) come back as values; anything else is logged and reported generically.
  */
 export function defineAction<S extends z.ZodType, T>(
-  opts: { permission: Permission; schema: S; name: string },
+  opts: ActionOptions<S> & { permission: Permission },
   handler: (input: z.output<S>, user: CurrentUser) => Promise<T>,
 ) {
-  return async (raw: unknown): Promise<ActionResult<T>> => {
-    try {
-      const user = await requireUser(opts.permission);
-      const parsed = opts.schema.safeParse(raw);
-      if (!parsed.success) {
-        return {
-          ok: false,
-          fieldErrors: fieldErrorsOf(parsed.error),
-          formError: 'Some fields need attention.',
-          status: 400,
-        };
-      }
-      return { ok: true, data: await handler(parsed.data, user) };
-    } catch (err) {
-      if (err instanceof AuthError || err instanceof NotFoundError) {
-        return { ok: false, fieldErrors: {}, formError: err.message, status: err.status };
-      }
-      if (err instanceof ActionError)
-        return { ok: false, fieldErrors: err.fieldErrors, formError: err.message, status: err.status };
-      logger.error({ err, action: opts.name }, 'server action failed');
-      return {
-        ok: false,
-        fieldErrors: {},
-        formError: 'Something went wrong on our side; nothing was saved. Try again.',
-        status: 500,
-      };
-    }
-  };
+  return (raw: unknown): Promise<ActionResult<T>> =>
+    run(
+      opts,
+      async (input) => {
+        const user = await requireUser(opts.permission);
+        return handler(parseOrThrow(opts.schema, input), user);
+      },
+      raw,
+    );
+}
+
+/** The same wrapper for the few actions a signed-out visitor calls (sign-up, accepting an invitation). */
+export function definePublicAction<S extends z.ZodType, T>(
+  opts: ActionOptions<S>,
+  handler: (input: z.output<S>) => Promise<T>,
+) {
+  return (raw: unknown): Promise<ActionResult<T>> =>
+    run(opts, async (input) => handler(parseOrThrow(opts.schema, input)), raw);
 }

@@ -4,8 +4,8 @@ import { z } from 'zod';
 import { db } from '@/db';
 import { accounts, auditLog, users } from '@/db/schema';
 import type { CurrentUser } from '@/lib/auth/current-user';
-import { AuthError } from '@/lib/auth/guards';
 import { can } from '@/lib/auth/roles';
+import { AppError } from '@/lib/errors';
 
 /** Filters as they arrive in the URL; anything malformed is dropped rather than refused. */
 export const auditFilterSchema = z.object({
@@ -38,7 +38,7 @@ export const AUDIT_PAGE_SIZE = 200;
 
 /** The newest audit entries, optionally for one entity type or one entity (admins and support). */
 export async function listAuditEntries(actor: CurrentUser, filter: AuditFilter = {}): Promise<AuditRow[]> {
-  if (!can(actor.role, 'audit:read')) throw new AuthError(403, 'Your role does not allow this.');
+  if (!can(actor.role, 'audit:read')) throw new AppError('forbidden', 'Your role does not allow this.');
   const conds: SQL[] = [];
   if (filter.entityType) conds.push(eq(auditLog.entityType, filter.entityType));
   if (filter.entityId) conds.push(eq(auditLog.entityId, filter.entityId));

@@ -1,33 +1,14 @@
 import 'server-only';
 import { redirect } from 'next/navigation';
+import { AppError } from '@/lib/errors';
 import { getCurrentUser, type CurrentUser } from './current-user';
 import { can, isStaff, type Permission } from './roles';
 
-/** An identity or permission failure; route handlers turn it into 401 or 403. */
-export class AuthError extends Error {
-  constructor(
-    readonly status: 401 | 403,
-    message: string,
-  ) {
-    super(message);
-    this.name = 'AuthError';
-  }
-}
-
-/** Something the caller may not know exists, or that does not: always answered as 404. */
-export class NotFoundError extends Error {
-  readonly status = 404;
-  constructor(message = 'Not found') {
-    super(message);
-    this.name = 'NotFoundError';
-  }
-}
-
-/** For actions and route handlers: the user, or an AuthError. */
+/** For actions and route handlers: the user, or an AppError (unauthenticated 401, forbidden 403). */
 export async function requireUser(permission?: Permission): Promise<CurrentUser> {
   const user = await getCurrentUser();
-  if (!user) throw new AuthError(401, 'Sign in to continue.');
-  if (permission && !can(user.role, permission)) throw new AuthError(403, 'Your role does not allow this.');
+  if (!user) throw new AppError('unauthenticated', 'Sign in to continue.');
+  if (permission && !can(user.role, permission)) throw new AppError('forbidden', 'Your role does not allow this.');
   return user;
 }
 
@@ -42,7 +23,7 @@ export async function requirePageUser(nextPath: string, permission?: Permission)
 /** Customers reach only their own account; staff reach every account. Cross-account ids look like missing rows. */
 export function assertAccountAccess(user: CurrentUser, accountId: string): void {
   if (isStaff(user.role)) return;
-  if (!user.accountId || user.accountId !== accountId) throw new NotFoundError();
+  if (!user.accountId || user.accountId !== accountId) throw new AppError('not_found', 'Not found');
 }
 
 /** The account filter a query must apply: null for staff (all accounts), the user's account otherwise. */

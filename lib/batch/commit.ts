@@ -2,7 +2,7 @@ import 'server-only';
 import { randomUUID } from 'node:crypto';
 import { db, type Tx } from '@/db';
 import { uploads } from '@/db/schema';
-import { ActionError } from '@/lib/actions/define-action';
+import { AppError } from '@/lib/errors';
 import { writeAudit } from '@/lib/audit/write';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { assertAccountAccess } from '@/lib/auth/guards';
@@ -63,15 +63,15 @@ export async function saveBatch(
 ): Promise<BatchSaved> {
   assertAccountAccess(user, target.accountId);
   if ((target.quoteId || target.newQuoteTitle) && !can(user.role, 'quote:manage'))
-    throw new ActionError('Only vendor staff put batch rows on a quote.', 403);
+    throw new AppError('forbidden', 'Only vendor staff put batch rows on a quote.');
   if (target.newQuoteTitle && (target.newQuoteTitle.length < 3 || target.newQuoteTitle.length > 160))
-    throw new ActionError('The quote title needs 3 to 160 characters.', 400, {
-      newQuoteTitle: ['3 to 160 characters'],
-    });
+    throw new AppError('invalid_input', 'The quote title needs 3 to 160 characters.', [
+      { path: 'newQuoteTitle', message: '3 to 160 characters' },
+    ]);
   const rows = evaluateSheet(cells);
   const sized = rows.filter((r) => r.result && r.input);
   if (!sized.length)
-    throw new ActionError('No row of the sheet could be sized; fix the problems and check again.', 422);
+    throw new AppError('unprocessable', 'No row of the sheet could be sized; fix the problems and check again.');
   const store = getBlobStore();
   const uploadId = randomUUID();
   const key = accountKey(target.accountId, 'uploads', `${uploadId}.csv`);

@@ -1,12 +1,12 @@
 import Papa from 'papaparse';
 import {
   calculateCore,
-  issuesFromZod,
   sizingRequestSchema,
   SizingInputError,
   type SizingInput,
   type SizingResult,
 } from '@/lib/engine';
+import { issuesOf } from '@/lib/errors';
 import { batchColumnNames, columnForPath } from './columns';
 import { rowToRequest, type BatchCells, type RowProblem } from './row-to-request';
 
@@ -65,7 +65,7 @@ export function evaluateRow(cells: BatchCells, row: number): BatchRow {
   // A cell already reported as unreadable is not reported again as missing.
   const reported = new Set(problems.map((p) => p.column));
   if (!parsed.success) {
-    for (const i of issuesFromZod(parsed.error)) {
+    for (const i of issuesOf(parsed.error)) {
       const column = columnForPath(i.path);
       if (!reported.has(column)) problems.push({ column, message: i.message });
     }

@@ -1,6 +1,6 @@
 import 'server-only';
 import { z } from 'zod';
-import { ActionError } from '@/lib/actions/define-action';
+import { AppError, invalidInput } from '@/lib/errors';
 import { BATCH_MAX_ROWS, parseBatchCsv, type ParsedSheet } from './evaluate';
 import { batchTargetSchema, type BatchTarget } from './schema';
 import { checkUpload, looksLikeText } from './upload-limits';
@@ -16,25 +16,25 @@ export type BatchUpload = {
 /** Reads the multipart batch request: the original CSV, and optionally the user's edited rows (JSON). */
 export async function readBatchRequest(req: Request): Promise<BatchUpload> {
   const length = Number(req.headers.get('content-length') ?? '0');
-  if (length > 6 * 1024 * 1024) throw new ActionError('The upload is larger than the 2 MiB limit.', 413);
+  if (length > 6 * 1024 * 1024) throw new AppError('too_large', 'The upload is larger than the 2 MiB limit.');
   let form: FormData;
   try {
     form = await req.formData();
   } catch {
-    throw new ActionError('Send the CSV as multipart/form-data with a "file" field.', 400);
+    throw new AppError('invalid_input', 'Send the CSV as multipart/form-data with a "file" field.');
   }
   const file = form.get('file');
-  if (!(file instanceof File)) throw new ActionError('Attach the CSV file in the "file" field.', 400);
+  if (!(file instanceof File)) throw new AppError('invalid_input', 'Attach the CSV file in the "file" field.');
   const check = checkUpload(file);
-  if (!check.ok) throw new ActionError(check.message, check.status);
+  if (!check.ok) throw new AppError(check.code, check.message);
   const bytes = Buffer.from(await file.arrayBuffer());
   if (!looksLikeText(bytes))
-    throw new ActionError('The file is not UTF-8 text; save the spreadsheet as "CSV UTF-8".', 415);
+    throw new AppError('unsupported_type', 'The file is not UTF-8 text; save the spreadsheet as "CSV UTF-8".');
   const edited = form.get('rows');
   let sheet = parseBatchCsv(bytes.toString('utf8'));
   if (typeof edited === 'string' && edited.length) {
     const parsed = cellsSchema.safeParse(safeJson(edited));
-    if (!parsed.success) throw new ActionError('The edited rows are not in the expected shape.', 400);
+    if (!parsed.success) throw new AppError('invalid_input', 'The edited rows are not in the expected shape.');
     sheet = { rows: parsed.data, problems: sheet.problems.filter((p) => !/no duty points/.test(p)) };
   }
   const target = form.get('target');
@@ -49,10 +49,20 @@ export async function readBatchRequest(req: Request): Promise<BatchUpload> {
 export function parseBatchTarget(raw: string | null): BatchTarget {
   const parsed = batchTargetSchema.safeParse(raw ? safeJson(raw) : null);
   if (!parsed.success)
-    throw new ActionError('Say where to save: the "target" field needs a customer account.', 400, {
-      target: parsed.error.issues.map((i) => i.message),
-    });
+    throw new AppError(
+      'invalid_input',
+      'Say where to save: the "target" field needs a customer account.',
+      parsed.error.issues.map((i) => ({ path: 'target', message: i.message })),
+    );
   return parsed.data;
+}
+
+/** A sheet that cannot be read as a batch at all (no header, no rows): 422 with each problem on "file". */
+export function sheetProblems(problems: string[]): AppError {
+  return invalidInput(
+    problems.map((message) => ({ path: 'file', message })),
+    'unprocessable',
+  );
 }
 
 function safeJson(text: string): unknown {

@@ -1,19 +1,23 @@
 // What a batch upload may be: a CSV of at most 2 MiB. Anything else is refused before it is read.
+import type { ErrorCode } from '@/lib/errors';
+
 export const BATCH_MAX_BYTES = 2 * 1024 * 1024;
 const allowedTypes = new Set(['text/csv', 'application/csv', 'text/plain', 'application/vnd.ms-excel', '']);
 
-export type UploadCheck = { ok: true } | { ok: false; status: 413 | 415 | 400; message: string };
+export type UploadCheck =
+  | { ok: true }
+  | { ok: false; code: Extract<ErrorCode, 'too_large' | 'unsupported_type' | 'invalid_input'>; message: string };
 
 export function checkUpload(file: { name: string; type: string; size: number }): UploadCheck {
-  if (file.size === 0) return { ok: false, status: 400, message: 'The file is empty.' };
+  if (file.size === 0) return { ok: false, code: 'invalid_input', message: 'The file is empty.' };
   if (file.size > BATCH_MAX_BYTES)
     return {
       ok: false,
-      status: 413,
+      code: 'too_large',
       message: `The file is ${(file.size / 1048576).toFixed(1)} MiB; the limit is 2 MiB.`,
     };
   if (!/\.csv$/i.test(file.name) || !allowedTypes.has(file.type))
-    return { ok: false, status: 415, message: 'Upload a .csv file (save the spreadsheet as CSV UTF-8).' };
+    return { ok: false, code: 'unsupported_type', message: 'Upload a .csv file (save the spreadsheet as CSV UTF-8).' };
   return { ok: true };
 }
 

@@ -2,19 +2,22 @@ import 'server-only';
 import { eq } from 'drizzle-orm';
 import { db } from '@/db';
 import { accounts } from '@/db/schema';
-import { ActionError } from '@/lib/actions/define-action';
 import { writeAudit } from '@/lib/audit/write';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { env } from '@/lib/env';
+import { AppError } from '@/lib/errors';
 import { logger } from '@/lib/log/logger';
 import type { PlanKey } from './plans';
 import { isUnreachable, priceIdFor, stripe } from './stripe-client';
 
 const unavailable = () =>
-  new ActionError('Payments are unavailable right now; nothing was charged. Please try again in a few minutes.', 503);
+  new AppError(
+    'unavailable',
+    'Payments are unavailable right now; nothing was charged. Please try again in a few minutes.',
+  );
 
 async function accountOf(user: CurrentUser) {
-  if (!user.accountId) throw new ActionError('Only a customer account can subscribe.', 403);
+  if (!user.accountId) throw new AppError('forbidden', 'Only a customer account can subscribe.');
   const [acct] = await db
     .select({
       id: accounts.id,
@@ -25,7 +28,7 @@ async function accountOf(user: CurrentUser) {
     .from(accounts)
     .where(eq(accounts.id, user.accountId))
     .limit(1);
-  if (!acct) throw new ActionError('Your customer account no longer exists.', 404);
+  if (!acct) throw new AppError('not_found', 'Your customer account no longer exists.');
   return acct;
 }
 
@@ -68,12 +71,12 @@ export async function startCheckout(user: CurrentUser, plan: PlanKey): Promise<{
     if (!session.url) throw unavailable();
     return { url: session.url };
   } catch (err) {
-    if (err instanceof ActionError) throw err;
+    if (err instanceof AppError) throw err;
     logger.warn({ err: (err as Error).message, accountId: acct.id }, 'checkout could not be created');
     if (isUnreachable(err)) throw unavailable();
-    throw new ActionError(
+    throw new AppError(
+      'upstream_failed',
       'The payment service refused the request; nothing was charged. Contact support if this persists.',
-      502,
     );
   }
 }
@@ -81,7 +84,7 @@ export async function startCheckout(user: CurrentUser, plan: PlanKey): Promise<{
 /** A customer-portal session for changing or cancelling the subscription. */
 export async function openBillingPortal(user: CurrentUser): Promise<{ url: string }> {
   const acct = await accountOf(user);
-  if (!acct.stripeCustomerId) throw new ActionError('There is no subscription to manage yet.', 409);
+  if (!acct.stripeCustomerId) throw new AppError('conflict', 'There is no subscription to manage yet.');
   try {
     const portal = await stripe().billingPortal.sessions.create({
       customer: acct.stripeCustomerId,

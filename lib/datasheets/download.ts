@@ -5,10 +5,10 @@ import { db } from '@/db';
 import { datasheetRevisions, datasheets } from '@/db/schema';
 import { writeAudit } from '@/lib/audit/write';
 import type { CurrentUser } from '@/lib/auth/current-user';
-import { AuthError } from '@/lib/auth/guards';
 import { can, isStaff } from '@/lib/auth/roles';
 import { getEntitlement } from '@/lib/billing/entitlements';
 import { getBlobStore, sha256Hex, type BlobStore } from '@/lib/blob';
+import { AppError } from '@/lib/errors';
 import { logger } from '@/lib/log/logger';
 
 export type DownloadOutcome =
@@ -41,7 +41,8 @@ export async function getRevisionDownload(
   revisionId: string,
   opts: { store?: BlobStore } = {},
 ): Promise<DownloadOutcome> {
-  if (!can(user.role, 'datasheet:read')) throw new AuthError(403, 'Your role does not allow reading datasheets.');
+  if (!can(user.role, 'datasheet:read'))
+    throw new AppError('forbidden', 'Your role does not allow reading datasheets.');
   if (!z.uuid().safeParse(revisionId).success) return { status: 'not-found' };
   const [row] = await db
     .select({

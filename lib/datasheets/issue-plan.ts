@@ -2,11 +2,10 @@ import 'server-only';
 import { eq } from 'drizzle-orm';
 import { db } from '@/db';
 import { accounts, datasheetRevisions, datasheets, users } from '@/db/schema';
-import { ActionError } from '@/lib/actions/define-action';
 import type { CurrentUser } from '@/lib/auth/current-user';
-import { NotFoundError } from '@/lib/auth/guards';
 import { nextNumber } from '@/lib/numbering/next-number';
 import type { SizingResult } from '@/lib/engine';
+import { AppError } from '@/lib/errors';
 import type { SizingDetail } from '@/lib/sizings/queries';
 import { compareRevisionLetters, nextRevisionLetter } from './revision-letter';
 import type { DatasheetSnapshot, RevisionEntry } from './snapshot';
@@ -37,9 +36,9 @@ export function engineResultOf(sizing: SizingDetail): SizingResult {
     r.gas &&
     r.basis;
   if (!ok)
-    throw new ActionError(
+    throw new AppError(
+      'unprocessable',
       `Sizing ${sizing.number} has no complete engine result stored; re-save it from the sizing form before issuing a datasheet.`,
-      422,
     );
   return r as SizingResult;
 }
@@ -55,7 +54,7 @@ export async function loadIssueAccount(accountId: string): Promise<IssueAccount>
     .from(accounts)
     .where(eq(accounts.id, accountId))
     .limit(1);
-  if (!a) throw new NotFoundError('That customer account no longer exists.');
+  if (!a) throw new AppError('not_found', 'That customer account no longer exists.');
   return a;
 }
 
@@ -100,9 +99,9 @@ export async function planIssue(
   const previous = past.at(-1)?.revision ?? null;
   const revision = nextRevisionLetter(previous);
   if (!revision)
-    throw new ActionError(
+    throw new AppError(
+      'conflict',
       `Datasheet ${existing?.number ?? ''} has used every revision letter up to ZZ; issue a new datasheet from a new sizing.`,
-      409,
     );
   const number = existing?.number ?? (await db.transaction((tx) => nextNumber(tx, 'datasheet')));
   const issuedAt = new Date();

@@ -1,9 +1,8 @@
 import 'server-only';
-import { ActionError, fieldErrorsOf } from '@/lib/actions/define-action';
 import type { CurrentUser } from '@/lib/auth/current-user';
-import { AuthError } from '@/lib/auth/guards';
 import { can } from '@/lib/auth/roles';
 import { getBlobStore, type BlobStore } from '@/lib/blob';
+import { AppError, parseOrThrow } from '@/lib/errors';
 import { getSizing } from '@/lib/sizings/queries';
 import { commitIssue, type BeforeCommit, type IssuedRevision } from './issue-commit';
 import { engineResultOf, loadIssueAccount, planIssue } from './issue-plan';
@@ -26,21 +25,21 @@ export async function issueDatasheet(
   input: { sizingId: string; note?: string },
   opts: IssueOptions = {},
 ): Promise<IssuedRevision> {
-  if (!can(user.role, 'datasheet:issue')) throw new AuthError(403, 'Your role does not allow issuing datasheets.');
-  const parsed = issueDatasheetSchema.safeParse(input);
-  if (!parsed.success) throw new ActionError('The datasheet request is not valid.', 400, fieldErrorsOf(parsed.error));
-  const sizing = await getSizing(user, parsed.data.sizingId);
+  if (!can(user.role, 'datasheet:issue'))
+    throw new AppError('forbidden', 'Your role does not allow issuing datasheets.');
+  const request = parseOrThrow(issueDatasheetSchema, input, 'The datasheet request is not valid.');
+  const sizing = await getSizing(user, request.sizingId);
   engineResultOf(sizing);
   const account = await loadIssueAccount(sizing.accountId);
   const store = opts.store ?? getBlobStore();
   for (let attempt = 0; attempt < ATTEMPTS; attempt++) {
-    const plan = await planIssue(user, sizing, account, parsed.data.note ?? null);
+    const plan = await planIssue(user, sizing, account, request.note ?? null);
     const bytes = await renderDatasheetPdf(plan.snapshot);
     const issued = await commitIssue(plan, bytes, store, opts.beforeCommit);
     if (issued) return issued;
   }
-  throw new ActionError(
+  throw new AppError(
+    'conflict',
     'Other revisions of this datasheet were being issued at the same moment; reload the page and try again.',
-    409,
   );
 }

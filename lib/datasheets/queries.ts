@@ -3,9 +3,10 @@ import { and, desc, eq, inArray } from 'drizzle-orm';
 import { db } from '@/db';
 import { accounts, datasheetRevisions, datasheets, sizings, users } from '@/db/schema';
 import type { CurrentUser } from '@/lib/auth/current-user';
-import { accountScope, AuthError } from '@/lib/auth/guards';
+import { accountScope } from '@/lib/auth/guards';
 import { can, isStaff } from '@/lib/auth/roles';
 import { getEntitlement } from '@/lib/billing/entitlements';
+import { AppError } from '@/lib/errors';
 import { compareRevisionLetters } from './revision-letter';
 
 export type RevisionSummary = {
@@ -33,7 +34,8 @@ export type DatasheetSummary = {
 };
 
 function requireRead(user: CurrentUser): void {
-  if (!can(user.role, 'datasheet:read')) throw new AuthError(403, 'Your role does not allow reading datasheets.');
+  if (!can(user.role, 'datasheet:read'))
+    throw new AppError('forbidden', 'Your role does not allow reading datasheets.');
 }
 
 /** Datasheets the user may see (staff: every account; customers: their own), newest first, with their revisions. */

@@ -1,7 +1,8 @@
 import 'server-only';
-import { sql } from 'drizzle-orm';
 import type { Tx } from '@/db';
 import { outbox } from '@/db/schema';
+import { sendJob } from '@/lib/jobs/boss';
+import { MAIL_QUEUE } from '@/lib/jobs/queues';
 import { logger } from '@/lib/log/logger';
 import { subjectFor, type EmailProps, type EmailTemplate } from './catalogue';
 import { parseEmailProps, parseRecipient } from './props-schema';
@@ -15,9 +16,6 @@ export type EnqueueInput<T extends EmailTemplate> = {
   /** Same key twice enqueues once (e.g. one payment-failed mail per invoice). */
   dedupeKey?: string;
 };
-
-/** The channel the mail worker LISTENs on; a NOTIFY inside a transaction is delivered at commit. */
-export const outboxChannel = 'dutywise_outbox';
 
 function problemWith<T extends EmailTemplate>(input: EnqueueInput<T>): string | null {
   try {
@@ -38,8 +36,9 @@ function safeSubject<T extends EmailTemplate>(input: EnqueueInput<T>): string {
 }
 
 /**
- * Queues a message in the caller's transaction: the mail exists exactly when the change that caused
- * it commits. The worker renders and sends it, retrying while SMTP is down.
+ * Queues a message in the caller's transaction: the outbox row (the mail's record, shown to support) and
+ * its job on the mail queue exist exactly when the change that caused them commits. The worker renders
+ * and sends it, retrying while SMTP is down.
  *
  * A recipient or props that could never be sent do not fail the caller's change (a webhook or an
  * issue must not roll back over a mistyped address): the row is stored dead, with the field and the
@@ -47,7 +46,7 @@ function safeSubject<T extends EmailTemplate>(input: EnqueueInput<T>): string {
  */
 export async function enqueueEmail<T extends EmailTemplate>(tx: Tx, input: EnqueueInput<T>): Promise<void> {
   const problem = problemWith(input);
-  await tx
+  const [row] = await tx
     .insert(outbox)
     .values({
       template: input.template,
@@ -60,7 +59,8 @@ export async function enqueueEmail<T extends EmailTemplate>(tx: Tx, input: Enque
       dedupeKey: input.dedupeKey ?? null,
       ...(problem ? { status: 'dead' as const, lastError: `not sent: ${problem}` } : {}),
     })
-    .onConflictDoNothing();
+    .onConflictDoNothing()
+    .returning({ id: outbox.id });
   if (problem) {
     logger.error(
       { component: 'outbox', template: input.template, entity: input.entity, err: problem },
@@ -68,5 +68,6 @@ export async function enqueueEmail<T extends EmailTemplate>(tx: Tx, input: Enque
     );
     return;
   }
-  await tx.execute(sql`select pg_notify(${outboxChannel}, '')`);
+  // A deduplicated mail already has its row and its job.
+  if (row) await sendJob(tx, MAIL_QUEUE, { outboxId: row.id }, { id: row.id });
 }

@@ -2,6 +2,8 @@ import 'server-only';
 import { and, desc, eq, sql } from 'drizzle-orm';
 import { db } from '@/db';
 import { outbox } from '@/db/schema';
+import { env } from '@/lib/env';
+import { MAIL_QUEUE } from '@/lib/jobs/queues';
 
 export type EmailLogEntry = {
   id: string;
@@ -29,7 +31,11 @@ export async function listEmailsFor(entityType: string, entityId: string): Promi
       attempts: outbox.attempts,
       createdAt: outbox.createdAt,
       sentAt: outbox.sentAt,
-      nextAttemptAt: outbox.nextAttemptAt,
+      // The delivery job (same id as the row) knows when pg-boss will try again.
+      nextAttemptAt: sql<Date | null>`(select j.start_after from ${sql.identifier(env.JOBS_SCHEMA)}.job j
+        where j.name = ${MAIL_QUEUE} and j.id = "outbox"."id" and j.state in ('created', 'retry'))`.mapWith(
+        (v: string | Date | null) => (v === null ? null : new Date(v)),
+      ),
       lastError: outbox.lastError,
     })
     .from(outbox)

@@ -1,5 +1,6 @@
+import { issuesOf } from '../errors';
 import { calculateCore } from './calculate-core';
-import { SizingInputError, issuesFromZod } from './input-error';
+import { SizingInputError } from './input-error';
 import type { SizingResult } from './result-types';
 import { sizingRequestSchema } from './schema';
 
@@ -11,6 +12,6 @@ export function calculate(input: unknown): SizingResult {
     ]);
   }
   const parsed = sizingRequestSchema.safeParse(input);
-  if (!parsed.success) throw new SizingInputError(issuesFromZod(parsed.error));
+  if (!parsed.success) throw new SizingInputError(issuesOf(parsed.error));
   return calculateCore(parsed.data);
 }

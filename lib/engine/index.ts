@@ -6,7 +6,7 @@ export { calculate } from './calculate';
 export { EQUATION_NAMES, METHOD_NAMES, headlineMethod } from './headline-method';
 // Explicit re-exports (not `export *`) so ESM scripts run through tsx can import names from this package.
 export { ENGINE_VERSION, calculateCore } from './calculate-core';
-export { SizingInputError, issuesFromZod, type SizingIssue } from './input-error';
+export { SizingInputError, type SizingIssue } from './input-error';
 export {
   LIMITS,
   compressorRequestSchema,

@@ -1,56 +1,25 @@
 import 'server-only';
-import type { z } from 'zod';
+import { AppError } from '@/lib/errors';
 
-export type ApiFieldError = { path: string; message: string };
-
-/** Reads a JSON body with a size cap; answers with the problem instead of throwing. */
-export async function readJsonBody(
-  req: Request,
-  maxBytes: number,
-): Promise<{ ok: true; value: unknown } | { ok: false; response: Response }> {
+/** Reads a JSON body with a size cap; a body too large, cut short or not JSON is an AppError naming the problem. */
+export async function readJsonBody(req: Request, maxBytes: number): Promise<unknown> {
   const declared = Number(req.headers.get('content-length') ?? '0');
-  if (declared > maxBytes) return { ok: false, response: tooLarge(maxBytes) };
+  if (declared > maxBytes) throw tooLarge(maxBytes);
   let text: string;
   try {
     text = await req.text();
   } catch {
     // A client that gives up mid-body (a superseded request) sent nothing usable.
-    return {
-      ok: false,
-      response: Response.json(
-        { errors: [{ path: '', message: 'The request body could not be read completely.' }] },
-        { status: 400 },
-      ),
-    };
+    throw new AppError('invalid_input', 'The request body could not be read completely.');
   }
-  if (Buffer.byteLength(text) > maxBytes) return { ok: false, response: tooLarge(maxBytes) };
+  if (Buffer.byteLength(text) > maxBytes) throw tooLarge(maxBytes);
   try {
-    return { ok: true, value: JSON.parse(text) };
+    return JSON.parse(text);
   } catch {
-    return {
-      ok: false,
-      response: Response.json(
-        { errors: [{ path: '', message: 'The request body is not valid JSON.' }] },
-        { status: 400 },
-      ),
-    };
+    throw new AppError('invalid_input', 'The request body is not valid JSON.');
   }
 }
 
-function tooLarge(maxBytes: number): Response {
-  return Response.json(
-    { errors: [{ path: '', message: `The request body is larger than ${Math.round(maxBytes / 1024)} KiB.` }] },
-    { status: 413 },
-  );
-}
-
-export function zodErrors(error: z.ZodError): ApiFieldError[] {
-  return error.issues.map((i) => ({ path: i.path.map(String).join('.'), message: i.message }));
-}
-
-export function tooManyRequests(retryAfterS: number, what: string): Response {
-  return Response.json(
-    { errors: [{ path: '', message: `Too many ${what}; try again in ${retryAfterS} s.` }] },
-    { status: 429, headers: { 'Retry-After': String(retryAfterS) } },
-  );
+function tooLarge(maxBytes: number): AppError {
+  return new AppError('too_large', `The request body is larger than ${Math.round(maxBytes / 1024)} KiB.`);
 }

@@ -2,12 +2,12 @@ import 'server-only';
 import { and, eq, inArray, sql } from 'drizzle-orm';
 import { db, type Tx } from '@/db';
 import { accounts, quoteItems, quotes, sizings } from '@/db/schema';
-import { ActionError } from '@/lib/actions/define-action';
 import { writeAudit } from '@/lib/audit/write';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { assertAccountAccess } from '@/lib/auth/guards';
 import { enqueueEmail } from '@/lib/email/enqueue';
 import { env } from '@/lib/env';
+import { AppError } from '@/lib/errors';
 import { nextNumber } from '@/lib/numbering/next-number';
 import { formatHeadline } from '@/lib/sizings/headline';
 import type { QuoteCreateInput } from './schema';
@@ -25,7 +25,7 @@ async function lockQuote(tx: Tx, user: CurrentUser, quoteId: string) {
     .where(eq(quotes.id, quoteId))
     .for('update')
     .limit(1);
-  if (!q) throw new ActionError('That quote does not exist.', 404);
+  if (!q) throw new AppError('not_found', 'That quote does not exist.');
   assertAccountAccess(user, q.accountId);
   return q;
 }
@@ -38,9 +38,9 @@ async function assertSizingsInAccount(tx: Tx, accountId: string, sizingIds: stri
     .from(sizings)
     .where(and(inArray(sizings.id, sizingIds), eq(sizings.accountId, accountId)));
   if (found.length !== new Set(sizingIds).size)
-    throw new ActionError('Every line must be a sizing saved to this quote’s customer account.', 422, {
-      sizingIds: ['Not all sizings belong to this account.'],
-    });
+    throw new AppError('unprocessable', 'Every line must be a sizing saved to this quote’s customer account.', [
+      { path: 'sizingIds', message: 'Not all sizings belong to this account.' },
+    ]);
 }
 
 export async function createQuote(
@@ -51,7 +51,10 @@ export async function createQuote(
   assertAccountAccess(user, input.accountId);
   const work = async (tx: Tx) => {
     const [acct] = await tx.select({ id: accounts.id }).from(accounts).where(eq(accounts.id, input.accountId)).limit(1);
-    if (!acct) throw new ActionError('That customer account does not exist.', 404, { accountId: ['Unknown account.'] });
+    if (!acct)
+      throw new AppError('not_found', 'That customer account does not exist.', [
+        { path: 'accountId', message: 'Unknown account.' },
+      ]);
     await assertSizingsInAccount(tx, input.accountId, input.sizingIds);
     const number = await nextNumber(tx, 'quote');
     const [q] = await tx
@@ -87,7 +90,7 @@ export async function addQuoteItem(
   const work = async (tx: Tx) => {
     const q = await lockQuote(tx, user, quoteId);
     if (q.status !== 'draft')
-      throw new ActionError(`Quote ${q.number} is ${q.status}; only draft quotes take new lines.`, 409);
+      throw new AppError('conflict', `Quote ${q.number} is ${q.status}; only draft quotes take new lines.`);
     await assertSizingsInAccount(tx, q.accountId, [sizingId]);
     const [{ pos } = { pos: 0 }] = await tx
       .select({ pos: sql<number>`coalesce(max(${quoteItems.position}) + 1, 0)::int` })
@@ -114,7 +117,7 @@ export async function addQuoteItem(
 export async function addQuoteItems(tx: Tx, user: CurrentUser, quoteId: string, sizingIds: string[]): Promise<void> {
   const q = await lockQuote(tx, user, quoteId);
   if (q.status !== 'draft')
-    throw new ActionError(`Quote ${q.number} is ${q.status}; only draft quotes take new lines.`, 409);
+    throw new AppError('conflict', `Quote ${q.number} is ${q.status}; only draft quotes take new lines.`);
   await assertSizingsInAccount(tx, q.accountId, sizingIds);
   const [{ pos } = { pos: 0 }] = await tx
     .select({ pos: sql<number>`coalesce(max(${quoteItems.position}) + 1, 0)::int` })
@@ -141,12 +144,12 @@ export async function addQuoteItems(tx: Tx, user: CurrentUser, quoteId: string, 
 export async function removeQuoteItem(user: CurrentUser, quoteId: string, itemId: string): Promise<void> {
   await db.transaction(async (tx) => {
     const q = await lockQuote(tx, user, quoteId);
-    if (q.status !== 'draft') throw new ActionError(`Quote ${q.number} is ${q.status}; lines are fixed.`, 409);
+    if (q.status !== 'draft') throw new AppError('conflict', `Quote ${q.number} is ${q.status}; lines are fixed.`);
     const res = await tx
       .delete(quoteItems)
       .where(and(eq(quoteItems.id, itemId), eq(quoteItems.quoteId, quoteId)))
       .returning({ id: quoteItems.id });
-    if (!res[0]) throw new ActionError('That line is not on this quote.', 404);
+    if (!res[0]) throw new AppError('not_found', 'That line is not on this quote.');
     await writeAudit(tx, {
       actor: user,
       action: 'quote.line_removed',
@@ -187,9 +190,9 @@ export async function sendQuote(user: CurrentUser, quoteId: string): Promise<{ t
       .where(eq(accounts.id, q.accountId))
       .limit(1);
     if (!acct?.email)
-      throw new ActionError(
+      throw new AppError(
+        'unprocessable',
         'The customer account has no billing contact e-mail; add one on the account page first.',
-        422,
       );
     const lines = await tx
       .select({
@@ -202,7 +205,7 @@ export async function sendQuote(user: CurrentUser, quoteId: string): Promise<{ t
       .from(quoteItems)
       .innerJoin(sizings, eq(sizings.id, quoteItems.sizingId))
       .where(eq(quoteItems.quoteId, quoteId));
-    if (!lines.length) throw new ActionError('Add at least one sizing before sending the quote.', 422);
+    if (!lines.length) throw new AppError('unprocessable', 'Add at least one sizing before sending the quote.');
     await tx
       .update(quotes)
       .set({ status: 'sent', sentAt: new Date(), updatedAt: new Date() })

@@ -3,7 +3,8 @@ import { and, asc, desc, eq, ilike, or, sql, type SQL } from 'drizzle-orm';
 import { db } from '@/db';
 import { accounts, quoteItems, quotes, sizings, users } from '@/db/schema';
 import type { CurrentUser } from '@/lib/auth/current-user';
-import { accountScope, assertAccountAccess, NotFoundError } from '@/lib/auth/guards';
+import { accountScope, assertAccountAccess } from '@/lib/auth/guards';
+import { AppError } from '@/lib/errors';
 import type { QuoteFilter } from './schema';
 
 export type QuoteSummary = {
@@ -87,7 +88,7 @@ export async function getQuote(user: CurrentUser, quoteId: string): Promise<Quot
     .leftJoin(users, eq(users.id, quotes.createdByUserId))
     .where(eq(quotes.id, quoteId))
     .limit(1);
-  if (!q) throw new NotFoundError();
+  if (!q) throw new AppError('not_found', 'Not found');
   assertAccountAccess(user, q.accountId);
   const lines = await db
     .select({

@@ -1,6 +1,6 @@
 import 'server-only';
 import { logger } from '@/lib/log/logger';
-import { tooManyRequests } from '@/lib/http/json';
+import { tooManyRequests } from '@/lib/http/respond';
 import { clientKey } from './consume';
 import { consumeShared } from './shared-counter';
 

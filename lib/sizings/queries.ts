@@ -3,7 +3,8 @@ import { and, desc, eq, type SQL } from 'drizzle-orm';
 import { db } from '@/db';
 import { accounts, sizings, users } from '@/db/schema';
 import type { CurrentUser } from '@/lib/auth/current-user';
-import { accountScope, assertAccountAccess, NotFoundError } from '@/lib/auth/guards';
+import { accountScope, assertAccountAccess } from '@/lib/auth/guards';
+import { AppError } from '@/lib/errors';
 
 export type SizingSummary = {
   id: string;
@@ -75,7 +76,7 @@ export async function getSizing(user: CurrentUser, sizingId: string): Promise<Si
     .leftJoin(users, eq(users.id, sizings.createdByUserId))
     .where(eq(sizings.id, sizingId))
     .limit(1);
-  if (!row) throw new NotFoundError();
+  if (!row) throw new AppError('not_found', 'Not found');
   assertAccountAccess(user, row.accountId);
   return row;
 }

@@ -2,12 +2,12 @@ import 'server-only';
 import { eq } from 'drizzle-orm';
 import { db, type Tx } from '@/db';
 import { accounts, sizings } from '@/db/schema';
-import { ActionError } from '@/lib/actions/define-action';
 import { writeAudit } from '@/lib/audit/write';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { assertAccountAccess } from '@/lib/auth/guards';
 import { can } from '@/lib/auth/roles';
 import { calculate, ENGINE_VERSION, SizingInputError, type SizingResult } from '@/lib/engine';
+import { AppError } from '@/lib/errors';
 import { nextNumber, nextNumbers } from '@/lib/numbering/next-number';
 import { addQuoteItem } from '@/lib/quotes/mutations';
 import type { SizingMeta } from './schema';
@@ -52,9 +52,8 @@ export function computeForSave(input: unknown): { input: unknown; result: Sizing
     return { input: withEquationUsed(input, result), result };
   } catch (err) {
     if (err instanceof SizingInputError) {
-      const fieldErrors: Record<string, string[]> = {};
-      for (const i of err.issues) (fieldErrors[`input.${i.path}`] ??= []).push(i.message);
-      throw new ActionError('The sizing input is not valid; nothing was saved.', 400, fieldErrors);
+      const issues = err.issues.map((i) => ({ path: i.path ? `input.${i.path}` : 'input', message: i.message }));
+      throw new AppError('invalid_input', 'The sizing input is not valid; nothing was saved.', issues);
     }
     throw err;
   }
@@ -113,11 +112,14 @@ export async function saveSizing(
 ): Promise<{ id: string; number: string }> {
   assertAccountAccess(user, meta.accountId);
   if (meta.quoteId && !can(user.role, 'quote:manage'))
-    throw new ActionError('Only vendor staff add sizings to quotes.', 403);
+    throw new AppError('forbidden', 'Only vendor staff add sizings to quotes.');
   const computed = computeForSave(rawInput);
   return db.transaction(async (tx) => {
     const [acct] = await tx.select({ id: accounts.id }).from(accounts).where(eq(accounts.id, meta.accountId)).limit(1);
-    if (!acct) throw new ActionError('That customer account does not exist.', 404, { accountId: ['Unknown account.'] });
+    if (!acct)
+      throw new AppError('not_found', 'That customer account does not exist.', [
+        { path: 'accountId', message: 'Unknown account.' },
+      ]);
     let revision = 1;
     if (meta.revisedFromId) {
       const [prev] = await tx
@@ -126,7 +128,7 @@ export async function saveSizing(
         .where(eq(sizings.id, meta.revisedFromId))
         .limit(1);
       if (!prev || prev.accountId !== meta.accountId)
-        throw new ActionError('The sizing being revised belongs to another account.', 422);
+        throw new AppError('unprocessable', 'The sizing being revised belongs to another account.');
       revision = prev.revision + 1;
     }
     const row = await insertSizing(tx, user, meta, computed, revision);

@@ -2,12 +2,11 @@ import 'server-only';
 import { and, desc, eq } from 'drizzle-orm';
 import { db } from '@/db';
 import { accounts, datasheetRevisions, datasheets, sizings } from '@/db/schema';
-import { ActionError } from '@/lib/actions/define-action';
 import { writeAudit } from '@/lib/audit/write';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { enqueueEmail } from '@/lib/email/enqueue';
-import { kickOutbox } from '@/lib/email/kick';
 import { env } from '@/lib/env';
+import { AppError } from '@/lib/errors';
 
 /** Queues the latest datasheet revision's e-mail again to the account's billing contact (support), audited. */
 export async function resendDatasheetEmail(
@@ -30,15 +29,15 @@ export async function resendDatasheetEmail(
       .innerJoin(sizings, eq(sizings.id, datasheets.sizingId))
       .where(eq(datasheets.sizingId, sizingId))
       .limit(1);
-    if (!row) throw new ActionError('This sizing has no datasheet yet; nothing to resend.', 404);
-    if (!row.to) throw new ActionError('The customer account has no billing contact e-mail to send to.', 422);
+    if (!row) throw new AppError('not_found', 'This sizing has no datasheet yet; nothing to resend.');
+    if (!row.to) throw new AppError('unprocessable', 'The customer account has no billing contact e-mail to send to.');
     const [rev] = await tx
       .select({ revision: datasheetRevisions.revision })
       .from(datasheetRevisions)
       .where(and(eq(datasheetRevisions.datasheetId, row.datasheetId)))
       .orderBy(desc(datasheetRevisions.issuedAt))
       .limit(1);
-    if (!rev) throw new ActionError('The datasheet has no issued revision.', 404);
+    if (!rev) throw new AppError('not_found', 'The datasheet has no issued revision.');
     await enqueueEmail(tx, {
       template: 'datasheet-issued',
       to: row.to,
@@ -63,6 +62,5 @@ export async function resendDatasheetEmail(
     });
     return { to: row.to, datasheetNumber: row.number, revision: rev.revision };
   });
-  kickOutbox();
   return out;
 }

@@ -2,15 +2,14 @@ import 'server-only';
 import { and, eq, isNull, ne, sql } from 'drizzle-orm';
 import { db, type Tx } from '@/db';
 import { memberships, users } from '@/db/schema';
-import { ActionError } from '@/lib/actions/define-action';
 import { writeAudit } from '@/lib/audit/write';
 import type { CurrentUser } from '@/lib/auth/current-user';
-import { AuthError } from '@/lib/auth/guards';
 import { can, roleLabels } from '@/lib/auth/roles';
+import { AppError } from '@/lib/errors';
 import type { UnitSystemInput, UserDisableInput, UserRoleChangeInput } from './schema';
 
 function assertManager(actor: CurrentUser): void {
-  if (!can(actor.role, 'users:manage')) throw new AuthError(403, 'Your role does not allow this.');
+  if (!can(actor.role, 'users:manage')) throw new AppError('forbidden', 'Your role does not allow this.');
 }
 
 // Serialises every change that can shrink the set of active admins, so two admins demoting or
@@ -26,7 +25,7 @@ async function loadTarget(tx: Tx, userId: string) {
     .where(eq(users.id, userId))
     .for('update')
     .limit(1);
-  if (!row) throw new ActionError('That user does not exist.', 404);
+  if (!row) throw new AppError('not_found', 'That user does not exist.');
   const [m] = await tx
     .select({ accountId: memberships.accountId })
     .from(memberships)
@@ -47,27 +46,25 @@ async function countOtherActiveAdmins(tx: Tx, exceptUserId: string): Promise<num
 export async function changeUserRole(actor: CurrentUser, input: UserRoleChangeInput): Promise<{ changed: boolean }> {
   assertManager(actor);
   if (input.userId === actor.id)
-    throw new ActionError('You cannot change your own role; ask another admin.', 409, {
-      role: ['Not for your own sign-in.'],
-    });
+    throw new AppError('conflict', 'You cannot change your own role; ask another admin.', [
+      { path: 'role', message: 'Not for your own sign-in.' },
+    ]);
   return db.transaction(async (tx) => {
     await lockAdminSet(tx);
     const target = await loadTarget(tx, input.userId);
     if (target.role === input.role) return { changed: false };
     // Customer users are bound to one customer account; turning one into staff would open every account to them.
     if (target.role === 'customer' || input.role === 'customer') {
-      throw new ActionError(
+      throw new AppError(
+        'unprocessable',
         'Customer users keep the customer role: they belong to a customer account. Invite staff with their own sign-in instead.',
-        422,
-        {
-          role: ['Only sales engineer, support and admin can be swapped.'],
-        },
+        [{ path: 'role', message: 'Only sales engineer, support and admin can be swapped.' }],
       );
     }
     if (target.role === 'admin' && !target.disabledAt && (await countOtherActiveAdmins(tx, target.id)) === 0) {
-      throw new ActionError('This is the last active admin; make someone else an admin first.', 409, {
-        role: ['Last active admin.'],
-      });
+      throw new AppError('conflict', 'This is the last active admin; make someone else an admin first.', [
+        { path: 'role', message: 'Last active admin.' },
+      ]);
     }
     await tx.update(users).set({ role: input.role, updatedAt: new Date() }).where(eq(users.id, target.id));
     await writeAudit(tx, {
@@ -85,13 +82,14 @@ export async function changeUserRole(actor: CurrentUser, input: UserRoleChangeIn
 /** Disables or re-enables a sign-in; a disabled user's sessions stop working at their next request. */
 export async function setUserDisabled(actor: CurrentUser, input: UserDisableInput): Promise<{ changed: boolean }> {
   assertManager(actor);
-  if (input.userId === actor.id) throw new ActionError('You cannot disable your own sign-in; ask another admin.', 409);
+  if (input.userId === actor.id)
+    throw new AppError('conflict', 'You cannot disable your own sign-in; ask another admin.');
   return db.transaction(async (tx) => {
     await lockAdminSet(tx);
     const target = await loadTarget(tx, input.userId);
     if (Boolean(target.disabledAt) === input.disabled) return { changed: false };
     if (input.disabled && target.role === 'admin' && (await countOtherActiveAdmins(tx, target.id)) === 0) {
-      throw new ActionError('This is the last active admin; make someone else an admin first.', 409);
+      throw new AppError('conflict', 'This is the last active admin; make someone else an admin first.');
     }
     await tx
       .update(users)

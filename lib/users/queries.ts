@@ -3,8 +3,8 @@ import { asc, eq } from 'drizzle-orm';
 import { db } from '@/db';
 import { accounts, memberships, users } from '@/db/schema';
 import type { CurrentUser } from '@/lib/auth/current-user';
-import { AuthError } from '@/lib/auth/guards';
 import { can, type UserRole } from '@/lib/auth/roles';
+import { AppError } from '@/lib/errors';
 
 export type UserSummary = {
   id: string;
@@ -19,7 +19,7 @@ export type UserSummary = {
 
 /** Everyone with a Dutywise sign-in, for the people and roles page (admins only). */
 export async function listUsers(actor: CurrentUser): Promise<UserSummary[]> {
-  if (!can(actor.role, 'users:manage')) throw new AuthError(403, 'Your role does not allow this.');
+  if (!can(actor.role, 'users:manage')) throw new AppError('forbidden', 'Your role does not allow this.');
   return db
     .select({
       id: users.id,

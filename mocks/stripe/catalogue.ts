@@ -69,14 +69,6 @@ export class Catalogue {
     return this.prices.get(id);
   }
 
-  all(): PriceSeed[] {
-    return [...this.prices.values()];
-  }
-
-  findProduct(productId: string): PriceSeed | undefined {
-    return this.all().find((seed) => seed.productId === productId);
-  }
-
   renderPrice(seed: PriceSeed): WirePrice {
     return {
       id: seed.id,
@@ -104,30 +96,6 @@ export class Catalogue {
       type: 'recurring',
       unit_amount: seed.unitAmountMinor,
       unit_amount_decimal: String(seed.unitAmountMinor),
-    };
-  }
-
-  renderProduct(seed: PriceSeed): WireShape<Stripe.Product> {
-    return {
-      id: seed.productId,
-      object: 'product',
-      active: true,
-      created: this.createdSeconds,
-      default_price: seed.id,
-      description: seed.productDescription ?? null,
-      images: [],
-      livemode: false,
-      marketing_features: [],
-      metadata: {},
-      name: seed.productName,
-      package_dimensions: null,
-      shippable: null,
-      statement_descriptor: null,
-      tax_code: null,
-      type: 'service',
-      unit_label: null,
-      updated: this.createdSeconds,
-      url: null,
     };
   }
 

@@ -7,8 +7,6 @@ import { requirePrice } from './render-context';
 import { renderSession } from './render-checkout';
 import { renderInvoice, renderSubscription } from './render-billing';
 
-const DAY_SECONDS = 86_400;
-
 /** Creates a customer record (shared by the API and by checkout for new payers). */
 export function createCustomer(
   ctx: FakeContext,
@@ -34,7 +32,6 @@ export function createInvoice(
   billingReason: InvoiceRecord['billingReason'],
   status: InvoiceRecord['status'],
   invoicedPeriod: { start: number; end: number },
-  amountMinor?: number,
 ): InvoiceRecord {
   const now = nowSeconds();
   ctx.store.state.invoiceCounter += 1;
@@ -42,7 +39,7 @@ export function createInvoice(
     id: newId('il'),
     priceId: item.priceId,
     quantity: item.quantity,
-    amountMinor: amountMinor === 0 ? 0 : requirePrice(ctx, item.priceId).unitAmountMinor * item.quantity,
+    amountMinor: requirePrice(ctx, item.priceId).unitAmountMinor * item.quantity,
     periodStart: sub.currentPeriodStart,
     periodEnd: sub.currentPeriodEnd,
     subscriptionItemId: item.id,
@@ -87,13 +84,12 @@ export function completeCheckout(
   const first = session.lineItems[0];
   if (!first) throw new Error(`Session ${session.id} has no line items`);
   const seed = requirePrice(ctx, first.priceId);
-  const trialEnd = session.trialPeriodDays ? now + session.trialPeriodDays * DAY_SECONDS : null;
-  const periodEnd = trialEnd ?? addInterval(now, seed.interval, seed.intervalCount ?? 1);
+  const periodEnd = addInterval(now, seed.interval, seed.intervalCount ?? 1);
   const sub: SubscriptionRecord = {
     id: newId('sub'),
     created: now,
     customerId: customer.id,
-    status: trialEnd ? 'trialing' : 'active',
+    status: 'active',
     items: session.lineItems.map((item) => ({
       id: newId('si', 14),
       created: now,
@@ -103,30 +99,21 @@ export function completeCheckout(
     metadata: { ...session.subscriptionMetadata },
     currency: session.currency,
     startDate: now,
-    billingCycleAnchor: trialEnd ?? now,
+    billingCycleAnchor: now,
     currentPeriodStart: now,
     currentPeriodEnd: periodEnd,
     cancelAtPeriodEnd: false,
     cancelAt: null,
     canceledAt: null,
     endedAt: null,
-    trialStart: trialEnd ? now : null,
-    trialEnd,
     latestInvoiceId: null,
   };
   state.subscriptions[sub.id] = sub;
   // Stripe's first subscription invoice covers an instant (period start = end = creation) [mem].
-  const invoice = createInvoice(
-    ctx,
-    sub,
-    'subscription_create',
-    'paid',
-    { start: now, end: now },
-    trialEnd ? 0 : undefined,
-  );
+  const invoice = createInvoice(ctx, sub, 'subscription_create', 'paid', { start: now, end: now });
 
   session.status = 'complete';
-  session.paymentStatus = trialEnd ? 'no_payment_required' : 'paid';
+  session.paymentStatus = 'paid';
   session.customerId = customer.id;
   session.subscriptionId = sub.id;
   session.invoiceId = invoice.id;

@@ -16,23 +16,6 @@ import {
   requiredString,
 } from './params';
 
-// Parameters Stripe accepts that change nothing on a local test page; refusing them would
-// only make the app's real calls fail against the fake.
-const IGNORED = [
-  'allow_promotion_codes',
-  'automatic_tax',
-  'billing_address_collection',
-  'consent_collection',
-  'custom_text',
-  'customer_update',
-  'locale',
-  'payment_method_collection',
-  'payment_method_types',
-  'tax_id_collection',
-  'ui_mode',
-  'customer_creation',
-  'submit_type',
-];
 const KNOWN = [
   'mode',
   'line_items',
@@ -43,14 +26,10 @@ const KNOWN = [
   'subscription_data',
   'success_url',
   'cancel_url',
-  'expires_at',
-  'expand',
-  ...IGNORED,
 ];
-// Stripe's limits: 30 minutes to 24 hours for expires_at, 730 days of trial, 200 characters of
-// client_reference_id, quantities up to 999,999 [mem].
-const MIN_EXPIRY_SECONDS = 30 * 60;
-const MAX_EXPIRY_SECONDS = 24 * 60 * 60;
+// Stripe's limits: a session is payable for 24 hours, 200 characters of client_reference_id,
+// quantities up to 999,999 [mem].
+const EXPIRY_SECONDS = 24 * 60 * 60;
 
 export type CheckoutParams = {
   customerId: string | null;
@@ -58,7 +37,6 @@ export type CheckoutParams = {
   clientReferenceId: string | null;
   metadata: Record<string, string>;
   subscriptionMetadata: Record<string, string>;
-  trialPeriodDays: number | null;
   lineItems: LineItemRecord[];
   seeds: PriceSeed[];
   successUrl: string;
@@ -110,9 +88,6 @@ export function readCheckoutParams(ctx: FakeContext, body: FormObject, nowSecond
   const mode = requiredString(body, 'mode', 20);
   if (mode !== 'subscription')
     throw badParam('mode', `The local Stripe fake supports only mode=subscription, got '${mode}'.`);
-  const uiMode = optionalString(body, 'ui_mode', 20);
-  if (uiMode !== undefined && uiMode !== 'hosted')
-    throw badParam('ui_mode', 'The local Stripe fake serves only the hosted page (ui_mode=hosted).');
   const customerId = optionalString(body, 'customer', 200) || null;
   const customerEmail = optionalEmail(body, 'customer_email') ?? null;
   if (customerId && customerEmail)
@@ -126,13 +101,7 @@ export function readCheckoutParams(ctx: FakeContext, body: FormObject, nowSecond
       'parameter_missing',
     );
   const subscriptionData = optionalHash(body, 'subscription_data') ?? {};
-  assertKnownParams(subscriptionData, ['metadata', 'trial_period_days', 'description'], 'subscription_data');
-  const expiresAt = optionalInteger(
-    body,
-    'expires_at',
-    nowSeconds + MIN_EXPIRY_SECONDS,
-    nowSeconds + MAX_EXPIRY_SECONDS,
-  );
+  assertKnownParams(subscriptionData, ['metadata'], 'subscription_data');
   const { items, seeds } = readLineItems(ctx, body);
   return {
     customerId,
@@ -140,12 +109,10 @@ export function readCheckoutParams(ctx: FakeContext, body: FormObject, nowSecond
     clientReferenceId: optionalString(body, 'client_reference_id', 200) ?? null,
     metadata: optionalMetadata(body, 'metadata') ?? {},
     subscriptionMetadata: optionalMetadata(subscriptionData, 'metadata', 'subscription_data[metadata]') ?? {},
-    trialPeriodDays:
-      optionalInteger(subscriptionData, 'trial_period_days', 1, 730, 'subscription_data[trial_period_days]') ?? null,
     lineItems: items,
     seeds,
     successUrl,
     cancelUrl: optionalUrl(body, 'cancel_url') ?? null,
-    expiresAt: expiresAt ?? nowSeconds + MAX_EXPIRY_SECONDS,
+    expiresAt: nowSeconds + EXPIRY_SECONDS,
   };
 }

@@ -1,5 +1,4 @@
 import Stripe from 'stripe';
-import { defaultPrices, type PriceSeed } from './catalogue';
 
 export type StripeFakeOptions = {
   /** 0 picks a free port; read the chosen one from the handle. */
@@ -12,7 +11,6 @@ export type StripeFakeOptions = {
   publicBaseUrl?: string;
   /** JSON file that keeps state across restarts; in memory only when absent. */
   statePath?: string;
-  prices?: readonly PriceSeed[];
   /** Delay before each webhook retry; attempts = length + 1. */
   retryDelaysMs?: readonly number[];
   webhookTimeoutMs?: number;
@@ -52,7 +50,6 @@ export function resolveOptions(options: StripeFakeOptions): ResolvedOptions {
     webhookSecret: options.webhookSecret,
     publicBaseUrl: options.publicBaseUrl?.replace(/\/$/, ''),
     statePath: options.statePath,
-    prices: options.prices ?? defaultPrices,
     retryDelaysMs,
     webhookTimeoutMs: options.webhookTimeoutMs ?? 10_000,
     redirectWaitMs: options.redirectWaitMs ?? 3_000,

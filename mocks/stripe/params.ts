@@ -48,14 +48,6 @@ export function requiredString(body: FormObject, key: string, maxLength = 5000, 
   return value;
 }
 
-export function optionalBoolean(body: FormObject, key: string, param = key): boolean | undefined {
-  const value = optionalString(body, key, 5, param);
-  if (value === undefined) return undefined;
-  if (value !== 'true' && value !== 'false')
-    throw badParam(param, `Invalid boolean for ${param}: '${value}' (use true or false).`);
-  return value === 'true';
-}
-
 export function optionalInteger(
   body: FormObject,
   key: string,
@@ -118,22 +110,4 @@ export function optionalMetadata(body: FormObject, key: string, param = key): Re
     out[name] = value;
   }
   return out;
-}
-
-/** Applies a metadata update: given keys overwrite, empty values delete. */
-export function mergeMetadata(current: Record<string, string>, update: Record<string, string>): Record<string, string> {
-  const next = { ...current };
-  for (const [name, value] of Object.entries(update)) {
-    if (value === '') delete next[name];
-    else next[name] = value;
-  }
-  return next;
-}
-
-/** The `expand[]` list as strings. */
-export function expandParam(body: FormObject): string[] {
-  return optionalList(body, 'expand').map((item, i) => {
-    if (typeof item !== 'string') throw badParam(`expand[${i}]`, `Invalid expand[${i}]: must be a string.`);
-    return item;
-  });
 }

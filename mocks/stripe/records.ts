@@ -26,7 +26,6 @@ export type SessionRecord = {
   clientReferenceId: string | null;
   metadata: Record<string, string>;
   subscriptionMetadata: Record<string, string>;
-  trialPeriodDays: number | null;
   lineItems: LineItemRecord[];
   currency: string;
   amountTotalMinor: number;
@@ -38,7 +37,7 @@ export type SessionRecord = {
 
 export type SubscriptionItemRecord = { id: string; created: number; priceId: string; quantity: number };
 
-export type SubscriptionStatus = 'active' | 'trialing' | 'past_due' | 'canceled';
+export type SubscriptionStatus = 'active' | 'past_due' | 'canceled';
 
 export type SubscriptionRecord = {
   id: string;
@@ -56,8 +55,6 @@ export type SubscriptionRecord = {
   cancelAt: number | null;
   canceledAt: number | null;
   endedAt: number | null;
-  trialStart: number | null;
-  trialEnd: number | null;
   latestInvoiceId: string | null;
 };
 

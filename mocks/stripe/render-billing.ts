@@ -68,8 +68,8 @@ export function renderSubscription(ctx: RenderContext, sub: SubscriptionRecord):
     start_date: sub.startDate,
     status: sub.status,
     test_clock: null,
-    trial_end: sub.trialEnd,
-    trial_start: sub.trialStart,
+    trial_end: null,
+    trial_start: null,
   };
 }
 

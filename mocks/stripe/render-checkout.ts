@@ -1,5 +1,5 @@
 import type Stripe from 'stripe';
-import { type RenderContext, requirePrice } from './render-context';
+import type { RenderContext } from './render-context';
 import type { CustomerRecord, PortalSessionRecord, SessionRecord } from './records';
 import type { WireShape } from './wire-types';
 
@@ -25,33 +25,6 @@ export function renderCustomer(customer: CustomerRecord): WireShape<Stripe.Custo
     shipping: null,
     tax_exempt: 'none',
     test_clock: null,
-  };
-}
-
-export function renderLineItems(
-  ctx: RenderContext,
-  session: SessionRecord,
-): WireShape<Stripe.ApiList<Stripe.LineItem>> {
-  return {
-    object: 'list',
-    data: session.lineItems.map((item) => {
-      const seed = requirePrice(ctx, item.priceId);
-      const amount = seed.unitAmountMinor * item.quantity;
-      return {
-        id: item.id,
-        object: 'item',
-        amount_discount: 0,
-        amount_subtotal: amount,
-        amount_tax: 0,
-        amount_total: amount,
-        currency: seed.currency,
-        description: seed.productName,
-        price: ctx.catalogue.renderPrice(seed) as WireShape<Stripe.Price>,
-        quantity: item.quantity,
-      };
-    }),
-    has_more: false,
-    url: `/v1/checkout/sessions/${session.id}/line_items`,
   };
 }
 

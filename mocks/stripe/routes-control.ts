@@ -1,7 +1,7 @@
 import { noSuch } from './api-error';
 import type { FakeContext } from './context';
 import { json, type Route, route } from './http-util';
-import { requireSubscription, withExpand } from './lookup';
+import { requireSubscription } from './lookup';
 import type { EventRecord } from './records';
 import { renderSubscription } from './render-billing';
 import { advancePeriodEnd, failPayment } from './subscription-actions';
@@ -30,8 +30,7 @@ export function resendEvent(ctx: FakeContext, id: string): EventRecord {
 
 /** Test and demo controls; the hosted service has no equivalent, so they live under /_control/. */
 export function controlRoutes(ctx: FakeContext, onReset: () => void): Route[] {
-  const subscriptionReply = (id: string) =>
-    json(withExpand(ctx, renderSubscription(ctx, requireSubscription(ctx, id)), []));
+  const subscriptionReply = (id: string) => json(renderSubscription(ctx, requireSubscription(ctx, id)));
   return [
     route('GET', '/_control/health', () =>
       json({

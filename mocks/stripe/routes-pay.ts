@@ -30,7 +30,6 @@ function pageModel(ctx: FakeContext, session: SessionRecord, values: Partial<Car
     currency: session.currency,
     totalMinor: session.amountTotalMinor,
     intervalLabel: lines[0]?.intervalLabel ?? '',
-    trialDays: session.trialPeriodDays,
     lines,
     values: { ...values, email: lockedEmail ?? values.email ?? '' },
     emailLocked: lockedEmail !== null,

@@ -1,7 +1,7 @@
 import { createServer, type IncomingMessage, type ServerResponse } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { StripeApiError } from './api-error';
-import { Catalogue } from './catalogue';
+import { Catalogue, defaultPrices } from './catalogue';
 import type { FakeContext } from './context';
 import { renderEvent } from './events';
 import { FormParseError, parseForm, readBody } from './form-body';
@@ -9,20 +9,14 @@ import { html, json, matchRoute, type Reply, type Route, writeReply } from './ht
 import { nowSeconds } from './ids';
 import { type ResolvedOptions, resolveOptions, type StripeFakeOptions } from './options';
 import { messagePage } from './pages/page-shell';
-import { billingRoutes } from './routes-billing';
-import { catalogueRoutes } from './routes-catalogue';
-import { checkoutRoutes } from './routes-checkout';
+import { apiRoutes } from './routes-api';
 import { controlRoutes, eventSummary, resendEvent } from './routes-control';
-import { customerRoutes } from './routes-customers';
 import { manageRoutes } from './routes-manage';
 import { payRoutes } from './routes-pay';
-import { subscriptionRoutes } from './routes-subscriptions';
 import { StateStore } from './state-store';
 import { WebhookSender } from './webhook-sender';
 
 export type { StripeFakeOptions } from './options';
-export type { PriceSeed } from './catalogue';
-export { defaultPrices } from './catalogue';
 
 export type StripeFakeHandle = {
   /** Where the API listens, e.g. http://127.0.0.1:12111. */
@@ -121,7 +115,7 @@ export async function startStripeFake(input: StripeFakeOptions): Promise<StripeF
   const ctx: FakeContext = {
     store,
     sender,
-    catalogue: new Catalogue(options.prices, nowSeconds()),
+    catalogue: new Catalogue(defaultPrices, nowSeconds()),
     apiVersion: options.apiVersion,
     publicBaseUrl: options.publicBaseUrl ?? '',
     redirectWaitMs: options.redirectWaitMs,
@@ -130,16 +124,7 @@ export async function startStripeFake(input: StripeFakeOptions): Promise<StripeF
     sender.clear();
     store.reset();
   };
-  const routes: Route[] = [
-    ...customerRoutes(ctx),
-    ...checkoutRoutes(ctx),
-    ...subscriptionRoutes(ctx),
-    ...catalogueRoutes(ctx),
-    ...billingRoutes(ctx),
-    ...payRoutes(ctx),
-    ...manageRoutes(ctx),
-    ...controlRoutes(ctx, reset),
-  ];
+  const routes: Route[] = [...apiRoutes(ctx), ...payRoutes(ctx), ...manageRoutes(ctx), ...controlRoutes(ctx, reset)];
   const server = createServer((req, res) => void handle(req, res, routes, options));
   await new Promise<void>((resolve, reject) => {
     server.once('error', reject);

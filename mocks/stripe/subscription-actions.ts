@@ -54,12 +54,6 @@ function endSubscription(ctx: FakeContext, sub: SubscriptionRecord): void {
   emitEvent(ctx, 'customer.subscription.deleted', renderSubscription(ctx, sub));
 }
 
-/** Cancels at once (DELETE /v1/subscriptions/:id). */
-export function cancelSubscriptionNow(ctx: FakeContext, sub: SubscriptionRecord): void {
-  refuseIfCanceled(sub);
-  endSubscription(ctx, sub);
-}
-
 /**
  * Simulates reaching the period end: a subscription set to cancel ends; any other renews for
  * one more interval with a paid invoice (a past-due one counts as recovered by that payment).

@@ -4,8 +4,8 @@ import { e2ePorts } from './ports';
 
 const root = path.join(__dirname, '..', '..');
 
-// Browser journeys start from the invented demo scenario, seeded fresh into the test database, with a
-// mail worker sending what the app queues to the SMTP fake. The returned function stops the worker.
+// Browser journeys start from the invented demo scenario, seeded fresh into the test database, with the
+// job worker sending what the app queues to the SMTP fake. The returned function stops the worker.
 export default function globalSetup() {
   const env = {
     ...process.env,
@@ -18,7 +18,7 @@ export default function globalSetup() {
   });
   const worker = spawn(
     'node',
-    ['--require', './db/script-preload.cjs', '--import', 'tsx', 'lib/email/worker.mts', '--interval-ms', '500'],
+    ['--require', './db/script-preload.cjs', '--import', 'tsx', 'lib/jobs/worker.mts', '--interval-ms', '500'],
     {
       cwd: root,
       stdio: 'ignore',

@@ -6,7 +6,7 @@ import { changeUserRole, setUserDisabled } from '@/lib/users/mutations';
 import { userDisableSchema, userRoleChangeSchema } from '@/lib/users/schema';
 
 export const changeUserRoleAction = defineAction(
-  { permission: 'users:manage', schema: userRoleChangeSchema, name: 'user.role_change' },
+  { permission: 'users:manage', schema: userRoleChangeSchema, name: 'user.change_role' },
   async (input, user) => {
     const res = await changeUserRole(user, input);
     revalidatePath('/admin');
@@ -15,7 +15,7 @@ export const changeUserRoleAction = defineAction(
 );
 
 export const setUserDisabledAction = defineAction(
-  { permission: 'users:manage', schema: userDisableSchema, name: 'user.disable' },
+  { permission: 'users:manage', schema: userDisableSchema, name: 'user.set_disabled' },
   async (input, user) => {
     const res = await setUserDisabled(user, input);
     revalidatePath('/admin');

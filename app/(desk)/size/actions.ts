@@ -20,6 +20,6 @@ export const saveSizingAction = defineAction(
 
 /** Remembers the signed-in user's unit system for the next visit. */
 export const setUnitSystemAction = defineAction(
-  { permission: 'sizing:read', schema: unitSystemSchema, name: 'desk.unit-system' },
+  { permission: 'sizing:read', schema: unitSystemSchema, name: 'user.set_unit_system' },
   async (input, user) => setUnitSystem(user, input),
 );

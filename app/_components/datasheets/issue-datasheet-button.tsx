@@ -3,6 +3,7 @@
 import { useRouter } from 'next/navigation';
 import { useEffect, useState, useTransition } from 'react';
 import { issueDatasheetAction } from '@/app/(desk)/datasheets/actions';
+import { messagesAt, summaryOf } from '@/app/_components/action-errors';
 import { FormError, FormNotice } from '@/app/_components/form-errors';
 import { SubmitButton } from '@/app/_components/submit-button';
 import { TextareaField } from '@/app/_components/textarea-field';
@@ -39,8 +40,8 @@ export function IssueDatasheetButton({ sizingId, latestRevision }: Props) {
         setNote('');
         router.refresh();
       } else {
-        setNoteError(res.fieldErrors.note?.join(' '));
-        setError(res.formError ?? 'The datasheet was not issued.');
+        setNoteError(messagesAt(res.errors, 'note') || undefined);
+        setError(summaryOf(res.errors, 'The datasheet was not issued.'));
       }
     });
 

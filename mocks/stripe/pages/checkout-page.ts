@@ -8,7 +8,6 @@ export type CheckoutPageModel = {
   currency: string;
   totalMinor: number;
   intervalLabel: string;
-  trialDays: number | null;
   lines: CheckoutLine[];
   values: Partial<CardFormInput>;
   /** Set when the customer's email is fixed by the session. */
@@ -60,9 +59,6 @@ export function renderCheckoutPage(model: CheckoutPageModel): string {
         `<tr><td>${escapeHtml(line.label)}${line.quantity > 1 ? ` × ${line.quantity}` : ''}</td><td class="num">${formatMoney(line.amountMinor, model.currency)} ${escapeHtml(line.intervalLabel)}</td></tr>`,
     )
     .join('');
-  const trial = model.trialDays
-    ? `<p class="muted">First ${model.trialDays} days free; the first charge follows the trial.</p>`
-    : '';
   const alert = model.formError ? `<div class="alert" role="alert">${escapeHtml(model.formError)}</div>` : '';
   const cancel = model.cancelUrl ? `<a href="${escapeHtml(model.cancelUrl)}">Back without paying</a>` : '';
   const body = `
@@ -70,7 +66,6 @@ export function renderCheckoutPage(model: CheckoutPageModel): string {
   <h1>Subscribe to Dutywise</h1>
   <p class="muted">Checkout reference ${escapeHtml(model.sessionId.slice(0, 20))}…</p>
   <table><tbody>${rows}</tbody><tfoot><tr><th>Total</th><th class="num">${total} ${escapeHtml(model.intervalLabel)}</th></tr></tfoot></table>
-  ${trial}
 </section>
 <section class="panel">
   <h2>Card details</h2>

@@ -20,7 +20,6 @@ export type PortalPageModel = {
 
 const STATUS_LABELS: Record<string, string> = {
   active: 'Active',
-  trialing: 'In trial',
   past_due: 'Payment overdue',
   canceled: 'Ended',
 };

@@ -5,7 +5,6 @@ import { auditLog, outbox, quoteItems } from '@/db/schema';
 import { getAccount, listAccounts } from '@/lib/accounts/queries';
 import { createAccount, inviteMember, acceptInvitation } from '@/lib/accounts/mutations';
 import { accountInputSchema } from '@/lib/accounts/schema';
-import { NotFoundError } from '@/lib/auth/guards';
 import { createQuote, addQuoteItem, sendQuote } from '@/lib/quotes/mutations';
 import { getQuote, listQuotes } from '@/lib/quotes/queries';
 import { makeAccount, makeUser } from '../helpers/fixtures';
@@ -26,7 +25,7 @@ describe('customer accounts are scoped', () => {
     const mine = await makeAccount();
     const other = await makeAccount();
     const customer = await makeUser('customer', mine.id);
-    await expect(getAccount(customer, other.id)).rejects.toBeInstanceOf(NotFoundError);
+    await expect(getAccount(customer, other.id)).rejects.toMatchObject({ code: 'not_found', status: 404 });
     await expect(getAccount(customer, mine.id)).resolves.toMatchObject({ id: mine.id });
   });
 
@@ -81,7 +80,7 @@ describe('quotes are scoped and keep lines inside their account', () => {
     const customerA = await makeUser('customer', a.id);
     expect((await listQuotes(customerA)).map((q) => q.id)).toEqual([qa.id]);
     expect((await getQuote(customerA, qa.id)).lines).toHaveLength(1);
-    await expect(getQuote(customerA, qb.id)).rejects.toBeInstanceOf(NotFoundError);
+    await expect(getQuote(customerA, qb.id)).rejects.toMatchObject({ code: 'not_found', status: 404 });
   });
 
   it('quote numbers are unique and follow the Qyy-nnnn scheme', async () => {

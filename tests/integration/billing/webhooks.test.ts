@@ -16,7 +16,7 @@ const cfg = vi.hoisted(() => {
 import { db } from '@/db';
 import { accounts, subscriptions, webhookEvents } from '@/db/schema';
 import { POST } from '@/app/api/webhooks/stripe/route';
-import { startCheckout } from '@/lib/billing/checkout';
+import { openBillingPortal, startCheckout } from '@/lib/billing/checkout';
 import { getEntitlement } from '@/lib/billing/entitlements';
 import { startStripeFake, type StripeFakeHandle } from '@/mocks/stripe/server';
 import { DECLINE_CARD, payHostedCheckout, SUCCESS_CARD, waitUntil } from '../mocks/stripe-harness';
@@ -133,15 +133,16 @@ describe('payment webhooks', () => {
   });
 
   it('cancelling at period end keeps access until the period ends, then locks', async () => {
-    const { acct } = await subscribedCustomer();
+    const { acct, customer } = await subscribedCustomer();
     const [sub] = await db.select().from(subscriptions).where(eq(subscriptions.accountId, acct.id));
     const n = outcomes.length;
-    await new Stripe('sk_test_x', {
-      host: '127.0.0.1',
-      port: cfg.port,
-      protocol: 'http',
-      maxNetworkRetries: 0,
-    }).subscriptions.update(sub!.stripeSubscriptionId, { cancel_at_period_end: true });
+    // The customer cancels on the portal page the app sends them to.
+    const portal = await openBillingPortal(customer);
+    const cancelled = await fetch(`${portal.url}/subscriptions/${sub!.stripeSubscriptionId}/cancel`, {
+      method: 'POST',
+      redirect: 'manual',
+    });
+    expect(cancelled.status).toBeLessThan(400);
     await waitUntil(() => outcomes.length > n, 'subscription.updated delivered');
     await fake.webhooksIdle();
     expect(await getEntitlement(acct.id)).toMatchObject({ unlocked: true, cancelAtPeriodEnd: true });

@@ -107,9 +107,9 @@ describe('issuing through the server action', () => {
     await actAs(engineer);
     const bad = await issueDatasheetAction({ sizingId: 'nope' });
     expect(bad).toMatchObject({ ok: false, status: 400 });
-    expect(!bad.ok && bad.fieldErrors.sizingId).toBeTruthy();
+    expect(!bad.ok && bad.errors.some((e) => e.path === 'sizingId')).toBe(true);
     const long = await issueDatasheetAction({ sizingId, note: 'x'.repeat(501) });
-    expect(!long.ok && long.fieldErrors.note?.[0]).toMatch(/500 characters/);
+    expect(!long.ok && long.errors.find((e) => e.path === 'note')?.message).toMatch(/500 characters/);
   });
 
   it('refuses roles without the permission and other accounts, and issues the next letter otherwise', async () => {

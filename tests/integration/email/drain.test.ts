@@ -21,7 +21,7 @@ async function queue(to: string, number: string) {
 }
 const rowById = async (id: string) => (await rig.db.select().from(outbox).where(eq(outbox.id, id)))[0];
 
-describe('draining the outbox', () => {
+describe('delivering queued mail', () => {
   it('sends a queued mail and records it as sent', async () => {
     const to = rig.address('send');
     const row = await queue(to, 'DS-SEND-1');
@@ -38,21 +38,24 @@ describe('draining the outbox', () => {
     expect(got[0]?.text).toContain('DS-SEND-1');
     expect(got[0]?.html).toContain('DS-SEND-1');
     const after = await rowById(row.id);
-    expect(after).toMatchObject({ status: 'sent', attempts: 1, messageId: `<${row.id}@dutywise>`, lockedUntil: null });
+    expect(after).toMatchObject({ status: 'sent', attempts: 1, messageId: `<${row.id}@dutywise>` });
     expect(after?.sentAt).toBeInstanceOf(Date);
+    expect((await rig.job(row.id)).state).toBe('completed');
     expect((await rig.drain()).claimed).toBe(0);
   });
 
-  it('does not take a row another worker holds, and takes it back once that claim has expired', async () => {
+  it('does not take a job another worker holds, and takes it back once that claim has expired', async () => {
     const to = rig.address('lock');
     const row = await queue(to, 'DS-LOCK-2');
-    // As if a worker claimed the row and died mid-send: attempt counted, lock still running.
+    // As if a worker took the job and died mid-send: attempt counted, its time not yet run out.
+    await rig.db.execute(sql`update outbox set attempts = 1 where id = ${row.id}`);
     await rig.db.execute(
-      sql`update outbox set attempts = 1, locked_until = now() + interval '50 seconds' where id = ${row.id}`,
+      sql`update ${rig.jobTable} set state = 'active', started_on = now() where name = 'mail' and id = ${row.id}`,
     );
     expect((await rig.drain()).claimed).toBe(0);
     expect(rig.received().filter((m) => m.envelope.to.includes(to))).toHaveLength(0);
-    await rig.db.execute(sql`update outbox set locked_until = now() - interval '1 second' where id = ${row.id}`);
+    await rig.expire([row.id]);
+    await rig.makeDue([row.id]);
     expect(await rig.drain()).toMatchObject({ claimed: 1, sent: 1 });
     expect(await rowById(row.id)).toMatchObject({ status: 'sent', attempts: 2 });
     expect(rig.received().filter((m) => m.envelope.to.includes(to))).toHaveLength(1);
@@ -62,10 +65,16 @@ describe('draining the outbox', () => {
     const to = rig.address('crash');
     const row = await queue(to, 'DS-CRASH-3');
     await rig.drain();
-    // Undo the "sent" record, as if the process died right after the SMTP server accepted the mail.
+    // Undo the "sent" record and the job's completion, as if the process died right after the SMTP server
+    // accepted the mail: the job is still active when its time runs out.
     await rig.db.execute(
-      sql`update outbox set status = 'pending', sent_at = null, message_id = null, locked_until = now() - interval '1 second' where id = ${row.id}`,
+      sql`update outbox set status = 'pending', sent_at = null, message_id = null where id = ${row.id}`,
     );
+    await rig.db.execute(
+      sql`update ${rig.jobTable} set state = 'active', completed_on = null where name = 'mail' and id = ${row.id}`,
+    );
+    await rig.expire([row.id]);
+    await rig.makeDue([row.id]);
     await rig.drain();
     const ids = rig
       .received()
@@ -87,12 +96,16 @@ describe('draining the outbox', () => {
     expect(rig.received().filter((m) => m.envelope.to.includes(to))).toHaveLength(0);
   });
 
-  it('gives up a row whose final allowed attempt never reported back', async () => {
+  it('gives up a mail whose final allowed attempt never reported back', async () => {
     const to = rig.address('abandoned');
     const row = await queue(to, 'DS-ABANDON-5');
+    // The last attempt was taken by a worker that died: the job expires into the dead letters.
+    await rig.db.execute(sql`update outbox set attempts = ${rig.MAX_ATTEMPTS} where id = ${row.id}`);
     await rig.db.execute(
-      sql`update outbox set attempts = ${rig.MAX_ATTEMPTS}, locked_until = now() - interval '1 second' where id = ${row.id}`,
+      sql`update ${rig.jobTable} set state = 'active', started_on = now(), retry_count = retry_limit
+        where name = 'mail' and id = ${row.id}`,
     );
+    await rig.expire([row.id]);
     expect((await rig.drain()).dead).toBe(1);
     const after = await rowById(row.id);
     expect(after?.status).toBe('dead');

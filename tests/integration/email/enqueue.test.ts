@@ -17,6 +17,7 @@ const rowsTo = (to: string) => rig.db.select().from(outbox).where(eq(outbox.toAd
 describe('queueing mail with the change that causes it', () => {
   it('leaves no outbox row when the transaction rolls back', async () => {
     const to = rig.address('rollback');
+    const jobsBefore = await rig.jobCount();
     await expect(
       rig.db.transaction(async (tx) => {
         await rig.enqueueEmail(tx, { template: 'datasheet-issued', to, props: datasheetProps('DS-RB-1') });
@@ -24,6 +25,7 @@ describe('queueing mail with the change that causes it', () => {
       }),
     ).rejects.toThrow('issue failed after queueing');
     expect(await rowsTo(to)).toHaveLength(0);
+    expect(await rig.jobCount()).toBe(jobsBefore);
   });
 
   it('stores one pending row with subject, payload and entity when the transaction commits', async () => {
@@ -45,9 +47,10 @@ describe('queueing mail with the change that causes it', () => {
       subject: 'Datasheet DS-CM-2 rev. A issued',
       entityType: 'datasheet',
       entityId,
-      lockedUntil: null,
       sentAt: null,
     });
+    // Its delivery job was queued in the same transaction, under the row's id.
+    expect(await rig.job(row!.id)).toMatchObject({ state: 'created', data: { outboxId: row!.id } });
     expect((row?.payload as { datasheetNumber: string }).datasheetNumber).toBe('DS-CM-2');
   });
 
@@ -55,9 +58,11 @@ describe('queueing mail with the change that causes it', () => {
     const to = rig.address('dedupe');
     const dedupeKey = `invoice-failed:${randomUUID()}`;
     const props = { accountName: 'Stennick Gas Storage', billingUrl: '/billing', graceDays: 7 };
+    const jobsBefore = await rig.jobCount();
     for (let i = 0; i < 2; i += 1)
       await rig.db.transaction((tx) => rig.enqueueEmail(tx, { template: 'payment-failed', to, props, dedupeKey }));
     expect(await rowsTo(to)).toHaveLength(1);
+    expect(await rig.jobCount()).toBe(jobsBefore + 1);
   });
 
   it('stores a mail that can never be sent as dead, naming the field, and still commits the change', async () => {
@@ -109,6 +114,8 @@ describe('mail history and backlog', () => {
       lastError: null,
       subject: 'Datasheet DS-H-1 rev. A issued',
     });
+    // Waiting mail shows when its job is due (read from the job queue).
+    expect(list[0]?.nextAttemptAt).toBeInstanceOf(Date);
     expect(list[1]).toMatchObject({
       status: 'dead',
       attempts: 12,
@@ -138,10 +145,7 @@ describe('mail history and backlog', () => {
       await rig.enqueueEmail(tx, { template: 'datasheet-issued', to: waiting, props: datasheetProps('DS-B-1') });
       await rig.enqueueEmail(tx, { template: 'datasheet-issued', to: given, props: datasheetProps('DS-B-2') });
     });
-    // Parked far in the future so no drain anywhere sends it while this test looks at it.
-    await rig.db.execute(
-      sql`update outbox set created_at = now() - interval '2 hours', next_attempt_at = now() + interval '1 day' where to_address = ${waiting}`,
-    );
+    await rig.db.execute(sql`update outbox set created_at = now() - interval '2 hours' where to_address = ${waiting}`);
     await rig.db.execute(sql`update outbox set status = 'dead' where to_address = ${given}`);
     const after = await outboxBacklog();
     expect(after.pending).toBeGreaterThanOrEqual(1);

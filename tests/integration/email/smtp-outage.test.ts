@@ -1,4 +1,4 @@
-import { eq, inArray, sql } from 'drizzle-orm';
+import { eq, inArray } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { outbox } from '@/db/schema';
 import { datasheetProps, drainAll, startMailRig, type MailRig } from './mail-rig';
@@ -30,18 +30,17 @@ describe('SMTP server down', () => {
     const waiting = await rig.db.select().from(outbox).where(inArray(outbox.toAddress, addresses));
     expect(waiting).toHaveLength(6);
     for (const row of waiting) {
-      expect(row).toMatchObject({ status: 'pending', attempts: 1, lockedUntil: null, sentAt: null });
+      expect(row).toMatchObject({ status: 'pending', attempts: 1, sentAt: null });
       expect(row.lastError).toMatch(/ECONNREFUSED|ECONNECTION|ESOCKET/);
-      // First retry is 15 s out [cp: backoff schedule of this outbox]; a pass right now takes nothing.
-      expect(row.nextAttemptAt.getTime()).toBeGreaterThan(row.createdAt.getTime() + 10_000);
+      // First retry is 15 s out at the earliest [cp: the mail queue's schedule]; a pass right now takes nothing.
+      const job = await rig.job(row.id);
+      expect(job.state).toBe('retry');
+      expect(job.startAfter.getTime()).toBeGreaterThan(row.createdAt.getTime() + 10_000);
     }
     expect((await rig.drain()).claimed).toBe(0);
 
     await rig.fake.startSmtp();
-    // Time passing, without waiting for it: the retries fall due.
-    await rig.db.execute(
-      sql`update outbox set next_attempt_at = now() - interval '1 second' where to_address in ${addresses}`,
-    );
+    await rig.makeDue(waiting.map((r) => r.id));
     expect(await drainAll(rig)).toBe(6);
     const sent = await rig.db.select().from(outbox).where(inArray(outbox.toAddress, addresses));
     expect(sent.every((r) => r.status === 'sent' && r.attempts === 2)).toBe(true);
@@ -57,28 +56,34 @@ describe('SMTP server down', () => {
       .from(outbox)
       .where(eq(outbox.toAddress, to ?? ''));
     if (!row) throw new Error('not queued');
-    let clock = new Date(row.nextAttemptAt.getTime() + 1_000);
     const delaysS: number[] = [];
     for (let attempt = 1; attempt <= rig.MAX_ATTEMPTS; attempt += 1) {
-      const r = await rig.drain({ now: clock });
+      const r = await rig.drain();
       expect(r.claimed).toBe(1);
       const [after] = await rig.db.select().from(outbox).where(eq(outbox.id, row.id));
       if (!after) throw new Error('row vanished');
       expect(after.attempts).toBe(attempt);
+      const job = await rig.job(row.id);
       if (attempt < rig.MAX_ATTEMPTS) {
         expect(after.status).toBe('pending');
-        delaysS.push(Math.round((after.nextAttemptAt.getTime() - clock.getTime()) / 1000));
-        // Just before the retry falls due nothing is claimed; just after, it is.
-        expect((await rig.drain({ now: new Date(after.nextAttemptAt.getTime() - 1_000) })).claimed).toBe(0);
-        clock = new Date(after.nextAttemptAt.getTime() + 1_000);
+        delaysS.push((job.startAfter.getTime() - job.startedOn.getTime()) / 1000);
+        // Before the retry falls due nothing is claimed; once it is due, it is.
+        expect((await rig.drain()).claimed).toBe(0);
+        await rig.makeDue([row.id]);
       } else {
         expect(after.status).toBe('dead');
         expect(after.lastError).toMatch(/ECONNREFUSED|ECONNECTION|ESOCKET/);
+        expect(job.state).toBe('failed');
       }
     }
-    // 15 s doubling, capped at 30 min [cp: this outbox's schedule].
-    expect(delaysS).toEqual([15, 30, 60, 120, 240, 480, 960, 1800, 1800, 1800, 1800]);
-    expect((await rig.drain({ now: new Date(clock.getTime() + 86_400_000) })).claimed).toBe(0);
+    // 15 s doubling, each stretched by up to as much again at random [cp: pg-boss's back-off with jitter].
+    expect(delaysS).toHaveLength(rig.MAX_ATTEMPTS - 1);
+    delaysS.forEach((delay, n) => {
+      expect(delay).toBeGreaterThanOrEqual(15 * 2 ** n - 1);
+      expect(delay).toBeLessThanOrEqual(30 * 2 ** n + 1);
+    });
+    await rig.makeDue([row.id]);
+    expect((await rig.drain()).claimed).toBe(0);
     await rig.fake.startSmtp();
     expect(rig.received().filter((m) => m.envelope.to.includes(to ?? ''))).toHaveLength(0);
   });

@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
 import { messageIdFor, smtpOptions } from '@/lib/email/transport';
-import { retryDelaySeconds } from '@/lib/email/outbox-claims';
 
 describe('SMTP transport settings', () => {
   it('allows plain SMTP without STARTTLS only towards loopback', () => {
@@ -37,9 +36,5 @@ describe('SMTP transport settings', () => {
     expect(messageIdFor('0b8f0c64-5d0e-4c35-9b0a-8f2f5e1a9c11')).toBe(
       '<0b8f0c64-5d0e-4c35-9b0a-8f2f5e1a9c11@dutywise>',
     );
-  });
-
-  it('retries after 15 s doubling to a 30 min ceiling', () => {
-    expect([1, 2, 3, 4, 8, 9, 12].map(retryDelaySeconds)).toEqual([15, 30, 60, 120, 1800, 1800, 1800]);
   });
 });

@@ -19,8 +19,8 @@ describe('two app instances draining one outbox', () => {
         await rig.enqueueEmail(tx, { template: 'datasheet-issued', to, props: datasheetProps(`DS-PAIR-${i}`) });
     });
     // Two instances, each running several drain loops at once with small batches, so claims collide often.
-    const loops = ['instance-a', 'instance-b'].flatMap((workerId) =>
-      Array.from({ length: 4 }, () => drainAll(rig, { limit: 2, workerId })),
+    const loops = ['instance-a', 'instance-b'].flatMap(() =>
+      Array.from({ length: 4 }, () => drainAll(rig, { limit: 2 })),
     );
     const sentPerLoop = await Promise.all(loops);
     expect(sentPerLoop.reduce((sum, n) => sum + n, 0)).toBe(50);
@@ -36,7 +36,7 @@ describe('two app instances draining one outbox', () => {
     expect([...perMessageId.keys()].sort()).toEqual(rows.map((r) => `<${r.id}@dutywise>`).sort());
   });
 
-  it('skips rows another instance is claiming at this moment instead of waiting for them', async () => {
+  it('skips jobs another instance is claiming at this moment instead of waiting for them', async () => {
     const addresses = Array.from({ length: 4 }, (_, i) => rig.address(`held${i}`));
     await rig.db.transaction(async (tx) => {
       for (const [i, to] of addresses.entries())
@@ -47,16 +47,19 @@ describe('two app instances draining one outbox', () => {
     const released = new Promise<void>((resolve) => (release = resolve));
     let locked: () => void = () => undefined;
     const isLocked = new Promise<void>((resolve) => (locked = resolve));
-    // The other instance's claim, caught mid-transaction with its row locks held.
+    // The other instance's claim, caught mid-transaction with its locks on the held mails' jobs.
     const other = rig.db.transaction(async (tx) => {
       await tx.execute(sql`set local lock_timeout = '5s'`);
-      await tx.execute(sql`select id from outbox where to_address in ${held} for update`);
+      await tx.execute(
+        sql`select id from ${rig.jobTable} where name = 'mail'
+          and id in (select id from outbox where to_address in ${held}) for update`,
+      );
       locked();
       await released;
     });
     await isLocked;
     try {
-      const r = await rig.drain({ workerId: 'instance-c' });
+      const r = await rig.drain();
       expect(r).toMatchObject({ claimed: 2, sent: 2 });
     } finally {
       release();

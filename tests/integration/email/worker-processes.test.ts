@@ -5,12 +5,13 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { outbox } from '@/db/schema';
 import { datasheetProps, startMailRig, type MailRig } from './mail-rig';
 
-// Two real worker processes, as two app instances would run them, against one database and one SMTP server.
+// Two real worker processes, as two app instances would run them, against one database and one SMTP server
+// (and this file's own pg-boss schema).
 const root = fileURLToPath(new URL('../../..', import.meta.url));
 let rig: MailRig;
 const workers: { child: ChildProcess; output: string[]; exit: Promise<number | null> }[] = [];
 
-function startWorker(scope: string) {
+function startWorker() {
   const child = spawn(
     process.execPath,
     [
@@ -18,17 +19,15 @@ function startWorker(scope: string) {
       './db/script-preload.cjs',
       '--import',
       'tsx',
-      'lib/email/worker.mts',
+      'lib/jobs/worker.mts',
       '--interval-ms',
       '500',
-      '--limit',
+      '--concurrency',
       '4',
-      '--only-to',
-      scope,
     ],
     {
       cwd: root,
-      env: { ...process.env, SMTP_PORT: String(rig.fake.smtpPort), LOG_LEVEL: 'debug' },
+      env: { ...process.env, SMTP_PORT: String(rig.fake.smtpPort), JOBS_SCHEMA: rig.schema, LOG_LEVEL: 'debug' },
       stdio: ['ignore', 'pipe', 'pipe'],
     },
   );
@@ -56,12 +55,11 @@ afterAll(async () => {
   await rig.close();
 });
 
-describe('mail worker processes', () => {
+describe('job worker processes', () => {
   it('two workers deliver 50 messages exactly once between them and stop cleanly on SIGTERM', async () => {
-    const scope = `%@${rig.domain}`;
-    const a = startWorker(scope);
-    const b = startWorker(scope);
-    await until('both workers to start', () => [a, b].every((w) => w.output.join('').includes('mail worker started')));
+    const a = startWorker();
+    const b = startWorker();
+    await until('both workers to start', () => [a, b].every((w) => w.output.join('').includes('job worker started')));
 
     const addresses = Array.from({ length: 50 }, (_, i) => rig.address(`proc${i}`));
     await rig.db.transaction(async (tx) => {
@@ -80,7 +78,7 @@ describe('mail worker processes', () => {
     b.child.kill('SIGTERM');
     expect(await a.exit).toBe(0);
     expect(await b.exit).toBe(0);
-    for (const w of [a, b]) expect(w.output.join('')).toContain('mail worker stopped');
+    for (const w of [a, b]) expect(w.output.join('')).toContain('job worker stopped');
 
     const rows = await rig.db.select({ id: outbox.id }).from(outbox).where(inArray(outbox.toAddress, addresses));
     const ids = rig.received().map((m) => m.messageId);

@@ -19,7 +19,7 @@ describe('payment service unreachable at checkout', () => {
     await actAs(customer);
     const res = await startCheckoutAction({ plan: 'monthly' });
     expect(res).toMatchObject({ ok: false, status: 503 });
-    expect(res.ok ? '' : res.formError).toMatch(/Payments are unavailable right now; nothing was charged/);
+    expect(res.ok ? '' : res.errors[0]?.message).toMatch(/Payments are unavailable right now; nothing was charged/);
     const [row] = await db.select({ c: accounts.stripeCustomerId }).from(accounts).where(eq(accounts.id, acct.id));
     expect(row?.c).toBeNull();
     expect(await db.select().from(subscriptions).where(eq(subscriptions.accountId, acct.id))).toHaveLength(0);

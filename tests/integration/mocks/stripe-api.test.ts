@@ -21,59 +21,15 @@ async function sdkError(call: Promise<unknown>): Promise<Stripe.errors.StripeErr
   throw new Error('expected the call to fail');
 }
 
-describe('catalogue', () => {
-  it('lists the two desk plans and filters by lookup key', async () => {
-    const all = await h.stripe.prices.list();
-    expect(all.data.map((p) => p.id).sort()).toEqual(['price_desk_annual', 'price_desk_monthly']);
-    const monthly = await h.stripe.prices.list({ lookup_keys: ['desk_monthly'], expand: ['data.product'] });
-    expect(monthly.data).toHaveLength(1);
-    const price = monthly.data[0];
-    expect(price?.unit_amount).toBe(29_000);
-    expect(price?.currency).toBe('eur');
-    expect(price?.recurring?.interval).toBe('month');
-    expect(price?.nickname).toBe('Desk monthly');
-    expect((price?.product as Stripe.Product).object).toBe('product');
-  });
-
-  it('retrieves the annual price with its product expanded', async () => {
-    const price = await h.stripe.prices.retrieve('price_desk_annual', { expand: ['product'] });
-    expect(price.unit_amount).toBe(290_000);
-    expect(price.recurring?.interval).toBe('year');
-    expect(price.lookup_key).toBe('desk_annual');
-    expect((price.product as Stripe.Product).name.length).toBeGreaterThan(0);
-  });
-
-  it('serves a configured catalogue instead of the default', async () => {
-    await h.close();
-    h = await startHarness({
-      prices: [
-        {
-          id: 'price_bench_weekly',
-          nickname: 'Bench weekly',
-          productId: 'prod_bench',
-          productName: 'Bench',
-          unitAmountMinor: 500,
-          currency: 'usd',
-          interval: 'week',
-        },
-      ],
-    });
-    const list = await h.stripe.prices.list();
-    expect(list.data.map((p) => p.id)).toEqual(['price_bench_weekly']);
-    expect((await sdkError(h.stripe.prices.retrieve('price_desk_monthly'))).statusCode).toBe(404);
-  });
-});
-
 describe('customers', () => {
-  it('creates, retrieves and checks out an existing customer', async () => {
+  it('creates and checks out an existing customer', async () => {
     const customer = await h.stripe.customers.create({
       email: 'ops@harrow-gas.example',
       name: 'Harrow Gas Works',
       metadata: { accountId: 'acct_91' },
     });
     expect(customer.id).toMatch(/^cus_/);
-    const fetched = await h.stripe.customers.retrieve(customer.id);
-    expect(fetched).toMatchObject({
+    expect(customer).toMatchObject({
       id: customer.id,
       email: 'ops@harrow-gas.example',
       metadata: { accountId: 'acct_91' },
@@ -150,9 +106,11 @@ describe('bad requests get Stripe-style errors', () => {
   });
 
   it('requires a test API key', async () => {
-    const anonymous = await fetch(`${h.fake.url}/v1/prices`);
+    const anonymous = await fetch(`${h.fake.url}/v1/subscriptions/sub_any`);
     expect(anonymous.status).toBe(401);
-    const live = await fetch(`${h.fake.url}/v1/prices`, { headers: { authorization: 'Bearer sk_live_abc' } });
+    const live = await fetch(`${h.fake.url}/v1/subscriptions/sub_any`, {
+      headers: { authorization: 'Bearer sk_live_abc' },
+    });
     expect(live.status).toBe(401);
     expect(((await live.json()) as { error: { message: string } }).error.message).toContain('live keys');
   });
@@ -165,16 +123,5 @@ describe('bad requests get Stripe-style errors', () => {
     });
     expect(response.status).toBe(400);
     expect(((await response.json()) as { error: { type: string } }).error.type).toBe('invalid_request_error');
-  });
-});
-
-describe('session retrieval', () => {
-  it('expands line_items on request', async () => {
-    const session = await createDeskCheckout(h.stripe, 'price_desk_annual');
-    const fetched = await h.stripe.checkout.sessions.retrieve(session.id, { expand: ['line_items'] });
-    expect(fetched.line_items?.data[0]?.price?.id).toBe('price_desk_annual');
-    expect(fetched.line_items?.data[0]?.amount_total).toBe(290_000);
-    const items = await h.stripe.checkout.sessions.listLineItems(session.id);
-    expect(items.data).toHaveLength(1);
   });
 });

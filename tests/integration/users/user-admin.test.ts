@@ -5,7 +5,6 @@ import { changeUserRoleAction, setUserDisabledAction } from '@/app/(desk)/admin/
 import { db } from '@/db';
 import { auditLog, users } from '@/db/schema';
 import { loadUser } from '@/lib/auth/load-user';
-import { AuthError } from '@/lib/auth/guards';
 import { changeUserRole, setUserDisabled } from '@/lib/users/mutations';
 import { listUsers } from '@/lib/users/queries';
 import { makeAccount, makeUser } from '../helpers/fixtures';
@@ -70,8 +69,11 @@ describe('people and roles', () => {
   it('roles without users:manage cannot list people or change roles', async () => {
     const engineer = await makeUser('sales_engineer');
     const support = await makeUser('support');
-    await expect(listUsers(support)).rejects.toBeInstanceOf(AuthError);
-    await expect(changeUserRole(support, { userId: engineer.id, role: 'admin' })).rejects.toBeInstanceOf(AuthError);
+    await expect(listUsers(support)).rejects.toMatchObject({ code: 'forbidden', status: 403 });
+    await expect(changeUserRole(support, { userId: engineer.id, role: 'admin' })).rejects.toMatchObject({
+      code: 'forbidden',
+      status: 403,
+    });
     expect((await roleOf(engineer.id))?.role).toBe('sales_engineer');
   });
 
@@ -114,7 +116,7 @@ describe('people and roles server actions', () => {
     await actAs(await makeUser('admin'));
     const res = await changeUserRoleAction({ userId: 'not-a-uuid', role: 'overlord' });
     expect(res).toMatchObject({ ok: false, status: 400 });
-    if (!res.ok) expect(Object.keys(res.fieldErrors).sort()).toEqual(['role', 'userId']);
+    if (!res.ok) expect([...new Set(res.errors.map((e) => e.path))].sort()).toEqual(['role', 'userId']);
   });
 
   it('change the role for an admin', async () => {

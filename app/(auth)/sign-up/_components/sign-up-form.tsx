@@ -4,7 +4,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { applyFieldErrors, formErrorText } from '@/app/_components/action-errors';
+import { showActionErrors } from '@/app/_components/action-errors';
 import { FormError } from '@/app/_components/form-errors';
 import { SubmitButton } from '@/app/_components/submit-button';
 import { TextField } from '@/app/_components/text-field';
@@ -29,7 +29,7 @@ export function SignUpForm() {
       router.push('/size');
       router.refresh();
     } else {
-      setFormError(formErrorText(res.formError, applyFieldErrors(setError, res.fieldErrors, FIELDS)));
+      setFormError(showActionErrors(setError, res.errors, FIELDS));
     }
   });
 

@@ -18,7 +18,7 @@ export const updateAccountAction = defineAction(
 
 /** The invite link comes back so the demo (local mail fake) can show it beside "sent to". */
 export const inviteMemberAction = defineAction(
-  { permission: 'member:invite', schema: inviteSchema, name: 'account.invite' },
+  { permission: 'member:invite', schema: inviteSchema, name: 'account.invite_member' },
   async (input, user) => {
     const { inviteUrl } = await inviteMember(user, input);
     revalidatePath(`/accounts/${input.accountId}`);

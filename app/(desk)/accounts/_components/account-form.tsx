@@ -5,7 +5,7 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
-import { applyFieldErrors, formErrorText } from '@/app/_components/action-errors';
+import { showActionErrors } from '@/app/_components/action-errors';
 import { FormError, FormNotice } from '@/app/_components/form-errors';
 import { SubmitButton } from '@/app/_components/submit-button';
 import { TextField } from '@/app/_components/text-field';
@@ -72,7 +72,7 @@ export function AccountForm({ mode, initial }: { mode: Mode; initial?: FormValue
         ? await createAccountAction(fields)
         : await updateAccountAction({ ...fields, accountId: mode.accountId });
     if (!res.ok) {
-      setFormError(formErrorText(res.formError, applyFieldErrors(setError, res.fieldErrors, FIELDS)));
+      setFormError(showActionErrors(setError, res.errors, FIELDS));
       return;
     }
     if (mode.kind === 'create' && 'id' in res.data) {

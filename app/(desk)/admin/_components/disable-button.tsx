@@ -2,6 +2,7 @@
 
 import { useRouter } from 'next/navigation';
 import { useState, useTransition } from 'react';
+import { summaryOf } from '@/app/_components/action-errors';
 import { FormError } from '@/app/_components/form-errors';
 import { SubmitButton } from '@/app/_components/submit-button';
 import { setUserDisabledAction } from '../actions';
@@ -16,7 +17,7 @@ export function DisableButton({ userId, disabled, name }: { userId: string; disa
       setError(null);
       const res = await setUserDisabledAction({ userId, disabled: !disabled });
       if (res.ok) router.refresh();
-      else setError(res.formError ?? 'Nothing was changed.');
+      else setError(summaryOf(res.errors, 'Nothing was changed.'));
     });
   return (
     <div className="space-y-1">

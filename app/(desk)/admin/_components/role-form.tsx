@@ -4,7 +4,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { applyFieldErrors, formErrorText } from '@/app/_components/action-errors';
+import { showActionErrors } from '@/app/_components/action-errors';
 import { FormError } from '@/app/_components/form-errors';
 import { SelectField } from '@/app/_components/select-field';
 import { SubmitButton } from '@/app/_components/submit-button';
@@ -24,7 +24,7 @@ export function RoleForm({ userId, role, name }: { userId: string; role: UserRol
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
     const res = await changeUserRoleAction(values);
-    if (!res.ok) setFormError(formErrorText(res.formError, applyFieldErrors(setError, res.fieldErrors, ['role'])));
+    if (!res.ok) setFormError(showActionErrors(setError, res.errors, ['role']));
     else router.refresh();
   });
 

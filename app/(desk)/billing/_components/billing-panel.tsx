@@ -2,6 +2,8 @@
 
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
+import { summaryOf } from '@/app/_components/action-errors';
+import type { ActionResult } from '@/lib/actions/define-action';
 import type { Entitlement } from '@/lib/billing/entitlements';
 import type { Plan } from '@/lib/billing/plans';
 import { openPortalAction, startCheckoutAction } from '../actions';
@@ -32,15 +34,13 @@ export function BillingPanel({
     initialData: initial,
     refetchInterval: (q) => (checkout === 'success' && !q.state.data?.unlocked ? 1000 : false),
   });
-  const go = async (
-    run: () => Promise<{ ok: true; data: { url: string } } | { ok: false; formError: string | null }>,
-  ) => {
+  const go = async (run: () => Promise<ActionResult<{ url: string }>>) => {
     setBusy(true);
     setError(null);
     const res = await run();
     if (res.ok) window.location.assign(res.data.url);
     else {
-      setError(res.formError ?? 'That did not work; try again.');
+      setError(summaryOf(res.errors, 'That did not work; try again.'));
       setBusy(false);
     }
   };

@@ -11,7 +11,7 @@ function refresh(quoteId: string) {
 }
 
 export const addQuoteLineAction = defineAction(
-  { permission: 'quote:manage', schema: quoteItemSchema, name: 'quote.line_add' },
+  { permission: 'quote:manage', schema: quoteItemSchema, name: 'quote.add_line' },
   async (input, user) => {
     await addQuoteItem(user, input.quoteId, input.sizingId, input.quantity);
     refresh(input.quoteId);
@@ -20,7 +20,7 @@ export const addQuoteLineAction = defineAction(
 );
 
 export const removeQuoteLineAction = defineAction(
-  { permission: 'quote:manage', schema: quoteItemRemoveSchema, name: 'quote.line_remove' },
+  { permission: 'quote:manage', schema: quoteItemRemoveSchema, name: 'quote.remove_line' },
   async (input, user) => {
     await removeQuoteItem(user, input.quoteId, input.itemId);
     refresh(input.quoteId);
@@ -29,7 +29,7 @@ export const removeQuoteLineAction = defineAction(
 );
 
 export const setQuoteStatusAction = defineAction(
-  { permission: 'quote:manage', schema: quoteStatusSchema, name: 'quote.status' },
+  { permission: 'quote:manage', schema: quoteStatusSchema, name: 'quote.set_status' },
   async (input, user) => {
     await setQuoteStatus(user, input.quoteId, input.status);
     refresh(input.quoteId);

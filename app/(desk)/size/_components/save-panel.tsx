@@ -5,6 +5,7 @@ import Link from 'next/link';
 import { useState, useTransition } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
+import { showActionErrors } from '@/app/_components/action-errors';
 import { SelectField } from '@/app/_components/select-field';
 import { TextField } from '@/app/_components/text-field';
 import { TextareaField } from '@/app/_components/textarea-field';
@@ -56,13 +57,7 @@ export function SavePanel({ input, accountId, accounts, quotes, canQuote, reopen
         if (revisedFromId) setRevisedFromId(res.data.id);
         return;
       }
-      const other: string[] = [];
-      for (const [key, messages] of Object.entries(res.fieldErrors)) {
-        if (key === 'title' || key === 'equipmentTag' || key === 'notes' || key === 'quoteId')
-          setError(key, { type: 'server', message: messages.join(' ') });
-        else other.push(messages.join(' '));
-      }
-      setFormError([res.formError, ...other].filter(Boolean).join(' '));
+      setFormError(showActionErrors(setError, res.errors, ['title', 'equipmentTag', 'notes', 'quoteId']));
     });
   });
   return (

@@ -1,7 +1,7 @@
 import 'server-only';
 import { z } from 'zod';
 import type { CurrentUser } from '@/lib/auth/current-user';
-import { NotFoundError } from '@/lib/auth/guards';
+import { isAppError } from '@/lib/errors';
 import { can } from '@/lib/auth/roles';
 import { sizingRequestSchema, type SizingInput } from '@/lib/engine';
 import { getSizing } from '@/lib/sizings/queries';
@@ -49,7 +49,7 @@ async function fromSaved(user: CurrentUser | null, id: string, revise: boolean):
     }
     return { input: parsed.data, reopened, notices: [] };
   } catch (err) {
-    if (err instanceof NotFoundError)
+    if (isAppError(err, 'not_found'))
       return { input: null, reopened: null, notices: ['That saved sizing could not be opened.'] };
     throw err;
   }

@@ -1,4 +1,5 @@
-import { issuesFromZod, sizingRequestSchema, type SizingInput, type SizingRequest } from '@/lib/engine';
+import { sizingRequestSchema, type SizingInput, type SizingRequest } from '@/lib/engine';
+import { issuesOf } from '@/lib/errors';
 
 /** Longest `i` parameter accepted: a request is a few hundred bytes; anything far larger is not ours. */
 export const MAX_SHARE_PARAM_CHARS = 4096;
@@ -42,7 +43,7 @@ export function decodeShareParam(param: string): ShareDecode {
   }
   const parsed = sizingRequestSchema.safeParse(json);
   if (!parsed.success) {
-    const first = issuesFromZod(parsed.error)[0];
+    const first = issuesOf(parsed.error)[0];
     return {
       ok: false,
       reason: `the link's inputs are not a valid sizing${first ? ` (${first.path || 'request'}: ${first.message})` : ''}`,

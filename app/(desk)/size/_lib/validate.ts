@@ -1,4 +1,5 @@
-import { issuesFromZod, sizingRequestSchema, type SizingInput, type SizingRequest } from '@/lib/engine';
+import { sizingRequestSchema, type SizingInput, type SizingRequest } from '@/lib/engine';
+import { issuesOf } from '@/lib/errors';
 import { groupIssues, type DeskIssues } from './field-paths';
 import type { DeskValues } from './form-types';
 import { toRequest } from './to-request';
@@ -11,7 +12,7 @@ export type DeskValidation =
 export function validateDesk(values: DeskValues): DeskValidation {
   const request = toRequest(values);
   const parsed = sizingRequestSchema.safeParse(request);
-  if (!parsed.success) return { ok: false, request, issues: groupIssues(issuesFromZod(parsed.error), values.service) };
+  if (!parsed.success) return { ok: false, request, issues: groupIssues(issuesOf(parsed.error), values.service) };
   // Numbers coerced, units canonical, defaults filled: equal inputs give equal keys whatever was typed.
   return { ok: true, request, input: parsed.data, key: JSON.stringify(parsed.data) };
 }

@@ -5,7 +5,7 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
-import { applyFieldErrors, formErrorText } from '@/app/_components/action-errors';
+import { showActionErrors } from '@/app/_components/action-errors';
 import { FormError } from '@/app/_components/form-errors';
 import { SubmitButton } from '@/app/_components/submit-button';
 import { TextField } from '@/app/_components/text-field';
@@ -30,7 +30,7 @@ export function AcceptInviteForm({ token, email }: { token: string; email: strin
       router.push('/size');
       router.refresh();
     } else {
-      setFormError(formErrorText(res.formError, applyFieldErrors(setError, res.fieldErrors, ['name', 'password'])));
+      setFormError(showActionErrors(setError, res.errors, ['name', 'password']));
     }
   });
 

@@ -5,7 +5,7 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
-import { applyFieldErrors, formErrorText } from '@/app/_components/action-errors';
+import { showActionErrors } from '@/app/_components/action-errors';
 import { FormError } from '@/app/_components/form-errors';
 import { SelectField } from '@/app/_components/select-field';
 import { SubmitButton } from '@/app/_components/submit-button';
@@ -34,7 +34,7 @@ export function AddLineForm({ quoteId, sizings }: { quoteId: string; sizings: Si
     setFormError(null);
     const res = await addQuoteLineAction(values);
     if (!res.ok) {
-      setFormError(formErrorText(res.formError, applyFieldErrors(setError, res.fieldErrors, ['sizingId', 'quantity'])));
+      setFormError(showActionErrors(setError, res.errors, ['sizingId', 'quantity']));
       return;
     }
     reset({ quoteId, sizingId: '', quantity: '1' });

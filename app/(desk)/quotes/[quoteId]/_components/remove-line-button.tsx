@@ -2,6 +2,7 @@
 
 import { useRouter } from 'next/navigation';
 import { useState, useTransition } from 'react';
+import { summaryOf } from '@/app/_components/action-errors';
 import { removeQuoteLineAction } from '../actions';
 
 /** Removes one line from a draft quote; a refusal (quote no longer draft) is said beside the button. */
@@ -14,7 +15,7 @@ export function RemoveLineButton({ quoteId, itemId, label }: { quoteId: string; 
       setError(null);
       const res = await removeQuoteLineAction({ quoteId, itemId });
       if (res.ok) router.refresh();
-      else setError(res.formError ?? 'The line was not removed.');
+      else setError(summaryOf(res.errors, 'The line was not removed.'));
     });
   return (
     <div>

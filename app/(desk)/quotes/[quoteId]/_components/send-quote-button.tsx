@@ -2,6 +2,7 @@
 
 import { useRouter } from 'next/navigation';
 import { useState, useTransition } from 'react';
+import { summaryOf } from '@/app/_components/action-errors';
 import { FormError, FormNotice } from '@/app/_components/form-errors';
 import { SubmitButton } from '@/app/_components/submit-button';
 import { sendQuoteAction } from '../actions';
@@ -22,7 +23,7 @@ export function SendQuoteButton({ quoteId, to, alreadySent, lineCount }: Props) 
       if (res.ok) {
         setSentTo(res.data.to);
         router.refresh();
-      } else setError(res.formError ?? 'The quote was not sent.');
+      } else setError(summaryOf(res.errors, 'The quote was not sent.'));
     });
   return (
     <div className="space-y-3">

@@ -5,7 +5,7 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
-import { applyFieldErrors, formErrorText } from '@/app/_components/action-errors';
+import { showActionErrors } from '@/app/_components/action-errors';
 import { FormError } from '@/app/_components/form-errors';
 import { SelectField } from '@/app/_components/select-field';
 import { quoteStatusLabels } from '@/app/_components/status-badge';
@@ -27,7 +27,7 @@ export function StatusForm({ quoteId, status }: { quoteId: string; status: Value
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
     const res = await setQuoteStatusAction(values);
-    if (!res.ok) setFormError(formErrorText(res.formError, applyFieldErrors(setError, res.fieldErrors, ['status'])));
+    if (!res.ok) setFormError(showActionErrors(setError, res.errors, ['status']));
     else router.refresh();
   });
 

@@ -5,7 +5,7 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
-import { applyFieldErrors, formErrorText } from '@/app/_components/action-errors';
+import { showActionErrors } from '@/app/_components/action-errors';
 import { FormError } from '@/app/_components/form-errors';
 import { SelectField } from '@/app/_components/select-field';
 import { SubmitButton } from '@/app/_components/submit-button';
@@ -35,12 +35,7 @@ export function NewQuoteForm({ accounts, accountId, sizings }: Props) {
     setFormError(null);
     const res = await createQuoteAction({ ...values, notes: values.notes || undefined });
     if (!res.ok) {
-      setFormError(
-        formErrorText(
-          res.formError,
-          applyFieldErrors(setError, res.fieldErrors, ['accountId', 'title', 'notes', 'sizingIds']),
-        ),
-      );
+      setFormError(showActionErrors(setError, res.errors, ['accountId', 'title', 'notes', 'sizingIds']));
       return;
     }
     router.push(`/quotes/${res.data.id}`);

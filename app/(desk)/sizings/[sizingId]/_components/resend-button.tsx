@@ -1,6 +1,7 @@
 'use client';
 
 import { useState, useTransition } from 'react';
+import { summaryOf } from '@/app/_components/action-errors';
 import { resendDatasheetEmailAction } from '../actions';
 
 /** Support: send the latest datasheet e-mail to the account contact again. */
@@ -23,7 +24,7 @@ export function ResendButton({ sizingId }: { sizingId: string }) {
                     ok: true,
                     text: `Queued to ${res.data.to} (${res.data.datasheetNumber} rev. ${res.data.revision}).`,
                   }
-                : { ok: false, text: res.formError ?? 'Could not resend.' },
+                : { ok: false, text: summaryOf(res.errors, 'Could not resend.') },
             );
           })
         }

@@ -1,0 +1,49 @@
+// Every background job's queue, with its retry policy. Pure data plus the install step, so the
+// migration script (plain Node) can create them too. Run by lib/jobs/worker.mts; see DEVELOPERS.md.
+import type PgBoss from 'pg-boss';
+
+/** pg-boss keeps its tables in this schema unless JOBS_SCHEMA names another (tests use one per file). */
+export const DEFAULT_JOBS_SCHEMA = 'pgboss';
+
+export type QueueSpec = {
+  name: string;
+  options: Omit<PgBoss.Queue, 'name'>;
+  /** Cron expression (UTC) for jobs the worker starts on a timetable rather than on a cause. */
+  cron?: string;
+};
+
+/**
+ * Outgoing mail. pg-boss retries a failed send after retryDelay * 2^n * (1 + jitter) seconds
+ * (15-30 s, 30-60 s, ... ; its back-off has no cap in this major version), so nine retries ride out
+ * an SMTP outage of two to four hours [cp: this queue's schedule]. A send that has not reported back
+ * after 60 s counts as failed (a worker that died mid-send); the last failure goes to the dead letters.
+ */
+export const MAIL_QUEUE = 'mail';
+/** Mail whose last allowed attempt failed or never reported back: the worker records it as given up. */
+export const MAIL_DEAD_QUEUE = 'mail-dead';
+/** Removes blob-store objects a crashed datasheet issue left behind (S3 only; PostgreSQL is transactional). */
+export const BLOB_SWEEP_QUEUE = 'blob-sweep';
+
+export const queues: readonly QueueSpec[] = [
+  { name: MAIL_DEAD_QUEUE, options: { retryLimit: 5, retryDelay: 30, retryBackoff: true } },
+  {
+    name: MAIL_QUEUE,
+    options: {
+      retryLimit: 9,
+      retryDelay: 15,
+      retryBackoff: true,
+      expireInSeconds: 60,
+      deadLetter: MAIL_DEAD_QUEUE,
+    },
+  },
+  // Every ten minutes is plenty for leftovers of a rare crash; a missed run is simply the next one.
+  { name: BLOB_SWEEP_QUEUE, options: { retryLimit: 0, expireInSeconds: 600 }, cron: '*/10 * * * *' },
+];
+
+/** Creates every queue, or brings an existing one's retry policy up to date. Safe to run again. */
+export async function installQueues(boss: PgBoss): Promise<void> {
+  for (const q of queues) {
+    await boss.createQueue(q.name, { name: q.name, ...q.options });
+    await boss.updateQueue(q.name, { name: q.name, ...q.options });
+  }
+}
