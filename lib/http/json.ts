@@ -1,31 +1,28 @@
 import 'server-only';
 import type { z } from 'zod';
+import { readBodyLimited, sizeLabel } from './read-limited';
 
 export type ApiFieldError = { path: string; message: string };
 
-/** Reads a JSON body with a size cap; answers with the problem instead of throwing. */
+/** Reads a JSON body, stopping at `maxBytes` (413); answers with the problem instead of throwing. */
 export async function readJsonBody(
   req: Request,
   maxBytes: number,
 ): Promise<{ ok: true; value: unknown } | { ok: false; response: Response }> {
-  const declared = Number(req.headers.get('content-length') ?? '0');
-  if (declared > maxBytes) return { ok: false, response: tooLarge(maxBytes) };
-  let text: string;
-  try {
-    text = await req.text();
-  } catch {
-    // A client that gives up mid-body (a superseded request) sent nothing usable.
+  const body = await readBodyLimited(req, maxBytes);
+  if (!body.ok)
     return {
       ok: false,
-      response: Response.json(
-        { errors: [{ path: '', message: 'The request body could not be read completely.' }] },
-        { status: 400 },
-      ),
+      response:
+        body.reason === 'too-large'
+          ? tooLarge(maxBytes)
+          : Response.json(
+              { errors: [{ path: '', message: 'The request body could not be read completely.' }] },
+              { status: 400 },
+            ),
     };
-  }
-  if (Buffer.byteLength(text) > maxBytes) return { ok: false, response: tooLarge(maxBytes) };
   try {
-    return { ok: true, value: JSON.parse(text) };
+    return { ok: true, value: JSON.parse(new TextDecoder().decode(body.bytes)) };
   } catch {
     return {
       ok: false,
@@ -37,9 +34,10 @@ export async function readJsonBody(
   }
 }
 
-function tooLarge(maxBytes: number): Response {
+/** 413 naming the limit. */
+export function tooLarge(maxBytes: number): Response {
   return Response.json(
-    { errors: [{ path: '', message: `The request body is larger than ${Math.round(maxBytes / 1024)} KiB.` }] },
+    { errors: [{ path: '', message: `The request body is larger than ${sizeLabel(maxBytes)}.` }] },
     { status: 413 },
   );
 }

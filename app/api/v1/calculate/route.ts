@@ -1,4 +1,3 @@
-import { env } from '@/lib/env';
 import { readJsonBody } from '@/lib/http/json';
 import { limitRequest } from '@/lib/ratelimit/guard-request';
 import { logger } from '@/lib/log/logger';
@@ -11,7 +10,7 @@ const MAX_BODY_BYTES = 64 * 1024;
 
 /** Public sizing endpoint: 200 with the result, 400 with every refused field, 413 above 64 KiB, 429 over the rate limit. */
 export async function POST(req: Request): Promise<Response> {
-  const limited = await limitRequest(req, 'calculate', env.RATE_LIMIT_CALCULATE_PER_MIN);
+  const limited = await limitRequest(req, 'calculate');
   if (limited) return limited;
   const body = await readJsonBody(req, MAX_BODY_BYTES);
   if (!body.ok) return body.response;

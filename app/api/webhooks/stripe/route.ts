@@ -2,6 +2,7 @@ import type Stripe from 'stripe';
 import { stripe } from '@/lib/billing/stripe-client';
 import { applyStripeEvent, isHandled } from '@/lib/billing/webhook';
 import { env } from '@/lib/env';
+import { readBodyLimited } from '@/lib/http/read-limited';
 import { logger } from '@/lib/log/logger';
 
 export const runtime = 'nodejs';
@@ -12,9 +13,14 @@ const MAX_BODY = 512 * 1024;
 /** Payment events: raw body, verified signature, allow-listed types, 5xx on failure so the sender retries. */
 export async function POST(req: Request) {
   const signature = req.headers.get('stripe-signature');
-  const body = await req.text();
   if (!signature) return Response.json({ error: 'missing Stripe-Signature header' }, { status: 400 });
-  if (Buffer.byteLength(body) > MAX_BODY) return Response.json({ error: 'payload too large' }, { status: 413 });
+  // Bounded while it is read, before any signature work: an unsigned flood costs at most MAX_BODY each.
+  const read = await readBodyLimited(req, MAX_BODY);
+  if (!read.ok)
+    return read.reason === 'too-large'
+      ? Response.json({ error: 'payload too large' }, { status: 413 })
+      : Response.json({ error: 'body could not be read' }, { status: 400 });
+  const body = Buffer.from(read.bytes).toString('utf8');
   let event: Stripe.Event;
   try {
     event = stripe().webhooks.constructEvent(body, signature, env.STRIPE_WEBHOOK_SECRET);
