@@ -14,8 +14,8 @@ export function AccountExistsEmail({ signInUrl, resetUrl }: Props) {
     >
       <Para>Hello,</Para>
       <Para>
-        Someone tried to create a Dutywise account with this address, which already has a sign-in. No new account
-        was created.
+        Someone tried to create a Dutywise account with this address, which already has a sign-in. No new account was
+        created.
       </Para>
       <ActionButton href={signInUrl}>Sign in</ActionButton>
       <Para>

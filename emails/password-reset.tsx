@@ -16,8 +16,8 @@ export function PasswordResetEmail({ resetUrl, expiresInMinutes }: Props) {
       <Para>Someone, probably you, asked to reset the password of the Dutywise sign-in for this address.</Para>
       <ActionButton href={resetUrl}>Choose a new password</ActionButton>
       <Para>
-        The link works once and expires in {expiresInMinutes} minutes. Setting a new password signs out every device
-        that is signed in with the old one.
+        The link works once and expires in {`${expiresInMinutes} minutes`}. Setting a new password signs out every
+        device that is signed in with the old one.
       </Para>
     </MailLayout>
   );

@@ -14,11 +14,11 @@ export function VerifyEmail({ name, verifyUrl, expiresInHours }: Props) {
     >
       <Para>Hello {name},</Para>
       <Para>
-        Confirm that this is your address to finish setting up your Dutywise sign-in. Until then the account cannot
-        save sizings and no billing mail is sent here.
+        Confirm that this is your address to finish setting up your Dutywise sign-in. Until then the account cannot save
+        sizings and no billing mail is sent here.
       </Para>
       <ActionButton href={verifyUrl}>Confirm my address</ActionButton>
-      <Para>The link works once and expires in {expiresInHours} hours.</Para>
+      <Para>The link works once and expires in {`${expiresInHours} hours`}.</Para>
     </MailLayout>
   );
 }

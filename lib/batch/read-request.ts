@@ -18,8 +18,7 @@ export type BatchUpload = {
 export async function readBatchRequest(req: Request): Promise<BatchUpload> {
   // The whole request (file, edited rows, target) is read with a cap, then parsed from memory.
   const read = await readBodyLimited(req, BATCH_REQUEST_MAX_BYTES);
-  if (!read.ok && read.reason === 'too-large')
-    throw new ActionError('The upload is larger than the 2 MiB limit.', 413);
+  if (!read.ok && read.reason === 'too-large') throw new ActionError('The upload is larger than the 2 MiB limit.', 413);
   if (!read.ok) throw new ActionError('The upload could not be read completely; send it again.', 400);
   let form: FormData;
   try {

@@ -10,6 +10,8 @@ import { logger } from '@/lib/log/logger';
 import { drainOutbox } from './drain';
 import { sweepOrphanBlobs } from '@/lib/blob';
 import { env } from '@/lib/env';
+import { sweepExpiredSessions } from '@/lib/auth/local/session-store';
+import { refuseUnsafeStart } from '@/lib/security/start-check';
 import { outboxChannel } from './enqueue';
 
 const { values } = parseArgs({
@@ -94,9 +96,19 @@ async function sweepIfDue() {
   if (report && report.deleted.length) log.info({ deleted: report.deleted.length }, 'orphan blobs removed');
 }
 
+// Expired sign-in sessions are deleted on the same schedule (each sign-in also clears its own user's).
+let lastSessionSweep = 0;
+async function sweepSessionsIfDue() {
+  if (Date.now() - lastSessionSweep < SWEEP_EVERY_MS) return;
+  lastSessionSweep = Date.now();
+  await sweepExpiredSessions().catch((err: unknown) => log.warn({ err: String(err) }, 'session sweep failed'));
+}
+
+await refuseUnsafeStart({ server: false });
 log.info({ intervalMs, limit, toAddressLike }, 'mail worker started');
 while (!stopping) {
   await sweepIfDue();
+  await sweepSessionsIfDue();
   notified = false;
   let full = false;
   try {

@@ -57,10 +57,7 @@ function trusted(list: BlockList, addr: string): boolean {
  * the socket when a client sent none. A production start refuses to run without server.mjs.
  */
 export function clientAddress(headers: Headers, proxies: BlockList): string {
-  const chain = (headers.get('x-forwarded-for') ?? '')
-    .split(',')
-    .map(normaliseAddress)
-    .filter(Boolean);
+  const chain = (headers.get('x-forwarded-for') ?? '').split(',').map(normaliseAddress).filter(Boolean);
   let current = peerHeaderTrusted() ? normaliseAddress(headers.get(PEER_HEADER) ?? '') : (chain.pop() ?? '');
   while (trusted(proxies, current) && chain.length) current = chain.pop()!;
   return current.slice(0, 64) || 'unknown';

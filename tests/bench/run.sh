@@ -28,7 +28,7 @@ if [ "${BENCH_SKIP_LOAD:-0}" != 1 ]; then
   export NEXT_DIST_DIR=.next-bench
   [ -f .next-bench/BUILD_ID ] || npx next build || exit 1
   pids=()
-  RATE_LIMIT_CALCULATE_PER_MIN=100000000 LOG_LEVEL=warn node node_modules/next/dist/bin/next start -p 3200 > .data/bench-app.log 2>&1 & pids+=($!)
+  DEMO_MODE=on RATE_LIMIT_CALCULATE_PER_MIN=100000000 LOG_LEVEL=warn node server.mjs --port 3200 > .data/bench-app.log 2>&1 & pids+=($!)
   # node itself, not an npx/tsx wrapper, so the kill below reaches the server
   node --import tsx tests/bench/bare-server.ts 3299 > .data/bench-bare.log 2>&1 & pids+=($!)
   for _ in $(seq 1 60); do curl -fs http://localhost:3200/api/health >/dev/null 2>&1 && break; sleep 1; done

@@ -18,7 +18,10 @@ export function AuthFrame({ title, children }: { title: string; children: ReactN
 /** A mailed link that cannot be used (unknown, used, expired): what happened and what to do. */
 export function DeadLink({ children }: { children: ReactNode }) {
   return (
-    <div className="mt-6 rounded-panel border border-paper-line bg-paper-raised p-4 text-sm" data-testid="link-unusable">
+    <div
+      className="mt-6 rounded-panel border border-paper-line bg-paper-raised p-4 text-sm"
+      data-testid="link-unusable"
+    >
       {children}
     </div>
   );

@@ -30,8 +30,8 @@ export function ForgotForm() {
   if (sentTo)
     return (
       <p role="status" data-testid="reset-sent" className="mt-6 text-sm text-ink-soft">
-        If <span className="font-mono">{sentTo}</span> has a Dutywise sign-in, a link to choose a new password is on
-        its way. It works once, for an hour.
+        If <span className="font-mono">{sentTo}</span> has a Dutywise sign-in, a link to choose a new password is on its
+        way. It works once, for an hour.
       </p>
     );
   return (

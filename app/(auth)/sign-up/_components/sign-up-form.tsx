@@ -34,7 +34,11 @@ export function SignUpForm() {
   const e = formState.errors;
   if (sentTo)
     return (
-      <div role="status" data-testid="sign-up-sent" className="mt-6 rounded-panel border border-tide-100 bg-tide-50 p-4">
+      <div
+        role="status"
+        data-testid="sign-up-sent"
+        className="mt-6 rounded-panel border border-tide-100 bg-tide-50 p-4"
+      >
         <p className="font-medium">Check your inbox</p>
         <p className="mt-2 text-sm text-ink-soft">
           We have sent a link to <span className="font-mono">{sentTo}</span>. Follow it within 48 hours to confirm the
