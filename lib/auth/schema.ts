@@ -19,7 +19,7 @@ export const nameText = (what: string, min: number, max: number) =>
     .trim()
     .min(min, { message: `Enter ${what} (${min} to ${max} characters).` })
     .max(max, { message: `Enter ${what} (${min} to ${max} characters).` })
-     
+
     .refine((v) => !/[\u0000-\u001f\u007f]/.test(v), { message: `${what} cannot hold line breaks or tabs.` });
 
 export const signInSchema = z.object({

@@ -7,6 +7,7 @@ import { writeAudit } from '@/lib/audit/write';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { assertAccountAccess } from '@/lib/auth/guards';
 import { can } from '@/lib/auth/roles';
+import { assertSubscribed } from '@/lib/billing/entitlements';
 import { accountKey, getBlobStore } from '@/lib/blob';
 import { addQuoteItems, createQuote } from '@/lib/quotes/mutations';
 import { insertSizings } from '@/lib/sizings/save';
@@ -62,6 +63,7 @@ export async function saveBatch(
   file: { name: string; type: string; bytes: Buffer },
 ): Promise<BatchSaved> {
   assertAccountAccess(user, target.accountId);
+  await assertSubscribed(user, 'Batch upload');
   if ((target.quoteId || target.newQuoteTitle) && !can(user.role, 'quote:manage'))
     throw new ActionError('Only vendor staff put batch rows on a quote.', 403);
   if (target.newQuoteTitle && (target.newQuoteTitle.length < 3 || target.newQuoteTitle.length > 160))

@@ -2,9 +2,11 @@ import 'server-only';
 import { ActionError, fieldErrorsOf } from '@/lib/actions/define-action';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { AuthError } from '@/lib/auth/guards';
-import { can } from '@/lib/auth/roles';
+import { can, isStaff } from '@/lib/auth/roles';
 import { getBlobStore, type BlobStore } from '@/lib/blob';
+import { enforce } from '@/lib/ratelimit/limit';
 import { getSizing } from '@/lib/sizings/queries';
+import { assertCustomerMayIssue } from './issuer-rule';
 import { commitIssue, type BeforeCommit, type IssuedRevision } from './issue-commit';
 import { engineResultOf, loadIssueAccount, planIssue } from './issue-plan';
 import { renderDatasheetPdf } from './render';
@@ -31,6 +33,8 @@ export async function issueDatasheet(
   if (!parsed.success) throw new ActionError('The datasheet request is not valid.', 400, fieldErrorsOf(parsed.error));
   const sizing = await getSizing(user, parsed.data.sizingId);
   engineResultOf(sizing);
+  if (!isStaff(user.role)) await assertCustomerMayIssue(sizing.id);
+  await enforce('datasheet issues', ['datasheet.user', user.id], ['datasheet.account', sizing.accountId]);
   const account = await loadIssueAccount(sizing.accountId);
   const store = opts.store ?? getBlobStore();
   for (let attempt = 0; attempt < ATTEMPTS; attempt++) {

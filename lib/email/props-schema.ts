@@ -8,7 +8,7 @@ const link = z.string().trim().min(1, 'must be an absolute URL or an app path st
 // Names people choose (account, person, quote and sizing titles) reach subject lines and bodies: bounded, and with
 // control characters and text-direction overrides turned into spaces, so a name cannot fake a header or reorder
 // the words around it. React escapes markup in the body.
- 
+
 const unsafeChars = /[\u0000-\u001f\u007f\u202a-\u202e\u2066-\u2069]/g;
 const name = text.max(160, 'must be at most 160 characters').transform((v) => v.replace(unsafeChars, ' '));
 

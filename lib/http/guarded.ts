@@ -25,11 +25,14 @@ export function guarded(
     } catch (err) {
       if (err instanceof AuthError || err instanceof NotFoundError)
         return Response.json({ errors: [{ path: '', message: err.message }] }, { status: err.status });
-      if (err instanceof ActionError)
+      if (err instanceof ActionError) {
+        // A rate-limit refusal says when to come back.
+        const retry = (err as { retryAfterS?: number }).retryAfterS;
         return Response.json(
           { errors: [{ path: '', message: err.message }], fieldErrors: err.fieldErrors },
-          { status: err.status },
+          { status: err.status, headers: retry ? { 'Retry-After': String(retry) } : undefined },
         );
+      }
       if (isDbDown(err))
         return Response.json(
           { errors: [{ path: '', message: `Service temporarily unavailable: ${describeDbError(err)}` }] },

@@ -20,7 +20,7 @@ export function safeNextPath(next: unknown, appUrl: string): string {
   } catch {
     return DESK_PATH;
   }
-   
+
   if (/[\\\u0000-\u001f\u007f]/.test(raw) || /[\\\u0000-\u001f\u007f]/.test(decoded) || decoded.startsWith('//'))
     return DESK_PATH;
   return `${url.pathname}${url.search}${url.hash}`;

@@ -7,6 +7,7 @@ import { writeAudit } from '@/lib/audit/write';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { assertAccountAccess } from '@/lib/auth/guards';
 import { can } from '@/lib/auth/roles';
+import { assertSubscribed } from '@/lib/billing/entitlements';
 import { calculate, ENGINE_VERSION, SizingInputError, type SizingResult } from '@/lib/engine';
 import { nextNumber, nextNumbers } from '@/lib/numbering/next-number';
 import { addQuoteItem } from '@/lib/quotes/mutations';
@@ -103,6 +104,7 @@ export async function saveSizing(
   assertAccountAccess(user, meta.accountId);
   if (meta.quoteId && !can(user.role, 'quote:manage'))
     throw new ActionError('Only vendor staff add sizings to quotes.', 403);
+  await assertSubscribed(user, 'Saving sizings to your account');
   const computed = computeForSave(rawInput);
   return db.transaction(async (tx) => {
     const [acct] = await tx.select({ id: accounts.id }).from(accounts).where(eq(accounts.id, meta.accountId)).limit(1);

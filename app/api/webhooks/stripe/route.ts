@@ -1,5 +1,6 @@
 import type Stripe from 'stripe';
 import { stripe } from '@/lib/billing/stripe-client';
+import { AccountMismatchError } from '@/lib/billing/subscription-sync';
 import { applyStripeEvent, isHandled } from '@/lib/billing/webhook';
 import { env } from '@/lib/env';
 import { readBodyLimited } from '@/lib/http/read-limited';
@@ -33,6 +34,14 @@ export async function POST(req: Request) {
     logger.info({ eventId: event.id, type: event.type, outcome }, 'payment event');
     return Response.json({ received: true, outcome });
   } catch (err) {
+    if (err instanceof AccountMismatchError) {
+      // Signed, but naming an account its customer does not belong to: refused, and retrying cannot change that.
+      logger.error({ err: err.message, eventId: event.id, type: event.type }, 'payment event refused');
+      return Response.json(
+        { error: 'event refused: it names an account its customer does not belong to' },
+        { status: 422 },
+      );
+    }
     logger.error({ err, eventId: event.id, type: event.type }, 'payment event failed; the sender will retry');
     return Response.json({ error: 'processing failed; retry later' }, { status: 500 });
   }
