@@ -6,6 +6,7 @@ import { ActionError } from '@/lib/actions/define-action';
 import { writeAudit } from '@/lib/audit/write';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { AuthError } from '@/lib/auth/guards';
+import { closeAllSessions } from '@/lib/auth/local/session-store';
 import { can, roleLabels } from '@/lib/auth/roles';
 import type { UnitSystemInput, UserDisableInput, UserRoleChangeInput } from './schema';
 
@@ -82,7 +83,7 @@ export async function changeUserRole(actor: CurrentUser, input: UserRoleChangeIn
   });
 }
 
-/** Disables or re-enables a sign-in; a disabled user's sessions stop working at their next request. */
+/** Disables or re-enables a sign-in; a disabled user's sessions are deleted with it. */
 export async function setUserDisabled(actor: CurrentUser, input: UserDisableInput): Promise<{ changed: boolean }> {
   assertManager(actor);
   if (input.userId === actor.id) throw new ActionError('You cannot disable your own sign-in; ask another admin.', 409);
@@ -97,6 +98,8 @@ export async function setUserDisabled(actor: CurrentUser, input: UserDisableInpu
       .update(users)
       .set({ disabledAt: input.disabled ? new Date() : null, updatedAt: new Date() })
       .where(eq(users.id, target.id));
+    // Every session of a disabled user ends now, not when it would have expired.
+    if (input.disabled) await closeAllSessions(tx, target.id);
     await writeAudit(tx, {
       actor,
       action: input.disabled ? 'user.disabled' : 'user.enabled',

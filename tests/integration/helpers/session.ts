@@ -34,3 +34,8 @@ export function actFrom(address: string): void {
 export function currentCookie(name: string): string | undefined {
   return jar.get(name);
 }
+
+/** Presents a cookie kept from earlier again (another device, or a copied cookie). */
+export function restoreCookie(name: string, value: string): void {
+  jar.set(name, value);
+}

@@ -1,4 +1,5 @@
 import { checkLocalCredentials, startLocalSession } from '@/lib/auth/local/session';
+import { resendVerification } from '@/lib/auth/local/verification';
 import { signInSchema } from '@/lib/auth/schema';
 import { appOrigin, clerkEnabled, env } from '@/lib/env';
 import { readJsonBody, tooManyRequests, zodErrors } from '@/lib/http/json';
@@ -44,11 +45,13 @@ export async function POST(req: Request) {
     return refuse(401, 'That e-mail and password do not match a Dutywise user.');
   }
   await clearSignInFailures(email);
-  if (outcome.status === 'unverified')
+  if (outcome.status === 'unverified') {
+    await resendVerification(outcome.user.id);
     return refuse(
       403,
       'Confirm your e-mail address first: follow the link we sent when you signed up. We have sent a new one.',
     );
+  }
   await startLocalSession(outcome.user.id);
   const next = (body.value as { next?: unknown }).next;
   return Response.json({ signedIn: true, redirectTo: safeNextPath(next, env.APP_URL) });
