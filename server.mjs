@@ -13,6 +13,8 @@ const argPort = process.argv.indexOf('--port');
 const port = Number(argPort > 0 ? process.argv[argPort + 1] : (process.env.PORT ?? 3000));
 const bindAddress = process.env.BIND_ADDRESS || undefined;
 
+// As `next start` does: the built app always runs as production (lib/env.ts reads it for the start checks).
+process.env.NODE_ENV = 'production';
 globalThis.__dutywisePeerHeader = true;
 const app = next({
   dev: false,

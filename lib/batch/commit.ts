@@ -63,9 +63,9 @@ export async function saveBatch(
   file: { name: string; type: string; bytes: Buffer },
 ): Promise<BatchSaved> {
   assertAccountAccess(user, target.accountId);
-  await assertSubscribed(user, 'Batch upload');
   if ((target.quoteId || target.newQuoteTitle) && !can(user.role, 'quote:manage'))
     throw new ActionError('Only vendor staff put batch rows on a quote.', 403);
+  await assertSubscribed(user, 'Batch upload');
   if (target.newQuoteTitle && (target.newQuoteTitle.length < 3 || target.newQuoteTitle.length > 160))
     throw new ActionError('The quote title needs 3 to 160 characters.', 400, {
       newQuoteTitle: ['3 to 160 characters'],

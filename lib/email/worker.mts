@@ -11,6 +11,7 @@ import { drainOutbox } from './drain';
 import { sweepOrphanBlobs } from '@/lib/blob';
 import { env } from '@/lib/env';
 import { sweepExpiredSessions } from '@/lib/auth/local/session-store';
+import { purgeExpiredCounters } from '@/lib/ratelimit/store';
 import { refuseUnsafeStart } from '@/lib/security/start-check';
 import { outboxChannel } from './enqueue';
 
@@ -96,12 +97,14 @@ async function sweepIfDue() {
   if (report && report.deleted.length) log.info({ deleted: report.deleted.length }, 'orphan blobs removed');
 }
 
-// Expired sign-in sessions are deleted on the same schedule (each sign-in also clears its own user's).
+// Expired sign-in sessions and rate-limit counters are deleted on the same schedule (each sign-in also clears its
+// own user's sessions; each app instance's limiter sweeps counters too).
 let lastSessionSweep = 0;
 async function sweepSessionsIfDue() {
   if (Date.now() - lastSessionSweep < SWEEP_EVERY_MS) return;
   lastSessionSweep = Date.now();
   await sweepExpiredSessions().catch((err: unknown) => log.warn({ err: String(err) }, 'session sweep failed'));
+  await purgeExpiredCounters().catch((err: unknown) => log.warn({ err: String(err) }, 'rate counter sweep failed'));
 }
 
 await refuseUnsafeStart({ server: false });

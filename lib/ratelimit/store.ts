@@ -1,8 +1,8 @@
 import 'server-only';
 import { RateLimiterPostgres } from 'rate-limiter-flexible';
-import { pool } from '@/db';
+import { db, pool } from '@/db';
 import { rateLimitCounters } from '@/db/schema';
-import { getTableName } from 'drizzle-orm';
+import { getTableName, lt } from 'drizzle-orm';
 
 // rate-limiter-flexible's PostgreSQL store over the app's pool. Counters live in one table (created by a
 // migration, so the app's role needs no DDL), shared by every instance. A key over its limit is also refused in
@@ -32,4 +32,13 @@ export function limiterFor(prefix: string, points: number, durationS: number): R
     cache.set(id, limiter);
   }
   return limiter;
+}
+
+/** Deletes counters whose window ended before `beforeMs` (epoch ms); the worker's housekeeping runs it too. */
+export async function purgeExpiredCounters(beforeMs = Date.now() - 3_600_000): Promise<number> {
+  const gone = await db
+    .delete(rateLimitCounters)
+    .where(lt(rateLimitCounters.expire, beforeMs))
+    .returning({ key: rateLimitCounters.key });
+  return gone.length;
 }

@@ -45,7 +45,8 @@ describe('the app process killed during a write', () => {
     let output = '';
     child.stdout.on('data', (d) => (output += d));
     let open = false;
-    for (let i = 0; i < 400 && !open; i++) {
+    // The child compiles and loads the app first, which takes seconds when the suite runs its files in parallel.
+    for (let i = 0; i < 2000 && !open; i++) {
       open = await transactionOpen(appName);
       if (!open) await new Promise((r) => setTimeout(r, 10));
     }
