@@ -110,7 +110,7 @@ case "$cmd" in
       as_pg "$bin/initdb" -D "$data" -U postgres --auth=trust -E UTF8 --locale=C.UTF-8 >/dev/null
     fi
     write_hba
-    if is_up; then
+    if [ -f "$data/postmaster.pid" ] && is_up; then
       as_pg "$bin/pg_ctl" -D "$data" reload >/dev/null
     else
       # A pid file left by a killed server blocks start-up; remove it only if its process is gone.
