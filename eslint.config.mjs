@@ -52,7 +52,7 @@ const config = [
   prettier,
   {
     // Scripts, fakes and tests run outside Next and read their own process environment.
-    files: ['lib/env.ts', 'db/**', 'mocks/**', 'tests/**', 'drizzle.config.ts', 'next.config.ts'],
+    files: ['lib/env.ts', 'db/**', 'mocks/**', 'tests/**', 'drizzle.config.ts', 'next.config.ts', 'server.mjs'],
     rules: { 'no-restricted-properties': 'off', 'no-console': 'off' },
   },
   {

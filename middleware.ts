@@ -1,8 +1,9 @@
 import { clerkMiddleware } from '@clerk/nextjs/server';
 import { NextResponse, type NextFetchEvent, type NextRequest } from 'next/server';
 import { LOCAL_SESSION_COOKIE, verifyLocalSession } from '@/lib/auth/local/session-token';
-import { clerkEnabled, env } from '@/lib/env';
+import { appHttps, clerkEnabled, env } from '@/lib/env';
 import { databaseUp } from '@/lib/ops/db-status';
+import { clerkFrontendApiFrom, contentSecurityPolicy } from '@/lib/security/headers';
 
 // Coarse gate only: every page, action and handler checks the user and role again on the server.
 const protectedPrefixes = [
@@ -21,12 +22,26 @@ function isProtected(pathname: string): boolean {
   return protectedPrefixes.some((p) => pathname === p || pathname.startsWith(`${p}/`));
 }
 
-function withRequestId(req: NextRequest): NextResponse {
-  const requestId = req.headers.get('x-request-id') ?? crypto.randomUUID();
+const cspOptions = {
+  production: env.NODE_ENV === 'production',
+  https: appHttps,
+  clerkFrontendApi: clerkEnabled ? clerkFrontendApiFrom(env.NEXT_PUBLIC_CLERK_PUBLISHABLE_KEY) : null,
+};
+
+/**
+ * Every request gets an id made here (a client's own x-request-id is replaced, so logs cannot be forged), and every
+ * page a fresh script nonce: Next reads it from the request's Content-Security-Policy and puts it on its scripts.
+ */
+function withRequestHeaders(req: NextRequest): NextResponse {
+  const requestId = crypto.randomUUID();
   const headers = new Headers(req.headers);
   headers.set('x-request-id', requestId);
+  const page = !req.nextUrl.pathname.startsWith('/api/');
+  const csp = page ? contentSecurityPolicy(cspOptions, Buffer.from(crypto.randomUUID()).toString('base64')) : null;
+  if (csp) headers.set('content-security-policy', csp);
   const res = NextResponse.next({ request: { headers } });
   res.headers.set('x-request-id', requestId);
+  if (csp) res.headers.set('content-security-policy', csp);
   return res;
 }
 
@@ -61,7 +76,7 @@ async function localGate(req: NextRequest): Promise<NextResponse> {
     const claims = await verifyLocalSession(req.cookies.get(LOCAL_SESSION_COOKIE)?.value, env.SESSION_SECRET);
     if (!claims) return toSignIn(req);
   }
-  return withRequestId(req);
+  return withRequestHeaders(req);
 }
 
 // Chosen once at load: Clerk's middleware answers 500 on every route when its keys are missing.
@@ -72,7 +87,7 @@ const clerkGate = clerkEnabled
           const { userId } = await auth();
           if (!userId) return toSignIn(req);
         }
-        return withRequestId(req);
+        return withRequestHeaders(req);
       },
       { jwtKey: env.CLERK_JWT_KEY },
     )

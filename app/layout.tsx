@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
 import type { ReactNode } from 'react';
 import { ClerkProvider } from '@clerk/nextjs';
+import { headers } from 'next/headers';
 import { clerkEnabled } from '@/lib/env';
 import { plexMono, plexSans } from './fonts';
 import { Providers } from './_components/providers';
@@ -11,7 +12,10 @@ export const metadata: Metadata = {
   description: 'Heater duty and compressor power sizing desk for process gas equipment quotes.',
 };
 
-export default function RootLayout({ children }: { children: ReactNode }) {
+export default async function RootLayout({ children }: { children: ReactNode }) {
+  // Reading the request renders every page per request, which the per-request script nonce (middleware.ts) needs:
+  // a page prerendered at build time would carry scripts without it.
+  await headers();
   const page = (
     <html lang="en" className={`${plexSans.variable} ${plexMono.variable}`}>
       <body className="min-h-screen">

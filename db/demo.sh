@@ -5,8 +5,12 @@
 set -euo pipefail
 cd "$(dirname "${BASH_SOURCE[0]}")/.."
 export NEXT_TELEMETRY_DISABLED=1 NEXT_PUBLIC_CLERK_TELEMETRY_DISABLED=1
-export DATABASE_URL="${DATABASE_URL:-postgres://postgres@127.0.0.1:55432/dutywise}"
+# The app connects as dutywise_app (owns nothing); migrations run as the schema's owner.
+export DATABASE_URL="${DATABASE_URL:-postgres://dutywise_app:${PG_APP_PASSWORD:-dutywise-app-local}@127.0.0.1:55432/dutywise_demo}"
+export MIGRATION_DATABASE_URL="${MIGRATION_DATABASE_URL:-postgres://postgres@127.0.0.1:55432/dutywise_demo}"
 export MAIL_FAKE_INBOX_URL="${MAIL_FAKE_INBOX_URL:-http://127.0.0.1:12026}"
+# Demo mode: the invented scenario's sign-ins are shown and the local fakes are allowed under the production build.
+export DEMO_MODE=on
 port="${PORT:-3000}"
 
 # Reinstall only when the lock file's content changed since the last install.
@@ -17,7 +21,8 @@ if [ ! -f node_modules/.package-lock.json ] || [ "$(cat node_modules/.dutywise-l
   echo "$lock_hash" > node_modules/.dutywise-lock-hash
 fi
 
-PG_DATA_DIR="$PWD/.data/pg-demo" PG_PORT=55432 bash db/postgres.sh start
+# db/postgres.sh keeps the cluster where its server user can reach it, wherever this checkout lives.
+PG_DATA_DIR="$PWD/.data/pg-demo" PG_PORT=55432 bash db/postgres.sh start --db dutywise_demo
 npx tsx db/migrate.mts
 npx tsx --require ./db/script-preload.cjs db/seed.ts
 
@@ -41,7 +46,7 @@ fi
 node --require ./db/script-preload.cjs --import tsx lib/jobs/worker.mts > .data/job-worker.log 2>&1 &
 pids+=($!)
 
-node node_modules/next/dist/bin/next start -p "$port" &
+node server.mjs --port "$port" &
 pids+=($!)
 
 for _ in $(seq 1 60); do curl -fs "http://localhost:$port/api/health" >/dev/null 2>&1 && break; sleep 1; done

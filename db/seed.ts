@@ -1,4 +1,6 @@
 // Seeds the invented demo scenario once. `--reset` empties every table first (test databases only).
+// The scenario's sign-ins share one published password, so the seed refuses any database whose name does not
+// end in _demo, _test or _bench unless `--force` is given.
 import { eq, sql } from 'drizzle-orm';
 import { db, pool } from '@/db';
 import { accounts, memberships, quotes, sizings, users } from '@/db/schema';
@@ -11,9 +13,14 @@ import { issueDatasheet } from '@/lib/datasheets/issue';
 import { seedAccounts, seedDatasheets, seedQuotes, seedSizings, seedUsers } from './seed-scenario';
 
 const reset = process.argv.includes('--reset');
-const dbName = new URL(process.env.DATABASE_URL ?? 'postgres://x@h/dutywise').pathname.slice(1);
+const force = process.argv.includes('--force');
+const dbName = new URL(process.env.DATABASE_URL ?? 'postgres://x@h/dutywise_demo').pathname.slice(1);
 
 async function main() {
+  if (!/_(demo|test|bench)$/.test(dbName) && !force)
+    throw new Error(
+      `the demo seed refuses '${dbName}': its users share a published password. Seed only a database named *_demo, *_test or *_bench, or pass --force.`,
+    );
   if (reset) {
     if (!dbName.endsWith('_test')) throw new Error(`--reset refuses to empty '${dbName}': only databases named *_test`);
     const tables = await db.execute<{ t: string }>(
@@ -43,7 +50,7 @@ async function main() {
     for (const u of seedUsers) {
       const [row] = await tx
         .insert(users)
-        .values({ email: u.email, name: u.name, role: u.role, passwordHash })
+        .values({ email: u.email, name: u.name, role: u.role, passwordHash, emailVerifiedAt: new Date() })
         .returning({ id: users.id });
       const accountId = u.account ? accountIds.get(u.account)! : null;
       if (accountId) await tx.insert(memberships).values({ accountId, userId: row!.id });

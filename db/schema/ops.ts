@@ -1,5 +1,6 @@
 import { sql } from 'drizzle-orm';
 import {
+  bigint,
   bigserial,
   check,
   index,
@@ -10,6 +11,7 @@ import {
   timestamp,
   uniqueIndex,
   uuid,
+  varchar,
 } from 'drizzle-orm/pg-core';
 import { accounts } from './accounts';
 import { outboxStatus } from './enums';
@@ -66,12 +68,19 @@ export const outbox = pgTable(
   ],
 );
 
-/** Fixed-window counters shared by every app instance. */
-export const rateLimits = pgTable('rate_limits', {
-  key: text('key').primaryKey(),
-  windowStart: timestamp('window_start', { withTimezone: true }).notNull(),
-  count: integer('count').notNull(),
-});
+/**
+ * Rate-limit counters shared by every app instance, in the layout rate-limiter-flexible's PostgreSQL store
+ * reads and writes (key, points, expire in epoch milliseconds). Created here so the app's role needs no DDL.
+ */
+export const rateLimitCounters = pgTable(
+  'rate_limit_counters',
+  {
+    key: varchar('key', { length: 255 }).primaryKey(),
+    points: integer('points').notNull().default(0),
+    expire: bigint('expire', { mode: 'number' }),
+  },
+  (t) => [index('rate_limit_counters_expire_idx').on(t.expire)],
+);
 
 export type AuditEntry = typeof auditLog.$inferSelect;
 export type OutboxRow = typeof outbox.$inferSelect;

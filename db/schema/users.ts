@@ -16,6 +16,9 @@ export const users = pgTable(
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
     disabledAt: timestamp('disabled_at', { withTimezone: true }),
+    // Set when the person follows the one-time link mailed to the address (or accepts an invitation sent to it,
+    // or Clerk reports the address verified). Until then the sign-in cannot act and the address gets no billing mail.
+    emailVerifiedAt: timestamp('email_verified_at', { withTimezone: true }),
   },
   (t) => [
     uniqueIndex('users_email_lower_uq').on(sql`lower(${t.email})`),

@@ -10,6 +10,7 @@ import { hashPassword } from '@/lib/auth/local/passwords';
 import { enqueueEmail } from '@/lib/email/enqueue';
 import { env } from '@/lib/env';
 import { AppError } from '@/lib/errors';
+import { enforce } from '@/lib/ratelimit/limit';
 import type { AccountInput, InviteInput } from './schema';
 
 const INVITE_DAYS = 14;
@@ -70,6 +71,7 @@ export async function updateAccount(user: CurrentUser, accountId: string, input:
 /** Invites a customer user by e-mail; the link carries a random token whose hash alone is stored. */
 export async function inviteMember(user: CurrentUser, input: InviteInput): Promise<{ inviteUrl: string }> {
   assertAccountAccess(user, input.accountId);
+  await enforce('invitations', ['invite.user', user.id], ['invite.account', input.accountId]);
   const token = randomBytes(24).toString('base64url');
   const inviteUrl = `${env.APP_URL}/invite/${token}`;
   await db.transaction(async (tx) => {
@@ -109,27 +111,36 @@ export async function inviteMember(user: CurrentUser, input: InviteInput): Promi
   return { inviteUrl };
 }
 
-/** Turns an invitation into a customer user of that account (local identity). */
+function liveInvitation(token: string) {
+  return and(
+    eq(invitations.tokenHash, hashToken(token)),
+    isNull(invitations.acceptedAt),
+    sql`${invitations.expiresAt} > now()`,
+  );
+}
+
+const deadInvitation = () => new AppError('gone', 'This invitation is not valid any more. Ask for a new one.');
+
+/**
+ * Turns an invitation into a customer user of that account (local identity). The token is checked before the
+ * password is hashed. The invitation went to this address alone, so accepting it verifies the address.
+ */
 export async function acceptInvitation(
   token: string,
   name: string,
   password: string,
 ): Promise<{ userId: string; role: 'customer' }> {
+  const [open] = await db.select({ id: invitations.id }).from(invitations).where(liveInvitation(token)).limit(1);
+  if (!open) throw deadInvitation();
   const passwordHash = await hashPassword(password);
   return db.transaction(async (tx) => {
     const [inv] = await tx
       .select({ id: invitations.id, accountId: invitations.accountId, email: invitations.email })
       .from(invitations)
-      .where(
-        and(
-          eq(invitations.tokenHash, hashToken(token)),
-          isNull(invitations.acceptedAt),
-          sql`${invitations.expiresAt} > now()`,
-        ),
-      )
+      .where(liveInvitation(token))
       .for('update')
       .limit(1);
-    if (!inv) throw new AppError('gone', 'This invitation is not valid any more. Ask for a new one.');
+    if (!inv) throw deadInvitation();
     const [taken] = await tx
       .select({ id: users.id })
       .from(users)
@@ -138,7 +149,7 @@ export async function acceptInvitation(
     if (taken) throw new AppError('conflict', 'A Dutywise user with this e-mail already exists; sign in instead.');
     const [u] = await tx
       .insert(users)
-      .values({ email: inv.email, name, role: 'customer', passwordHash })
+      .values({ email: inv.email, name, role: 'customer', passwordHash, emailVerifiedAt: new Date() })
       .returning({ id: users.id });
     if (!u) throw new Error('user insert returned no row');
     await tx.insert(memberships).values({ accountId: inv.accountId, userId: u.id });
@@ -152,53 +163,5 @@ export async function acceptInvitation(
       detail: { email: inv.email },
     });
     return { userId: u.id, role: 'customer' as const };
-  });
-}
-
-/** Self-serve sign-up: a customer user and their own account in one transaction. */
-export async function signUpCustomer(input: {
-  name: string;
-  email: string;
-  password: string;
-  company: string;
-  site?: string;
-}) {
-  const passwordHash = await hashPassword(input.password);
-  return db.transaction(async (tx) => {
-    const [taken] = await tx
-      .select({ id: users.id })
-      .from(users)
-      .where(eq(sql`lower(${users.email})`, input.email.toLowerCase()))
-      .limit(1);
-    if (taken)
-      throw new AppError('conflict', 'A Dutywise user with this e-mail already exists; sign in instead.', [
-        { path: 'email', message: 'Already registered.' },
-      ]);
-    const [u] = await tx
-      .insert(users)
-      .values({ email: input.email, name: input.name, role: 'customer', passwordHash })
-      .returning({ id: users.id });
-    if (!u) throw new Error('user insert returned no row');
-    const [a] = await tx
-      .insert(accounts)
-      .values({
-        name: input.company,
-        site: input.site,
-        billingContactName: input.name,
-        billingContactEmail: input.email,
-        createdByUserId: u.id,
-      })
-      .returning({ id: accounts.id });
-    if (!a) throw new Error('account insert returned no row');
-    await tx.insert(memberships).values({ accountId: a.id, userId: u.id });
-    await writeAudit(tx, {
-      actor: { id: u.id, role: 'customer' },
-      action: 'account.signed_up',
-      entityType: 'account',
-      entityId: a.id,
-      accountId: a.id,
-      detail: { company: input.company },
-    });
-    return { userId: u.id, accountId: a.id, role: 'customer' as const };
   });
 }

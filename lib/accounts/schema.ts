@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { mailedTokenSchema, nameText, newPasswordSchema } from '@/lib/auth/schema';
 
 const optionalText = (max: number) =>
   z
@@ -21,11 +22,7 @@ const optionalNumber = (min: number, max: number, what: string) =>
 
 /** A customer account as sales engineers create it for a prospect. */
 export const accountInputSchema = z.object({
-  name: z
-    .string()
-    .trim()
-    .min(2, { message: 'Company name needs 2 to 120 characters.' })
-    .max(120, { message: 'Company name needs 2 to 120 characters.' }),
+  name: nameText('the company name', 2, 120),
   site: optionalText(160),
   billingContactName: optionalText(120),
   billingContactEmail: z
@@ -46,7 +43,7 @@ export const inviteSchema = z.object({
 export type InviteInput = z.output<typeof inviteSchema>;
 
 export const acceptInviteSchema = z.object({
-  token: z.string().min(20).max(200),
-  name: z.string().trim().min(2, { message: 'Enter your name (2 to 100 characters).' }).max(100),
-  password: z.string().min(10, { message: 'Use at least 10 characters.' }).max(200),
+  token: mailedTokenSchema,
+  name: nameText('your name', 2, 100),
+  password: newPasswordSchema,
 });

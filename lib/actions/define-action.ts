@@ -5,7 +5,10 @@ import type { CurrentUser } from '@/lib/auth/current-user';
 import type { Permission } from '@/lib/auth/roles';
 import { AppError, errorBody, parseOrThrow, type ErrorBody } from '@/lib/errors';
 import { expectedError } from '@/lib/http/respond';
+import { clerkEnabled } from '@/lib/env';
 import { logger } from '@/lib/log/logger';
+import { limitPublicAction } from '@/lib/ratelimit/action-limit';
+import type { PolicyName } from '@/lib/ratelimit/policies';
 
 /** A failed action: its status and the same `errors` list a route handler answers with. */
 export type ActionFailure = { ok: false; status: number } & ErrorBody;
@@ -59,11 +62,24 @@ export function defineAction<S extends z.ZodType, T>(
     );
 }
 
-/** The same wrapper for the few actions a signed-out visitor calls (sign-up, accepting an invitation). */
+/**
+ * The wrapper for actions people call before they are signed in (sign-up, invitations, password reset, e-mail
+ * confirmation): local identity only, parse with the shared schema, spend the client address's budget for this
+ * form, call the domain code. Expected failures come back as values, like defineAction's.
+ */
 export function definePublicAction<S extends z.ZodType, T>(
-  opts: ActionOptions<S>,
+  opts: ActionOptions<S> & { limit: PolicyName; clerkMessage: string },
   handler: (input: z.output<S>) => Promise<T>,
 ) {
   return (raw: unknown): Promise<ActionResult<T>> =>
-    run(opts, async (input) => handler(parseOrThrow(opts.schema, input)), raw);
+    run(
+      opts,
+      async (input) => {
+        if (clerkEnabled) throw new AppError('invalid_input', opts.clerkMessage);
+        const parsed = parseOrThrow(opts.schema, input);
+        await limitPublicAction(opts.limit);
+        return handler(parsed);
+      },
+      raw,
+    );
 }

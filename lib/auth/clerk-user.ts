@@ -1,5 +1,6 @@
 import 'server-only';
 import { auth, clerkClient } from '@clerk/nextjs/server';
+import { and, eq, isNull } from 'drizzle-orm';
 import { db } from '@/db';
 import { users } from '@/db/schema';
 import { userRoles, type UserRole } from '@/db/schema/enums';
@@ -18,20 +19,25 @@ export async function resolveClerkUser(): Promise<CurrentUser | null> {
   return userId ? mapClerkUser(userId) : null;
 }
 
-/** The Dutywise user for a Clerk user id; the first time, the profile is read from Clerk's backend API. */
+/**
+ * The Dutywise user for a Clerk user id; the first time (and while the address is unverified) the profile is read
+ * from Clerk's backend API. Only an address Clerk reports verified makes the user active.
+ */
 export async function mapClerkUser(userId: string): Promise<CurrentUser | null> {
   const existing = await loadUser({ clerkUserId: userId });
   if (existing) return existing;
   const client = await clerkClient();
   const remote = await client.users.getUser(userId);
-  const email = remote.primaryEmailAddress?.emailAddress ?? remote.emailAddresses[0]?.emailAddress;
+  const primary = remote.primaryEmailAddress ?? remote.emailAddresses[0];
+  const email = primary?.emailAddress;
   if (!email) return null;
+  const verifiedAt = primary?.verification?.status === 'verified' ? new Date() : null;
   const name = [remote.firstName, remote.lastName].filter(Boolean).join(' ') || email;
   const role = roleFromMetadata(remote.publicMetadata);
   await db.transaction(async (tx) => {
     const [row] = await tx
       .insert(users)
-      .values({ email, name, role, clerkUserId: userId })
+      .values({ email, name, role, clerkUserId: userId, emailVerifiedAt: verifiedAt })
       .onConflictDoNothing()
       .returning({ id: users.id });
     if (row)
@@ -42,6 +48,11 @@ export async function mapClerkUser(userId: string): Promise<CurrentUser | null> 
         entityId: row.id,
         detail: { via: 'clerk-first-sign-in' },
       });
+    else if (verifiedAt)
+      await tx
+        .update(users)
+        .set({ emailVerifiedAt: verifiedAt })
+        .where(and(eq(users.clerkUserId, userId), isNull(users.emailVerifiedAt)));
   });
   return loadUser({ clerkUserId: userId });
 }

@@ -11,7 +11,7 @@ async function localUser(): Promise<CurrentUser | null> {
   const store = await cookies();
   const claims = await verifyLocalSession(store.get(LOCAL_SESSION_COOKIE)?.value, env.SESSION_SECRET);
   if (!claims) return null;
-  return loadUser({ id: claims.sub });
+  return loadUser({ id: claims.sub, sessionId: claims.sid });
 }
 
 async function clerkUser(): Promise<CurrentUser | null> {

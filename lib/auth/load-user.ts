@@ -1,7 +1,7 @@
 import 'server-only';
-import { eq } from 'drizzle-orm';
+import { and, eq, gt, isNotNull, isNull } from 'drizzle-orm';
 import { db } from '@/db';
-import { memberships, users } from '@/db/schema';
+import { memberships, users, userSessions } from '@/db/schema';
 import type { UserRole } from './roles';
 
 // The user record as the app sees it, read by the request's current user and by the Clerk mapping alike, so
@@ -17,25 +17,35 @@ export type CurrentUser = {
   unitSystem: 'si' | 'us';
 };
 
-/** Loads a Dutywise user with their account, or null when disabled or unknown. */
-export async function loadUser(where: { id: string } | { clerkUserId: string }): Promise<CurrentUser | null> {
-  const cond = 'id' in where ? eq(users.id, where.id) : eq(users.clerkUserId, where.clerkUserId);
-  const rows = await db
+type Lookup = { id: string } | { clerkUserId: string } | { id: string; sessionId: string };
+
+/**
+ * Loads a Dutywise user with their account, or null when disabled, unknown or not yet verified. With a session id
+ * the session row must also exist and be unexpired: signing out, a password change and disabling end it at once.
+ */
+export async function loadUser(where: Lookup): Promise<CurrentUser | null> {
+  const base = 'clerkUserId' in where ? eq(users.clerkUserId, where.clerkUserId) : eq(users.id, where.id);
+  const query = db
     .select({
       id: users.id,
       email: users.email,
       name: users.name,
       role: users.role,
       unitSystem: users.unitSystem,
-      disabledAt: users.disabledAt,
       accountId: memberships.accountId,
     })
     .from(users)
-    .leftJoin(memberships, eq(memberships.userId, users.id))
-    .where(cond)
-    .limit(1);
+    .leftJoin(memberships, eq(memberships.userId, users.id));
+  const open = and(base, isNull(users.disabledAt), isNotNull(users.emailVerifiedAt));
+  const rows =
+    'sessionId' in where
+      ? await query
+          .innerJoin(userSessions, eq(userSessions.userId, users.id))
+          .where(and(open, eq(userSessions.id, where.sessionId), gt(userSessions.expiresAt, new Date())))
+          .limit(1)
+      : await query.where(open).limit(1);
   const row = rows[0];
-  if (!row || row.disabledAt) return null;
+  if (!row) return null;
   return {
     id: row.id,
     email: row.email,

@@ -7,6 +7,7 @@ import { writeAudit } from '@/lib/audit/write';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { assertAccountAccess } from '@/lib/auth/guards';
 import { can } from '@/lib/auth/roles';
+import { assertSubscribed } from '@/lib/billing/entitlements';
 import { accountKey, getBlobStore } from '@/lib/blob';
 import { addQuoteItems, createQuote } from '@/lib/quotes/mutations';
 import { insertSizings, withEquationUsed } from '@/lib/sizings/save';
@@ -64,6 +65,7 @@ export async function saveBatch(
   assertAccountAccess(user, target.accountId);
   if ((target.quoteId || target.newQuoteTitle) && !can(user.role, 'quote:manage'))
     throw new AppError('forbidden', 'Only vendor staff put batch rows on a quote.');
+  await assertSubscribed(user, 'Batch upload');
   if (target.newQuoteTitle && (target.newQuoteTitle.length < 3 || target.newQuoteTitle.length > 160))
     throw new AppError('invalid_input', 'The quote title needs 3 to 160 characters.', [
       { path: 'newQuoteTitle', message: '3 to 160 characters' },

@@ -1,9 +1,10 @@
 import 'server-only';
 import { z } from 'zod';
 import { AppError, invalidInput } from '@/lib/errors';
+import { readBodyLimited } from '@/lib/http/read-limited';
 import { BATCH_MAX_ROWS, parseBatchCsv, type ParsedSheet } from './evaluate';
 import { batchTargetSchema, type BatchTarget } from './schema';
-import { checkUpload, looksLikeText } from './upload-limits';
+import { BATCH_REQUEST_MAX_BYTES, checkUpload, looksLikeText } from './upload-limits';
 
 const cellsSchema = z.array(z.record(z.string().max(40), z.string().max(400))).max(BATCH_MAX_ROWS);
 
@@ -15,11 +16,15 @@ export type BatchUpload = {
 
 /** Reads the multipart batch request: the original CSV, and optionally the user's edited rows (JSON). */
 export async function readBatchRequest(req: Request): Promise<BatchUpload> {
-  const length = Number(req.headers.get('content-length') ?? '0');
-  if (length > 6 * 1024 * 1024) throw new AppError('too_large', 'The upload is larger than the 2 MiB limit.');
+  // The whole request (file, edited rows, target) is read with a cap, then parsed from memory.
+  const read = await readBodyLimited(req, BATCH_REQUEST_MAX_BYTES);
+  if (!read.ok && read.reason === 'too-large')
+    throw new AppError('too_large', 'The upload is larger than the 2 MiB limit.');
+  if (!read.ok) throw new AppError('invalid_input', 'The upload could not be read completely; send it again.');
   let form: FormData;
   try {
-    form = await req.formData();
+    const type = req.headers.get('content-type') ?? '';
+    form = await new Response(Buffer.from(read.bytes), { headers: { 'content-type': type } }).formData();
   } catch {
     throw new AppError('invalid_input', 'Send the CSV as multipart/form-data with a "file" field.');
   }

@@ -2,6 +2,8 @@
 import type { ErrorCode } from '@/lib/errors';
 
 export const BATCH_MAX_BYTES = 2 * 1024 * 1024;
+// The request around the file: the edited rows (JSON, up to BATCH_MAX_ROWS x 40 cells) and the multipart framing.
+export const BATCH_REQUEST_MAX_BYTES = 6 * 1024 * 1024;
 const allowedTypes = new Set(['text/csv', 'application/csv', 'text/plain', 'application/vnd.ms-excel', '']);
 
 export type UploadCheck =

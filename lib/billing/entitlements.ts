@@ -2,6 +2,8 @@ import 'server-only';
 import { desc, eq } from 'drizzle-orm';
 import { db } from '@/db';
 import { subscriptions } from '@/db/schema';
+import { AppError } from '@/lib/errors';
+import type { CurrentUser } from '@/lib/auth/current-user';
 import { env } from '@/lib/env';
 
 export type Entitlement = {
@@ -70,4 +72,17 @@ export async function getEntitlement(accountId: string): Promise<Entitlement> {
     .orderBy(desc(subscriptions.updatedAt))
     .limit(1);
   return entitlementFrom(sub ?? null);
+}
+
+/**
+ * What the plans page sells, enforced: a customer saves sizings to the account, uploads batches and downloads
+ * datasheets only while the account is entitled. Vendor staff work on any account regardless. Throws a 402.
+ */
+export async function assertSubscribed(user: CurrentUser, what: string): Promise<void> {
+  if (user.role !== 'customer') return;
+  if (user.accountId && (await getEntitlement(user.accountId)).unlocked) return;
+  throw new AppError(
+    'payment_required',
+    `${what} needs an active subscription for your account. Subscribe on the billing page (/billing).`,
+  );
 }

@@ -13,20 +13,47 @@ export function periodEndOf(sub: Stripe.Subscription): Date | null {
   return typeof secs === 'number' ? new Date(secs * 1000) : null;
 }
 
-/** Finds the Dutywise account for a subscription: its metadata first, then the stored customer id. */
-export async function accountIdFor(tx: Tx, sub: Stripe.Subscription, hint?: string | null): Promise<string | null> {
-  const candidate = hint ?? sub.metadata?.accountId ?? null;
-  if (candidate && /^[0-9a-f-]{36}$/i.test(candidate)) {
-    const [a] = await tx.select({ id: accounts.id }).from(accounts).where(eq(accounts.id, candidate)).limit(1);
-    if (a) return a.id;
+/** The event names an account that the stored customer link contradicts: refused, nothing is changed. */
+export class AccountMismatchError extends Error {
+  constructor(message: string) {
+    super(message);
+    this.name = 'AccountMismatchError';
   }
+}
+
+/**
+ * Finds the Dutywise account for a subscription. The stored link (the customer id saved when checkout created the
+ * customer) decides; an account id carried in the event (checkout's client reference, the subscription's metadata)
+ * must agree with it, or the event is refused. With no stored link, an id from the event is used only for an account
+ * that has no payment customer yet and only when the event names the customer it then links.
+ */
+export async function accountIdFor(tx: Tx, sub: Stripe.Subscription, hint?: string | null): Promise<string | null> {
   const customer = typeof sub.customer === 'string' ? sub.customer : sub.customer?.id;
-  if (!customer) return null;
+  const claimed = [hint, sub.metadata?.accountId].filter((v): v is string => typeof v === 'string' && v.length > 0);
+  if (customer) {
+    const [linked] = await tx
+      .select({ id: accounts.id })
+      .from(accounts)
+      .where(eq(accounts.stripeCustomerId, customer))
+      .limit(1);
+    if (linked) {
+      const other = claimed.find((c) => c !== linked.id);
+      if (other)
+        throw new AccountMismatchError(
+          `subscription ${sub.id} of customer ${customer} names account ${other}, but that customer belongs to account ${linked.id}`,
+        );
+      return linked.id;
+    }
+  }
+  const candidate = claimed[0];
+  if (!candidate || !/^[0-9a-f-]{36}$/i.test(candidate) || claimed.some((c) => c !== candidate)) return null;
   const [a] = await tx
-    .select({ id: accounts.id })
+    .select({ id: accounts.id, customer: accounts.stripeCustomerId })
     .from(accounts)
-    .where(eq(accounts.stripeCustomerId, customer))
+    .where(eq(accounts.id, candidate))
     .limit(1);
+  if (a?.customer)
+    throw new AccountMismatchError(`subscription ${sub.id} names account ${a.id}, which pays as another customer`);
   return a?.id ?? null;
 }
 

@@ -1,5 +1,5 @@
 import 'server-only';
-import { eq } from 'drizzle-orm';
+import { eq, sql } from 'drizzle-orm';
 import type Stripe from 'stripe';
 import { db } from '@/db';
 import { accounts, webhookEvents } from '@/db/schema';
@@ -42,19 +42,21 @@ function subscriptionIdOf(event: Stripe.Event): string | null {
 export async function applyStripeEvent(event: Stripe.Event): Promise<'applied' | 'duplicate' | 'ignored'> {
   if (!isHandled(event.type)) return 'ignored';
   const subId = subscriptionIdOf(event);
-  // Read the subscription's current state outside the transaction: out-of-order events all converge on it.
-  const sub = subId ? await stripe().subscriptions.retrieve(subId) : null;
   const hint =
     event.type === 'checkout.session.completed'
       ? ((event.data.object as Stripe.Checkout.Session).client_reference_id ?? null)
       : null;
   return db.transaction(async (tx) => {
+    // Events of one subscription are applied one at a time, each reading the subscription's current state while it
+    // holds the lock: whichever commits last stored the newest state, so no older status can be left behind.
+    if (subId) await tx.execute(sql`select pg_advisory_xact_lock(hashtext(${`stripe-subscription:${subId}`}))`);
     const inserted = await tx
       .insert(webhookEvents)
       .values({ id: event.id, source: 'stripe', type: event.type })
       .onConflictDoNothing()
       .returning({ id: webhookEvents.id });
     if (!inserted.length) return 'duplicate';
+    const sub = subId ? await stripe().subscriptions.retrieve(subId) : null;
     if (!sub) return 'applied';
     const accountId = await accountIdFor(tx, sub, hint);
     if (!accountId) throw new Error(`no Dutywise account for subscription ${sub.id}`);

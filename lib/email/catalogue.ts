@@ -20,6 +20,9 @@ export type EmailProps = {
   };
   'payment-failed': { accountName: string; billingUrl: string; graceDays: number };
   'subscription-ending': { accountName: string; periodEnd: string; billingUrl: string };
+  'verify-email': { name: string; verifyUrl: string; expiresInHours: number };
+  'password-reset': { resetUrl: string; expiresInMinutes: number };
+  'account-exists': { signInUrl: string; resetUrl: string };
 };
 
 export type EmailTemplate = keyof EmailProps;
@@ -30,6 +33,9 @@ export const emailTemplates = [
   'datasheet-issued',
   'payment-failed',
   'subscription-ending',
+  'verify-email',
+  'password-reset',
+  'account-exists',
 ] as const satisfies readonly EmailTemplate[];
 
 export function subjectFor<T extends EmailTemplate>(template: T, props: EmailProps[T]): string {
@@ -52,6 +58,12 @@ export function subjectFor<T extends EmailTemplate>(template: T, props: EmailPro
       const p = props as EmailProps['subscription-ending'];
       return `Your Dutywise subscription ends on ${p.periodEnd}`;
     }
+    case 'verify-email':
+      return 'Confirm your e-mail address for Dutywise';
+    case 'password-reset':
+      return 'Choose a new Dutywise password';
+    case 'account-exists':
+      return 'You already have a Dutywise sign-in';
     default:
       throw new Error(`unknown e-mail template ${String(template)}`);
   }

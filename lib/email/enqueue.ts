@@ -51,7 +51,7 @@ export async function enqueueEmail<T extends EmailTemplate>(tx: Tx, input: Enque
     .values({
       template: input.template,
       toAddress: String(input.to).trim(),
-      subject: problem ? safeSubject(input) : subjectFor(input.template, input.props),
+      subject: problem ? safeSubject(input) : subjectFor(input.template, parseEmailProps(input.template, input.props)),
       payload: input.props,
       accountId: input.accountId ?? null,
       entityType: input.entity?.type ?? null,

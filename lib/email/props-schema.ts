@@ -5,36 +5,45 @@ import type { EmailProps, EmailTemplate } from './catalogue';
 // transaction) and again when the worker renders the stored payload (jsonb has no types).
 const text = z.string().trim().min(1, 'must not be empty');
 const link = z.string().trim().min(1, 'must be an absolute URL or an app path starting with /');
+// Names people choose (account, person, quote and sizing titles) reach subject lines and bodies: bounded, and with
+// control characters and text-direction overrides turned into spaces, so a name cannot fake a header or reorder
+// the words around it. React escapes markup in the body.
+
+const unsafeChars = /[\u0000-\u001f\u007f\u202a-\u202e\u2066-\u2069]/g;
+const name = text.max(160, 'must be at most 160 characters').transform((v) => v.replace(unsafeChars, ' '));
 
 export const emailPropsSchemas: { [T in EmailTemplate]: z.ZodType<EmailProps[T]> } = {
   invitation: z.object({
-    accountName: text,
-    inviterName: text,
+    accountName: name,
+    inviterName: name,
     inviteUrl: link,
     expiresInDays: z.number().int().min(1).max(365),
   }),
   'quote-sent': z.object({
-    accountName: text,
+    accountName: name,
     quoteNumber: text,
-    quoteTitle: text,
-    senderName: text,
+    quoteTitle: name,
+    senderName: name,
     quoteUrl: link,
     lines: z
       .array(
-        z.object({ title: text, tag: z.string().nullable(), headline: z.string(), quantity: z.number().int().min(1) }),
+        z.object({ title: name, tag: z.string().nullable(), headline: z.string(), quantity: z.number().int().min(1) }),
       )
       .max(200),
   }),
   'datasheet-issued': z.object({
-    accountName: text,
+    accountName: name,
     datasheetNumber: text,
     revision: text,
-    sizingTitle: text,
+    sizingTitle: name,
     equipmentTag: z.string().nullable(),
     datasheetUrl: link,
   }),
-  'payment-failed': z.object({ accountName: text, billingUrl: link, graceDays: z.number().int().min(0).max(365) }),
-  'subscription-ending': z.object({ accountName: text, periodEnd: text, billingUrl: link }),
+  'payment-failed': z.object({ accountName: name, billingUrl: link, graceDays: z.number().int().min(0).max(365) }),
+  'subscription-ending': z.object({ accountName: name, periodEnd: text, billingUrl: link }),
+  'verify-email': z.object({ name, verifyUrl: link, expiresInHours: z.number().int().min(1).max(720) }),
+  'password-reset': z.object({ resetUrl: link, expiresInMinutes: z.number().int().min(1).max(1440) }),
+  'account-exists': z.object({ signInUrl: link, resetUrl: link }),
 };
 
 export const recipientSchema = z.email('must be a single e-mail address such as name@example.com').max(320);

@@ -5,6 +5,9 @@ import { InvitationEmail } from '@/emails/invitation';
 import { PaymentFailedEmail } from '@/emails/payment-failed';
 import { QuoteSentEmail } from '@/emails/quote-sent';
 import { SubscriptionEndingEmail } from '@/emails/subscription-ending';
+import { AccountExistsEmail } from '@/emails/account-exists';
+import { PasswordResetEmail } from '@/emails/password-reset';
+import { VerifyEmail } from '@/emails/verify-email';
 import { env } from '@/lib/env';
 import { subjectFor, type EmailProps, type EmailTemplate } from './catalogue';
 import { parseEmailProps } from './props-schema';
@@ -17,6 +20,9 @@ const components: { [T in EmailTemplate]: (props: EmailProps[T]) => ReactElement
   'datasheet-issued': DatasheetIssuedEmail,
   'payment-failed': PaymentFailedEmail,
   'subscription-ending': SubscriptionEndingEmail,
+  'verify-email': VerifyEmail,
+  'password-reset': PasswordResetEmail,
+  'account-exists': AccountExistsEmail,
 };
 
 // A link in a mail is opened outside the app, so an app path such as /billing must become absolute.

@@ -3,7 +3,9 @@ import type PgBoss from 'pg-boss';
 import { sweepOrphanBlobs } from '@/lib/blob';
 import { buryEmail, deliverEmail } from '@/lib/email/deliver';
 import { env } from '@/lib/env';
-import { BLOB_SWEEP_QUEUE, MAIL_DEAD_QUEUE, MAIL_QUEUE } from './queues';
+import { sweepExpiredSessions } from '@/lib/auth/local/session-store';
+import { purgeExpiredCounters } from '@/lib/ratelimit/store';
+import { BLOB_SWEEP_QUEUE, MAIL_DEAD_QUEUE, MAIL_QUEUE, SESSION_SWEEP_QUEUE } from './queues';
 
 export type JobHandler = (job: PgBoss.JobWithMetadata) => Promise<unknown>;
 
@@ -23,4 +25,8 @@ export const handlers: Record<string, JobHandler> = {
   [MAIL_DEAD_QUEUE]: (job) => buryEmail(outboxIdOf(job)),
   // The PostgreSQL store writes blobs in the issuing transaction and leaves no orphans to sweep.
   [BLOB_SWEEP_QUEUE]: async () => (env.BLOB_STORE === 's3' ? sweepOrphanBlobs() : { skipped: 'postgres store' }),
+  [SESSION_SWEEP_QUEUE]: async () => ({
+    sessions: await sweepExpiredSessions(),
+    counters: await purgeExpiredCounters(),
+  }),
 };

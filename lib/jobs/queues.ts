@@ -23,6 +23,8 @@ export const MAIL_QUEUE = 'mail';
 export const MAIL_DEAD_QUEUE = 'mail-dead';
 /** Removes blob-store objects a crashed datasheet issue left behind (S3 only; PostgreSQL is transactional). */
 export const BLOB_SWEEP_QUEUE = 'blob-sweep';
+/** Deletes expired sign-in sessions and rate-limit counters (each app instance's limiter also sweeps its own). */
+export const SESSION_SWEEP_QUEUE = 'session-sweep';
 
 export const queues: readonly QueueSpec[] = [
   { name: MAIL_DEAD_QUEUE, options: { retryLimit: 5, retryDelay: 30, retryBackoff: true } },
@@ -38,6 +40,7 @@ export const queues: readonly QueueSpec[] = [
   },
   // Every ten minutes is plenty for leftovers of a rare crash; a missed run is simply the next one.
   { name: BLOB_SWEEP_QUEUE, options: { retryLimit: 0, expireInSeconds: 600 }, cron: '*/10 * * * *' },
+  { name: SESSION_SWEEP_QUEUE, options: { retryLimit: 0, expireInSeconds: 600 }, cron: '*/10 * * * *' },
 ];
 
 /** Creates every queue, or brings an existing one's retry policy up to date. Safe to run again. */
@@ -46,4 +49,20 @@ export async function installQueues(boss: PgBoss): Promise<void> {
     await boss.createQueue(q.name, { name: q.name, ...q.options });
     await boss.updateQueue(q.name, { name: q.name, ...q.options });
   }
+}
+
+/**
+ * The app role (dutywise_app, which owns nothing) may read and write the queue tables the owner installed,
+ * those of queues created later included, and nothing more: pg-boss's schema stays the owner's.
+ */
+export function grantJobsSchemaSql(schema: string): string {
+  const s = `"${schema.replace(/"/g, '""')}"`;
+  return `DO $$ BEGIN
+  IF EXISTS (SELECT FROM pg_roles WHERE rolname = 'dutywise_app') THEN
+    GRANT USAGE ON SCHEMA ${s} TO dutywise_app;
+    GRANT SELECT, INSERT, UPDATE, DELETE ON ALL TABLES IN SCHEMA ${s} TO dutywise_app;
+    GRANT USAGE, SELECT ON ALL SEQUENCES IN SCHEMA ${s} TO dutywise_app;
+    ALTER DEFAULT PRIVILEGES IN SCHEMA ${s} GRANT SELECT, INSERT, UPDATE, DELETE ON TABLES TO dutywise_app;
+  END IF;
+END $$;`;
 }

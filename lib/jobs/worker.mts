@@ -8,6 +8,7 @@ import type PgBoss from 'pg-boss';
 import { pool } from '@/db';
 import { env } from '@/lib/env';
 import { logger } from '@/lib/log/logger';
+import { refuseUnsafeStart } from '@/lib/security/start-check';
 import { getBoss } from './boss';
 import { handlers } from './handlers';
 import { installQueues, MAIL_QUEUE, queues } from './queues';
@@ -54,6 +55,7 @@ async function runLoop(queue: string) {
   );
 }
 
+await refuseUnsafeStart({ server: false });
 await boss.start();
 await installQueues(boss);
 for (const q of queues) {

@@ -1,14 +1,10 @@
 import 'server-only';
 import { headers } from 'next/headers';
-import { env } from '@/lib/env';
-import { AppError } from '@/lib/errors';
-import { clientKey, consumeRate } from './consume';
+import { clientKey } from './client';
+import { enforce } from './limit';
+import type { PolicyName } from './policies';
 
-/** For public server actions (sign-up, invitation): returns when allowed, throws a 429 AppError when not. */
-export async function limitPublicAction(name: string): Promise<void> {
-  const rate = await consumeRate(`${name}:${clientKey(await headers())}`, env.RATE_LIMIT_SIGN_IN_PER_MIN, 60);
-  if (!rate.allowed)
-    throw new AppError('rate_limited', `Too many attempts; try again in ${rate.retryAfterS} s.`, [], {
-      retryAfterS: rate.retryAfterS,
-    });
+/** For public server actions (sign-up, invitation, password reset): throws a 429 AppError past the address's budget. */
+export async function limitPublicAction(name: PolicyName, what = 'attempts'): Promise<void> {
+  await enforce(what, [name, clientKey(await headers())]);
 }

@@ -1,20 +1,11 @@
 import 'server-only';
-import { logger } from '@/lib/log/logger';
 import { tooManyRequests } from '@/lib/http/respond';
-import { clientKey } from './consume';
-import { consumeShared } from './shared-counter';
+import { clientKey } from './client';
+import { consume } from './limit';
+import type { PolicyName } from './policies';
 
-/**
- * Applies a per-address limit to a public endpoint: a 429 Response when over, null otherwise.
- * If the shared counter cannot be reached (database down) the request is let through: refusing
- * every calculation because the limiter is unavailable would turn a database fault into an outage.
- */
-export async function limitRequest(req: Request, name: string, perMinute: number): Promise<Response | null> {
-  try {
-    const rate = await consumeShared(`${name}:${clientKey(req.headers)}`, perMinute, 60);
-    return rate.allowed ? null : tooManyRequests(rate.retryAfterS, 'requests');
-  } catch (err) {
-    logger.warn({ err: (err as Error).message, name }, 'rate limiter unavailable; request allowed');
-    return null;
-  }
+/** Applies a per-client-address limit to a route handler: a 429 Response when over, null otherwise. */
+export async function limitRequest(req: Request, name: PolicyName, what = 'requests'): Promise<Response | null> {
+  const rate = await consume(name, clientKey(req.headers));
+  return rate.allowed ? null : tooManyRequests(rate.retryAfterS, what);
 }

@@ -2,12 +2,15 @@
 
 export type HeaderOptions = { production: boolean; https: boolean; clerkFrontendApi?: string | null };
 
-/** The Content-Security-Policy the app works under; Clerk's frontend host is allowed only when Clerk is on. */
-export function contentSecurityPolicy(opts: HeaderOptions): string {
+/**
+ * The page Content-Security-Policy for one response. Scripts run only with this response's nonce (middleware makes
+ * a fresh one per request and Next puts it on every script it renders); 'strict-dynamic' lets those scripts load
+ * the app's chunks. 'unsafe-eval' is only for the development server. Clerk's frontend host is allowed only when
+ * Clerk is on.
+ */
+export function contentSecurityPolicy(opts: HeaderOptions, nonce: string): string {
   const clerk = opts.clerkFrontendApi ? ` https://${opts.clerkFrontendApi}` : '';
-  // Next's App Router streams inline bootstrap scripts, so scripts need 'unsafe-inline' unless every
-  // page is rendered with a nonce; 'unsafe-eval' is only needed by the development server.
-  const script = `script-src 'self' 'unsafe-inline'${opts.production ? '' : " 'unsafe-eval'"}${clerk}`;
+  const script = `script-src 'self' 'nonce-${nonce}' 'strict-dynamic'${opts.production ? '' : " 'unsafe-eval'"}${clerk}`;
   return [
     "default-src 'self'",
     script,
@@ -39,9 +42,9 @@ function commonHeaders(opts: HeaderOptions): { key: string; value: string }[] {
   return headers;
 }
 
-/** Headers for pages and assets: the page Content-Security-Policy plus the common set. */
+/** Headers for pages and assets; the page Content-Security-Policy comes from middleware, with its nonce. */
 export function securityHeaders(opts: HeaderOptions): { key: string; value: string }[] {
-  return [{ key: 'Content-Security-Policy', value: contentSecurityPolicy(opts) }, ...commonHeaders(opts)];
+  return commonHeaders(opts);
 }
 
 /** The policy for JSON, CSV and PDF answers of the API: they load nothing and are never framed. */

@@ -6,6 +6,7 @@ import { writeAudit } from '@/lib/audit/write';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { assertAccountAccess } from '@/lib/auth/guards';
 import { can } from '@/lib/auth/roles';
+import { assertSubscribed } from '@/lib/billing/entitlements';
 import { calculate, ENGINE_VERSION, SizingInputError, type SizingResult } from '@/lib/engine';
 import { AppError } from '@/lib/errors';
 import { nextNumber, nextNumbers } from '@/lib/numbering/next-number';
@@ -113,6 +114,7 @@ export async function saveSizing(
   assertAccountAccess(user, meta.accountId);
   if (meta.quoteId && !can(user.role, 'quote:manage'))
     throw new AppError('forbidden', 'Only vendor staff add sizings to quotes.');
+  await assertSubscribed(user, 'Saving sizings to your account');
   const computed = computeForSave(rawInput);
   return db.transaction(async (tx) => {
     const [acct] = await tx.select({ id: accounts.id }).from(accounts).where(eq(accounts.id, meta.accountId)).limit(1);

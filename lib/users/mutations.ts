@@ -4,6 +4,7 @@ import { db, type Tx } from '@/db';
 import { memberships, users } from '@/db/schema';
 import { writeAudit } from '@/lib/audit/write';
 import type { CurrentUser } from '@/lib/auth/current-user';
+import { closeAllSessions } from '@/lib/auth/local/session-store';
 import { can, roleLabels } from '@/lib/auth/roles';
 import { AppError } from '@/lib/errors';
 import type { UnitSystemInput, UserDisableInput, UserRoleChangeInput } from './schema';
@@ -79,7 +80,7 @@ export async function changeUserRole(actor: CurrentUser, input: UserRoleChangeIn
   });
 }
 
-/** Disables or re-enables a sign-in; a disabled user's sessions stop working at their next request. */
+/** Disables or re-enables a sign-in; a disabled user's sessions are deleted with it. */
 export async function setUserDisabled(actor: CurrentUser, input: UserDisableInput): Promise<{ changed: boolean }> {
   assertManager(actor);
   if (input.userId === actor.id)
@@ -95,6 +96,8 @@ export async function setUserDisabled(actor: CurrentUser, input: UserDisableInpu
       .update(users)
       .set({ disabledAt: input.disabled ? new Date() : null, updatedAt: new Date() })
       .where(eq(users.id, target.id));
+    // Every session of a disabled user ends now, not when it would have expired.
+    if (input.disabled) await closeAllSessions(tx, target.id);
     await writeAudit(tx, {
       actor,
       action: input.disabled ? 'user.disabled' : 'user.enabled',

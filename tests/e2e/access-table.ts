@@ -28,6 +28,13 @@ export const accessTable: AccessRow[] = [
   { file: 'app/(auth)/sign-in/page.tsx', path: '/sign-in', expect: all('ok') },
   { file: 'app/(auth)/sign-up/page.tsx', path: '/sign-up', expect: all('ok') },
   { file: 'app/(auth)/invite/[token]/page.tsx', path: '/invite/not-a-real-token-000000000000', expect: all('ok') },
+  { file: 'app/(auth)/verify/[token]/page.tsx', path: '/verify/not-a-real-token-00000000000000', expect: all('ok') },
+  { file: 'app/(auth)/forgot-password/page.tsx', path: '/forgot-password', expect: all('ok') },
+  {
+    file: 'app/(auth)/reset-password/[token]/page.tsx',
+    path: '/reset-password/not-a-real-token-00000000000000',
+    expect: all('ok'),
+  },
   { file: 'app/(desk)/no-access/page.tsx', path: '/no-access', expect: all('ok') },
   { file: 'app/(desk)/size/page.tsx', path: '/size', expect: all('ok') },
   {

@@ -1,6 +1,7 @@
 import Papa from 'papaparse';
 import { expect, test } from '@playwright/test';
 import { batchColumnNames } from '../../lib/batch/columns';
+import { linkFromInbox } from './support/inbox';
 import { query, signInFor } from './support/scenario';
 import { signIn } from './support/sign-in';
 import { formatHeadline } from '@/lib/sizings/headline';
@@ -87,7 +88,9 @@ test('a sales engineer opens an account and quotes two sizings; the customer see
   await se.goto(accountUrl);
   await se.getByLabel('E-mail of the person to invite').fill(customerEmail);
   await se.getByRole('button', { name: 'Send invitation' }).click();
-  const inviteUrl = await se.getByTestId('invite-link').getAttribute('href');
+  await expect(se.getByTestId('invite-sent')).toContainText(customerEmail);
+  // The invitee follows the link in their own inbox, as outside demo mode.
+  const inviteUrl = await linkFromInbox(customerEmail, /You are invited/, /http:\/\/\S+\/invite\/[\w-]+/);
   const customerCtx = await browser.newContext();
   const customer = await customerCtx.newPage();
   await customer.goto(inviteUrl!);

@@ -4,6 +4,8 @@ const offset = Number(process.env.TEST_PORT_OFFSET ?? 0) || 0;
 export const e2ePorts = {
   app: 3100 + offset,
   secondApp: 3101 + offset,
+  /** Production-start checks start (and stop) short-lived servers here. */
+  probe: 3150 + offset,
   stripe: 12211 + offset,
   smtp: 12125 + offset,
   smtpHttp: 12126 + offset,

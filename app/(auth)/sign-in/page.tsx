@@ -1,17 +1,40 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { Logo } from '@/app/_components/logo';
-import { clerkEnabled } from '@/lib/env';
 import { demoSignIns } from '@/lib/auth/demo-users';
+import { clerkEnabled, demoMode, env } from '@/lib/env';
+import { safeNextPath } from '@/lib/security/safe-redirect';
+import { AuthFrame } from '../_components/auth-frame';
 import { ClerkSignIn } from './_components/clerk-sign-in';
 import { SignInForm } from './_components/sign-in-form';
 
 export const metadata: Metadata = { title: 'Sign in' };
 
-function safeNext(next: string | string[] | undefined): string {
-  const value = Array.isArray(next) ? next[0] : next;
-  // Only same-site paths: an absolute or protocol-relative URL would be an open redirect.
-  return value && value.startsWith('/') && !value.startsWith('//') ? value : '/size';
+/** The invented scenario's sign-ins and their shared password: shown in demo mode only. */
+function DemoSignIns() {
+  return (
+    <section
+      aria-labelledby="demo-users"
+      data-testid="demo-sign-ins"
+      className="mt-8 rounded-panel border border-paper-line bg-paper-raised p-4 text-sm"
+    >
+      <h2 id="demo-users" className="font-semibold">
+        Demo sign-ins (local identity)
+      </h2>
+      <table className="mt-2 w-full text-left">
+        <tbody>
+          {demoSignIns.map((u) => (
+            <tr key={u.email} className="border-t border-paper-line">
+              <td className="py-1 pr-2 text-ink-muted">{u.label}</td>
+              <td className="py-1 font-mono">{u.email}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      <p className="mt-2 text-hint text-ink-muted">
+        Every demo user&apos;s password is <span className="font-mono">{demoSignIns[0]?.password}</span>.
+      </p>
+    </section>
+  );
 }
 
 export default async function SignInPage({
@@ -19,39 +42,21 @@ export default async function SignInPage({
 }: {
   searchParams: Promise<Record<string, string | string[] | undefined>>;
 }) {
-  const next = safeNext((await searchParams).next);
+  // Only paths on this site: another origin, or a backslash or control-character trick, lands on the desk.
+  const next = safeNextPath((await searchParams).next, env.APP_URL);
   return (
-    <main className="mx-auto flex min-h-screen max-w-md flex-col justify-center px-6 py-12">
-      <Link href="/" className="mb-8 flex items-center gap-2 text-xl font-semibold">
-        <Logo /> Dutywise
-      </Link>
-      <h1 className="text-2xl font-semibold">Sign in to your sizing desk</h1>
+    <AuthFrame title="Sign in to your sizing desk">
       {clerkEnabled ? (
         <ClerkSignIn next={next} />
       ) : (
         <>
           <SignInForm next={next} />
-          <section
-            aria-labelledby="demo-users"
-            className="mt-8 rounded-panel border border-paper-line bg-paper-raised p-4 text-sm"
-          >
-            <h2 id="demo-users" className="font-semibold">
-              Demo sign-ins (local identity)
-            </h2>
-            <table className="mt-2 w-full text-left">
-              <tbody>
-                {demoSignIns.map((u) => (
-                  <tr key={u.email} className="border-t border-paper-line">
-                    <td className="py-1 pr-2 text-ink-muted">{u.label}</td>
-                    <td className="py-1 font-mono">{u.email}</td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-            <p className="mt-2 text-hint text-ink-muted">
-              Every demo user&apos;s password is <span className="font-mono">{demoSignIns[0]?.password}</span>.
-            </p>
-          </section>
+          <p className="mt-3 text-sm">
+            <Link className="text-tide-600 underline" href="/forgot-password">
+              Forgotten your password?
+            </Link>
+          </p>
+          {demoMode && <DemoSignIns />}
         </>
       )}
       <p className="mt-6 text-sm text-ink-muted">
@@ -60,6 +65,6 @@ export default async function SignInPage({
           Create an account
         </Link>
       </p>
-    </main>
+    </AuthFrame>
   );
 }

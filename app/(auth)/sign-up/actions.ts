@@ -1,26 +1,23 @@
 'use server';
 
-import { signUpCustomer } from '@/lib/accounts/mutations';
+import { signUpCustomer } from '@/lib/accounts/sign-up';
 import { definePublicAction } from '@/lib/actions/define-action';
-import { startLocalSession } from '@/lib/auth/local/session';
 import { signUpSchema } from '@/lib/auth/schema';
-import { clerkEnabled } from '@/lib/env';
-import { AppError } from '@/lib/errors';
-import { limitPublicAction } from '@/lib/ratelimit/action-limit';
 
-/** Self-serve sign-up on the local identity: a customer user and their own customer account, then a session. */
+/**
+ * Self-serve sign-up on the local identity: a customer user and their own customer account, active once the
+ * address is confirmed through the mailed link. The answer is the same whether or not the address had a sign-in.
+ */
 export const signUpAction = definePublicAction(
   {
     schema: signUpSchema,
     name: 'auth.sign_up',
+    limit: 'sign-up',
+    clerkMessage: 'Create your account with the hosted form.',
     failure: 'Something went wrong on our side; no account was created. Try again.',
   },
-  async (input) => {
-    if (clerkEnabled) throw new AppError('invalid_input', 'Create your account with the hosted form.');
-    await limitPublicAction('sign-up');
-    const { site, ...rest } = input;
-    const created = await signUpCustomer({ ...rest, site: site || undefined });
-    await startLocalSession(created.userId, created.role);
-    return { accountId: created.accountId };
+  async ({ site, ...rest }) => {
+    await signUpCustomer({ ...rest, site: site || undefined });
+    return { email: rest.email };
   },
 );

@@ -1,11 +1,13 @@
 import { checkReadiness } from '@/lib/ops/readiness';
+import { viewerIsStaff } from '@/lib/ops/viewer';
 
 export const runtime = 'nodejs';
 export const dynamic = 'force-dynamic';
 
-/** Load-balancer readiness: database reachable and outgoing mail not stuck. */
+/** Load-balancer readiness: database reachable and outgoing mail not stuck; the details for signed-in staff only. */
 export async function GET() {
   const report = await checkReadiness().catch(() => null);
-  if (!report) return Response.json({ ready: false, message: 'readiness check failed' }, { status: 503 });
-  return Response.json(report, { status: report.ready ? 200 : 503, headers: { 'Cache-Control': 'no-store' } });
+  const ready = report?.ready ?? false;
+  const body = report && (await viewerIsStaff()) ? report : { ready };
+  return Response.json(body, { status: ready ? 200 : 503, headers: { 'Cache-Control': 'no-store' } });
 }

@@ -4,7 +4,15 @@ import bcrypt from 'bcryptjs';
 // without making sign-in feel slow. Rate limiting on sign-in does the rest.
 const COST = 10;
 
+/** bcrypt reads at most 72 bytes of a password; longer ones are refused when set, never silently cut. */
+export const PASSWORD_MAX_BYTES = 72;
+
+export function passwordBytes(plain: string): number {
+  return new TextEncoder().encode(plain).byteLength;
+}
+
 export function hashPassword(plain: string): Promise<string> {
+  if (passwordBytes(plain) > PASSWORD_MAX_BYTES) throw new Error('password longer than bcrypt reads');
   return bcrypt.hash(plain, COST);
 }
 

@@ -1,24 +1,25 @@
 import { jwtVerify, SignJWT } from 'jose';
 
-// The local identity's session: an HS256-signed token in an http-only cookie. Edge-safe (jose only),
-// so middleware can check it as well as server code.
+// The local identity's session: an HS256-signed token in an http-only cookie naming the user and the
+// server-side session row (lib/auth/local/session-store.ts) that every request checks is still there.
+// Edge-safe (jose only), so middleware can check the signature as well as server code.
 export const LOCAL_SESSION_COOKIE = 'dw_session';
 const ISSUER = 'dutywise-local-identity';
 
-export type LocalSessionClaims = { sub: string; role: string; exp: number };
+export type LocalSessionClaims = { sub: string; sid: string; exp: number };
 
 function keyOf(secret: string): Uint8Array {
   return new TextEncoder().encode(secret);
 }
 
-/** Signs a session for a user id that expires after `ttlSeconds`. */
+/** Signs a token for a user id and session id that expires after `ttlSeconds`. */
 export async function signLocalSession(
   userId: string,
-  role: string,
+  sessionId: string,
   secret: string,
   ttlSeconds: number,
 ): Promise<string> {
-  return new SignJWT({ role })
+  return new SignJWT({ sid: sessionId })
     .setProtectedHeader({ alg: 'HS256' })
     .setSubject(userId)
     .setIssuer(ISSUER)
@@ -35,9 +36,9 @@ export async function verifyLocalSession(
   if (!token || token.length > 4096) return null;
   try {
     const { payload } = await jwtVerify(token, keyOf(secret), { issuer: ISSUER, algorithms: ['HS256'] });
-    if (typeof payload.sub !== 'string' || typeof payload.role !== 'string' || typeof payload.exp !== 'number')
+    if (typeof payload.sub !== 'string' || typeof payload.sid !== 'string' || typeof payload.exp !== 'number')
       return null;
-    return { sub: payload.sub, role: payload.role, exp: payload.exp };
+    return { sub: payload.sub, sid: payload.sid, exp: payload.exp };
   } catch {
     return null;
   }

@@ -4,6 +4,7 @@ import { db } from '@/db';
 import { blobs, quoteItems, sizings, uploads } from '@/db/schema';
 import { saveBatch } from '@/lib/batch/commit';
 import { createQuote } from '@/lib/quotes/mutations';
+import { grantSubscription } from '../helpers/datasheet-fixtures';
 import { makeAccount, makeUser } from '../helpers/fixtures';
 
 const row = (i: number, over: Record<string, string> = {}) => ({
@@ -68,6 +69,9 @@ describe('saving a batch', () => {
     await expect(saveBatch(customer, { accountId: mine.id, newQuoteTitle: 'Mine' }, [row(1)], file)).rejects.toThrow(
       /vendor staff/,
     );
+    // Their own account: only with an active subscription (batch upload is part of the plan).
+    await expect(saveBatch(customer, { accountId: mine.id }, [row(1)], file)).rejects.toMatchObject({ status: 402 });
+    await grantSubscription(mine.id);
     expect((await saveBatch(customer, { accountId: mine.id }, [row(1)], file)).saved).toBe(1);
   });
 });

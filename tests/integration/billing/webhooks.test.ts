@@ -18,6 +18,7 @@ import { accounts, subscriptions, webhookEvents } from '@/db/schema';
 import { POST } from '@/app/api/webhooks/stripe/route';
 import { openBillingPortal, startCheckout } from '@/lib/billing/checkout';
 import { getEntitlement } from '@/lib/billing/entitlements';
+import { stripe } from '@/lib/billing/stripe-client';
 import { startStripeFake, type StripeFakeHandle } from '@/mocks/stripe/server';
 import { DECLINE_CARD, payHostedCheckout, SUCCESS_CARD, waitUntil } from '../mocks/stripe-harness';
 import { makeAccount, makeUser } from '../helpers/fixtures';
@@ -216,5 +217,84 @@ describe('payment webhooks', () => {
     await waitUntil(() => outcomes.length > m, 'the retry');
     expect(outcomes.at(-1)!.status).toBe(200);
     expect((await getEntitlement(futureAccountId)).unlocked).toBe(true);
+  });
+
+  it('refuses a signed event that names an account its customer does not belong to, and changes nothing', async () => {
+    const { acct } = await subscribedCustomer();
+    const victim = await makeAccount('Not paying');
+    const [sub] = await db.select().from(subscriptions).where(eq(subscriptions.accountId, acct.id));
+    const payload = JSON.stringify({
+      id: `evt_mismatch_${victim.id.slice(0, 8)}`,
+      object: 'event',
+      type: 'checkout.session.completed',
+      created: Math.floor(Date.now() / 1000),
+      data: {
+        object: {
+          id: 'cs_forged',
+          object: 'checkout.session',
+          client_reference_id: victim.id,
+          customer: sub!.stripeCustomerId,
+          subscription: sub!.stripeSubscriptionId,
+        },
+      },
+    });
+    const res = await postEvent(payload);
+    expect(res.status).toBe(422);
+    expect((await getEntitlement(victim.id)).unlocked).toBe(false);
+    expect(await db.select().from(subscriptions).where(eq(subscriptions.accountId, victim.id))).toHaveLength(0);
+    expect(
+      await db
+        .select()
+        .from(webhookEvents)
+        .where(eq(webhookEvents.id, JSON.parse(payload).id)),
+    ).toHaveLength(0);
+  });
+
+  it('two events for one subscription applied at once leave the newest status, not an older one', async () => {
+    const { acct } = await subscribedCustomer();
+    const [sub] = await db.select().from(subscriptions).where(eq(subscriptions.accountId, acct.id));
+    const subId = sub!.stripeSubscriptionId;
+    // The first event's read of the subscription is slow: it sees "active", then takes 400 ms to return.
+    const client = stripe();
+    const original = client.subscriptions.retrieve.bind(client.subscriptions);
+    let firstRead: () => void = () => undefined;
+    const firstReadDone = new Promise<void>((r) => (firstRead = r));
+    let calls = 0;
+    const spy = vi.spyOn(client.subscriptions, 'retrieve').mockImplementation((async (id: string) => {
+      const state = await original(id);
+      if (++calls === 1) {
+        firstRead();
+        await new Promise((r) => setTimeout(r, 400));
+      }
+      return state;
+    }) as typeof client.subscriptions.retrieve);
+    try {
+      const event = (n: number) =>
+        JSON.stringify({
+          id: `evt_race_${n}_${subId}`,
+          object: 'event',
+          type: 'customer.subscription.updated',
+          created: Math.floor(Date.now() / 1000),
+          data: { object: { id: subId, object: 'subscription' } },
+        });
+      const first = postEvent(event(1));
+      await firstReadDone;
+      // Meanwhile the subscription is cancelled and a second event about it arrives (and the fake's own).
+      await new Stripe('sk_test_x', {
+        host: '127.0.0.1',
+        port: cfg.port,
+        protocol: 'http',
+        maxNetworkRetries: 0,
+      }).subscriptions.cancel(subId);
+      const second = postEvent(event(2));
+      expect((await first).status).toBe(200);
+      expect((await second).status).toBe(200);
+      await fake.webhooksIdle();
+    } finally {
+      spy.mockRestore();
+    }
+    const [after] = await db.select().from(subscriptions).where(eq(subscriptions.stripeSubscriptionId, subId));
+    expect(after!.status).toBe('canceled');
+    expect((await getEntitlement(acct.id)).unlocked).toBe(false);
   });
 });

@@ -1,4 +1,5 @@
 import { eq, sql } from 'drizzle-orm';
+import { Client } from 'pg';
 import { describe, expect, it } from 'vitest';
 import { db } from '@/db';
 import { auditLog, datasheetRevisions, outbox } from '@/db/schema';
@@ -65,21 +66,37 @@ describe('datasheet revisions', () => {
     const { engineer, sizing } = await heaterSizing();
     const a = await issueDatasheet(engineer, { sizingId: sizing.id });
     const code = (err: unknown) => (err as { cause?: { code?: string } }).cause?.code;
+    // The app's role is never granted changing a revision (42501); below it, the trigger refuses even the
+    // schema's owner (23001).
+    const owner = new Client({ connectionString: process.env.MIGRATION_DATABASE_URL ?? process.env.DATABASE_URL });
+    await owner.connect();
+    try {
+      const asOwner = await owner
+        .query('update datasheet_revisions set note = $1 where id = $2', ['tampered', a.revisionId])
+        .catch((e: { code?: string }) => e);
+      expect((asOwner as { code?: string }).code).toBe('23001');
+      const delOwner = await owner
+        .query('delete from datasheet_revisions where id = $1', [a.revisionId])
+        .catch((e: { code?: string }) => e);
+      expect((delOwner as { code?: string }).code).toBe('23001');
+    } finally {
+      await owner.end();
+    }
     const upd = await db
       .update(datasheetRevisions)
       .set({ note: 'tampered' })
       .where(eq(datasheetRevisions.id, a.revisionId))
       .catch((e: unknown) => e);
-    expect(code(upd)).toBe('23001');
+    expect(code(upd)).toBe('42501');
     const del = await db
       .delete(datasheetRevisions)
       .where(eq(datasheetRevisions.id, a.revisionId))
       .catch((e: unknown) => e);
-    expect(code(del)).toBe('23001');
+    expect(code(del)).toBe('42501');
     const raw = await db
       .execute(sql`update datasheet_revisions set sha256 = ${'0'.repeat(64)} where id = ${a.revisionId}`)
       .catch((e: unknown) => e);
-    expect(code(raw)).toBe('23001');
+    expect(code(raw)).toBe('42501');
     const [row] = await db
       .select({ note: datasheetRevisions.note, sha256: datasheetRevisions.sha256 })
       .from(datasheetRevisions)

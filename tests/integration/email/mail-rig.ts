@@ -1,5 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { sql } from 'drizzle-orm';
+import pg from 'pg';
 import PgBoss from 'pg-boss';
 import { vi } from 'vitest';
 import { startSmtpFake, type SmtpFakeHandle, type StoredMessage } from '@/mocks/smtp/server';
@@ -26,12 +27,19 @@ export async function startMailRig() {
   const { db } = await import('@/db');
   const { enqueueEmail } = await import('@/lib/email/enqueue');
   const { handlers } = await import('@/lib/jobs/handlers');
-  const { installQueues, MAIL_DEAD_QUEUE, MAIL_QUEUE, queues } = await import('@/lib/jobs/queues');
+  const { grantJobsSchemaSql, installQueues, MAIL_DEAD_QUEUE, MAIL_QUEUE, queues } = await import('@/lib/jobs/queues');
   // The rig's own client drives the queues one pass at a time, as the worker's pg-boss loop would.
+  // The schema's owner installs the queues, as db/migrate.mts does; the app role is granted their use.
+  const ownerUrl = process.env.MIGRATION_DATABASE_URL ?? process.env.DATABASE_URL;
+  const owner = new PgBoss({ connectionString: ownerUrl, schema, supervise: false, schedule: false });
+  owner.on('error', () => undefined);
+  await owner.start();
+  await installQueues(owner);
+  await owner.getDb().executeSql(grantJobsSchemaSql(schema), []);
+  await owner.stop({ graceful: false });
   const boss = new PgBoss({ connectionString: process.env.DATABASE_URL, schema, supervise: false, schedule: false });
   boss.on('error', () => undefined);
   await boss.start();
-  await installQueues(boss);
   const retryLimit = queues.find((q) => q.name === MAIL_QUEUE)?.options.retryLimit ?? 0;
   const domain = `${randomUUID().slice(0, 8)}.mail.test`;
   const jobTable = sql.raw(`${schema}.job`);
@@ -96,7 +104,10 @@ export async function startMailRig() {
     async close() {
       await boss.stop({ graceful: false });
       await db.execute(sql`delete from outbox where to_address like ${`%@${domain}`}`);
-      await db.execute(sql.raw(`drop schema if exists ${schema} cascade`));
+      const dropper = new pg.Client({ connectionString: ownerUrl });
+      await dropper.connect();
+      await dropper.query(`drop schema if exists ${schema} cascade`);
+      await dropper.end();
       await fake.close();
       vi.unstubAllEnvs();
     },

@@ -75,6 +75,24 @@ const cases: {
     subject: 'Your Dutywise subscription ends on 2031-04-17',
     engineering: false,
   },
+  'verify-email': {
+    props: { name: 'Ilse Marrow', verifyUrl: `${appUrl}/verify/tok-8812`, expiresInHours: 37 },
+    facts: ['Ilse Marrow', `${appUrl}/verify/tok-8812`, '37 hours'],
+    subject: 'Confirm your e-mail address for Dutywise',
+    engineering: false,
+  },
+  'password-reset': {
+    props: { resetUrl: `${appUrl}/reset-password/tok-8813`, expiresInMinutes: 43 },
+    facts: [`${appUrl}/reset-password/tok-8813`, '43 minutes'],
+    subject: 'Choose a new Dutywise password',
+    engineering: false,
+  },
+  'account-exists': {
+    props: { signInUrl: `${appUrl}/sign-in?from=mail-9`, resetUrl: `${appUrl}/forgot-password?from=mail-9` },
+    facts: [`${appUrl}/sign-in?from=mail-9`, `${appUrl}/forgot-password?from=mail-9`],
+    subject: 'You already have a Dutywise sign-in',
+    engineering: false,
+  },
 };
 
 // Text is compared with whitespace collapsed: the plain-text converter wraps long lines.
@@ -134,6 +152,19 @@ describe('e-mail templates', () => {
     );
     expect(out.html).not.toContain('<script>alert(1)</script>');
     expect(out.html).toContain('&lt;script&gt;');
+  });
+
+  it('keeps a chosen name from breaking the subject line or reordering text, and bounds its length', async () => {
+    const out = await renderEmail(
+      'invitation',
+      { ...cases.invitation.props, accountName: 'Acme\r\nBcc: victim@example.com \u202eevil' },
+      appUrl,
+    );
+    expect(out.subject).toBe('You are invited to Acme  Bcc: victim@example.com  evil on Dutywise');
+    expect(out.html).not.toContain('\u202e');
+    await expect(
+      renderEmail('invitation', { ...cases.invitation.props, accountName: 'x'.repeat(161) }, appUrl),
+    ).rejects.toThrow(/accountName must be at most 160 characters/);
   });
 
   it('refuses bad props with an error naming the field', async () => {

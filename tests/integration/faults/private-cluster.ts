@@ -14,6 +14,10 @@ export function clusterFor(name: string, port: number) {
     start: () => run('start', '--throwaway', '--db', 'dutywise_fault'),
     stop: () => run('stop'),
     migrate: () =>
-      execFileSync('npx', ['tsx', 'db/migrate.mts'], { cwd: root, env: { ...env, DATABASE_URL: url }, stdio: 'pipe' }),
+      execFileSync('npx', ['tsx', 'db/migrate.mts'], {
+        cwd: root,
+        env: { ...env, DATABASE_URL: url, MIGRATION_DATABASE_URL: url },
+        stdio: 'pipe',
+      }),
   };
 }

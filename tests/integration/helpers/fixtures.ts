@@ -22,12 +22,18 @@ export async function makeAccount(name = 'Test account') {
 export async function makeUser(
   role: UserRole,
   accountId?: string,
-  extra: { passwordHash?: string } = {},
+  extra: { passwordHash?: string; unverified?: boolean } = {},
 ): Promise<CurrentUser> {
   const email = `${role}-${randomUUID().slice(0, 8)}@test.example`;
   const [u] = await db
     .insert(users)
-    .values({ email, name: `Test ${role}`, role, passwordHash: extra.passwordHash })
+    .values({
+      email,
+      name: `Test ${role}`,
+      role,
+      passwordHash: extra.passwordHash,
+      emailVerifiedAt: extra.unverified ? null : new Date(),
+    })
     .returning();
   if (!u) throw new Error('no user');
   if (accountId) await db.insert(memberships).values({ accountId, userId: u.id });

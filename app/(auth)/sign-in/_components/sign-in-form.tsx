@@ -20,10 +20,12 @@ export function SignInForm({ next }: { next: string }) {
     const res = await fetch('/api/auth/sign-in', {
       method: 'POST',
       headers: { 'content-type': 'application/json' },
-      body: JSON.stringify(values),
+      body: JSON.stringify({ ...values, next }),
     }).catch(() => null);
     if (res?.ok) {
-      router.push(next);
+      // The server names the destination, checked against the site's own origin.
+      const { redirectTo } = (await res.json().catch(() => ({}))) as { redirectTo?: string };
+      router.push(redirectTo ?? '/size');
       router.refresh();
       return;
     }

@@ -1,7 +1,6 @@
 'use client';
 
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { showActionErrors } from '@/app/_components/action-errors';
@@ -14,8 +13,8 @@ import { signUpAction } from '../actions';
 const FIELDS = ['name', 'email', 'password', 'company', 'site'] as const;
 
 export function SignUpForm() {
-  const router = useRouter();
   const [formError, setFormError] = useState<string | null>(null);
+  const [sentTo, setSentTo] = useState<string | null>(null);
   const { register, handleSubmit, setError, formState } = useForm<SignUpInput>({
     resolver: zodResolver(signUpSchema),
     mode: 'onTouched',
@@ -26,14 +25,28 @@ export function SignUpForm() {
     setFormError(null);
     const res = await signUpAction(values);
     if (res.ok) {
-      router.push('/size');
-      router.refresh();
+      setSentTo(res.data.email);
     } else {
       setFormError(showActionErrors(setError, res.errors, FIELDS));
     }
   });
 
   const e = formState.errors;
+  if (sentTo)
+    return (
+      <div
+        role="status"
+        data-testid="sign-up-sent"
+        className="mt-6 rounded-panel border border-tide-100 bg-tide-50 p-4"
+      >
+        <p className="font-medium">Check your inbox</p>
+        <p className="mt-2 text-sm text-ink-soft">
+          We have sent a link to <span className="font-mono">{sentTo}</span>. Follow it within 48 hours to confirm the
+          address and open your desk. If the address already has a Dutywise sign-in, the message says how to sign in
+          instead.
+        </p>
+      </div>
+    );
   return (
     <form onSubmit={onSubmit} noValidate className="mt-6 space-y-4" aria-label="Create your customer account">
       <TextField label="Your name" autoComplete="name" error={e.name?.message} {...register('name')} />
@@ -48,7 +61,7 @@ export function SignUpForm() {
         label="Password"
         type="password"
         autoComplete="new-password"
-        hint="At least 10 characters."
+        hint="10 characters to 72 bytes."
         error={e.password?.message}
         {...register('password')}
       />

@@ -1,5 +1,4 @@
 import { calculate } from '@/lib/engine';
-import { env } from '@/lib/env';
 import { defineHandler } from '@/lib/http/define-handler';
 import { readJsonBody } from '@/lib/http/json';
 import { limitRequest } from '@/lib/ratelimit/guard-request';
@@ -12,7 +11,7 @@ const MAX_BODY_BYTES = 64 * 1024;
 /** Public sizing endpoint: 200 with the result, 400 with every refused field, 413 above 64 KiB, 429 over the rate limit. */
 export const POST = defineHandler(
   async (req) => {
-    const limited = await limitRequest(req, 'calculate', env.RATE_LIMIT_CALCULATE_PER_MIN);
+    const limited = await limitRequest(req, 'calculate');
     if (limited) return limited;
     const body = await readJsonBody(req, MAX_BODY_BYTES);
     // The engine's refusal (SizingInputError) becomes the 400 with every field in defineHandler.

@@ -1,9 +1,11 @@
 import type Stripe from 'stripe';
 import { stripe } from '@/lib/billing/stripe-client';
+import { AccountMismatchError } from '@/lib/billing/subscription-sync';
 import { applyStripeEvent, isHandled } from '@/lib/billing/webhook';
 import { env } from '@/lib/env';
 import { AppError } from '@/lib/errors';
 import { defineHandler } from '@/lib/http/define-handler';
+import { readBodyLimited } from '@/lib/http/read-limited';
 import { logger } from '@/lib/log/logger';
 
 export const runtime = 'nodejs';
@@ -23,16 +25,25 @@ function verifiedEvent(body: string, signature: string): Stripe.Event {
 export const POST = defineHandler(
   async (req) => {
     const signature = req.headers.get('stripe-signature');
-    const body = await req.text();
     if (!signature) throw new AppError('invalid_input', 'The Stripe-Signature header is missing.');
-    if (Buffer.byteLength(body) > MAX_BODY) throw new AppError('too_large', 'The event payload is too large.');
-    const event = verifiedEvent(body, signature);
+    // Bounded while it is read, before any signature work: an unsigned flood costs at most MAX_BODY each.
+    const read = await readBodyLimited(req, MAX_BODY);
+    if (!read.ok)
+      throw read.reason === 'too-large'
+        ? new AppError('too_large', 'The event payload is too large.')
+        : new AppError('invalid_input', 'The event payload could not be read completely.');
+    const event = verifiedEvent(Buffer.from(read.bytes).toString('utf8'), signature);
     if (!isHandled(event.type)) return Response.json({ received: true, ignored: event.type });
     try {
       const outcome = await applyStripeEvent(event);
       logger.info({ eventId: event.id, type: event.type, outcome }, 'payment event');
       return Response.json({ received: true, outcome });
     } catch (err) {
+      if (err instanceof AccountMismatchError) {
+        // Signed, but naming an account its customer does not belong to: refused, and retrying cannot change that.
+        logger.error({ err: err.message, eventId: event.id, type: event.type }, 'payment event refused');
+        throw new AppError('unprocessable', 'Event refused: it names an account its customer does not belong to.');
+      }
       logger.error({ err, eventId: event.id, type: event.type }, 'payment event failed; the sender will retry');
       throw new AppError('internal', 'Processing failed; retry later.');
     }

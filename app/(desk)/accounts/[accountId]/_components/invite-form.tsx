@@ -14,11 +14,11 @@ import { inviteMemberAction } from '../actions';
 
 type Values = z.input<typeof inviteSchema>;
 
-/** Invites a customer user; the demo's mail is a local fake, so the link is shown here too. */
+/** Invites a customer user; in demo mode the mail is a local fake, so the link is shown here too. */
 export function InviteForm({ accountId }: { accountId: string }) {
   const router = useRouter();
   const [formError, setFormError] = useState<string | null>(null);
-  const [sent, setSent] = useState<{ email: string; inviteUrl: string } | null>(null);
+  const [sent, setSent] = useState<{ email: string; inviteUrl: string | null } | null>(null);
   const { register, handleSubmit, setError, reset, formState } = useForm<Values>({
     resolver: zodResolver(inviteSchema),
     mode: 'onTouched',
@@ -56,13 +56,16 @@ export function InviteForm({ accountId }: { accountId: string }) {
           className="rounded-md border border-tide-100 bg-tide-50 px-3 py-2 text-sm text-tide-700"
         >
           <p>
-            Invitation sent to <strong>{sent.email}</strong>; link:
+            Invitation sent to <strong>{sent.email}</strong>
+            {sent.inviteUrl ? '; link (demo mode):' : '. The link in it works once, for 14 days.'}
           </p>
-          <p className="mt-1 break-all font-mono text-hint">
-            <a href={sent.inviteUrl} className="underline" data-testid="invite-link">
-              {sent.inviteUrl}
-            </a>
-          </p>
+          {sent.inviteUrl && (
+            <p className="mt-1 break-all font-mono text-hint">
+              <a href={sent.inviteUrl} className="underline" data-testid="invite-link">
+                {sent.inviteUrl}
+              </a>
+            </p>
+          )}
         </div>
       )}
       <SubmitButton pending={formState.isSubmitting} pendingLabel="Sending…">

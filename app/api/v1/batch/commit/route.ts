@@ -1,4 +1,5 @@
 import { requireUser } from '@/lib/auth/guards';
+import { admitBatch } from '@/lib/batch/guard';
 import { saveBatch } from '@/lib/batch/commit';
 import { parseBatchTarget, readBatchRequest, sheetProblems } from '@/lib/batch/read-request';
 import { defineHandler } from '@/lib/http/define-handler';
@@ -9,6 +10,7 @@ export const runtime = 'nodejs';
 export const POST = defineHandler(
   async (req) => {
     const user = await requireUser('batch:upload');
+    await admitBatch(user);
     const { sheet, file, target } = await readBatchRequest(req);
     if (sheet.problems.length) throw sheetProblems(sheet.problems);
     return Response.json(await saveBatch(user, parseBatchTarget(target), sheet.rows, file));

@@ -1,4 +1,5 @@
 import { requireUser } from '@/lib/auth/guards';
+import { admitBatch } from '@/lib/batch/guard';
 import { evaluateSheet } from '@/lib/batch/evaluate';
 import { readBatchRequest, sheetProblems } from '@/lib/batch/read-request';
 import { defineHandler } from '@/lib/http/define-handler';
@@ -8,7 +9,7 @@ export const runtime = 'nodejs';
 /** Sizes an uploaded sheet without saving anything: sized rows and per-row, per-column problems. */
 export const POST = defineHandler(
   async (req) => {
-    await requireUser('batch:upload');
+    await admitBatch(await requireUser('batch:upload'));
     const { sheet } = await readBatchRequest(req);
     if (sheet.problems.length) throw sheetProblems(sheet.problems);
     const rows = evaluateSheet(sheet.rows);
