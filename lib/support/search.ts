@@ -43,18 +43,20 @@ type Plan = {
   floor: number;
 };
 
-async function matchBranches(tx: Tx, q: string, close: boolean): Promise<Branch[]> {
+async function exactMatches(tx: Tx, q: string): Promise<Branch[]> {
   const terms = parseLookupText(q);
-  const exact = exactBranches(terms, await textSearchQuery(tx, terms), await customersNamed(tx, terms.text, false));
-  if (!close) return exact;
-  const [tags, customers] = [await closeTags(tx, terms.text), await customersNamed(tx, terms.text, true)];
-  return [...exact, ...closeBranches(terms, tags, customers)];
+  return exactBranches(terms, await textSearchQuery(tx, terms), await customersNamed(tx, terms.text, false));
+}
+
+async function closeMatches(tx: Tx, q: string): Promise<Branch[]> {
+  const terms = parseLookupText(q);
+  return closeBranches(terms, await closeTags(tx, terms.text), await customersNamed(tx, terms.text, true));
 }
 
 async function fetchRows(tx: Tx, p: Plan, limit: number) {
   const sort = p.sort ?? SORTS.newest;
   for (const b of p.branches ?? []) {
-    if (!b.textQuery) continue;
+    if (!b.textQuery || b.ids) continue;
     const want = p.sort ? limit : RELEVANCE_POOL;
     const after = p.sort ? afterCondition(sort, p.cursor) : null;
     const m = await textMatches(tx, b.textQuery, p.filters, sort, after, want, p.tableRows);
@@ -86,12 +88,13 @@ export async function searchSizings(user: CurrentUser, f: SupportSearch): Promis
     const p: Plan = { branches: null, filters, sort, cursor, close: false, tableRows, floor: 0 };
     if (f.q) {
       p.close = cursor.close === true;
-      p.branches = await matchBranches(tx, f.q, p.close);
+      p.branches = await exactMatches(tx, f.q);
+      if (p.close) p.branches.push(...(await closeMatches(tx, f.q)));
     }
     let rows = await fetchRows(tx, p, f.pageSize + 1);
     if (f.q && first && !p.close && rows.length < CLOSE_BELOW && f.q.trim().length >= 3) {
       p.close = true;
-      p.branches = await matchBranches(tx, f.q, true);
+      p.branches = [...(p.branches ?? []), ...(await closeMatches(tx, f.q))];
       rows = await fetchRows(tx, p, f.pageSize + 1);
     }
     const more = rows.length > f.pageSize;

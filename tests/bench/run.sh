@@ -39,6 +39,8 @@ if [ "${BENCH_SKIP_LOAD:-0}" != 1 ]; then
   echo "== HTTP load (production builds of Dutywise and of the minimal floor app)"
   export NEXT_DIST_DIR=.next-bench
   if [ "${BENCH_REUSE_BUILD:-0}" != 1 ] || [ ! -f .next-bench/BUILD_ID ]; then npx next build || exit 1; fi
+  echo "== first-load JavaScript per page"
+  node_script tests/bench/bundle.bench.ts || fail=1
   (unset NEXT_DIST_DIR; npx next build tests/bench/floor-app) > .data/bench-floor-build.log 2>&1 || { cat .data/bench-floor-build.log; exit 1; }
   app_port=$((3200 + offset)) floor_port=$((3300 + offset))
   # node itself, not an npx wrapper, so the pid is the server's (its CPU is read from /proc) and the kill reaches it
