@@ -9,6 +9,7 @@ const config = [
   {
     ignores: [
       '.next/**',
+      'tests/bench/floor-app/.next/**',
       '.next-*/**',
       '.scratch/**',
       'node_modules/**',

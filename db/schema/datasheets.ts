@@ -32,6 +32,8 @@ export const datasheets = pgTable(
   },
   (t) => [
     uniqueIndex('datasheets_number_uq').on(t.number),
+    // Number prefixes typed into the look-up (`DS26-05`), under any collation.
+    index('datasheets_number_pattern_idx').on(sql`${t.number} text_pattern_ops`),
     uniqueIndex('datasheets_sizing_uq').on(t.sizingId),
     index('datasheets_account_idx').on(t.accountId),
   ],

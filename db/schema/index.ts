@@ -7,3 +7,4 @@ export * from './datasheets';
 export * from './billing';
 export * from './ops';
 export * from './identity';
+export * from './search';

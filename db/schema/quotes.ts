@@ -23,6 +23,8 @@ export const quotes = pgTable(
   },
   (t) => [
     uniqueIndex('quotes_number_uq').on(t.number),
+    // Number prefixes typed into the look-up (`DS26-05`), under any collation.
+    index('quotes_number_pattern_idx').on(sql`${t.number} text_pattern_ops`),
     index('quotes_account_idx').on(t.accountId, t.createdAt.desc()),
     index('quotes_status_idx').on(t.status),
     index('quotes_title_trgm_idx').using('gin', sql`lower(${t.title}) gin_trgm_ops`),

@@ -1,6 +1,7 @@
 import { sql } from 'drizzle-orm';
 import {
   check,
+  customType,
   doublePrecision,
   index,
   integer,
@@ -15,6 +16,8 @@ import {
 import { accounts } from './accounts';
 import { service } from './enums';
 import { users } from './users';
+
+const tsvector = customType<{ data: string }>({ dataType: () => 'tsvector' });
 
 /**
  * One saved duty point. `input` is the validated engine request and `result` the engine's answer
@@ -45,19 +48,23 @@ export const sizings = pgTable(
     createdByUserId: uuid('created_by_user_id').references(() => users.id, { onDelete: 'set null' }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
-    searchText: text('search_text').generatedAlwaysAs(
-      sql`lower(coalesce(number, '') || ' ' || coalesce(title, '') || ' ' || coalesce(equipment_tag, '') || ' ' || coalesce(notes, '') || ' ' || coalesce(gas_label, ''))`,
+    // Title and notes as text-search words, unstemmed so a typed prefix finds the word; titles rank above notes.
+    searchVector: tsvector('search_vector').generatedAlwaysAs(
+      sql`setweight(to_tsvector('simple', coalesce(title, '')), 'A') || setweight(to_tsvector('simple', coalesce(notes, '')), 'C')`,
     ),
   },
   (t) => [
     uniqueIndex('sizings_number_uq').on(t.number),
-    index('sizings_account_created_idx').on(t.accountId, t.createdAt.desc()),
-    index('sizings_created_idx').on(t.createdAt.desc()),
-    index('sizings_tag_lower_idx').on(sql`lower(${t.equipmentTag})`),
-    index('sizings_search_trgm_idx').using('gin', sql`${t.searchText} gin_trgm_ops`),
-    // Typo-tolerant look-up compares short fields, not the whole search text: far fewer candidates.
+    // The look-up pages by keyset: every sort key is indexed together with the id that breaks its ties.
+    index('sizings_created_id_idx').on(t.createdAt, t.id),
+    index('sizings_headline_id_idx').on(t.headlineKw, t.id),
+    index('sizings_account_created_id_idx').on(t.accountId, t.createdAt, t.id),
+    // Prefix look-ups (`S26-01%`, `eh-4%`) under any collation, and equality on the lower-case tag.
+    index('sizings_number_pattern_idx').on(sql`${t.number} text_pattern_ops`),
+    index('sizings_tag_pattern_idx').on(sql`lower(${t.equipmentTag}) text_pattern_ops`),
+    // A tag typed in part: trigram substring match.
     index('sizings_tag_trgm_idx').using('gin', sql`lower(${t.equipmentTag}) gin_trgm_ops`),
-    index('sizings_title_trgm_idx').using('gin', sql`lower(${t.title}) gin_trgm_ops`),
+    index('sizings_search_vector_idx').using('gin', t.searchVector),
     index('sizings_service_gas_idx').on(t.service, t.gasKey),
     index('sizings_creator_idx').on(t.createdByUserId),
     check('sizings_headline_finite', sql`${t.headlineKw} >= 0 and ${t.headlineKw} < 'Infinity'::float8`),

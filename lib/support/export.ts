@@ -26,10 +26,12 @@ const COLUMNS: readonly (readonly [string, (h: SupportHit) => unknown])[] = [
 /** The look-up's hits as CSV, read page by page up to EXPORT_MAX_ROWS; formula-looking cells are neutralised. */
 export async function exportLookupCsv(user: CurrentUser, query: SupportSearch): Promise<{ csv: string; rows: number }> {
   const rows: unknown[][] = [];
+  let cursor: string | undefined;
   for (let page = 1; rows.length < EXPORT_MAX_ROWS; page++) {
-    const res = await searchSizings(user, { ...query, page, pageSize: PAGE_SIZE });
+    const res = await searchSizings(user, { ...query, cursor, page, pageSize: PAGE_SIZE });
     for (const hit of res.hits) rows.push(COLUMNS.map(([, cell]) => cell(hit)));
-    if (res.hits.length < PAGE_SIZE) break;
+    if (!res.nextCursor) break;
+    cursor = res.nextCursor;
   }
   return {
     csv: toCsv(

@@ -46,7 +46,15 @@ export const supportSearchSchema = z.object({
   quoteStatus: z.enum(['draft', 'sent', 'won', 'lost']).optional().catch(undefined),
   accountId: z.uuid().optional().catch(undefined),
   sort: z.enum(searchSorts).default('newest').catch('newest'),
-  page: z.coerce.number().int().min(1).max(10_000).default(1).catch(1),
+  // Where the page starts: an opaque token from the previous page's `nextCursor` (keyset paging).
+  cursor: z
+    .string()
+    .max(400)
+    .regex(/^[A-Za-z0-9_-]+$/)
+    .optional()
+    .catch(undefined),
+  // The page's number, for display only: the cursor says where it starts.
+  page: z.coerce.number().int().min(1).max(100_000).default(1).catch(1),
   pageSize: z.coerce
     .number()
     .int()

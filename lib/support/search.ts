@@ -1,146 +1,121 @@
 import 'server-only';
 import { sql, type SQL } from 'drizzle-orm';
-import { db } from '@/db';
+import { db, type Tx } from '@/db';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { accountScope } from '@/lib/auth/guards';
+import { closeBranches, exactBranches, type Branch } from './branches';
+import { countMatches } from './count';
+import { customersNamed } from './customers';
+import { filterConditions } from './filters';
+import { afterCondition, decodeCursor, encodeCursor, SORTS, type Cursor, type SortSpec } from './keyset';
+import { closeTags, textSearchQuery } from './lexicon';
+import { keyedPage, RELEVANCE_POOL, relevancePage, type SupportHit } from './page-query';
 import type { SupportSearch } from './schema';
+import { parseLookupText } from './terms';
+import { textMatches } from './text-walk';
 
-export type SupportHit = {
-  id: string;
-  number: string;
-  title: string;
-  equipmentTag: string | null;
-  service: 'heater' | 'compressor';
-  gasLabel: string;
-  headlineKw: number;
-  accountId: string;
-  accountName: string;
-  createdAt: string;
-  createdByName: string | null;
-  datasheetNumber: string | null;
-  quoteNumbers: string[];
-};
+export type { SupportHit } from './page-query';
 
 export type SupportResults = {
   hits: SupportHit[];
+  /** Exact when `totalIsEstimate` is false; otherwise PostgreSQL's estimate, to be shown as "about N". */
   total: number;
   totalIsEstimate: boolean;
+  /** Close spellings were added because the text as typed matched almost nothing. */
+  closeMatches: boolean;
+  /** Pass as `cursor` for the next page; null on the last page. */
+  nextCursor: string | null;
   page: number;
   pageSize: number;
 };
 
-const COUNT_CAP = 1_000;
+// Fewer hits than this for the text as typed and the look-up also tries close spellings.
+const CLOSE_BELOW = 5;
 
-function escapeLike(s: string): string {
-  return s.replace(/[%_\\]/g, (c) => `\\${c}`);
+type Plan = {
+  branches: Branch[] | null;
+  filters: SQL[];
+  sort: SortSpec | null;
+  cursor: Cursor;
+  close: boolean;
+  tableRows: number;
+  /** A floor for the total: the share of the text matches in the window read, scaled to the table. */
+  floor: number;
+};
+
+async function exactMatches(tx: Tx, q: string): Promise<Branch[]> {
+  const terms = parseLookupText(q);
+  return exactBranches(terms, await textSearchQuery(tx, terms), await customersNamed(tx, terms.text, false));
+}
+
+async function closeMatches(tx: Tx, q: string): Promise<Branch[]> {
+  const terms = parseLookupText(q);
+  return closeBranches(terms, await closeTags(tx, terms.text), await customersNamed(tx, terms.text, true));
+}
+
+async function fetchRows(tx: Tx, p: Plan, limit: number) {
+  const sort = p.sort ?? SORTS.newest;
+  for (const b of p.branches ?? []) {
+    if (!b.textQuery || b.ids) continue;
+    const want = p.sort ? limit : RELEVANCE_POOL;
+    const after = p.sort ? afterCondition(sort, p.cursor) : null;
+    const m = await textMatches(tx, b.textQuery, p.filters, sort, after, want, p.tableRows);
+    b.ids = m.ids;
+    if (m.density !== null) p.floor = Math.max(p.floor, m.density * p.tableRows);
+  }
+  if (p.sort) return keyedPage(tx, p.branches, p.filters, p.sort, p.cursor, limit);
+  return relevancePage(tx, p.branches ?? [], p.filters, p.cursor.offset ?? 0, limit);
 }
 
 /**
- * Text match over sizings, their account, datasheet and quote numbers. The precise form (substring and
- * number prefix) runs first; only when it finds almost nothing is the typo-tolerant form used, which
- * compares the query with the short fields (tag, title, customer, quote title) by trigram similarity.
- * Each branch is its own SELECT in a union so it uses its own index: OR-ing them makes PostgreSQL scan
- * every sizing.
+ * One page of the sizings matching the look-up, in the chosen order, with a total that is exact up to a
+ * thousand and estimated above. The text is matched as a document number, a tag, title and notes words,
+ * a customer and a quote title, each through its own index; when that finds almost nothing, close
+ * spellings of tags and customers are tried as well. Scoped by `accountScope(user)`.
  */
-function matchingIds(q: string, fuzzy: boolean): SQL {
-  const lower = q.toLowerCase();
-  const like = `%${escapeLike(lower)}%`;
-  const prefix = `${escapeLike(q.toUpperCase())}%`;
-  const typo = fuzzy
-    ? sql`
-    union select t.id from sizings t where lower(t.equipment_tag) % ${lower}
-    union select t.id from sizings t where ${lower} <% lower(t.title)
-    union select t.id from sizings t where t.account_id in (select a3.id from accounts a3 where ${lower} <% lower(a3.name))
-    union select qi.sizing_id from quote_items qi join quotes q3 on q3.id = qi.quote_id where ${lower} <% lower(q3.title)`
-    : sql``;
-  return sql`
-    select t.id from sizings t where t.search_text like ${like}
-    union select t.id from sizings t where t.account_id in (select a2.id from accounts a2 where a2.name ilike ${like})
-    union select d.sizing_id from datasheets d where d.number like ${prefix}
-    union select qi.sizing_id from quote_items qi join quotes q2 on q2.id = qi.quote_id where q2.number like ${prefix} or lower(q2.title) like ${like}
-    ${typo}`;
-}
-
-function conditions(user: CurrentUser, f: SupportSearch, fuzzy: boolean): SQL[] {
-  const c: SQL[] = [];
-  const scope = accountScope(user);
-  if (scope) c.push(sql`s.account_id = ${scope}`);
-  if (f.accountId) c.push(sql`s.account_id = ${f.accountId}`);
-  if (f.q) c.push(sql`s.id in (${matchingIds(f.q, fuzzy)})`);
-  if (f.service) c.push(sql`s.service = ${f.service}`);
-  if (f.gas) c.push(sql`s.gas_key = ${f.gas}`);
-  if (f.minKw !== undefined) c.push(sql`s.headline_kw >= ${f.minKw}`);
-  if (f.maxKw !== undefined) c.push(sql`s.headline_kw <= ${f.maxKw}`);
-  if (f.from) c.push(sql`s.created_at >= ${f.from}::date`);
-  if (f.to) c.push(sql`s.created_at < (${f.to}::date + 1)`);
-  if (f.creator) c.push(sql`s.created_by_user_id = ${f.creator}`);
-  if (f.quoteStatus)
-    c.push(
-      sql`s.id in (select qi.sizing_id from quote_items qi join quotes q3 on q3.id = qi.quote_id where q3.status = ${f.quoteStatus})`,
-    );
-  return c;
-}
-
-function orderBy(f: SupportSearch): SQL {
-  switch (f.sort) {
-    case 'oldest':
-      return sql`s.created_at asc, s.id`;
-    case 'largest':
-      return sql`s.headline_kw desc, s.id`;
-    case 'smallest':
-      return sql`s.headline_kw asc, s.id`;
-    case 'relevance':
-      return f.q
-        ? sql`similarity(${f.q.toLowerCase()}, s.search_text) desc, s.created_at desc`
-        : sql`s.created_at desc, s.id`;
-    default:
-      return sql`s.created_at desc, s.id`;
-  }
-}
-
-/** One page of matching sizings with the numbers support is asked about, plus a (capped) total. */
-const whereOf = (conds: SQL[]) => (conds.length ? sql`where ${sql.join(conds, sql` and `)}` : sql``);
-// Fewer precise hits than this and the look-up also tries close spellings.
-const FUZZY_BELOW = 5;
-
 export async function searchSizings(user: CurrentUser, f: SupportSearch): Promise<SupportResults> {
-  const offset = (f.page - 1) * f.pageSize;
   return db.transaction(async (tx) => {
-    // Looser trigram thresholds than the defaults (0.3 / 0.6) so one or two wrong characters in a tag still
-    // match; no JIT, which costs short interactive queries more than it saves. One round trip for all three.
-    await tx.execute(sql`select set_config('pg_trgm.similarity_threshold', '0.4', true),
-      set_config('pg_trgm.word_similarity_threshold', '0.5', true), set_config('jit', 'off', true)`);
-    const count = async (conds: SQL[], fuzzy: boolean) => {
-      // A text query alone: its id set is the answer, so count it without probing every sizing it names.
-      const from =
-        f.q && conds.length === 1
-          ? sql`(${matchingIds(f.q, fuzzy)} limit ${COUNT_CAP + 1})`
-          : sql`(select 1 from sizings s ${whereOf(conds)} limit ${COUNT_CAP + 1})`;
-      return (await tx.execute<{ n: number }>(sql`select count(*)::int as n from ${from} t`)).rows[0]?.n ?? 0;
-    };
-    let conds = conditions(user, f, false);
-    let n = await count(conds, false);
-    if (f.q && n < FUZZY_BELOW && f.q.length >= 3) {
-      conds = conditions(user, f, true);
-      n = await count(conds, true);
+    // Trigram threshold for correcting words (tags set their own); no JIT, which costs short queries more
+    // than it saves.
+    const setup = await tx.execute<{ rows: number }>(sql`select set_config('pg_trgm.similarity_threshold', '0.4', true),
+      set_config('pg_trgm.word_similarity_threshold', '0.6', true), set_config('jit', 'off', true),
+      (select greatest(reltuples, 0)::float8 from pg_class where oid = 'sizings'::regclass) as rows`);
+    const sort = f.sort === 'relevance' ? (f.q ? null : SORTS.newest) : SORTS[f.sort];
+    const cursor = decodeCursor(f.cursor, sort);
+    const first = !cursor.after && !cursor.offset;
+    const filters = filterConditions(accountScope(user), f);
+    const tableRows = setup.rows[0]?.rows ?? 0;
+    const p: Plan = { branches: null, filters, sort, cursor, close: false, tableRows, floor: 0 };
+    if (f.q) {
+      p.close = cursor.close === true;
+      p.branches = await exactMatches(tx, f.q);
+      if (p.close) p.branches.push(...(await closeMatches(tx, f.q)));
     }
-    const where = whereOf(conds);
-    const rows = await tx.execute<SupportHit>(sql`
-      select s.id, s.number, s.title, s.equipment_tag as "equipmentTag", s.service, s.gas_label as "gasLabel",
-             s.headline_kw as "headlineKw", s.account_id as "accountId", a.name as "accountName",
-             to_char(s.created_at at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS"Z"') as "createdAt", u.name as "createdByName",
-             (select d.number from datasheets d where d.sizing_id = s.id) as "datasheetNumber",
-             coalesce((select array_agg(q.number order by q.number) from quote_items qi join quotes q on q.id = qi.quote_id where qi.sizing_id = s.id), '{}') as "quoteNumbers"
-      from sizings s
-      join accounts a on a.id = s.account_id
-      left join users u on u.id = s.created_by_user_id
-      ${where}
-      order by ${orderBy(f)}
-      limit ${f.pageSize} offset ${offset}`);
+    let rows = await fetchRows(tx, p, f.pageSize + 1);
+    if (f.q && first && !p.close && rows.length < CLOSE_BELOW && f.q.trim().length >= 3) {
+      p.close = true;
+      p.branches = [...(p.branches ?? []), ...(await closeMatches(tx, f.q))];
+      rows = await fetchRows(tx, p, f.pageSize + 1);
+    }
+    const more = rows.length > f.pageSize;
+    const page = rows.slice(0, f.pageSize);
+    const last = page.at(-1);
+    const next: Cursor | null =
+      !more || !last
+        ? null
+        : sort
+          ? { after: { key: last.sortKey, id: last.hit.id }, close: p.close }
+          : { offset: (cursor.offset ?? 0) + f.pageSize, close: p.close };
+    const count =
+      first && !more
+        ? { total: page.length, estimated: false }
+        : await countMatches(tx, p.branches, p.filters, p.floor);
     return {
-      hits: rows.rows,
-      total: Math.min(n, COUNT_CAP),
-      totalIsEstimate: n > COUNT_CAP,
+      hits: page.map((r) => r.hit),
+      total: count.total,
+      totalIsEstimate: count.estimated,
+      closeMatches: p.close,
+      nextCursor: next ? encodeCursor(next) : null,
       page: f.page,
       pageSize: f.pageSize,
     };

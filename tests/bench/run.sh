@@ -1,14 +1,21 @@
 #!/usr/bin/env bash
 # `npm run bench`: the speed and memory targets, measured on this machine. Loopback only, bounded in time.
-# Uses its own database (dutywise_bench on the test cluster, port 55433), filled once with a million sizings.
+# Uses its own databases on the test cluster (port 55433 + TEST_PORT_OFFSET): dutywise_bench holds the demo
+# scenario plus a million generated sizings; the look-up is also timed on dutywise_bench_100k and
+# dutywise_bench_5m (BENCH_SIZES to choose). Each is generated once and kept; the first run takes a while.
+# BENCH_SKIP_LOAD=1 leaves out the HTTP load run; BENCH_REUSE_BUILD=1 keeps an existing production build.
 set -uo pipefail
 cd "$(dirname "${BASH_SOURCE[0]}")/../.."
 export NEXT_TELEMETRY_DISABLED=1
 [ -f node_modules/.package-lock.json ] || npm ci --no-audit --no-fund
-export PG_DATA_DIR="$PWD/.data/pg-test" PG_PORT=55433
+offset="${TEST_PORT_OFFSET:-0}"
+export PG_DATA_DIR="$PWD/.data/pg-test" PG_PORT=$((55433 + offset))
 bash db/postgres.sh start --throwaway --db dutywise_bench || exit 1
-export MIGRATION_DATABASE_URL="postgres://postgres@127.0.0.1:$PG_PORT/dutywise_bench"
-export DATABASE_URL="postgres://dutywise_app:${PG_APP_PASSWORD:-dutywise-app-local}@127.0.0.1:$PG_PORT/dutywise_bench"
+# Migrations, data generation and ANALYZE run as the owner; the app under load signs in as dutywise_app.
+owner_url() { echo "postgres://postgres@127.0.0.1:$PG_PORT/$1"; }
+app_url() { echo "postgres://dutywise_app:${PG_APP_PASSWORD:-dutywise-app-local}@127.0.0.1:$PG_PORT/$1"; }
+export MIGRATION_DATABASE_URL="$(owner_url dutywise_bench)"
+export DATABASE_URL="$(app_url dutywise_bench)"
 rm -f tests/bench/RESULTS.md
 node_script() { npx tsx --require ./db/script-preload.cjs "$@"; }
 fail=0
@@ -19,21 +26,37 @@ engine_out="$(mktemp)"
 echo "== engine (one core)";         npx tsx tests/bench/engine.bench.mts | tee "$engine_out" || fail=1
 echo "== datasheets";                node_script tests/bench/datasheet.bench.ts || fail=1
 echo "== batch";                     node_script tests/bench/batch.bench.ts || fail=1
-echo "== data for search (${BENCH_ROWS:-1000000} rows; first run takes a few minutes)"
-DATABASE_URL="$MIGRATION_DATABASE_URL" node_script tests/bench/generate-sizings.ts "${BENCH_ROWS:-1000000}" || fail=1 # analyze needs the owner
-echo "== search";                    node_script tests/bench/search.bench.ts || fail=1
+
+for rows in ${BENCH_SIZES:-100000 1000000 5000000}; do
+  case "$rows" in 1000000) name=dutywise_bench ;; *000000) name="dutywise_bench_$((rows / 1000000))m" ;; *) name="dutywise_bench_$((rows / 1000))k" ;; esac
+  echo "== look-up data: $rows sizings in $name (generated once; millions take minutes)"
+  psql -h 127.0.0.1 -p "$PG_PORT" -U postgres -tAc "select 1 from pg_database where datname = '$name'" postgres | grep -q 1 ||
+    psql -h 127.0.0.1 -p "$PG_PORT" -U postgres -qc "create database $name" postgres || { fail=1; continue; }
+  MIGRATION_DATABASE_URL="$(owner_url "$name")" npx tsx db/migrate.mts || { fail=1; continue; }
+  DATABASE_URL="$(owner_url "$name")" node_script tests/bench/generate-sizings.ts "$rows" || { fail=1; continue; }
+  echo "== look-up on $rows sizings"
+  DATABASE_URL="$(app_url "$name")" node_script tests/bench/search.bench.ts || fail=1
+done
 
 if [ "${BENCH_SKIP_LOAD:-0}" != 1 ]; then
-  echo "== HTTP load (production build)"
+  echo "== HTTP load (production builds of Dutywise and of the minimal floor app)"
   export NEXT_DIST_DIR=.next-bench
-  [ -f .next-bench/BUILD_ID ] || npx next build || exit 1
-  pids=()
-  DEMO_MODE=on RATE_LIMIT_CALCULATE_PER_MIN=100000000 LOG_LEVEL=warn node server.mjs --port 3200 > .data/bench-app.log 2>&1 & pids+=($!)
-  # node itself, not an npx/tsx wrapper, so the kill below reaches the server
-  node --import tsx tests/bench/bare-server.ts 3299 > .data/bench-bare.log 2>&1 & pids+=($!)
-  for _ in $(seq 1 60); do curl -fs http://localhost:3200/api/health >/dev/null 2>&1 && break; sleep 1; done
-  npx tsx tests/bench/load.bench.ts || fail=1
-  for p in "${pids[@]}"; do kill "$p" 2>/dev/null; done
+  if [ "${BENCH_REUSE_BUILD:-0}" != 1 ] || [ ! -f .next-bench/BUILD_ID ]; then npx next build || exit 1; fi
+  echo "== first-load JavaScript per page"
+  node_script tests/bench/bundle.bench.ts || fail=1
+  (unset NEXT_DIST_DIR; npx next build tests/bench/floor-app) > .data/bench-floor-build.log 2>&1 || { cat .data/bench-floor-build.log; exit 1; }
+  app_port=$((3200 + offset)) floor_port=$((3300 + offset))
+  # node itself, not an npx wrapper, so the pid is the server's (its CPU is read from /proc) and the kill reaches it
+  # server.mjs, as in production (plain `next start` is refused there); demo mode accepts the local defaults
+  DEMO_MODE=on RATE_LIMIT_CALCULATE_PER_MIN=100000000 LOG_LEVEL=warn node server.mjs --port "$app_port" > .data/bench-app.log 2>&1 &
+  app_pid=$!
+  env -u NEXT_DIST_DIR node node_modules/next/dist/bin/next start tests/bench/floor-app -p "$floor_port" \
+    --keepAliveTimeout 120000 > .data/bench-floor.log 2>&1 &
+  floor_pid=$!
+  for _ in $(seq 1 60); do curl -fs "http://127.0.0.1:$app_port/api/health" >/dev/null 2>&1 && break; sleep 1; done
+  BENCH_APP_URL="http://127.0.0.1:$app_port" BENCH_FLOOR_URL="http://127.0.0.1:$floor_port" \
+    BENCH_APP_PID=$app_pid BENCH_FLOOR_PID=$floor_pid node_script tests/bench/load.bench.ts || fail=1
+  kill "$app_pid" "$floor_pid" 2>/dev/null
 fi
 { echo; echo "## Sizing engine (one core)"; echo; echo '```'; cat "$engine_out"; echo '```'; } >> tests/bench/RESULTS.md
 rm -f "$engine_out"

@@ -1,12 +1,13 @@
 import { randomUUID } from 'node:crypto';
 import { db } from '@/db';
-import { sizings } from '@/db/schema';
+import { sizings, type NewSizing } from '@/db/schema';
 
 /** A stored sizing row for access tests that do not care about the engineering figures. */
 export async function makeSizingRow(
   accountId: string,
   userId: string,
   tag = `T-${randomUUID().slice(0, 6)}`,
+  over: Partial<NewSizing> = {},
 ): Promise<string> {
   const [row] = await db
     .insert(sizings)
@@ -24,6 +25,7 @@ export async function makeSizingRow(
       headlineKw: 10,
       massFlowKgPerS: 0.5,
       createdByUserId: userId,
+      ...over,
     })
     .returning({ id: sizings.id });
   return row!.id;

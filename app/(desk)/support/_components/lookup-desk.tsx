@@ -15,6 +15,13 @@ async function fetchResults(q: SupportSearch): Promise<SupportResults> {
   return body as SupportResults;
 }
 
+const count = new Intl.NumberFormat('en-GB');
+
+function countLabel(r: SupportResults): string {
+  const n = count.format(r.total);
+  return r.totalIsEstimate ? `about ${n} sizings` : `${n} ${r.total === 1 ? 'sizing' : 'sizings'}`;
+}
+
 /** Search box, filters and the paged results table; results follow the filters as they change. */
 export function LookupDesk({
   initial,
@@ -67,7 +74,7 @@ export function LookupDesk({
         {results.isError
           ? (results.error as Error).message
           : results.data
-            ? `${results.data.total}${results.data.totalIsEstimate ? '+' : ''} sizings${results.isFetching ? ' · updating…' : ''}`
+            ? `${countLabel(results.data)}${results.data.closeMatches ? ', including close spellings' : ''}${results.isFetching ? ' · updating…' : ''}`
             : 'Searching…'}
       </p>
       {results.data && <LookupTable data={results.data} query={query} update={update} />}

@@ -2,6 +2,7 @@
 
 import { createColumnHelper, flexRender, getCoreRowModel, useReactTable } from '@tanstack/react-table';
 import Link from 'next/link';
+import { useState } from 'react';
 import type { SupportSearch } from '@/lib/support/schema';
 import type { SupportHit, SupportResults } from '@/lib/support/search';
 
@@ -58,6 +59,8 @@ export function LookupTable({
     rowCount: data.total,
   });
   const pages = Math.max(1, Math.ceil(data.total / data.pageSize));
+  // Keyset paging moves forward by cursor; the cursors of the pages already seen lead back.
+  const [earlier, setEarlier] = useState<(string | undefined)[]>([]);
   return (
     <div>
       <div className="overflow-x-auto rounded-panel border border-paper-line bg-paper-raised">
@@ -98,19 +101,25 @@ export function LookupTable({
           type="button"
           className="rounded border border-paper-line px-3 py-1 disabled:opacity-50"
           disabled={query.page <= 1}
-          onClick={() => update({ page: query.page - 1 })}
+          onClick={() => {
+            setEarlier((h) => h.slice(0, -1));
+            update({ page: query.page - 1, cursor: earlier.at(-1) });
+          }}
         >
           Previous
         </button>
         <span>
-          Page {query.page} of {pages}
-          {data.totalIsEstimate ? '+' : ''}
+          Page {query.page} of {data.totalIsEstimate ? 'about ' : ''}
+          {pages.toLocaleString('en-GB')}
         </span>
         <button
           type="button"
           className="rounded border border-paper-line px-3 py-1 disabled:opacity-50"
-          disabled={query.page >= pages}
-          onClick={() => update({ page: query.page + 1 })}
+          disabled={!data.nextCursor}
+          onClick={() => {
+            setEarlier((h) => (query.page === 1 ? [undefined] : [...h, query.cursor]));
+            update({ page: query.page + 1, cursor: data.nextCursor ?? undefined });
+          }}
         >
           Next
         </button>

@@ -12,7 +12,8 @@ export function useUrlQuery(initial: SupportSearch) {
   const update = useCallback(
     (patch: Partial<SupportSearch>) => {
       setQuery((prev) => {
-        const next = { ...prev, ...patch, page: patch.page ?? 1 };
+        // Any change but paging starts again at the first page.
+        const next = { ...prev, ...patch, page: patch.page ?? 1, cursor: patch.cursor };
         router.replace(`${pathname}?${toSearchParams(next)}`, { scroll: false });
         return next;
       });

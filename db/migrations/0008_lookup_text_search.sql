@@ -1,0 +1,2 @@
+ALTER TABLE "sizings" ADD COLUMN "search_vector" "tsvector" GENERATED ALWAYS AS (setweight(to_tsvector('simple', coalesce(title, '')), 'A') || setweight(to_tsvector('simple', coalesce(notes, '')), 'C')) STORED;--> statement-breakpoint
+CREATE INDEX "sizings_search_vector_idx" ON "sizings" USING gin ("search_vector");
