@@ -4,6 +4,8 @@ import { AuthError, NotFoundError, requireUser } from '@/lib/auth/guards';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import type { Permission } from '@/lib/auth/roles';
 import { logger } from '@/lib/log/logger';
+import { isDatabaseDown } from '@/lib/ops/db-errors';
+import { UNAVAILABLE_MESSAGE } from '@/lib/ops/unavailable';
 
 export type FieldErrors = Record<string, string[]>;
 export type ActionResult<T> =
@@ -19,6 +21,14 @@ export class ActionError extends Error {
     super(message);
   }
 }
+
+/** What an action answers while the database cannot be reached: nothing was saved, nothing is lost. */
+export const unavailableResult = {
+  ok: false,
+  fieldErrors: {},
+  formError: UNAVAILABLE_MESSAGE,
+  status: 503,
+} as const satisfies ActionResult<never>;
 
 export function fieldErrorsOf(error: z.ZodError): FieldErrors {
   const out: FieldErrors = {};
@@ -56,6 +66,10 @@ export function defineAction<S extends z.ZodType, T>(
       }
       if (err instanceof ActionError)
         return { ok: false, fieldErrors: err.fieldErrors, formError: err.message, status: err.status };
+      if (isDatabaseDown(err)) {
+        logger.warn({ action: opts.name }, 'database unreachable; action answered 503');
+        return unavailableResult;
+      }
       logger.error({ err, action: opts.name }, 'server action failed');
       return {
         ok: false,

@@ -2,24 +2,15 @@ import 'server-only';
 import { AuthError, NotFoundError } from '@/lib/auth/guards';
 import { ActionError } from '@/lib/actions/define-action';
 import { logger } from '@/lib/log/logger';
+import { isDatabaseDown } from '@/lib/ops/db-errors';
 import { describeDbError } from '@/lib/ops/health';
+import { unavailableJson } from '@/lib/ops/unavailable';
 
-function isDbDown(err: unknown): boolean {
-  const code =
-    (err as { code?: string; cause?: { code?: string } })?.code ?? (err as { cause?: { code?: string } })?.cause?.code;
-  return (
-    code === 'ECONNREFUSED' ||
-    code === '57P01' ||
-    code === '57P03' ||
-    /timeout exceeded when trying to connect|Connection terminated/i.test(String((err as Error)?.message))
-  );
-}
+type RouteContext = { params: Promise<Record<string, string>> };
 
 /** Wraps a route handler: identity and expected errors become honest status codes, a dead database 503. */
-export function guarded(
-  handler: (req: Request, ctx: { params: Promise<Record<string, string>> }) => Promise<Response>,
-) {
-  return async (req: Request, ctx: { params: Promise<Record<string, string>> }): Promise<Response> => {
+export function guarded(handler: (req: Request, ctx: RouteContext) => Promise<Response>) {
+  return async (req: Request, ctx: RouteContext): Promise<Response> => {
     try {
       return await handler(req, ctx);
     } catch (err) {
@@ -30,11 +21,10 @@ export function guarded(
           { errors: [{ path: '', message: err.message }], fieldErrors: err.fieldErrors },
           { status: err.status },
         );
-      if (isDbDown(err))
-        return Response.json(
-          { errors: [{ path: '', message: `Service temporarily unavailable: ${describeDbError(err)}` }] },
-          { status: 503, headers: { 'Retry-After': '5' } },
-        );
+      if (isDatabaseDown(err)) {
+        logger.warn({ url: req.url, reason: describeDbError(err) }, 'database unreachable; answered 503');
+        return unavailableJson();
+      }
       logger.error({ err, url: req.url }, 'route handler failed');
       return Response.json({ errors: [{ path: '', message: 'Something went wrong on our side.' }] }, { status: 500 });
     }

@@ -1,11 +1,12 @@
 'use server';
 
 import { signUpCustomer } from '@/lib/accounts/mutations';
-import { ActionError, fieldErrorsOf, type ActionResult } from '@/lib/actions/define-action';
+import { ActionError, fieldErrorsOf, unavailableResult, type ActionResult } from '@/lib/actions/define-action';
 import { startLocalSession } from '@/lib/auth/local/session';
 import { signUpSchema } from '@/lib/auth/schema';
 import { clerkEnabled } from '@/lib/env';
 import { logger } from '@/lib/log/logger';
+import { isDatabaseDown } from '@/lib/ops/db-errors';
 import { limitPublicAction } from '@/lib/ratelimit/action-limit';
 
 /**
@@ -23,9 +24,9 @@ export async function signUpAction(raw: unknown): Promise<ActionResult<{ account
       formError: 'Some fields need attention.',
       status: 400,
     };
-  const limited = await limitPublicAction('sign-up');
-  if (limited) return limited;
   try {
+    const limited = await limitPublicAction('sign-up');
+    if (limited) return limited;
     const { site, ...rest } = parsed.data;
     const created = await signUpCustomer({ ...rest, site: site || undefined });
     await startLocalSession(created.userId, created.role);
@@ -33,6 +34,7 @@ export async function signUpAction(raw: unknown): Promise<ActionResult<{ account
   } catch (err) {
     if (err instanceof ActionError)
       return { ok: false, fieldErrors: err.fieldErrors, formError: err.message, status: err.status };
+    if (isDatabaseDown(err)) return unavailableResult;
     logger.error({ err, action: 'auth.sign_up' }, 'sign-up failed');
     return {
       ok: false,

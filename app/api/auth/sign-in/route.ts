@@ -2,12 +2,23 @@ import { checkLocalCredentials, startLocalSession } from '@/lib/auth/local/sessi
 import { signInSchema } from '@/lib/auth/schema';
 import { clerkEnabled, env } from '@/lib/env';
 import { readJsonBody, tooManyRequests, zodErrors } from '@/lib/http/json';
+import { isDatabaseDown } from '@/lib/ops/db-errors';
+import { unavailableJson } from '@/lib/ops/unavailable';
 import { clientKey, consumeRate } from '@/lib/ratelimit/consume';
 
 export const runtime = 'nodejs';
 
-/** Local identity sign-in: sets the session cookie. Rate limited per client address. */
+/** Local identity sign-in: sets the session cookie. Rate limited per client address; 503 while the database is down. */
 export async function POST(req: Request) {
+  try {
+    return await signIn(req);
+  } catch (err) {
+    if (isDatabaseDown(err)) return unavailableJson();
+    throw err;
+  }
+}
+
+async function signIn(req: Request): Promise<Response> {
   if (clerkEnabled)
     return Response.json(
       { errors: [{ path: '', message: 'Sign in through the hosted sign-in form.' }] },

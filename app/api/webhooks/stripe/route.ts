@@ -3,6 +3,8 @@ import { stripe } from '@/lib/billing/stripe-client';
 import { applyStripeEvent, isHandled } from '@/lib/billing/webhook';
 import { env } from '@/lib/env';
 import { logger } from '@/lib/log/logger';
+import { isDatabaseDown } from '@/lib/ops/db-errors';
+import { unavailableJson } from '@/lib/ops/unavailable';
 
 export const runtime = 'nodejs';
 export const dynamic = 'force-dynamic';
@@ -27,6 +29,10 @@ export async function POST(req: Request) {
     logger.info({ eventId: event.id, type: event.type, outcome }, 'payment event');
     return Response.json({ received: true, outcome });
   } catch (err) {
+    if (isDatabaseDown(err)) {
+      logger.warn({ eventId: event.id, type: event.type }, 'database unreachable; the sender will retry');
+      return unavailableJson();
+    }
     logger.error({ err, eventId: event.id, type: event.type }, 'payment event failed; the sender will retry');
     return Response.json({ error: 'processing failed; retry later' }, { status: 500 });
   }
