@@ -24,7 +24,7 @@ Dutywise</header>
 <main style="max-width:36rem;margin:4rem auto;padding:0 1.5rem">
 <h1 style="font-size:1.5rem;margin:0 0 1rem">Dutywise is temporarily unavailable</h1>
 <p style="line-height:1.5">The desk cannot reach its database at the moment. <strong>Nothing you saved was lost</strong>: sizings, quotes and issued datasheets are kept by the database and will be there when it answers again.</p>
-<p style="line-height:1.5;color:#3b4653">Try again in a minute; this page clears by itself as soon as the database is back. A sizing desk that is already open keeps calculating, but cannot save until then.</p>
+<p style="line-height:1.5;color:#3b4653">Try again in a minute: pages answer normally again as soon as the database is back. A sizing desk that is already open keeps calculating, but cannot save until then.</p>
 <p style="margin-top:2rem"><a href="" style="display:inline-block;background:#16565d;color:#fff;border-radius:.375rem;padding:.5rem 1rem;text-decoration:none">Try again</a></p>
 </main></body></html>`;
 
