@@ -53,7 +53,14 @@ export const batchColumns: BatchColumn[] = [
   c('intercooler_outlet_temperature_unit', 'intercoolerOutletTemperature.unit', 'compressor only', '', 'degC'),
   c('supply_voltage_v', 'supply.voltageV', 'line voltage, e.g. 400', '400', ''),
   c('supply_phases', 'supply.phases', '1 or 3', '3', ''),
-  c('method', 'method', 'compressor: variable-cp (default) or constant-k', '', 'variable-cp'),
+  c('method', 'method', 'compressor, ideal-gas methods: variable-cp (default) or constant-k', '', 'variable-cp'),
+  c(
+    'equation_of_state',
+    'equationOfState',
+    'gerg-2008, peng-robinson or ideal-gas; blank: GERG-2008 when it covers the gas, else Peng-Robinson',
+    '',
+    '',
+  ),
   c('notes', 'meta.notes', 'free text', '', ''),
 ];
 

@@ -9,7 +9,7 @@ import { assertAccountAccess } from '@/lib/auth/guards';
 import { can } from '@/lib/auth/roles';
 import { accountKey, getBlobStore } from '@/lib/blob';
 import { addQuoteItems, createQuote } from '@/lib/quotes/mutations';
-import { insertSizings } from '@/lib/sizings/save';
+import { insertSizings, withEquationUsed } from '@/lib/sizings/save';
 import { evaluateSheet, type BatchRow } from './evaluate';
 import type { BatchCells } from './row-to-request';
 import type { BatchTarget } from './schema';
@@ -38,7 +38,7 @@ async function writeRows(tx: Tx, user: CurrentUser, target: BatchTarget, sized: 
         equipmentTag: row.meta.equipmentTag || undefined,
         notes: row.meta.notes || undefined,
       },
-      computed: { input: row.input, result: row.result! },
+      computed: { input: withEquationUsed(row.input, row.result!), result: row.result! },
     })),
   );
   if (quoteId)

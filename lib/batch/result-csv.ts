@@ -1,3 +1,4 @@
+import { headlineMethod } from '@/lib/engine';
 import { toCsv } from '@/lib/csv/write';
 import type { BatchRow } from './evaluate';
 
@@ -10,8 +11,10 @@ export const resultColumns = [
   'title',
   'equipment_tag',
   'service',
+  'equation_of_state',
   'mass_flow_kg_per_s',
   'absorbed_duty_kw',
+  'ideal_gas_duty_kw',
   'average_cp_duty_kw',
   'design_duty_kw',
   'selected_rating_kw',
@@ -22,6 +25,9 @@ export const resultColumns = [
   'motor_nema_hp',
   'max_discharge_temperature_c',
   'intercooler_duty_kw',
+  'condensate_kg_per_h',
+  'ideal_gas_difference_percent',
+  'warnings',
   'problems',
 ];
 
@@ -33,15 +39,17 @@ export function batchResultCsv(rows: BatchRow[]): string {
       const res = b.result;
       const h = res?.service === 'heater' ? res.heater : null;
       const c = res?.service === 'compressor' ? res.compressor : null;
-      const basis = c ? (c.basis === 'constant-k' ? c.constantK : c.variableCp) : null;
+      const basis = c ? headlineMethod(c) : null;
       return [
         b.row,
         res ? 'sized' : 'error',
         b.meta.title ?? '',
         b.meta.equipmentTag ?? '',
         res?.service ?? b.cells.service ?? '',
+        res?.basis.equationOfState ?? '',
         r(res?.massFlowKgPerS, 5),
         r(h?.absorbedDutyKw),
+        r(h?.idealGasDutyKw),
         r(h?.averageCpDutyKw),
         r(h?.designDutyKw),
         r(h?.selectedRatingKw ?? null),
@@ -52,6 +60,12 @@ export function batchResultCsv(rows: BatchRow[]): string {
         r(c?.motor.nemaHp ?? null),
         r(basis ? Math.max(...basis.stages.map((s) => s.dischargeTemperatureC)) : null, 1),
         r(basis?.totalIntercoolerDutyKw),
+        r(basis?.condensateKgPerH),
+        r(h ? h.idealGasDifferencePercent : (c?.idealGasDifferencePercent ?? null), 2),
+        (res?.warnings ?? [])
+          .filter((w) => w.severity === 'warning' || w.severity === 'danger')
+          .map((w) => w.message)
+          .join(' | '),
         b.problems.map((p) => `${p.column}: ${p.message}`).join('; '),
       ];
     }),

@@ -77,7 +77,7 @@ export function rowToRequest(cells: BatchCells): {
       setPath(
         request,
         col.path,
-        col.name === 'service' || col.name === 'method' || col.name === 'gas_basis' ? raw.toLowerCase() : raw,
+        ['service', 'method', 'gas_basis', 'equation_of_state'].includes(col.name) ? raw.toLowerCase() : raw,
       );
     }
   }

@@ -1,5 +1,6 @@
 import { EosError } from '../thermo/eos/eos-error';
 import { ThermoRangeError } from '../thermo/errors';
+import { CoolerFloodedError } from './real-gas/condensation';
 import { STANDARD_FLOW_BASES } from '../units/flow';
 import { flowFromKgPerS as flowFromKgPerSImported } from '../units/flow';
 import { temperatureToK } from '../units/temperature';
@@ -200,6 +201,9 @@ function compressorResult(input: CompressorInput, common: ResolvedCommon, issues
   try {
     compressor = sizeCompressor(c);
   } catch (err) {
+    if (err instanceof CoolerFloodedError) {
+      throw new SizingInputError([{ path: 'intercoolerOutletTemperature', message: err.message }]);
+    }
     if (err instanceof EosError) {
       throw new SizingInputError([
         {

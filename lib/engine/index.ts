@@ -3,6 +3,7 @@
  * Pure: no framework, database or React imports.
  */
 export { calculate } from './calculate';
+export { EQUATION_NAMES, METHOD_NAMES, headlineMethod } from './headline-method';
 // Explicit re-exports (not `export *`) so ESM scripts run through tsx can import names from this package.
 export { ENGINE_VERSION, calculateCore } from './calculate-core';
 export { SizingInputError, issuesFromZod, type SizingIssue } from './input-error';
@@ -21,6 +22,7 @@ export {
 export type {
   BasisInfo,
   CompressionMethodResult,
+  CoolerResult,
   CompressorBlock,
   CompressorResult,
   CompressorStage,

@@ -3,6 +3,7 @@ import type { GasModel } from '../thermo/gas-model';
 import { SUBDIVISION_LIMIT_A } from './electrical';
 import { gasWarnings, isFlammable } from './gas-warnings';
 import type { CompressorCase } from './compressor';
+import { headlineMethod } from './headline-method';
 import type { GasState } from './pseudo-critical';
 import { coolerWarnings, dewMarginWarning, equationWarnings } from './real-gas/equation-warnings';
 import { compressorValidity, heaterValidity } from './real-gas/validity';
@@ -76,6 +77,24 @@ function pressureWarning(pressurePa: number, barometricPa: number): SizingWarnin
 
 function present(...items: (SizingWarning | null)[]): SizingWarning[] {
   return items.filter((w): w is SizingWarning => w !== null);
+}
+
+/**
+ * Low-voltage motors are built up to a few hundred kW; above about 400 kW the current at 400-690 V makes
+ * cables and switchgear impractical and drives are supplied at medium voltage (3.3-11 kV; 2.3-4.16 kV in North
+ * American practice) [cp].
+ */
+export const LOW_VOLTAGE_MAX_V = 1000;
+export const LOW_VOLTAGE_MOTOR_LIMIT_KW = 400;
+
+function mediumVoltageWarning(c: CompressorBlock): SizingWarning | null {
+  const rating = c.motor.iecKw ?? c.shaftPowerKw * 1.1;
+  if (!c.drive || c.drive.voltageV > LOW_VOLTAGE_MAX_V || rating <= LOW_VOLTAGE_MOTOR_LIMIT_KW) return null;
+  return {
+    code: 'medium-voltage-drive',
+    severity: 'caution',
+    message: `A ${Math.round(rating)} kW motor at ${c.drive.voltageV} V would draw about ${Math.round(c.drive.lineCurrentA)} A: above about ${LOW_VOLTAGE_MOTOR_LIMIT_KW} kW, drives are normally supplied at medium voltage (3.3-11 kV, or 2.3-4.16 kV in North American practice). Enter the medium-voltage supply for the line current.`,
+  };
 }
 
 /** All cautions for a heater duty; always ends with the preliminary note. */
@@ -167,7 +186,7 @@ function trainStates(stages: readonly CompressorStage[]): GasState[] {
 /** All cautions for a compressor duty; always ends with the preliminary note. */
 export function compressorWarnings(common: ResolvedCommon, c: CompressorBlock, cc: CompressorCase): SizingWarning[] {
   const { gas, barometricPressurePa: barometricPa } = common;
-  const headline = c.realGas ?? (c.basis === 'constant-k' ? c.constantK : c.variableCp);
+  const headline = headlineMethod(c);
   const stages = headline.stages;
   const states = trainStates(stages);
   const out: SizingWarning[] = [
@@ -240,6 +259,8 @@ export function compressorWarnings(common: ResolvedCommon, c: CompressorBlock, c
         'Shaft power with 10 % margin is above the motor series listed (to 10 000 kW and 10 000 hp): select a large machine, or a turbine or engine driver, with its maker.',
     });
   }
+  const mv = mediumVoltageWarning(c);
+  if (mv) out.push(mv);
   if (c.drive) {
     out.push({
       code: 'motor-data-assumed',

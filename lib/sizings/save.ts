@@ -35,10 +35,21 @@ export function headlineOf(result: SizingResult): number {
   return result.service === 'heater' ? result.heater.designDutyKw : result.compressor.shaftPowerKw;
 }
 
+/**
+ * Pins the equation of state the engine used into the stored input, so reopening the sizing later sizes it on the
+ * same equation even if the automatic choice changes; a stored input without one predates real-gas sizing and
+ * was made on ideal gas.
+ */
+export function withEquationUsed(input: unknown, result: SizingResult): unknown {
+  if (typeof input !== 'object' || input === null || 'equationOfState' in input) return input;
+  return { ...input, equationOfState: result.basis.equationOfState };
+}
+
 /** Runs the engine and stores input and result together; refuses input the engine refuses. */
 export function computeForSave(input: unknown): { input: unknown; result: SizingResult } {
   try {
-    return { input, result: calculate(input) };
+    const result = calculate(input);
+    return { input: withEquationUsed(input, result), result };
   } catch (err) {
     if (err instanceof SizingInputError) {
       const fieldErrors: Record<string, string[]> = {};

@@ -1,11 +1,19 @@
-import type { BasisInfo } from '@/lib/engine';
+import { EQUATION_NAMES, type BasisInfo } from '@/lib/engine';
 import { fixed } from './quantity-format';
 
 /** What the figures rest on: property data, composition, site pressure and the conventions used. */
 export function BasisPanel({ basis, engineVersion }: { basis: BasisInfo; engineVersion: string }) {
   return (
     <div className="space-y-2 text-sm text-ink-soft" data-testid="basis">
-      <p>{basis.propertySource}.</p>
+      <p data-testid="basis-equation">
+        <span className="font-medium text-ink">Equation of state:</span>{' '}
+        {EQUATION_NAMES[basis.equationOfState ?? 'ideal-gas']}
+        {basis.equationOfStateReason
+          ? ` (${basis.equationOfStateReason})`
+          : ' (sized before real-gas properties)'}. {basis.equationOfStateSource}
+        {basis.standardVolumeBasis ? `. Standard volumes: ${basis.standardVolumeBasis}.` : '.'}
+      </p>
+      <p>Ideal-gas data: {basis.propertySource}.</p>
       <p>
         <span className="font-medium text-ink">Gas:</span> {basis.gasComposition}.
       </p>

@@ -1,4 +1,4 @@
-import type { HeaterResult } from '@/lib/engine';
+import { EQUATION_NAMES, type HeaterResult } from '@/lib/engine';
 import type { UnitSystem } from '@/lib/units';
 import { FigureTable, type FigureRow } from './figure-table';
 import { PropertiesTable } from './properties-table';
@@ -19,14 +19,28 @@ export function HeaterBreakdown({ result, system }: { result: HeaterResult; syst
   const h = result.heater;
   const e = h.electrical;
   const flagged = Math.abs(h.temperatureRiseK) > 200;
+  const real = h.idealGasDifferencePercent !== null && h.idealGasDifferencePercent !== undefined;
   const duty: FigureRow[] = [
     {
       label: 'Absorbed duty',
-      note: 'm (h(T out) - h(T in)), enthalpy integral',
+      note: real
+        ? `m (h(T out, p) - h(T in, p)), ${EQUATION_NAMES[result.basis.equationOfState]}`
+        : 'm (h(T out) - h(T in)), ideal-gas enthalpy integral',
       value: formatKw(h.absorbedDutyKw),
       unit: 'kW',
       testId: 'breakdown-absorbed-kw',
     },
+    ...(real
+      ? [
+          {
+            label: 'Ideal-gas duty',
+            note: `${formatPercent(h.idealGasDifferencePercent!)} % from the real-gas duty; Z ${fixed(h.properties.inlet.z, 4)} in, ${fixed(h.properties.outlet.z, 4)} out`,
+            value: formatKw(h.idealGasDutyKw),
+            unit: 'kW',
+            testId: 'breakdown-ideal-gas-kw',
+          },
+        ]
+      : []),
     { label: `Heat loss ${h.heatLossPercent} %`, note: 'of absorbed', value: formatKw(h.heatLossKw), unit: 'kW' },
     {
       label: `Design margin ${h.designMarginPercent} %`,

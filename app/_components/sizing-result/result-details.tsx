@@ -33,11 +33,11 @@ export const ResultDetails = memo(function ResultDetails({ result, input, system
         </DetailCard>
       ) : (
         <>
-          <DetailCard title="Stages and intercoolers" id="detail-stages" className="xl:col-span-2">
+          <DetailCard title="Stage stream table" id="detail-stages" className="xl:col-span-2">
             <StageTable c={result.compressor} system={system} />
           </DetailCard>
-          <DetailCard title="Constant k and variable cp" id="detail-methods">
-            <MethodComparison c={result.compressor} system={system} />
+          <DetailCard title="Methods compared" id="detail-methods">
+            <MethodComparison c={result.compressor} system={system} equation={result.basis.equationOfState} />
           </DetailCard>
           <DetailCard title="Driver and motor" id="detail-drive">
             <DriveTable c={result.compressor} />

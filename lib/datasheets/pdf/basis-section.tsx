@@ -1,4 +1,5 @@
 /** @jsxRuntime automatic @jsxImportSource react */
+import { EQUATION_NAMES } from '@/lib/engine';
 import { formatFixed, unitLabel } from '../format';
 import type { DatasheetSnapshot } from '../snapshot';
 import { block, headingBlock, kvBlocks, type Block } from './blocks';
@@ -14,7 +15,13 @@ export function basisBlocks(s: DatasheetSnapshot): Block[] {
   const facts = kvBlocks(
     'bk',
     [
-      ['Property data', b.propertySource],
+      [
+        'Equation of state',
+        `${EQUATION_NAMES[b.equationOfState ?? 'ideal-gas']}${b.equationOfStateReason ? ` (${b.equationOfStateReason})` : ''}`,
+      ],
+      ['Its source and range', b.equationOfStateSource ?? 'ideal gas (sized before real-gas properties were offered)'],
+      ['Standard volumes', b.standardVolumeBasis ?? 'ideal gas: Z = 1 at every reference state'],
+      ['Ideal-gas data', b.propertySource],
       [
         'Flow input basis',
         b.flowInputBasis

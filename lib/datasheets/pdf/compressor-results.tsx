@@ -10,7 +10,8 @@ import {
   formatTemperatureC,
 } from '../format';
 import { block, headingBlock, kvBlocks, type Block, type KvRow } from './blocks';
-import { headlineMethod, methodBlocks, methodLabel, stageTableBlocks } from './compressor-tables';
+import { headlineMethod } from '@/lib/engine';
+import { methodBlocks, methodLabel, stageStreamBlocks, stageTableBlocks } from './compressor-tables';
 import { highlightBlock } from './highlight';
 import { pdfKit } from './kit';
 import { colors, styles } from './theme';
@@ -45,6 +46,18 @@ export function compressorResultBlocks(r: CompressorResult): Block[] {
       `total ${formatKw(m.totalIntercoolerDutyKw)}`,
     ],
     ...(m.aftercoolerDutyKw !== null ? [['Aftercooler duty', formatKw(m.aftercoolerDutyKw)] as KvRow] : []),
+    ...(m.condensateKgPerH > 0
+      ? [['Condensate knocked out', `${formatFigure(m.condensateKgPerH)} kg/h`] as KvRow]
+      : []),
+    ...(c.idealGasDifferencePercent !== null
+      ? [
+          [
+            'Ideal gas vs real gas',
+            `${formatPercent(c.idealGasDifferencePercent)} in gas power`,
+            `variable cp against ${r.basis.equationOfState}`,
+          ] as KvRow,
+        ]
+      : []),
     ['Motor rating, IEC 60072-1', iecText(c.motor.iecKw), pct(c.motor.marginPercent)],
     ['Motor rating, NEMA MG 1', nemaText(c.motor.nemaHp), pct(c.motor.nemaMarginPercent)],
     ['Required motor margin', formatPercent(c.motor.requiredMarginPercent), 'over shaft power, no service factor'],
@@ -77,9 +90,11 @@ export function compressorResultBlocks(r: CompressorResult): Block[] {
       ],
       colors.tide,
     ),
-    caption('cs', `Stages, ${methodLabel(c.basis)} (headline basis)`),
+    caption('cs', `Stage stream table, ${methodLabel(c.basis)} (headline basis)`),
+    ...stageStreamBlocks(c),
+    caption('cw', 'Stage heads, efficiencies, work and coolers (Hs isentropic, Hp polytropic head)'),
     ...stageTableBlocks(c),
-    caption('cm', 'Both methods'),
+    caption('cm', c.realGas ? 'Real gas beside the ideal-gas methods' : 'Both ideal-gas methods'),
     ...methodBlocks(c),
     caption('cr', 'Power and drive'),
     ...kvBlocks('cr', rows),

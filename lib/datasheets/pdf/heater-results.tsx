@@ -1,5 +1,5 @@
 /** @jsxRuntime automatic @jsxImportSource react */
-import type { HeaterResult } from '@/lib/engine';
+import { EQUATION_NAMES, type HeaterResult } from '@/lib/engine';
 import { formatAmps, formatFigure, formatFixed, formatKw, formatPercent, formatRating } from '../format';
 import { headingBlock, kvBlocks, type Block, type KvRow } from './blocks';
 import { highlightBlock } from './highlight';
@@ -16,7 +16,26 @@ export function heaterResultBlocks(r: HeaterResult): Block[] {
   const e = h.electrical;
   const basis = e.powerBasis === 'selected-rating' ? 'on the selected rating' : 'on the design duty';
   const rows: KvRow[] = [
-    ['Absorbed duty (integrated cp)', formatKw(h.absorbedDutyKw), 'mass flow x (h out - h in)'],
+    [
+      'Absorbed duty',
+      formatKw(h.absorbedDutyKw),
+      r.basis.equationOfState === 'ideal-gas' || !r.basis.equationOfState
+        ? 'mass flow x (h out - h in), ideal gas'
+        : `mass flow x (h(T out, p) - h(T in, p)), ${EQUATION_NAMES[r.basis.equationOfState]}`,
+    ],
+    ...(h.idealGasDifferencePercent !== null && h.idealGasDifferencePercent !== undefined
+      ? [
+          [
+            'Ideal-gas duty',
+            formatKw(h.idealGasDutyKw),
+            `difference ${formatPercent(h.idealGasDifferencePercent)} from the real-gas duty`,
+          ] as KvRow,
+          [
+            'Z at inlet / outlet',
+            `${formatFixed(h.properties.inlet.z, 4)} / ${formatFixed(h.properties.outlet.z, 4)}`,
+          ] as KvRow,
+        ]
+      : []),
     ['Average-cp estimate', formatKw(h.averageCpDutyKw), `difference ${formatPercent(h.averageCpDifferencePercent)}`],
     [
       'cp at mean temperature',

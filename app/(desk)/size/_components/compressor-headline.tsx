@@ -7,14 +7,14 @@ import {
   showTemperature,
 } from '@/app/_components/sizing-result/quantity-format';
 import { SeverityIcon } from '@/app/_components/sizing-result/severity-icon';
-import type { CompressorResult } from '@/lib/engine';
+import { EQUATION_NAMES, METHOD_NAMES, headlineMethod, type CompressorResult } from '@/lib/engine';
 import type { UnitSystem } from '@/lib/units';
 import { KeyFigure, KeyFigures } from './key-figure';
 
 /** Shaft power with the IEC and NEMA motor ratings, then the figures behind it. */
 export function CompressorHeadline({ result, system }: { result: CompressorResult; system: UnitSystem }) {
   const c = result.compressor;
-  const method = c.basis === 'constant-k' ? c.constantK : c.variableCp;
+  const method = headlineMethod(c);
   const hottest = Math.max(...method.stages.map((s) => s.dischargeTemperatureC));
   const over = hottest > c.dischargeTemperatureLimitC + 1e-9;
   const hot = showTemperature(hottest, system);
@@ -27,7 +27,8 @@ export function CompressorHeadline({ result, system }: { result: CompressorResul
         className="rounded-md bg-tide-50 px-4 py-3 text-tide-700"
       >
         <p className="text-label uppercase tracking-wide">
-          Shaft power · {c.stageCount} stage{c.stageCount > 1 ? 's' : ''}, {c.basis}
+          Shaft power · {c.stageCount} stage{c.stageCount > 1 ? 's' : ''}, {METHOD_NAMES[c.basis]}
+          {c.realGas ? ` (${EQUATION_NAMES[result.basis.equationOfState]})` : ''}
         </p>
         <p className="text-figure-xl text-ink">
           <span data-testid="result-shaft-power-kw" className="font-mono tabular">
@@ -92,13 +93,23 @@ export function CompressorHeadline({ result, system }: { result: CompressorResul
           testId="result-suggested-stages"
         />
         <KeyFigure label="Intercooling, total" value={formatKw(method.totalIntercoolerDutyKw)} unit="kW" />
-        <KeyFigure
-          label="Constant-k vs variable-cp"
-          value={formatPercent(c.methodDifferencePercent)}
-          unit="%"
-          note="gas power difference"
-          testId="result-method-difference"
-        />
+        {c.idealGasDifferencePercent !== null ? (
+          <KeyFigure
+            label="Ideal gas vs real gas"
+            value={formatPercent(c.idealGasDifferencePercent)}
+            unit="%"
+            note={`gas power; Z at suction ${fixed(result.inletZ, 4)}`}
+            testId="result-ideal-gas-difference"
+          />
+        ) : (
+          <KeyFigure
+            label="Constant-k vs variable-cp"
+            value={formatPercent(c.methodDifferencePercent)}
+            unit="%"
+            note="gas power difference"
+            testId="result-method-difference"
+          />
+        )}
       </KeyFigures>
     </>
   );

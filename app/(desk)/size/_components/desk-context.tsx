@@ -16,6 +16,8 @@ export type DeskContextValue = {
   exact: MutableRefObject<ExactValues>;
   accounts: readonly AccountSite[];
   barometricSource: string;
+  /** The equation of state the current result used and why; null before a result. */
+  equationUsed: { id: string; reason: string } | null;
 };
 
 const DeskContext = createContext<DeskContextValue | null>(null);

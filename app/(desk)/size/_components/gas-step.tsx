@@ -9,6 +9,7 @@ import { useDesk } from './desk-context';
 import { FieldFrame, describedBy } from './field-frame';
 import { HumidityFields } from './humidity-fields';
 import { MixtureEditor } from './mixture-editor';
+import { EquationPicker } from './equation-picker';
 import { StepSection } from './step-section';
 
 /** Step 2: a named gas, humid air, or a mixture by mole or mass fractions. */
@@ -19,12 +20,12 @@ export function GasStep() {
   const preset = findPreset(presetId);
   const id = inputIdOf('gas.preset');
   const error = desk.errors['gas.preset'];
-  const hint = preset?.note ?? (preset?.moleFractions ? 'Pure component, ideal-gas properties.' : undefined);
+  const hint = preset?.note ?? (preset?.moleFractions ? 'Pure component.' : undefined);
   return (
     <StepSection
       step={DESK_STEPS[1]!}
       accent={desk.service === 'heater' ? 'copper' : 'tide'}
-      description="Properties come from NASA polynomials for the composition given here."
+      description="The composition, and the equation of state its properties come from."
     >
       <div className="space-y-4">
         <ChoiceGroup
@@ -58,6 +59,7 @@ export function GasStep() {
         ) : (
           <MixtureEditor />
         )}
+        <EquationPicker />
       </div>
     </StepSection>
   );

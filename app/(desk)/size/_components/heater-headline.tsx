@@ -8,7 +8,7 @@ import {
   showTemperatureDifference,
 } from '@/app/_components/sizing-result/quantity-format';
 import { SeverityIcon } from '@/app/_components/sizing-result/severity-icon';
-import type { HeaterResult } from '@/lib/engine';
+import { EQUATION_NAMES, type HeaterResult } from '@/lib/engine';
 import type { UnitSystem } from '@/lib/units';
 import { KeyFigure, KeyFigures } from './key-figure';
 
@@ -85,6 +85,15 @@ export function HeaterHeadline({ result, system }: { result: HeaterResult; syste
           testId="result-continuous-current-a"
           note={e.subdivisionRequired ? 'over 48 A: subdivide circuits' : undefined}
         />
+        {h.idealGasDifferencePercent !== null && (
+          <KeyFigure
+            label="Ideal gas vs real gas"
+            value={formatPercent(h.idealGasDifferencePercent)}
+            unit="%"
+            note={`absorbed duty, ${EQUATION_NAMES[result.basis.equationOfState]}; Z in ${fixed(result.inletZ, 4)}`}
+            testId="result-ideal-gas-difference"
+          />
+        )}
         <KeyFigure
           label="Allowances"
           value={`${formatKw(h.heatLossKw + h.marginKw)}`}

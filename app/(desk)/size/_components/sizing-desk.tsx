@@ -87,7 +87,17 @@ export function SizingDesk({
   return (
     <FormProvider {...form}>
       <DeskProvider
-        value={{ system: units.system, service: values.service, errors, exact, accounts, barometricSource }}
+        value={{
+          system: units.system,
+          service: values.service,
+          errors,
+          exact,
+          accounts,
+          barometricSource,
+          equationUsed: live.result
+            ? { id: live.result.basis.equationOfState, reason: live.result.basis.equationOfStateReason }
+            : null,
+        }}
       >
         <main
           data-testid="sizing-desk"

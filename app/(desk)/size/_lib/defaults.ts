@@ -23,6 +23,7 @@ const SI: DeskValues = {
   flow: { value: '1000', unit: 'kg/h' },
   inlet: { temperature: { value: '20', unit: 'degC' }, pressure: { value: '1', unit: 'barg' } },
   outletTemperature: { value: '250', unit: 'degC' },
+  equationOfState: 'auto',
   heatLossPercent: '5',
   designMarginPercent: '10',
   supply: { voltageV: '400', phases: '3' },

@@ -10,6 +10,7 @@ export const FIELD_LABELS = {
   'gas.dewPoint': 'Dew point',
   'gas.components': 'Mixture',
   'gas.basis': 'Fraction basis',
+  equationOfState: 'Equation of state',
   flow: 'Flow',
   'inlet.temperature': 'Inlet temperature',
   'inlet.pressure': 'Inlet pressure',

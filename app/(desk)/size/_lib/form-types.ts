@@ -23,6 +23,8 @@ export type DeskValues = {
     basis: 'mole' | 'mass';
     components: MixtureRow[];
   };
+  /** The property model: 'auto' lets the engine choose (GERG-2008 when it covers the gas, else Peng-Robinson). */
+  equationOfState: 'auto' | 'gerg-2008' | 'peng-robinson' | 'ideal-gas';
   flow: QtyText;
   inlet: { temperature: QtyText; pressure: QtyText };
   outletTemperature: QtyText;

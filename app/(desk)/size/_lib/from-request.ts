@@ -46,6 +46,7 @@ export function valuesFromInput(input: SizingInput, system: UnitSystem): { value
     ...base,
     service: input.service,
     gas: gasValues(input.gas, base.gas),
+    equationOfState: input.equationOfState ?? 'auto',
     flow: q(input.flow),
     inlet: { temperature: q(input.inlet.temperature), pressure: q(input.inlet.pressure) },
     site: { barometricPressure: siteValue(input.site, base.site.barometricPressure) },

@@ -37,6 +37,16 @@ async function fromSaved(user: CurrentUser | null, id: string, revise: boolean):
       revision: s.revision,
       revise,
     };
+    // Inputs saved before real-gas sizing carry no equation: they were sized on ideal gas and reopen on it.
+    if (parsed.data.equationOfState === undefined) {
+      return {
+        input: { ...parsed.data, equationOfState: 'ideal-gas' },
+        reopened,
+        notices: [
+          `Sizing ${s.number} was made on ideal-gas properties, before real-gas sizing; it reopens on ideal gas. Choose an equation of state in the gas step to size it on real-gas properties.`,
+        ],
+      };
+    }
     return { input: parsed.data, reopened, notices: [] };
   } catch (err) {
     if (err instanceof NotFoundError)

@@ -1,3 +1,4 @@
+import { EQUATION_NAMES } from '@/lib/engine';
 import { figure, fixed, joined, showMassFlow, showTemperature } from '@/app/_components/sizing-result/quantity-format';
 import { SEVERITY_LABEL, groupWarnings, preliminaryOf } from '@/app/_components/sizing-result/severity';
 import type { SizingResult } from '@/lib/engine';
@@ -45,7 +46,10 @@ export function buildSummary(r: SizingResult, system: UnitSystem, link?: string)
     ...(warnings.length ? warnings : ['- none beyond the preliminary statement']),
     '',
     'Basis',
-    `  ${b.propertySource}`,
+    `  Equation of state: ${EQUATION_NAMES[b.equationOfState]} (${b.equationOfStateReason})`,
+    `  ${b.equationOfStateSource}`,
+    `  Standard volumes: ${b.standardVolumeBasis}`,
+    `  Ideal-gas data: ${b.propertySource}`,
     `  Gas: ${b.gasComposition}`,
     `  Site barometric pressure ${fixed(b.barometricPressureKpa, 3)} kPa (${b.barometricPressureSource})`,
     ...(b.flowInputBasis ? [`  Flow entered as ${b.flowInputBasis.unit} at ${b.flowInputBasis.description}`] : []),

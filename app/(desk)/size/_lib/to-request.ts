@@ -39,6 +39,7 @@ export function toRequest(v: DeskValues): SizingRequest {
     inlet: { temperature: trimmed(v.inlet.temperature), pressure: trimmed(v.inlet.pressure) },
     site: { barometricPressure: trimmed(v.site.barometricPressure) },
     supply: { voltageV: v.supply.voltageV.trim(), phases: v.supply.phases },
+    ...(v.equationOfState === 'auto' ? {} : { equationOfState: v.equationOfState }),
   };
   if (v.service === 'heater') {
     const ratings = parseRatings(v.heaterRatingsKw);

@@ -1,4 +1,4 @@
-import type { CompressorResult } from '@/lib/engine';
+import { headlineMethod, type CompressorResult } from '@/lib/engine';
 import { SYSTEM_UNITS, temperatureFromK, unitLabel, type UnitSystem } from '@/lib/units';
 
 export type StageBar = { label: string; stage: number; dischargeT: number; powerKw: number; overLimit: boolean };
@@ -10,7 +10,7 @@ export function stageChart(r: CompressorResult, system: UnitSystem): StageChartD
   const c = r.compressor;
   const unit = SYSTEM_UNITS[system].temperature;
   const toT = (celsius: number) => temperatureFromK(celsius + 273.15, unit);
-  const method = c.basis === 'constant-k' ? c.constantK : c.variableCp;
+  const method = headlineMethod(c);
   return {
     bars: method.stages.map((s) => ({
       label: `Stage ${s.stage}`,

@@ -1,4 +1,4 @@
-import { SizingInputError, calculateCore, type CompressorInput } from '@/lib/engine';
+import { SizingInputError, calculateCore, type CompressorInput, headlineMethod } from '@/lib/engine';
 import { SYSTEM_UNITS, temperatureFromK, unitLabel, type UnitSystem } from '@/lib/units';
 
 export const SWEEP_STAGES = [1, 2, 3, 4, 5, 6] as const;
@@ -33,7 +33,7 @@ export function stageSweep(input: CompressorInput, system: UnitSystem): SweepDat
       const r = calculateCore({ ...input, stages: n });
       if (r.service !== 'compressor') throw new Error('expected a compressor result');
       const c = r.compressor;
-      const method = c.basis === 'constant-k' ? c.constantK : c.variableCp;
+      const method = headlineMethod(c);
       limitT = toT(c.dischargeTemperatureLimitC);
       suggested = c.suggestedStages;
       const hottest = Math.max(...method.stages.map((s) => s.dischargeTemperatureC));
