@@ -6,3 +6,4 @@ export * from './quotes';
 export * from './datasheets';
 export * from './billing';
 export * from './ops';
+export * from './api-keys';
