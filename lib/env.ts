@@ -56,8 +56,10 @@ export const env = createEnv({
     S3_ACCESS_KEY_ID: z.string().optional(),
     S3_SECRET_ACCESS_KEY: z.string().optional(),
 
-    // Rate limits (per client address, per minute). The load benchmark raises them.
+    // Rate limits (per minute). The calculate API counts per signed-in user, per API key (each key carries its
+    // own limit) or, for anonymous callers, per client address. The load benchmark raises them.
     RATE_LIMIT_CALCULATE_PER_MIN: z.coerce.number().int().min(1).default(120),
+    RATE_LIMIT_CALCULATE_PER_USER_PER_MIN: z.coerce.number().int().min(1).default(600),
     RATE_LIMIT_SIGN_IN_PER_MIN: z.coerce.number().int().min(1).default(10),
 
     // Test-only hooks; refused unless NODE_ENV is test or the test runner set this.
@@ -101,6 +103,7 @@ export const env = createEnv({
     S3_ACCESS_KEY_ID: process.env.S3_ACCESS_KEY_ID,
     S3_SECRET_ACCESS_KEY: process.env.S3_SECRET_ACCESS_KEY,
     RATE_LIMIT_CALCULATE_PER_MIN: process.env.RATE_LIMIT_CALCULATE_PER_MIN,
+    RATE_LIMIT_CALCULATE_PER_USER_PER_MIN: process.env.RATE_LIMIT_CALCULATE_PER_USER_PER_MIN,
     RATE_LIMIT_SIGN_IN_PER_MIN: process.env.RATE_LIMIT_SIGN_IN_PER_MIN,
     DUTYWISE_TEST_HOOKS: process.env.DUTYWISE_TEST_HOOKS,
     NEXT_PUBLIC_CLERK_PUBLISHABLE_KEY: process.env.NEXT_PUBLIC_CLERK_PUBLISHABLE_KEY,

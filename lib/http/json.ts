@@ -48,9 +48,9 @@ export function zodErrors(error: z.ZodError): ApiFieldError[] {
   return error.issues.map((i) => ({ path: i.path.map(String).join('.'), message: i.message }));
 }
 
-export function tooManyRequests(retryAfterS: number, what: string): Response {
+export function tooManyRequests(retryAfterS: number, what: string, headers: Record<string, string> = {}): Response {
   return Response.json(
     { errors: [{ path: '', message: `Too many ${what}; try again in ${retryAfterS} s.` }] },
-    { status: 429, headers: { 'Retry-After': String(retryAfterS) } },
+    { status: 429, headers: { ...headers, 'Retry-After': String(retryAfterS) } },
   );
 }

@@ -42,12 +42,13 @@ function evictExpired(now: number) {
   for (const [k, s] of slots) if (s.windowEndsMs < now && !s.inFlight) slots.delete(k);
 }
 
-/** Counts one request against `key`; resolves to whether it is within `limit` per `windowS`, and when to retry. */
-export async function consumeShared(
-  key: string,
-  limit: number,
-  windowS: number,
-): Promise<{ allowed: boolean; retryAfterS: number }> {
+export type SharedDecision = { allowed: boolean; retryAfterS: number; remaining: number; resetS: number };
+
+/**
+ * Counts one request against `key`; resolves to whether it is within `limit` per `windowS`, when to retry, what
+ * is left of the window and when it ends.
+ */
+export async function consumeShared(key: string, limit: number, windowS: number): Promise<SharedDecision> {
   const now = Date.now();
   evictExpired(now);
   let slot = slots.get(key);
@@ -55,9 +56,9 @@ export async function consumeShared(
     slot = { global: 0, pending: 0, windowEndsMs: 0, lastSyncMs: 0, inFlight: null };
     slots.set(key, slot);
   }
+  const untilEndS = () => Math.max(1, Math.ceil((slot.windowEndsMs - Date.now()) / 1000));
   if (now >= slot.windowEndsMs) slot.global = 0;
-  else if (slot.global >= limit)
-    return { allowed: false, retryAfterS: Math.max(1, Math.ceil((slot.windowEndsMs - now) / 1000)) };
+  else if (slot.global >= limit) return { allowed: false, retryAfterS: untilEndS(), remaining: 0, resetS: untilEndS() };
   slot.pending += 1;
   const nearLimit = limit <= EXACT_UP_TO || slot.global + slot.pending >= limit * 0.9;
   if (nearLimit || now - slot.lastSyncMs >= SYNC_MS) {
@@ -68,7 +69,8 @@ export async function consumeShared(
     else s.inFlight.catch(() => undefined);
   }
   const total = slot.global + slot.pending;
+  const resetS = slot.windowEndsMs > Date.now() ? untilEndS() : windowS;
   return total <= limit
-    ? { allowed: true, retryAfterS: 0 }
-    : { allowed: false, retryAfterS: Math.max(1, Math.ceil((slot.windowEndsMs - now) / 1000)) };
+    ? { allowed: true, retryAfterS: 0, remaining: limit - total, resetS }
+    : { allowed: false, retryAfterS: resetS, remaining: 0, resetS };
 }

@@ -22,6 +22,9 @@ import { POST as batchCommit } from '@/app/api/v1/batch/commit/route';
 import { GET as datasheet } from '@/app/api/v1/datasheets/[revisionId]/route';
 import { GET as supportExport } from '@/app/api/v1/support/export/route';
 import { POST as webhook } from '@/app/api/webhooks/stripe/route';
+import { POST as calculate } from '@/app/api/v1/calculate/route';
+import { env } from '@/lib/env';
+import { LOCAL_SESSION_COOKIE, signLocalSession } from '@/lib/auth/local/session-token';
 import { saveSizingAction } from '@/app/(desk)/size/actions';
 import { issueDatasheetAction } from '@/app/(desk)/datasheets/actions';
 import { setQuoteStatusAction } from '@/app/(desk)/quotes/[quoteId]/actions';
@@ -103,6 +106,24 @@ describe('requests while PostgreSQL is stopped', () => {
     await expectUnavailableJson(
       await webhook(post('/api/webhooks/stripe', payload, { 'stripe-signature': signature })),
     );
+  });
+
+  it('the desk keeps calculating for a signed-in person; a request with an API key that cannot be checked gets 503', async () => {
+    const sizing = JSON.stringify({
+      service: 'heater',
+      gas: { preset: 'air' },
+      flow: { value: 900, unit: 'kg/h' },
+      inlet: { temperature: { value: 15, unit: 'degC' }, pressure: { value: 2, unit: 'barg' } },
+      outletTemperature: { value: 200, unit: 'degC' },
+    });
+    const session = await signLocalSession(someId, 'sales_engineer', env.SESSION_SECRET, 600);
+    const desk = await calculate(post('/api/v1/calculate', sizing, { cookie: `${LOCAL_SESSION_COOKIE}=${session}` }));
+    expect(desk.status).toBe(200);
+    expect(desk.headers.get('ratelimit-policy')).toContain('per signed-in user');
+    const keyed = await calculate(
+      post('/api/v1/calculate', sizing, { authorization: `Bearer dwk_abcdefgh_${'A'.repeat(43)}` }),
+    );
+    await expectUnavailableJson(keyed);
   });
 
   it('server actions answer 503 with the same message, signed in or not', async () => {
