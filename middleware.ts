@@ -16,6 +16,7 @@ const protectedPrefixes = [
   '/admin',
   '/batch',
   '/mail',
+  '/api-keys',
 ];
 
 function isProtected(pathname: string): boolean {
