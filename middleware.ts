@@ -4,6 +4,7 @@ import { LOCAL_SESSION_COOKIE, verifyLocalSession } from '@/lib/auth/local/sessi
 import { appHttps, clerkEnabled, env } from '@/lib/env';
 import { databaseUp } from '@/lib/ops/db-status';
 import { clerkFrontendApiFrom, contentSecurityPolicy } from '@/lib/security/headers';
+import { unavailableJson, unavailablePage } from '@/lib/ops/unavailable';
 
 // Coarse gate only: every page, action and handler checks the user and role again on the server.
 const protectedPrefixes = [
@@ -16,6 +17,7 @@ const protectedPrefixes = [
   '/admin',
   '/batch',
   '/mail',
+  '/api-keys',
 ];
 
 function isProtected(pathname: string): boolean {
@@ -45,23 +47,13 @@ function withRequestHeaders(req: NextRequest): NextResponse {
   return res;
 }
 
-// Pages that read the database; their requests get an immediate 503 page while it is unreachable.
-function needsDatabase(pathname: string): boolean {
-  return isProtected(pathname) || pathname === '/size' || pathname.startsWith('/invite/') || pathname === '/sign-up';
-}
-
-const unavailablePage = `<!doctype html><html lang="en"><head><meta charset="utf-8"><title>Dutywise is unavailable</title></head>
-<body style="font-family:system-ui,sans-serif;max-width:36rem;margin:4rem auto;padding:0 1rem;color:#1c232b;background:#f6f4ef">
-<h1>Dutywise cannot reach its database</h1><p>Nothing you saved is lost. The desk will answer again as soon as the database is back; try again in a minute.</p>
-</body></html>`;
-
-async function unavailable(req: NextRequest): Promise<NextResponse | null> {
-  if (req.method !== 'GET' || !needsDatabase(req.nextUrl.pathname) || req.headers.get('rsc')) return null;
+// While the database cannot be reached, every page and API request that gets here answers 503 with
+// Dutywise's own page (or JSON body) at once, instead of failing half-rendered. Server actions are let through:
+// their wrapper answers them with the same message as a result the form can show.
+async function unavailable(req: NextRequest): Promise<Response | null> {
+  if (req.headers.get('next-action')) return null;
   if (await databaseUp()) return null;
-  return new NextResponse(unavailablePage, {
-    status: 503,
-    headers: { 'content-type': 'text/html; charset=utf-8', 'retry-after': '10', 'cache-control': 'no-store' },
-  });
+  return req.nextUrl.pathname.startsWith('/api/') ? unavailableJson() : unavailablePage();
 }
 
 function toSignIn(req: NextRequest): NextResponse {

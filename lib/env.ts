@@ -81,8 +81,10 @@ export const env = createEnv({
     S3_ACCESS_KEY_ID: z.string().optional(),
     S3_SECRET_ACCESS_KEY: z.string().optional(),
 
-    // Rate limits (lib/ratelimit/policies.ts). The load benchmark and the browser journeys raise them.
+    // Rate limits (per minute). The calculate API counts per signed-in user, per API key (each key carries its
+    // own limit) or, for anonymous callers, per client address. The load benchmark raises them.
     RATE_LIMIT_CALCULATE_PER_MIN: z.coerce.number().int().min(1).default(120),
+    RATE_LIMIT_CALCULATE_PER_USER_PER_MIN: z.coerce.number().int().min(1).default(600),
     RATE_LIMIT_SIGN_IN_PER_MIN: z.coerce.number().int().min(1).default(10),
     RATE_LIMIT_SIGN_IN_FAILURES: z.coerce.number().int().min(1).default(5),
     RATE_LIMIT_PUBLIC_FORMS_PER_HOUR: z.coerce.number().int().min(1).default(10),
@@ -135,6 +137,7 @@ export const env = createEnv({
     S3_ACCESS_KEY_ID: process.env.S3_ACCESS_KEY_ID,
     S3_SECRET_ACCESS_KEY: process.env.S3_SECRET_ACCESS_KEY,
     RATE_LIMIT_CALCULATE_PER_MIN: process.env.RATE_LIMIT_CALCULATE_PER_MIN,
+    RATE_LIMIT_CALCULATE_PER_USER_PER_MIN: process.env.RATE_LIMIT_CALCULATE_PER_USER_PER_MIN,
     RATE_LIMIT_SIGN_IN_PER_MIN: process.env.RATE_LIMIT_SIGN_IN_PER_MIN,
     RATE_LIMIT_SIGN_IN_FAILURES: process.env.RATE_LIMIT_SIGN_IN_FAILURES,
     RATE_LIMIT_PUBLIC_FORMS_PER_HOUR: process.env.RATE_LIMIT_PUBLIC_FORMS_PER_HOUR,

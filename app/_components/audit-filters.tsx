@@ -3,7 +3,7 @@ import { SelectField } from './select-field';
 import { TextField } from './text-field';
 import type { AuditFilter } from '@/lib/audit/queries';
 
-const ENTITY_TYPES = ['account', 'quote', 'sizing', 'datasheet', 'user', 'subscription', 'invitation'];
+const ENTITY_TYPES = ['account', 'quote', 'sizing', 'datasheet', 'user', 'subscription', 'invitation', 'api_key'];
 
 /** Entity type and id filters held in the URL (a plain GET form). */
 export function AuditFilters({ filter }: { filter: AuditFilter }) {

@@ -17,6 +17,7 @@ const deskNav: NavItem[] = [
   { href: '/support', label: 'Look-up', permission: 'support:search' },
   { href: '/billing', label: 'Subscription', permission: 'billing:manage' },
   { href: '/admin', label: 'People', permission: 'users:manage' },
+  { href: '/api-keys', label: 'API keys', permission: 'apikey:manage' },
 ];
 
 /** The signed-in workspace frame: a left rail of sections and the page beside it. */

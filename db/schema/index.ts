@@ -8,3 +8,4 @@ export * from './billing';
 export * from './ops';
 export * from './identity';
 export * from './search';
+export * from './api-keys';

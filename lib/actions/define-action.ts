@@ -9,6 +9,8 @@ import { clerkEnabled } from '@/lib/env';
 import { logger } from '@/lib/log/logger';
 import { limitPublicAction } from '@/lib/ratelimit/action-limit';
 import type { PolicyName } from '@/lib/ratelimit/policies';
+import { isDatabaseDown } from '@/lib/ops/db-errors';
+import { UNAVAILABLE_MESSAGE, UNAVAILABLE_RETRY_AFTER_S } from '@/lib/ops/unavailable';
 
 /** A failed action: its status and the same `errors` list a route handler answers with. */
 export type ActionFailure = { ok: false; status: number } & ErrorBody;
@@ -36,6 +38,13 @@ async function run<S extends z.ZodType, T>(
   } catch (err) {
     const known = expectedError(err);
     if (known) return failureOf(known);
+    if (isDatabaseDown(err)) {
+      // Nothing was saved, nothing is lost: the caller is told so and when to try again.
+      logger.warn({ action: opts.name }, 'database unreachable; action answered 503');
+      return failureOf(
+        new AppError('unavailable', UNAVAILABLE_MESSAGE, [], { retryAfterS: UNAVAILABLE_RETRY_AFTER_S }),
+      );
+    }
     logger.error({ err, action: opts.name }, 'server action failed');
     return failureOf(
       new AppError('internal', opts.failure ?? 'Something went wrong on our side; nothing was saved. Try again.'),

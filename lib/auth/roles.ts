@@ -26,7 +26,8 @@ export type Permission =
   | 'audit:read'
   | 'users:manage'
   | 'billing:manage'
-  | 'batch:upload';
+  | 'batch:upload'
+  | 'apikey:manage';
 
 // Support looks up anything but changes no engineering; admins manage people and roles.
 const grants: Record<UserRole, readonly Permission[]> = {
@@ -41,6 +42,7 @@ const grants: Record<UserRole, readonly Permission[]> = {
     'datasheet:issue',
     'datasheet:read',
     'batch:upload',
+    'apikey:manage',
   ],
   customer: [
     'sizing:save',
@@ -52,8 +54,17 @@ const grants: Record<UserRole, readonly Permission[]> = {
     'datasheet:read',
     'billing:manage',
     'batch:upload',
+    'apikey:manage',
   ],
-  support: ['sizing:read', 'quote:read', 'account:read', 'datasheet:read', 'support:search', 'audit:read'],
+  support: [
+    'sizing:read',
+    'quote:read',
+    'account:read',
+    'datasheet:read',
+    'support:search',
+    'audit:read',
+    'apikey:manage',
+  ],
   admin: [
     'sizing:save',
     'sizing:read',
@@ -68,6 +79,7 @@ const grants: Record<UserRole, readonly Permission[]> = {
     'audit:read',
     'users:manage',
     'batch:upload',
+    'apikey:manage',
   ],
 };
 

@@ -2,6 +2,14 @@ import { z } from 'zod';
 import { PRESET_IDS } from '../thermo/presets';
 import { SPECIES_IDS } from '../thermo/species-data';
 import { ENGINE_VERSION } from './calculate-core';
+import {
+  accessResponses,
+  accessSchemas,
+  apiKeySecurityScheme,
+  calculateSecurity,
+  errorsRef,
+  rateLimitResponseHeaders,
+} from './openapi-access';
 import { sizingRequestSchema } from './schema';
 import { JSON_SCHEMA_HINTS } from './schema-fields';
 
@@ -74,21 +82,6 @@ const method = {
     polytropicSteps: { type: ['integer', 'null'] },
   },
 };
-const errors = {
-  type: 'object',
-  required: ['errors'],
-  properties: {
-    errors: {
-      type: 'array',
-      items: {
-        type: 'object',
-        required: ['path', 'message'],
-        properties: { path: { type: 'string' }, message: { type: 'string' } },
-      },
-    },
-  },
-};
-
 /** Response schema of the main fields; the full shape is the SizingResult type. */
 const result = {
   type: 'object',
@@ -215,6 +208,7 @@ export function calculateOpenApiDocument(): Record<string, unknown> {
       '/api/v1/calculate': {
         post: {
           summary: 'Size a heater or a compressor for one duty point',
+          security: calculateSecurity,
           requestBody: {
             required: true,
             content: { 'application/json': { schema: { $ref: '#/components/schemas/SizingRequest' } } },
@@ -222,18 +216,23 @@ export function calculateOpenApiDocument(): Record<string, unknown> {
           responses: {
             200: {
               description: 'Sizing result',
+              headers: rateLimitResponseHeaders,
               content: { 'application/json': { schema: { $ref: '#/components/schemas/SizingResult' } } },
             },
             400: {
               description: 'Invalid JSON or refused fields (every one listed)',
-              content: { 'application/json': { schema: errors } },
+              content: { 'application/json': { schema: errorsRef } },
             },
-            413: { description: 'Body larger than 64 KiB', content: { 'application/json': { schema: errors } } },
+            413: { description: 'Body larger than 64 KiB', content: { 'application/json': { schema: errorsRef } } },
+            ...accessResponses,
           },
         },
       },
     },
-    components: { schemas: { SizingRequest: requestSchema(), SizingResult: result, Quantity: quantityOut } },
+    components: {
+      schemas: { SizingRequest: requestSchema(), SizingResult: result, Quantity: quantityOut, ...accessSchemas },
+      securitySchemes: apiKeySecurityScheme,
+    },
   };
   return cached;
 }

@@ -1,53 +1,11 @@
 // A 1,000-row enquiry: parse, validate, size and save with its quote and upload; target under 5 s.
-import Papa from 'papaparse';
 import { randomUUID } from 'node:crypto';
 import { db, pool } from '@/db';
 import { accounts, users } from '@/db/schema';
-import { batchColumnNames } from '@/lib/batch/columns';
 import { saveBatch } from '@/lib/batch/commit';
 import { parseBatchCsv } from '@/lib/batch/evaluate';
+import { batchSheet as sheet } from './batch-sheet';
 import { recordResults, verdict } from './stats';
-
-function sheet(n: number): string {
-  const rows = Array.from({ length: n }, (_, i) => {
-    const heater = i % 2 === 0;
-    const r: Record<string, string> = heater
-      ? {
-          service: 'heater',
-          title: `Heater ${i}`,
-          equipment_tag: `EH-${i}`,
-          gas: 'air',
-          flow_value: String(200 + i),
-          flow_unit: 'kg/h',
-          inlet_temperature_value: '20',
-          inlet_temperature_unit: 'degC',
-          inlet_pressure_value: '2',
-          inlet_pressure_unit: 'barg',
-          outlet_temperature_value: '250',
-          outlet_temperature_unit: 'degC',
-          heat_loss_percent: '5',
-          design_margin_percent: '10',
-        }
-      : {
-          service: 'compressor',
-          title: `Compressor ${i}`,
-          equipment_tag: `K-${i}`,
-          gas: 'CH4:0.9;C2H6:0.05;N2:0.05',
-          flow_value: String(500 + i),
-          flow_unit: 'Nm3/h',
-          inlet_temperature_value: '25',
-          inlet_temperature_unit: 'degC',
-          inlet_pressure_value: '1',
-          inlet_pressure_unit: 'bar',
-          discharge_pressure_value: '20',
-          discharge_pressure_unit: 'bar',
-          stages: '3',
-          isentropic_efficiency: '0.78',
-        };
-    return batchColumnNames.map((c) => r[c] ?? '');
-  });
-  return Papa.unparse({ fields: batchColumnNames, data: rows });
-}
 
 async function main() {
   const [acct] = await db

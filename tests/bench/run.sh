@@ -4,6 +4,8 @@
 # scenario plus a million generated sizings; the look-up is also timed on dutywise_bench_100k and
 # dutywise_bench_5m (BENCH_SIZES to choose). Each is generated once and kept; the first run takes a while.
 # BENCH_SKIP_LOAD=1 leaves out the HTTP load run; BENCH_REUSE_BUILD=1 keeps an existing production build.
+# Ends with the soak run (SOAK_SECONDS, default 600). BENCH_ONLY=soak runs just the soak and keeps the other
+# sections of RESULTS.md; BENCH_SKIP_SOAK=1 leaves it out.
 set -uo pipefail
 cd "$(dirname "${BASH_SOURCE[0]}")/../.."
 export NEXT_TELEMETRY_DISABLED=1
@@ -16,11 +18,14 @@ owner_url() { echo "postgres://postgres@127.0.0.1:$PG_PORT/$1"; }
 app_url() { echo "postgres://dutywise_app:${PG_APP_PASSWORD:-dutywise-app-local}@127.0.0.1:$PG_PORT/$1"; }
 export MIGRATION_DATABASE_URL="$(owner_url dutywise_bench)"
 export DATABASE_URL="$(app_url dutywise_bench)"
-rm -f tests/bench/RESULTS.md
+only="${BENCH_ONLY:-}"
+[ "$only" = soak ] || rm -f tests/bench/RESULTS.md
 node_script() { npx tsx --require ./db/script-preload.cjs "$@"; }
 fail=0
 npx tsx db/migrate.mts || exit 1
 node_script db/seed.ts || exit 1
+
+if [ "$only" != soak ]; then
 
 engine_out="$(mktemp)"
 echo "== engine (one core)";         npx tsx tests/bench/engine.bench.mts | tee "$engine_out" || fail=1
@@ -60,5 +65,19 @@ if [ "${BENCH_SKIP_LOAD:-0}" != 1 ]; then
 fi
 { echo; echo "## Sizing engine (one core)"; echo; echo '```'; cat "$engine_out"; echo '```'; } >> tests/bench/RESULTS.md
 rm -f "$engine_out"
+fi
+
+if [ "${BENCH_SKIP_SOAK:-0}" != 1 ]; then
+  echo "== soak: mixed office load for ${SOAK_SECONDS:-600} s (production build, default limits)"
+  export NEXT_DIST_DIR=.next-bench
+  [ -f .next-bench/BUILD_ID ] || npx next build || exit 1
+  soak=$((3250 + offset))
+  # A fresh server with the deployment's own limits, so memory and connections are the soak's alone.
+  DEMO_MODE=on LOG_LEVEL=warn node server.mjs --port "$soak" > .data/bench-soak.log 2>&1 &
+  soak_pid=$!
+  for _ in $(seq 1 60); do curl -fs "http://127.0.0.1:$soak/api/health" >/dev/null 2>&1 && break; sleep 1; done
+  BENCH_APP_URL="http://127.0.0.1:$soak" BENCH_APP_PID=$soak_pid node_script tests/bench/soak.bench.ts || fail=1
+  kill "$soak_pid" 2>/dev/null
+fi
 echo; cat tests/bench/RESULTS.md
 exit "$fail"

@@ -1,5 +1,5 @@
 // Small helpers shared by the benchmarks: percentiles and a results file the README points to.
-import { appendFileSync, existsSync, writeFileSync } from 'node:fs';
+import { appendFileSync, existsSync, readFileSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 
@@ -23,6 +23,16 @@ export function recordResults(title: string, rows: [string, string, string, stri
   appendFileSync(resultsFile, `${lines.join('\n')}\n`);
   console.log(`\n${title}`);
   for (const r of rows) console.log(`  ${r[0].padEnd(48)} ${r[1].padStart(14)}   target ${r[2].padEnd(14)} ${r[3]}`);
+}
+
+/** Like recordResults, but first removes an earlier section of the same kind (the first word of its title). */
+export function replaceResults(title: string, rows: [string, string, string, string][]): void {
+  if (existsSync(resultsFile)) {
+    const kind = title.split(' ')[0]!;
+    const sections = readFileSync(resultsFile, 'utf8').split(/\n(?=## )/);
+    writeFileSync(resultsFile, sections.filter((s) => !s.startsWith(`## ${kind} `)).join('\n'));
+  }
+  recordResults(title, rows);
 }
 
 export function machineHeader(): string {

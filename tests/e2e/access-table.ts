@@ -92,6 +92,7 @@ export const accessTable: AccessRow[] = [
     path: '/admin',
     expect: { anon: 'sign-in', sales_engineer: 'no-access', customer: 'no-access', support: 'no-access', admin: 'ok' },
   },
+  { file: 'app/(desk)/api-keys/page.tsx', path: '/api-keys', expect: signedIn('ok') },
   {
     file: 'app/(desk)/batch/page.tsx',
     path: '/batch',

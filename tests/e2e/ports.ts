@@ -9,6 +9,9 @@ export const e2ePorts = {
   stripe: 12211 + offset,
   smtp: 12125 + offset,
   smtpHttp: 12126 + offset,
+  /** An app of its own on a private PostgreSQL that the database-down journey stops and restarts. */
+  faultApp: 3400 + offset,
+  faultDb: 56900 + offset,
 } as const;
 export const e2eBaseUrl = `http://localhost:${e2ePorts.app}`;
 /** A second app instance on the same database, for the scale-out journey. */

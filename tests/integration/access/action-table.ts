@@ -30,4 +30,6 @@ export const actionTable: Record<string, ActionAccess> = {
   'app/(desk)/size/actions.ts#setUnitSystemAction': { allowed: everyone },
   'app/(desk)/sizings/[sizingId]/actions.ts#resendDatasheetEmailAction': { allowed: ['support', 'admin'] },
   'app/(desk)/datasheets/actions.ts#issueDatasheetAction': { allowed: ['sales_engineer', 'customer', 'admin'] },
+  'app/(desk)/api-keys/actions.ts#createApiKeyAction': { allowed: everyone },
+  'app/(desk)/api-keys/actions.ts#revokeApiKeyAction': { allowed: everyone },
 };

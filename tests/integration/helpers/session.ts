@@ -1,7 +1,8 @@
-import { randomInt } from 'node:crypto';
+import { randomInt, randomUUID } from 'node:crypto';
 import { vi } from 'vitest';
 import { openSession } from '@/lib/auth/local/session-store';
-import { LOCAL_SESSION_COOKIE } from '@/lib/auth/local/session-token';
+import { LOCAL_SESSION_COOKIE, signLocalSession } from '@/lib/auth/local/session-token';
+import { env } from '@/lib/env';
 
 // Server actions read the session from next/headers; outside a request the test supplies the cookie jar and the
 // request headers. Each test file acts from its own client address (so rate-limit budgets are not shared between
@@ -24,6 +25,15 @@ vi.mock('next/cache', () => ({ revalidatePath: () => undefined, revalidateTag: (
 export async function actAs(user: { id: string } | null): Promise<void> {
   jar.clear();
   if (user) jar.set(LOCAL_SESSION_COOKIE, (await openSession(user.id)).token);
+}
+
+/**
+ * Presents a validly signed session cookie for `userId` without touching the database (whose session row does not
+ * exist): for tests that run with the database stopped, where every request must answer 503 before any check.
+ */
+export async function actWithSignedCookie(userId: string): Promise<void> {
+  jar.clear();
+  jar.set(LOCAL_SESSION_COOKIE, await signLocalSession(userId, randomUUID(), env.SESSION_SECRET, 600));
 }
 
 /** Sends the next actions from this client address. */

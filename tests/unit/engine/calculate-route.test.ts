@@ -62,4 +62,18 @@ describe('GET /api/v1/openapi', () => {
     expect(heater.properties.flow.properties.unit.enum).toContain('Nm3/h');
     expect(heater.additionalProperties).toBe(false);
   });
+
+  it('documents the optional API key, every $ref it uses, and the access answers with their headers', async () => {
+    const doc = await (await getOpenApi()).json();
+    const post = doc.paths['/api/v1/calculate'].post;
+    expect(doc.components.securitySchemes.apiKey).toMatchObject({ type: 'http', scheme: 'bearer' });
+    // OpenAPI 3.1 security requirement: an empty object means the key may be left out.
+    expect(post.security).toEqual([{}, { apiKey: [] }]);
+    expect(Object.keys(post.responses).sort()).toEqual(['200', '400', '401', '413', '429', '503']);
+    expect(Object.keys(post.responses[200].headers)).toContain('RateLimit-Policy');
+    expect(Object.keys(post.responses[429].headers)).toContain('Retry-After');
+    const refs = [...JSON.stringify(doc).matchAll(/"\$ref":"#\/components\/schemas\/([^"]+)"/g)].map((m) => m[1]);
+    expect(refs).toContain('Errors');
+    for (const name of refs) expect(doc.components.schemas, name).toHaveProperty([name as string]);
+  });
 });

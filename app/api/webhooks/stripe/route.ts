@@ -7,6 +7,7 @@ import { AppError } from '@/lib/errors';
 import { defineHandler } from '@/lib/http/define-handler';
 import { readBodyLimited } from '@/lib/http/read-limited';
 import { logger } from '@/lib/log/logger';
+import { isDatabaseDown } from '@/lib/ops/db-errors';
 
 export const runtime = 'nodejs';
 export const dynamic = 'force-dynamic';
@@ -39,6 +40,8 @@ export const POST = defineHandler(
       logger.info({ eventId: event.id, type: event.type, outcome }, 'payment event');
       return Response.json({ received: true, outcome });
     } catch (err) {
+      // The database gone: defineHandler answers 503 and the sender retries later.
+      if (isDatabaseDown(err)) throw err;
       if (err instanceof AccountMismatchError) {
         // Signed, but naming an account its customer does not belong to: refused, and retrying cannot change that.
         logger.error({ err: err.message, eventId: event.id, type: event.type }, 'payment event refused');
