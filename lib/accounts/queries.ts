@@ -4,6 +4,7 @@ import { db } from '@/db';
 import { accounts, invitations, memberships, quotes, subscriptions, users } from '@/db/schema';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { accountScope, assertAccountAccess, NotFoundError } from '@/lib/auth/guards';
+import { isStaff } from '@/lib/auth/roles';
 
 export type AccountSummary = {
   id: string;
@@ -23,7 +24,10 @@ export async function listAccounts(user: CurrentUser): Promise<AccountSummary[]>
       name: accounts.name,
       site: accounts.site,
       memberCount: sql<number>`(select count(*)::int from ${memberships} m where m.account_id = ${accounts.id})`,
-      quoteCount: sql<number>`(select count(*)::int from ${quotes} q where q.account_id = ${accounts.id})`,
+      // A customer counts only the quotes it can open (sent ones); staff count drafts too.
+      quoteCount: isStaff(user.role)
+        ? sql<number>`(select count(*)::int from ${quotes} q where q.account_id = ${accounts.id})`
+        : sql<number>`(select count(*)::int from ${quotes} q where q.account_id = ${accounts.id} and q.status <> 'draft')`,
       subscriptionStatus: sql<
         string | null
       >`(select s.status from ${subscriptions} s where s.account_id = ${accounts.id} order by s.updated_at desc limit 1)`,

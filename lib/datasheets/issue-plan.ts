@@ -1,5 +1,5 @@
 import 'server-only';
-import { eq } from 'drizzle-orm';
+import { eq, sql } from 'drizzle-orm';
 import { db } from '@/db';
 import { accounts, datasheetRevisions, datasheets, users } from '@/db/schema';
 import { ActionError } from '@/lib/actions/define-action';
@@ -66,6 +66,7 @@ async function history(datasheetId: string): Promise<RevisionEntry[]> {
       issuedAt: datasheetRevisions.issuedAt,
       note: datasheetRevisions.note,
       issuedByName: users.name,
+      sizingVersion: sql<number | null>`(${datasheetRevisions.snapshot} -> 'sizing' ->> 'revision')::int`,
     })
     .from(datasheetRevisions)
     .leftJoin(users, eq(users.id, datasheetRevisions.issuedByUserId))
@@ -76,6 +77,7 @@ async function history(datasheetId: string): Promise<RevisionEntry[]> {
       issuedAt: r.issuedAt.toISOString(),
       note: r.note,
       issuedByName: r.issuedByName,
+      ...(r.sizingVersion ? { sizingVersion: r.sizingVersion } : {}),
     }))
     .sort((a, b) => compareRevisionLetters(a.revision, b.revision));
 }
@@ -106,7 +108,13 @@ export async function planIssue(
     );
   const number = existing?.number ?? (await db.transaction((tx) => nextNumber(tx, 'datasheet')));
   const issuedAt = new Date();
-  const entry: RevisionEntry = { revision, issuedAt: issuedAt.toISOString(), note, issuedByName: user.name };
+  const entry: RevisionEntry = {
+    revision,
+    issuedAt: issuedAt.toISOString(),
+    note,
+    issuedByName: user.name,
+    sizingVersion: sizing.revision,
+  };
   const snapshot: DatasheetSnapshot = {
     schemaVersion: 1,
     datasheet: { number, revision, issuedAt: entry.issuedAt, note, issuedByName: user.name },

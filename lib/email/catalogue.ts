@@ -17,6 +17,10 @@ export type EmailProps = {
     sizingTitle: string;
     equipmentTag: string | null;
     datasheetUrl: string;
+    /** Set when support re-sends the notice: the subject and body say it is a copy. */
+    copy?: boolean;
+    /** The later revision that replaces this one, when a superseded revision is re-sent. */
+    supersededBy?: string | null;
   };
   'payment-failed': { accountName: string; billingUrl: string; graceDays: number };
   'subscription-ending': { accountName: string; periodEnd: string; billingUrl: string };
@@ -44,7 +48,9 @@ export function subjectFor<T extends EmailTemplate>(template: T, props: EmailPro
     }
     case 'datasheet-issued': {
       const p = props as EmailProps['datasheet-issued'];
-      return `Datasheet ${p.datasheetNumber} rev. ${p.revision} issued`;
+      const base = `Datasheet ${p.datasheetNumber} rev. ${p.revision}`;
+      if (!p.copy) return `${base} issued`;
+      return `Copy: ${base}${p.supersededBy ? ` (superseded by rev. ${p.supersededBy})` : ''}`;
     }
     case 'payment-failed':
       return 'Dutywise subscription payment failed';

@@ -32,6 +32,8 @@ export const emailPropsSchemas: { [T in EmailTemplate]: z.ZodType<EmailProps[T]>
     sizingTitle: text,
     equipmentTag: z.string().nullable(),
     datasheetUrl: link,
+    copy: z.boolean().optional(),
+    supersededBy: z.string().max(2).nullable().optional(),
   }),
   'payment-failed': z.object({ accountName: text, billingUrl: link, graceDays: z.number().int().min(0).max(365) }),
   'subscription-ending': z.object({ accountName: text, periodEnd: text, billingUrl: link }),

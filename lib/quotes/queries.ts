@@ -1,9 +1,10 @@
 import 'server-only';
-import { and, asc, desc, eq, ilike, or, sql, type SQL } from 'drizzle-orm';
+import { and, asc, desc, eq, ilike, ne, or, sql, type SQL } from 'drizzle-orm';
 import { db } from '@/db';
 import { accounts, quoteItems, quotes, sizings, users } from '@/db/schema';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { accountScope, assertAccountAccess, NotFoundError } from '@/lib/auth/guards';
+import { isStaff } from '@/lib/auth/roles';
 import type { QuoteFilter } from './schema';
 
 export type QuoteSummary = {
@@ -18,10 +19,17 @@ export type QuoteSummary = {
   sentAt: Date | null;
 };
 
+/** Customers see a quote once it is sent; drafts, with their internal lines, stay with vendor staff. */
+function visibleToCustomer(user: CurrentUser): SQL | undefined {
+  return isStaff(user.role) ? undefined : ne(quotes.status, 'draft');
+}
+
 export async function listQuotes(user: CurrentUser, filter: QuoteFilter = {}): Promise<QuoteSummary[]> {
   const scope = accountScope(user);
   const conds: SQL[] = [];
   if (scope) conds.push(eq(quotes.accountId, scope));
+  const visible = visibleToCustomer(user);
+  if (visible) conds.push(visible);
   if (filter.status) conds.push(eq(quotes.status, filter.status));
   if (filter.accountId) conds.push(eq(quotes.accountId, filter.accountId));
   if (filter.q) {
@@ -87,7 +95,7 @@ export async function getQuote(user: CurrentUser, quoteId: string): Promise<Quot
     .leftJoin(users, eq(users.id, quotes.createdByUserId))
     .where(eq(quotes.id, quoteId))
     .limit(1);
-  if (!q) throw new NotFoundError();
+  if (!q || (!isStaff(user.role) && q.status === 'draft')) throw new NotFoundError();
   assertAccountAccess(user, q.accountId);
   const lines = await db
     .select({

@@ -26,5 +26,5 @@ export const actionTable: Record<string, ActionAccess> = {
   'app/(desk)/size/actions.ts#saveSizingAction': { allowed: ['sales_engineer', 'customer', 'admin'] },
   'app/(desk)/size/actions.ts#setUnitSystemAction': { allowed: everyone },
   'app/(desk)/sizings/[sizingId]/actions.ts#resendDatasheetEmailAction': { allowed: ['support', 'admin'] },
-  'app/(desk)/datasheets/actions.ts#issueDatasheetAction': { allowed: ['sales_engineer', 'customer', 'admin'] },
+  'app/(desk)/datasheets/actions.ts#issueDatasheetAction': { allowed: staffWrite },
 };

@@ -19,6 +19,6 @@ export type ReopenedSizing = {
   accountId: string;
   accountName: string;
   revision: number;
-  /** True for "revise" (saving records revisedFromId), false for "duplicate". */
+  /** True for "revise" (saving makes the next version of this sizing), false for "duplicate". */
   revise: boolean;
 };

@@ -16,7 +16,12 @@ export function SizingMeta({ sizing, linkAccount }: { sizing: SizingDetail; link
         {sizing.number}
       </span>,
     ],
-    ['Revision', sizing.revision],
+    [
+      'Version',
+      <span key="v" data-testid="sizing-version">
+        {sizing.revision}
+      </span>,
+    ],
     [
       'Equipment tag',
       sizing.equipmentTag ? (
@@ -47,6 +52,12 @@ export function SizingMeta({ sizing, linkAccount }: { sizing: SizingDetail; link
     ],
     ['Created by', sizing.createdByName ?? '—'],
     ['Created', formatDateTime(sizing.createdAt)],
+    ...(sizing.revision > 1
+      ? ([['Current version saved', `${formatDateTime(sizing.updatedAt)} by ${sizing.updatedByName ?? '—'}`]] as [
+          string,
+          ReactNode,
+        ][])
+      : []),
     [
       'Engine version',
       <span key="e" className="font-mono">
