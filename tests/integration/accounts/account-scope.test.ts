@@ -6,7 +6,7 @@ import { getAccount, listAccounts } from '@/lib/accounts/queries';
 import { createAccount, inviteMember, acceptInvitation } from '@/lib/accounts/mutations';
 import { accountInputSchema } from '@/lib/accounts/schema';
 import { NotFoundError } from '@/lib/auth/guards';
-import { createQuote, addQuoteItem, sendQuote } from '@/lib/quotes/mutations';
+import { createQuote, addQuoteItem, sendQuote, setQuoteStatus } from '@/lib/quotes/mutations';
 import { getQuote, listQuotes } from '@/lib/quotes/queries';
 import { makeAccount, makeUser } from '../helpers/fixtures';
 import { makeSizingRow } from '../helpers/sizing-rows';
@@ -71,15 +71,19 @@ describe('quotes are scoped and keep lines inside their account', () => {
     expect(await db.select().from(quoteItems).where(eq(quoteItems.quoteId, id))).toHaveLength(0);
   });
 
-  it("a customer sees their account's quotes and gets not-found for another's", async () => {
+  it("a customer sees their account's sent quotes, never drafts, and gets not-found for another's", async () => {
     const a = await makeAccount();
     const b = await makeAccount();
     const engineer = await makeUser('sales_engineer');
     const s1 = await makeSizingRow(a.id, engineer.id);
     const qa = await createQuote(engineer, { accountId: a.id, title: 'For A', sizingIds: [s1] });
+    const draft = await createQuote(engineer, { accountId: a.id, title: 'Internal draft', sizingIds: [s1] });
     const qb = await createQuote(engineer, { accountId: b.id, title: 'For B', sizingIds: [] });
+    await setQuoteStatus(engineer, qa.id, 'sent');
     const customerA = await makeUser('customer', a.id);
     expect((await listQuotes(customerA)).map((q) => q.id)).toEqual([qa.id]);
+    await expect(getQuote(customerA, draft.id)).rejects.toBeInstanceOf(NotFoundError);
+    expect((await listQuotes(engineer, { accountId: a.id })).map((q) => q.id).sort()).toEqual([qa.id, draft.id].sort());
     expect((await getQuote(customerA, qa.id)).lines).toHaveLength(1);
     await expect(getQuote(customerA, qb.id)).rejects.toBeInstanceOf(NotFoundError);
   });
