@@ -18,7 +18,10 @@ export type Resent = { to: string; datasheetNumber: string; revision: string };
  * Queues a copy of a datasheet revision's notice (support): the revision and recipient are chosen, the subject
  * says it is a copy, and the mail is recorded against that revision so the record's e-mail history shows it.
  */
-export async function resendDatasheetEmail(user: CurrentUser, input: ResendInput): Promise<Resent> {
+export async function resendDatasheetEmail(
+  user: CurrentUser,
+  input: Partial<ResendInput> & { sizingId: string },
+): Promise<Resent> {
   const out = await db.transaction(async (tx) => {
     const [row] = await tx
       .select({

@@ -13,7 +13,13 @@ import { sizingEmails } from '@/lib/support/sizing-record';
 import { nitrogenHeater } from '../datasheets/requests';
 import { makeAccount, makeUser } from '../helpers/fixtures';
 
-const meta = (accountId: string) => ({ accountId, title: 'Purge heater', equipmentTag: 'EH-3301' });
+const meta = (accountId: string) => ({
+  accountId,
+  title: 'Purge heater',
+  equipmentTag: 'EH-3301',
+  notes: undefined,
+  quoteId: undefined,
+});
 
 describe('a revision is a version of the same sizing', () => {
   it('keeps the number and id, archives version 1, and issues rev B of the same datasheet', async () => {
