@@ -24,8 +24,8 @@ function safeChildren(children: ReactNode): ReactNode {
 /** The renderer with a Text that spells out characters the fonts lack (see glyphs.ts) in every string it prints. */
 function withSafeText(k: PdfKit): PdfKit {
   const Plain = k.Text;
-  const Text = ((props: { children?: ReactNode }) =>
-    createElement(Plain, { ...props, children: safeChildren(props.children) })) as unknown as typeof k.Text;
+  const Text = (({ children, ...props }: { children?: ReactNode }) =>
+    createElement(Plain, props, safeChildren(children))) as unknown as typeof k.Text;
   // Module namespaces are frozen: a new object with the module's members and this Text in its place.
   return { ...k, Text } as unknown as PdfKit;
 }
