@@ -25,7 +25,7 @@ function safeChildren(children: ReactNode): ReactNode {
 function withSafeText(k: PdfKit): PdfKit {
   const Plain = k.Text;
   const Text = (({ children, ...props }: { children?: ReactNode }) =>
-    createElement(Plain, props, safeChildren(children))) as unknown as typeof k.Text;
+    createElement(Plain, props, ...[safeChildren(children)].flat())) as unknown as typeof k.Text;
   // Module namespaces are frozen: a new object with the module's members and this Text in its place.
   return { ...k, Text } as unknown as PdfKit;
 }
