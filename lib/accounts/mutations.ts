@@ -10,7 +10,9 @@ import { assertAccountAccess } from '@/lib/auth/guards';
 import { hashPassword } from '@/lib/auth/local/passwords';
 import { enqueueEmail } from '@/lib/email/enqueue';
 import { env } from '@/lib/env';
-import type { AccountInput, InviteInput } from './schema';
+import { PA_PER_PSI } from '@/lib/units';
+import { accountsNamed } from './duplicates';
+import type { AccountCreateInput, AccountInput, InviteInput } from './schema';
 
 const INVITE_DAYS = 14;
 
@@ -18,12 +20,35 @@ export function hashToken(token: string): string {
   return createHash('sha256').update(token).digest('hex');
 }
 
-/** Creates a customer account for a prospect (staff) and audits it in the same transaction. */
-export async function createAccount(user: CurrentUser, input: AccountInput): Promise<{ id: string }> {
+const PSI_TO_KPA = PA_PER_PSI / 1000;
+
+// The stored figures: a barometric pressure given in psia is kept in kPa.
+function siteColumns(input: AccountInput) {
+  const { barometricPressurePsia, ...rest } = input;
+  const kpa = barometricPressurePsia !== undefined ? barometricPressurePsia * PSI_TO_KPA : input.barometricPressureKpa;
+  return { ...rest, barometricPressureKpa: kpa };
+}
+
+/**
+ * Creates a customer account for a prospect (staff) and audits it in the same transaction. A company name that
+ * already exists is refused unless the user confirms this is a different company of the same name.
+ */
+export async function createAccount(user: CurrentUser, input: AccountCreateInput): Promise<{ id: string }> {
   return db.transaction(async (tx) => {
+    const { confirmDuplicateName, ...fields } = input;
+    const same = await accountsNamed(tx, fields.name);
+    if (same.length && !confirmDuplicateName)
+      throw new ActionError(
+        `An account named “${same[0]!.name}”${same[0]!.site ? ` (${same[0]!.site})` : ''} already exists. Open it instead, or confirm that this is a different company.`,
+        409,
+        {
+          name: ['An account with this name already exists.'],
+          confirmDuplicateName: ['Confirm to create a second one.'],
+        },
+      );
     const [row] = await tx
       .insert(accounts)
-      .values({ ...input, createdByUserId: user.id })
+      .values({ ...siteColumns(fields), createdByUserId: user.id })
       .returning({ id: accounts.id });
     if (!row) throw new Error('account insert returned no row');
     await writeAudit(tx, {
@@ -47,8 +72,10 @@ export async function updateAccount(user: CurrentUser, accountId: string, input:
       site: input.site ?? null,
       billingContactName: input.billingContactName ?? null,
       billingContactEmail: input.billingContactEmail ?? null,
-      barometricPressureKpa: input.barometricPressureKpa ?? null,
+      barometricPressureKpa: siteColumns(input).barometricPressureKpa ?? null,
       siteAltitudeM: input.siteAltitudeM ?? null,
+      unitSystem: input.unitSystem,
+      currency: input.currency,
     };
     const res = await tx
       .update(accounts)
@@ -174,6 +201,13 @@ export async function signUpCustomer(input: {
       throw new ActionError('A Dutywise user with this e-mail already exists; sign in instead.', 409, {
         email: ['Already registered.'],
       });
+    // One company, one account: a second sign-up for it would split its sizings and datasheets in two.
+    if ((await accountsNamed(tx, input.company)).length)
+      throw new ActionError(
+        `${input.company} already has a Dutywise account. Ask a colleague there, or your sales engineer, to invite you to it.`,
+        409,
+        { company: ['This company already has an account; ask for an invitation to join it.'] },
+      );
     const [u] = await tx
       .insert(users)
       .values({ email: input.email, name: input.name, role: 'customer', passwordHash })

@@ -46,6 +46,8 @@ export type AccountDetail = {
   billingContactEmail: string | null;
   barometricPressureKpa: number | null;
   siteAltitudeM: number | null;
+  unitSystem: 'si' | 'us';
+  currency: string;
   members: { id: string; name: string; email: string }[];
   pendingInvitations: { id: string; email: string; expiresAt: Date }[];
 };
@@ -61,6 +63,8 @@ export async function getAccount(user: CurrentUser, accountId: string): Promise<
       billingContactEmail: accounts.billingContactEmail,
       barometricPressureKpa: accounts.barometricPressureKpa,
       siteAltitudeM: accounts.siteAltitudeM,
+      unitSystem: accounts.unitSystem,
+      currency: accounts.currency,
     })
     .from(accounts)
     .where(eq(accounts.id, accountId))
@@ -82,15 +86,29 @@ export async function getAccount(user: CurrentUser, accountId: string): Promise<
   return { ...row, members, pendingInvitations };
 }
 
-/** Names for pickers (save-to-account, new quote), with each site's barometric pressure or altitude for the desk. */
-export async function listAccountOptions(
-  user: CurrentUser,
-): Promise<{ id: string; name: string; barometricPressureKpa: number | null; siteAltitudeM: number | null }[]> {
+export type AccountOption = {
+  id: string;
+  name: string;
+  site: string | null;
+  billingContactEmail: string | null;
+  barometricPressureKpa: number | null;
+  siteAltitudeM: number | null;
+  unitSystem: 'si' | 'us';
+};
+
+/**
+ * Accounts for pickers (save-to-account, new quote), with the site and billing contact that tell same-named
+ * accounts apart, and each site's barometric pressure or altitude and unit system for the desk.
+ */
+export async function listAccountOptions(user: CurrentUser): Promise<AccountOption[]> {
   const scope = accountScope(user);
   return db
     .select({
       id: accounts.id,
       name: accounts.name,
+      site: accounts.site,
+      billingContactEmail: accounts.billingContactEmail,
+      unitSystem: accounts.unitSystem,
       barometricPressureKpa: accounts.barometricPressureKpa,
       siteAltitudeM: accounts.siteAltitudeM,
     })

@@ -11,7 +11,13 @@ import type { SizingDetail } from '@/lib/sizings/queries';
 import { compareRevisionLetters, nextRevisionLetter } from './revision-letter';
 import type { DatasheetSnapshot, RevisionEntry } from './snapshot';
 
-export type IssueAccount = { id: string; name: string; site: string | null; billingContactEmail: string | null };
+export type IssueAccount = {
+  id: string;
+  name: string;
+  site: string | null;
+  billingContactEmail: string | null;
+  unitSystem: 'si' | 'us';
+};
 
 /** What one attempt intends to write; the commit re-checks `previous` under the row lock. */
 export type IssuePlan = {
@@ -51,6 +57,7 @@ export async function loadIssueAccount(accountId: string): Promise<IssueAccount>
       name: accounts.name,
       site: accounts.site,
       billingContactEmail: accounts.billingContactEmail,
+      unitSystem: accounts.unitSystem,
     })
     .from(accounts)
     .where(eq(accounts.id, accountId))
@@ -119,6 +126,7 @@ export async function planIssue(
     schemaVersion: 1,
     datasheet: { number, revision, issuedAt: entry.issuedAt, note, issuedByName: user.name },
     account: { id: account.id, name: account.name, site: account.site },
+    units: account.unitSystem,
     sizing: {
       id: sizing.id,
       number: sizing.number,

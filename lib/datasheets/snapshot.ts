@@ -17,6 +17,8 @@ export type DatasheetSnapshot = {
   schemaVersion: 1;
   datasheet: { number: string; revision: string; issuedAt: string; note: string | null; issuedByName: string };
   account: { id: string; name: string; site: string | null };
+  /** The account's unit system when issued (SI for revisions issued before accounts had one). */
+  units?: 'si' | 'us';
   sizing: {
     id: string;
     number: string;

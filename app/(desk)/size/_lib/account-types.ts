@@ -2,6 +2,9 @@
 export type AccountSite = {
   id: string;
   name: string;
+  site?: string | null;
+  billingContactEmail?: string | null;
+  unitSystem?: 'si' | 'us';
   barometricPressureKpa: number | null;
   siteAltitudeM: number | null;
 };
