@@ -1,4 +1,5 @@
 import { eq } from 'drizzle-orm';
+import { randomUUID } from 'node:crypto';
 import { describe, expect, it } from 'vitest';
 import { db } from '@/db';
 import { auditLog, outbox, quoteItems } from '@/db/schema';
@@ -34,7 +35,8 @@ describe('customer accounts are scoped', () => {
     const engineer = await makeUser('sales_engineer');
     const { id } = await createAccount(
       engineer,
-      accountInputSchema.parse({ name: 'Audit Check Ltd', barometricPressureKpa: '99.1' }),
+      // A fresh name each run: a company name that already has an account is refused.
+      accountInputSchema.parse({ name: `Audit Check ${randomUUID().slice(0, 8)} Ltd`, barometricPressureKpa: '99.1' }),
     );
     const rows = await db.select().from(auditLog).where(eq(auditLog.entityId, id));
     expect(rows.map((r) => r.action)).toEqual(['account.created']);
