@@ -8,7 +8,8 @@ export type EmailProps = {
     quoteTitle: string;
     senderName: string;
     quoteUrl: string;
-    lines: { title: string; tag: string | null; headline: string; quantity: number }[];
+    lines: { title: string; tag: string | null; headline: string; quantity: number; price?: string | null }[];
+    total?: string | null;
   };
   'datasheet-issued': {
     accountName: string;

@@ -21,9 +21,16 @@ export const emailPropsSchemas: { [T in EmailTemplate]: z.ZodType<EmailProps[T]>
     quoteUrl: link,
     lines: z
       .array(
-        z.object({ title: text, tag: z.string().nullable(), headline: z.string(), quantity: z.number().int().min(1) }),
+        z.object({
+          title: text,
+          tag: z.string().nullable(),
+          headline: z.string(),
+          quantity: z.number().int().min(1),
+          price: z.string().nullable().optional(),
+        }),
       )
       .max(200),
+    total: z.string().nullable().optional(),
   }),
   'datasheet-issued': z.object({
     accountName: text,

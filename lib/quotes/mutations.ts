@@ -1,5 +1,5 @@
 import 'server-only';
-import { and, eq, inArray, sql } from 'drizzle-orm';
+import { and, asc, eq, inArray, sql } from 'drizzle-orm';
 import { db, type Tx } from '@/db';
 import { accounts, quoteItems, quotes, sizings } from '@/db/schema';
 import { ActionError } from '@/lib/actions/define-action';
@@ -9,7 +9,8 @@ import { assertAccountAccess } from '@/lib/auth/guards';
 import { enqueueEmail } from '@/lib/email/enqueue';
 import { env } from '@/lib/env';
 import { nextNumber } from '@/lib/numbering/next-number';
-import { formatHeadline } from '@/lib/sizings/headline';
+import { lineFigures } from './line-figures';
+import { formatMoney, formatPriceTotal, priceCents, priceTotals } from './prices';
 import type { QuoteCreateInput } from './schema';
 
 async function lockQuote(tx: Tx, user: CurrentUser, quoteId: string) {
@@ -158,6 +159,32 @@ export async function removeQuoteItem(user: CurrentUser, quoteId: string, itemId
   });
 }
 
+/** Sets or clears one line's unit price (draft quotes only: a sent quote's prices are what the customer saw). */
+export async function setQuoteLinePrice(
+  user: CurrentUser,
+  input: { quoteId: string; itemId: string; unitPrice: string | null },
+): Promise<void> {
+  await db.transaction(async (tx) => {
+    const q = await lockQuote(tx, user, input.quoteId);
+    if (q.status !== 'draft')
+      throw new ActionError(`Quote ${q.number} is ${q.status}; prices are fixed once it is sent.`, 409);
+    const res = await tx
+      .update(quoteItems)
+      .set({ unitPrice: input.unitPrice })
+      .where(and(eq(quoteItems.id, input.itemId), eq(quoteItems.quoteId, input.quoteId)))
+      .returning({ id: quoteItems.id });
+    if (!res[0]) throw new ActionError('That line is not on this quote.', 404);
+    await writeAudit(tx, {
+      actor: user,
+      action: 'quote.price_set',
+      entityType: 'quote',
+      entityId: input.quoteId,
+      accountId: q.accountId,
+      detail: { itemId: input.itemId, unitPrice: input.unitPrice },
+    });
+  });
+}
+
 export async function setQuoteStatus(
   user: CurrentUser,
   quoteId: string,
@@ -182,7 +209,12 @@ export async function sendQuote(user: CurrentUser, quoteId: string): Promise<{ t
   return db.transaction(async (tx) => {
     const q = await lockQuote(tx, user, quoteId);
     const [acct] = await tx
-      .select({ name: accounts.name, email: accounts.billingContactEmail })
+      .select({
+        name: accounts.name,
+        email: accounts.billingContactEmail,
+        currency: accounts.currency,
+        unitSystem: accounts.unitSystem,
+      })
       .from(accounts)
       .where(eq(accounts.id, q.accountId))
       .limit(1);
@@ -198,15 +230,19 @@ export async function sendQuote(user: CurrentUser, quoteId: string): Promise<{ t
         service: sizings.service,
         headlineKw: sizings.headlineKw,
         quantity: quoteItems.quantity,
+        unitPrice: quoteItems.unitPrice,
+        result: sizings.result,
       })
       .from(quoteItems)
       .innerJoin(sizings, eq(sizings.id, quoteItems.sizingId))
-      .where(eq(quoteItems.quoteId, quoteId));
+      .where(eq(quoteItems.quoteId, quoteId))
+      .orderBy(asc(quoteItems.position), asc(quoteItems.createdAt));
     if (!lines.length) throw new ActionError('Add at least one sizing before sending the quote.', 422);
     await tx
       .update(quotes)
       .set({ status: 'sent', sentAt: new Date(), updatedAt: new Date() })
       .where(eq(quotes.id, quoteId));
+    const totals = priceTotals(lines);
     await enqueueEmail(tx, {
       template: 'quote-sent',
       to: acct.email,
@@ -221,9 +257,11 @@ export async function sendQuote(user: CurrentUser, quoteId: string): Promise<{ t
         lines: lines.map((l) => ({
           title: l.title,
           tag: l.tag,
-          headline: formatHeadline(l.service, l.headlineKw),
+          headline: lineFigures(l.service, l.headlineKw, l.result, acct.unitSystem),
           quantity: l.quantity,
+          price: l.unitPrice === null ? null : formatMoney(priceCents(l.unitPrice)! * l.quantity, acct.currency),
         })),
+        total: formatPriceTotal(totals, acct.currency),
       },
     });
     await writeAudit(tx, {

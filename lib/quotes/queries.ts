@@ -66,12 +66,15 @@ export type QuoteLine = {
   gasLabel: string;
   headlineKw: number;
   quantity: number;
+  /** Unit price in the account's currency, exact decimal; null when the line is not priced. */
+  unitPrice: string | null;
 };
 
 export type QuoteDetail = QuoteSummary & {
   notes: string | null;
   createdByName: string | null;
   billingContactEmail: string | null;
+  currency: string;
   lines: QuoteLine[];
 };
 
@@ -86,6 +89,7 @@ export async function getQuote(user: CurrentUser, quoteId: string): Promise<Quot
       accountId: quotes.accountId,
       accountName: accounts.name,
       billingContactEmail: accounts.billingContactEmail,
+      currency: accounts.currency,
       createdAt: quotes.createdAt,
       sentAt: quotes.sentAt,
       createdByName: users.name,
@@ -108,6 +112,7 @@ export async function getQuote(user: CurrentUser, quoteId: string): Promise<Quot
       gasLabel: sizings.gasLabel,
       headlineKw: sizings.headlineKw,
       quantity: quoteItems.quantity,
+      unitPrice: quoteItems.unitPrice,
     })
     .from(quoteItems)
     .innerJoin(sizings, eq(sizings.id, quoteItems.sizingId))

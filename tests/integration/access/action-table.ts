@@ -21,6 +21,7 @@ export const actionTable: Record<string, ActionAccess> = {
   'app/(desk)/quotes/new/actions.ts#createQuoteAction': { allowed: staffWrite },
   'app/(desk)/quotes/[quoteId]/actions.ts#addQuoteLineAction': { allowed: staffWrite },
   'app/(desk)/quotes/[quoteId]/actions.ts#removeQuoteLineAction': { allowed: staffWrite },
+  'app/(desk)/quotes/[quoteId]/actions.ts#setQuoteLinePriceAction': { allowed: staffWrite },
   'app/(desk)/quotes/[quoteId]/actions.ts#setQuoteStatusAction': { allowed: staffWrite },
   'app/(desk)/quotes/[quoteId]/actions.ts#sendQuoteAction': { allowed: staffWrite },
   'app/(desk)/size/actions.ts#saveSizingAction': { allowed: ['sales_engineer', 'customer', 'admin'] },

@@ -29,9 +29,16 @@ const cases: {
       senderName: 'Ilse Marrow',
       quoteUrl: `${appUrl}/quotes/q-9931`,
       lines: [
-        { title: 'Recycle booster', tag: 'K-4401', headline: '233 kW shaft power', quantity: 2 },
+        {
+          title: 'Recycle booster',
+          tag: 'K-4401',
+          headline: '233 kW shaft power',
+          quantity: 2,
+          price: 'CHF 81,406.00',
+        },
         { title: 'Start-up heater', tag: null, headline: '57.5 kW duty', quantity: 1 },
       ],
+      total: 'CHF 81,406.00 for the 1 priced line (1 not priced)',
     },
     facts: [
       'Q-9931',
@@ -41,6 +48,9 @@ const cases: {
       '233 kW shaft power',
       'Start-up heater',
       '57.5 kW duty',
+      'Price: CHF 81,406.00',
+      'Total price',
+      'CHF 81,406.00 for the 1 priced line (1 not priced)',
       `${appUrl}/quotes/q-9931`,
     ],
     subject: 'Quote Q-9931: Booster for pad 4',
@@ -114,6 +124,16 @@ describe('e-mail templates', () => {
     expect(flat(withTag.text)).toMatch(/Revision: C/);
     const noTag = await renderEmail('datasheet-issued', { ...base, equipmentTag: null }, appUrl);
     expect(noTag.text).not.toContain('Equipment tag');
+  });
+
+  it('leaves prices out of a quote mail whose lines have none', async () => {
+    const base = cases['quote-sent'].props;
+    const unpriced = await renderEmail(
+      'quote-sent',
+      { ...base, lines: base.lines.map((l) => ({ ...l, price: null })), total: null },
+      appUrl,
+    );
+    expect(unpriced.text).not.toMatch(/Price|Total price/);
   });
 
   it('turns an app path into an absolute link against the app URL', async () => {

@@ -2,8 +2,14 @@
 
 import { revalidatePath } from 'next/cache';
 import { defineAction } from '@/lib/actions/define-action';
-import { addQuoteItem, removeQuoteItem, sendQuote, setQuoteStatus } from '@/lib/quotes/mutations';
-import { quoteIdSchema, quoteItemRemoveSchema, quoteItemSchema, quoteStatusSchema } from '@/lib/quotes/schema';
+import { addQuoteItem, removeQuoteItem, sendQuote, setQuoteLinePrice, setQuoteStatus } from '@/lib/quotes/mutations';
+import {
+  quoteIdSchema,
+  quoteItemRemoveSchema,
+  quoteItemSchema,
+  quoteLinePriceSchema,
+  quoteStatusSchema,
+} from '@/lib/quotes/schema';
 
 function refresh(quoteId: string) {
   revalidatePath('/quotes');
@@ -25,6 +31,16 @@ export const removeQuoteLineAction = defineAction(
     await removeQuoteItem(user, input.quoteId, input.itemId);
     refresh(input.quoteId);
     return { quoteId: input.quoteId };
+  },
+);
+
+/** Sets or clears a draft line's unit price (in the account's currency). */
+export const setQuoteLinePriceAction = defineAction(
+  { permission: 'quote:manage', schema: quoteLinePriceSchema, name: 'quote.line_price' },
+  async (input, user) => {
+    await setQuoteLinePrice(user, input);
+    refresh(input.quoteId);
+    return { unitPrice: input.unitPrice };
   },
 );
 
