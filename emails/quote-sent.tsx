@@ -15,9 +15,12 @@ const lineStyle = {
   padding: '8px 0',
 } as const;
 
-/** A sales engineer sends a quote: what is in it, its prices when it has them, and where to read it in full. */
+/**
+ * A sales engineer sends a quote: what is in it, its prices when it has them, and where to read it in full. A
+ * billing contact with no Dutywise sign-in yet gets the invitation to join the account as the way in.
+ */
 export function QuoteSentEmail(props: Props) {
-  const { accountName, quoteNumber, quoteTitle, senderName, quoteUrl, lines, total } = props;
+  const { accountName, quoteNumber, quoteTitle, senderName, quoteUrl, joinUrl, lines, total } = props;
   return (
     <MailLayout
       preview={`Quote ${quoteNumber} for ${accountName}: ${quoteTitle}`}
@@ -55,7 +58,17 @@ export function QuoteSentEmail(props: Props) {
           ))}
         </Section>
       )}
-      <ActionButton href={quoteUrl}>Open the quote</ActionButton>
+      {joinUrl ? (
+        <>
+          <Para>
+            You have no Dutywise sign-in yet. Join {accountName} with the link below: set your name and a password, and
+            the quote opens. The link works once.
+          </Para>
+          <ActionButton href={joinUrl}>Join {accountName} and open the quote</ActionButton>
+        </>
+      ) : (
+        <ActionButton href={quoteUrl}>Open the quote</ActionButton>
+      )}
       <PreliminaryNotice />
     </MailLayout>
   );

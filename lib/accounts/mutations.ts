@@ -1,7 +1,7 @@
 import 'server-only';
 import { and, eq, isNull, sql } from 'drizzle-orm';
 import { createHash, randomBytes } from 'node:crypto';
-import { db } from '@/db';
+import { db, type Tx } from '@/db';
 import { accounts, invitations, memberships, users } from '@/db/schema';
 import { ActionError } from '@/lib/actions/define-action';
 import { writeAudit } from '@/lib/audit/write';
@@ -97,43 +97,71 @@ export async function updateAccount(user: CurrentUser, accountId: string, input:
 /** Invites a customer user by e-mail; the link carries a random token whose hash alone is stored. */
 export async function inviteMember(user: CurrentUser, input: InviteInput): Promise<{ inviteUrl: string }> {
   assertAccountAccess(user, input.accountId);
-  const token = randomBytes(24).toString('base64url');
-  const inviteUrl = `${env.APP_URL}/invite/${token}`;
-  await db.transaction(async (tx) => {
+  return db.transaction(async (tx) => {
     const [acct] = await tx
       .select({ name: accounts.name })
       .from(accounts)
       .where(eq(accounts.id, input.accountId))
       .limit(1);
     if (!acct) throw new ActionError('That account no longer exists.', 404);
-    const [inv] = await tx
-      .insert(invitations)
-      .values({
-        accountId: input.accountId,
-        email: input.email,
-        tokenHash: hashToken(token),
-        invitedByUserId: user.id,
-        expiresAt: new Date(Date.now() + INVITE_DAYS * 86_400_000),
-      })
-      .returning({ id: invitations.id });
-    if (!inv) throw new Error('invitation insert returned no row');
-    await writeAudit(tx, {
-      actor: user,
-      action: 'member.invited',
-      entityType: 'account',
-      entityId: input.accountId,
-      accountId: input.accountId,
-      detail: { email: input.email },
-    });
+    const { inviteUrl, invitationId } = await createInvitation(tx, user, input);
     await enqueueEmail(tx, {
       template: 'invitation',
       to: input.email,
       accountId: input.accountId,
-      entity: { type: 'invitation', id: inv.id },
+      entity: { type: 'invitation', id: invitationId },
       props: { accountName: acct.name, inviterName: user.name, inviteUrl, expiresInDays: INVITE_DAYS },
     });
+    return { inviteUrl };
   });
-  return { inviteUrl };
+}
+
+/**
+ * Records an invitation to the account in the caller's transaction (audited) and returns its link; the caller
+ * sends it (the invitation e-mail, or the quote e-mail to a billing contact who is not yet a member). `next` is
+ * the app path the new member lands on after joining.
+ */
+export async function createInvitation(
+  tx: Tx,
+  user: CurrentUser,
+  input: InviteInput,
+  next?: string,
+): Promise<{ inviteUrl: string; invitationId: string }> {
+  const token = randomBytes(24).toString('base64url');
+  const inviteUrl = `${env.APP_URL}/invite/${token}${next ? `?next=${encodeURIComponent(next)}` : ''}`;
+  const [inv] = await tx
+    .insert(invitations)
+    .values({
+      accountId: input.accountId,
+      email: input.email,
+      tokenHash: hashToken(token),
+      invitedByUserId: user.id,
+      expiresAt: new Date(Date.now() + INVITE_DAYS * 86_400_000),
+    })
+    .returning({ id: invitations.id });
+  if (!inv) throw new Error('invitation insert returned no row');
+  await writeAudit(tx, {
+    actor: user,
+    action: 'member.invited',
+    entityType: 'account',
+    entityId: input.accountId,
+    accountId: input.accountId,
+    detail: { email: input.email, ...(next ? { next } : {}) },
+  });
+  return { inviteUrl, invitationId: inv.id };
+}
+
+/**
+ * Whether anyone already signs in to Dutywise with this e-mail. Only a new address can take an invitation
+ * (accepting one makes a user); an existing user reaches the quote by signing in.
+ */
+export async function hasUserWithEmail(tx: Tx, email: string): Promise<boolean> {
+  const [row] = await tx
+    .select({ id: users.id })
+    .from(users)
+    .where(eq(sql`lower(${users.email})`, email.toLowerCase()))
+    .limit(1);
+  return Boolean(row);
 }
 
 /** Turns an invitation into a customer user of that account (local identity). */

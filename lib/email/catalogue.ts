@@ -8,6 +8,8 @@ export type EmailProps = {
     quoteTitle: string;
     senderName: string;
     quoteUrl: string;
+    /** An invitation to join the account, for a billing contact with no Dutywise sign-in yet. */
+    joinUrl?: string | null;
     lines: { title: string; tag: string | null; headline: string; quantity: number; price?: string | null }[];
     total?: string | null;
   };

@@ -19,6 +19,7 @@ export const emailPropsSchemas: { [T in EmailTemplate]: z.ZodType<EmailProps[T]>
     quoteTitle: text,
     senderName: text,
     quoteUrl: link,
+    joinUrl: link.nullable().optional(),
     lines: z
       .array(
         z.object({

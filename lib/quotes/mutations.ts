@@ -9,6 +9,7 @@ import { assertAccountAccess } from '@/lib/auth/guards';
 import { enqueueEmail } from '@/lib/email/enqueue';
 import { env } from '@/lib/env';
 import { nextNumber } from '@/lib/numbering/next-number';
+import { createInvitation, hasUserWithEmail } from '@/lib/accounts/mutations';
 import { lineFigures } from './line-figures';
 import { formatMoney, formatPriceTotal, priceCents, priceTotals } from './prices';
 import type { QuoteCreateInput } from './schema';
@@ -204,8 +205,12 @@ export async function setQuoteStatus(
   });
 }
 
-/** Marks the quote sent and queues the e-mail to the account's billing contact, atomically. */
-export async function sendQuote(user: CurrentUser, quoteId: string): Promise<{ to: string }> {
+/**
+ * Marks the quote sent and queues the e-mail to the account's billing contact, atomically. A contact who has no
+ * Dutywise sign-in yet gets an invitation to join the account in the same e-mail, landing on the quote (without
+ * it, "Create an account" would make them a second company).
+ */
+export async function sendQuote(user: CurrentUser, quoteId: string): Promise<{ to: string; invited: boolean }> {
   return db.transaction(async (tx) => {
     const q = await lockQuote(tx, user, quoteId);
     const [acct] = await tx
@@ -242,6 +247,10 @@ export async function sendQuote(user: CurrentUser, quoteId: string): Promise<{ t
       .update(quotes)
       .set({ status: 'sent', sentAt: new Date(), updatedAt: new Date() })
       .where(eq(quotes.id, quoteId));
+    const invited = !(await hasUserWithEmail(tx, acct.email));
+    const join = invited
+      ? await createInvitation(tx, user, { accountId: q.accountId, email: acct.email }, `/quotes/${quoteId}`)
+      : null;
     const totals = priceTotals(lines);
     await enqueueEmail(tx, {
       template: 'quote-sent',
@@ -254,6 +263,7 @@ export async function sendQuote(user: CurrentUser, quoteId: string): Promise<{ t
         quoteTitle: q.title,
         senderName: user.name,
         quoteUrl: `${env.APP_URL}/quotes/${quoteId}`,
+        joinUrl: join?.inviteUrl ?? null,
         lines: lines.map((l) => ({
           title: l.title,
           tag: l.tag,
@@ -270,8 +280,8 @@ export async function sendQuote(user: CurrentUser, quoteId: string): Promise<{ t
       entityType: 'quote',
       entityId: quoteId,
       accountId: q.accountId,
-      detail: { to: acct.email },
+      detail: { to: acct.email, invited },
     });
-    return { to: acct.email };
+    return { to: acct.email, invited };
   });
 }

@@ -126,6 +126,18 @@ describe('e-mail templates', () => {
     expect(noTag.text).not.toContain('Equipment tag');
   });
 
+  it('invites a quote recipient with no sign-in through the join link instead of the plain quote link', async () => {
+    const base = cases['quote-sent'].props;
+    const joinUrl = `${appUrl}/invite/tok-5512?next=%2Fquotes%2Fq-9931`;
+    const out = await renderEmail('quote-sent', { ...base, joinUrl }, appUrl);
+    expect(unescape(out.html)).toContain(`href="${joinUrl}"`);
+    expect(flat(out.text)).toContain(`Join ${base.accountName} and open the quote`);
+    expect(flat(out.text)).toContain('no Dutywise sign-in yet');
+    expect(out.html).not.toContain(`href="${appUrl}/quotes/q-9931"`);
+    const plain = await renderEmail('quote-sent', base, appUrl);
+    expect(plain.text).not.toContain('Join');
+  });
+
   it('leaves prices out of a quote mail whose lines have none', async () => {
     const base = cases['quote-sent'].props;
     const unpriced = await renderEmail(

@@ -53,12 +53,15 @@ export const setQuoteStatusAction = defineAction(
   },
 );
 
-/** Marks the quote sent and queues the e-mail to the account's billing contact; answers with the address. */
+/**
+ * Marks the quote sent and queues the e-mail to the account's billing contact; answers with the address and whether
+ * the e-mail also invited the contact to join the account.
+ */
 export const sendQuoteAction = defineAction(
   { permission: 'quote:manage', schema: quoteIdSchema, name: 'quote.send' },
   async (input, user) => {
-    const { to } = await sendQuote(user, input.quoteId);
+    const { to, invited } = await sendQuote(user, input.quoteId);
     refresh(input.quoteId);
-    return { to };
+    return { to, invited };
   },
 );
