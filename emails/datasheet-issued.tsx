@@ -13,6 +13,8 @@ export function DatasheetIssuedEmail({
   sizingTitle,
   equipmentTag,
   datasheetUrl,
+  copy,
+  supersededBy,
 }: Props) {
   const facts = [
     { label: 'Datasheet', value: datasheetNumber },
@@ -22,10 +24,18 @@ export function DatasheetIssuedEmail({
   ];
   return (
     <MailLayout
-      preview={`Datasheet ${datasheetNumber} rev. ${revision} is ready`}
+      preview={`${copy ? 'Copy: ' : ''}Datasheet ${datasheetNumber} rev. ${revision} is ready`}
       footerNote={`Sent to ${accountName} because a datasheet was issued on its account.`}
     >
       <Para>Hello,</Para>
+      {copy && (
+        <Para>
+          This is a copy, sent again at your request, of the notice for revision {revision}.
+          {supersededBy
+            ? ` Revision ${revision} has since been superseded by revision ${supersededBy}; use ${supersededBy} for new work.`
+            : ''}
+        </Para>
+      )}
       <Para>
         Datasheet <strong>{datasheetNumber}</strong> revision <strong>{revision}</strong> has been issued for{' '}
         {accountName}. An issued revision never changes; any later change comes out as a new revision.

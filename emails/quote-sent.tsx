@@ -15,8 +15,12 @@ const lineStyle = {
   padding: '8px 0',
 } as const;
 
-/** A sales engineer sends a quote: what is in it and where to read it in full. */
-export function QuoteSentEmail({ accountName, quoteNumber, quoteTitle, senderName, quoteUrl, lines }: Props) {
+/**
+ * A sales engineer sends a quote: what is in it, its prices when it has them, and where to read it in full. A
+ * billing contact with no Dutywise sign-in yet gets the invitation to join the account as the way in.
+ */
+export function QuoteSentEmail(props: Props) {
+  const { accountName, quoteNumber, quoteTitle, senderName, quoteUrl, joinUrl, lines, total } = props;
   return (
     <MailLayout
       preview={`Quote ${quoteNumber} for ${accountName}: ${quoteTitle}`}
@@ -31,6 +35,7 @@ export function QuoteSentEmail({ accountName, quoteNumber, quoteTitle, senderNam
           { label: 'Quote', value: quoteNumber },
           { label: 'Title', value: quoteTitle },
           { label: 'Items', value: String(lines.length) },
+          ...(total ? [{ label: 'Total price', value: total }] : []),
         ]}
       />
       {lines.length > 0 && (
@@ -43,11 +48,27 @@ export function QuoteSentEmail({ accountName, quoteNumber, quoteTitle, senderNam
               {l.tag ? ` (${l.tag})` : ''}
               <br />
               <span style={{ color: mailColours.inkSoft }}>{l.headline}</span>
+              {l.price ? (
+                <>
+                  <br />
+                  {`Price: ${l.price}`}
+                </>
+              ) : null}
             </Text>
           ))}
         </Section>
       )}
-      <ActionButton href={quoteUrl}>Open the quote</ActionButton>
+      {joinUrl ? (
+        <>
+          <Para>
+            You have no Dutywise sign-in yet. Join {accountName} with the link below: set your name and a password, and
+            the quote opens. The link works once.
+          </Para>
+          <ActionButton href={joinUrl}>Join {accountName} and open the quote</ActionButton>
+        </>
+      ) : (
+        <ActionButton href={quoteUrl}>Open the quote</ActionButton>
+      )}
       <PreliminaryNotice />
     </MailLayout>
   );
@@ -61,7 +82,14 @@ export const quoteSentPreview: Props = {
   senderName: 'Mina Okafor',
   quoteUrl: 'http://localhost:3000/quotes/preview',
   lines: [
-    { title: 'Fuel gas preheater', tag: 'E-2204', headline: '412 kW duty', quantity: 1 },
-    { title: 'Fuel gas booster', tag: 'K-2210A/B', headline: '186 kW shaft power', quantity: 2 },
+    {
+      title: 'Fuel gas preheater',
+      tag: 'E-2204',
+      headline: '412 kW duty, 1,850 kg/h, 15.0 °C to 60.0 °C',
+      quantity: 1,
+      price: 'USD 48,200.00',
+    },
+    { title: 'Fuel gas booster', tag: 'K-2210A/B', headline: '186 kW shaft power', quantity: 2, price: null },
   ],
+  total: 'USD 48,200.00 for the 1 priced line (1 not priced)',
 };

@@ -10,6 +10,7 @@ import {
   uniqueIndex,
   uuid,
 } from 'drizzle-orm/pg-core';
+import { unitSystem } from './enums';
 import { users } from './users';
 
 /** A customer account: the company a vendor sizes equipment for, and the unit that subscribes. */
@@ -24,6 +25,9 @@ export const accounts = pgTable(
     // Site barometric pressure drives gauge conversions; altitude is kept when that is what was given.
     barometricPressureKpa: doublePrecision('barometric_pressure_kpa'),
     siteAltitudeM: doublePrecision('site_altitude_m'),
+    // The units the account's datasheets, e-mails and desk defaults use; the currency of its quote prices.
+    unitSystem: unitSystem('unit_system').notNull().default('si'),
+    currency: text('currency').notNull().default('USD'),
     stripeCustomerId: text('stripe_customer_id'),
     createdByUserId: uuid('created_by_user_id').references(() => users.id, { onDelete: 'set null' }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
@@ -36,6 +40,7 @@ export const accounts = pgTable(
       'accounts_baro_range',
       sql`${t.barometricPressureKpa} is null or ${t.barometricPressureKpa} between 50 and 110`,
     ),
+    check('accounts_currency_code', sql`${t.currency} ~ '^[A-Z]{3}$'`),
     check('accounts_altitude_range', sql`${t.siteAltitudeM} is null or ${t.siteAltitudeM} between -500 and 6000`),
   ],
 );

@@ -1,5 +1,5 @@
 import { sql } from 'drizzle-orm';
-import { check, index, integer, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { check, index, integer, numeric, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { accounts } from './accounts';
 import { quoteStatus } from './enums';
 import { sizings } from './sizings';
@@ -42,6 +42,8 @@ export const quoteItems = pgTable(
       .notNull()
       .references(() => sizings.id, { onDelete: 'restrict' }),
     quantity: integer('quantity').notNull().default(1),
+    // Optional price of one unit in the account's currency; exact decimal, read as a string.
+    unitPrice: numeric('unit_price', { precision: 14, scale: 2 }),
     position: integer('position').notNull().default(0),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
@@ -49,8 +51,33 @@ export const quoteItems = pgTable(
     uniqueIndex('quote_items_quote_sizing_uq').on(t.quoteId, t.sizingId),
     index('quote_items_sizing_idx').on(t.sizingId),
     check('quote_items_quantity_range', sql`${t.quantity} between 1 and 1000`),
+    check('quote_items_price_range', sql`${t.unitPrice} is null or ${t.unitPrice} >= 0`),
+  ],
+);
+
+/** The quote as one stored PDF (cover sheet, then each line's current datasheet), one row per time it was made. */
+export const quoteDocuments = pgTable(
+  'quote_documents',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    quoteId: uuid('quote_id')
+      .notNull()
+      .references(() => quotes.id, { onDelete: 'restrict' }),
+    accountId: uuid('account_id')
+      .notNull()
+      .references(() => accounts.id, { onDelete: 'restrict' }),
+    blobKey: text('blob_key').notNull(),
+    sha256: text('sha256').notNull(),
+    byteSize: integer('byte_size').notNull(),
+    madeByUserId: uuid('made_by_user_id').references(() => users.id, { onDelete: 'set null' }),
+    madeAt: timestamp('made_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [
+    index('quote_documents_quote_idx').on(t.quoteId, t.madeAt.desc()),
+    uniqueIndex('quote_documents_blob_uq').on(t.blobKey),
   ],
 );
 
 export type Quote = typeof quotes.$inferSelect;
 export type QuoteItem = typeof quoteItems.$inferSelect;
+export type QuoteDocument = typeof quoteDocuments.$inferSelect;

@@ -5,13 +5,13 @@ import {
   doublePrecision,
   index,
   integer,
+  json,
   jsonb,
   pgTable,
   text,
   timestamp,
   uniqueIndex,
   uuid,
-  type AnyPgColumn,
 } from 'drizzle-orm/pg-core';
 import { accounts } from './accounts';
 import { service } from './enums';
@@ -37,15 +37,18 @@ export const sizings = pgTable(
     service: service('service').notNull(),
     gasKey: text('gas_key').notNull(),
     gasLabel: text('gas_label').notNull(),
-    input: jsonb('input').notNull(),
+    // json, not jsonb: it keeps keys in the order given, so a mixture reads back in the order it was entered.
+    input: json('input').notNull(),
     result: jsonb('result').notNull(),
     engineVersion: text('engine_version').notNull(),
     // Design duty for heaters, shaft power for compressors.
     headlineKw: doublePrecision('headline_kw').notNull(),
     massFlowKgPerS: doublePrecision('mass_flow_kg_per_s').notNull(),
+    // The current version of the record; earlier versions are kept in sizing_versions.
     revision: integer('revision').notNull().default(1),
-    revisedFromId: uuid('revised_from_id').references((): AnyPgColumn => sizings.id, { onDelete: 'set null' }),
     createdByUserId: uuid('created_by_user_id').references(() => users.id, { onDelete: 'set null' }),
+    // Who saved the current version (the creator until the sizing is first revised).
+    updatedByUserId: uuid('updated_by_user_id').references(() => users.id, { onDelete: 'set null' }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
     // Title and notes as text-search words, unstemmed so a typed prefix finds the word; titles rank above notes.
@@ -73,5 +76,38 @@ export const sizings = pgTable(
   ],
 );
 
+/**
+ * An earlier version of a sizing, copied here when the sizing is revised: the record keeps its number
+ * and id (and so its datasheet), and the versions show what changed.
+ */
+export const sizingVersions = pgTable(
+  'sizing_versions',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    sizingId: uuid('sizing_id')
+      .notNull()
+      .references(() => sizings.id, { onDelete: 'cascade' }),
+    version: integer('version').notNull(),
+    title: text('title').notNull(),
+    equipmentTag: text('equipment_tag'),
+    notes: text('notes'),
+    gasLabel: text('gas_label').notNull(),
+    input: json('input').notNull(),
+    result: jsonb('result').notNull(),
+    engineVersion: text('engine_version').notNull(),
+    headlineKw: doublePrecision('headline_kw').notNull(),
+    massFlowKgPerS: doublePrecision('mass_flow_kg_per_s').notNull(),
+    createdByUserId: uuid('created_by_user_id').references(() => users.id, { onDelete: 'set null' }),
+    // When this version was saved (the sizing's updated_at at the time it was superseded).
+    savedAt: timestamp('saved_at', { withTimezone: true }).notNull(),
+    supersededAt: timestamp('superseded_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [
+    uniqueIndex('sizing_versions_uq').on(t.sizingId, t.version),
+    check('sizing_versions_version_positive', sql`${t.version} >= 1`),
+  ],
+);
+
 export type Sizing = typeof sizings.$inferSelect;
+export type SizingVersion = typeof sizingVersions.$inferSelect;
 export type NewSizing = typeof sizings.$inferInsert;

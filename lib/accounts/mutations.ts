@@ -1,7 +1,7 @@
 import 'server-only';
 import { and, eq, isNull, sql } from 'drizzle-orm';
 import { createHash, randomBytes } from 'node:crypto';
-import { db } from '@/db';
+import { db, type Tx } from '@/db';
 import { accounts, invitations, memberships, users } from '@/db/schema';
 import { writeAudit } from '@/lib/audit/write';
 import type { CurrentUser } from '@/lib/auth/current-user';
@@ -11,7 +11,9 @@ import { enqueueEmail } from '@/lib/email/enqueue';
 import { env } from '@/lib/env';
 import { AppError } from '@/lib/errors';
 import { enforce } from '@/lib/ratelimit/limit';
-import type { AccountInput, InviteInput } from './schema';
+import { PA_PER_PSI } from '@/lib/units';
+import { accountsNamed } from './duplicates';
+import type { AccountCreateInput, AccountInput, InviteInput } from './schema';
 
 const INVITE_DAYS = 14;
 
@@ -19,12 +21,35 @@ export function hashToken(token: string): string {
   return createHash('sha256').update(token).digest('hex');
 }
 
-/** Creates a customer account for a prospect (staff) and audits it in the same transaction. */
-export async function createAccount(user: CurrentUser, input: AccountInput): Promise<{ id: string }> {
+const PSI_TO_KPA = PA_PER_PSI / 1000;
+
+// The stored figures: a barometric pressure given in psia is kept in kPa.
+function siteColumns(input: AccountInput) {
+  const { barometricPressurePsia, ...rest } = input;
+  const kpa = barometricPressurePsia !== undefined ? barometricPressurePsia * PSI_TO_KPA : input.barometricPressureKpa;
+  return { ...rest, barometricPressureKpa: kpa };
+}
+
+/**
+ * Creates a customer account for a prospect (staff) and audits it in the same transaction. A company name that
+ * already exists is refused unless the user confirms this is a different company of the same name.
+ */
+export async function createAccount(user: CurrentUser, input: AccountCreateInput): Promise<{ id: string }> {
   return db.transaction(async (tx) => {
+    const { confirmDuplicateName, ...fields } = input;
+    const same = await accountsNamed(tx, fields.name);
+    if (same.length && !confirmDuplicateName)
+      throw new AppError(
+        'conflict',
+        `An account named “${same[0]!.name}”${same[0]!.site ? ` (${same[0]!.site})` : ''} already exists. Open it instead, or confirm that this is a different company.`,
+        [
+          { path: 'name', message: 'An account with this name already exists.' },
+          { path: 'confirmDuplicateName', message: 'Confirm to create a second one.' },
+        ],
+      );
     const [row] = await tx
       .insert(accounts)
-      .values({ ...input, createdByUserId: user.id })
+      .values({ ...siteColumns(fields), createdByUserId: user.id })
       .returning({ id: accounts.id });
     if (!row) throw new Error('account insert returned no row');
     await writeAudit(tx, {
@@ -48,8 +73,10 @@ export async function updateAccount(user: CurrentUser, accountId: string, input:
       site: input.site ?? null,
       billingContactName: input.billingContactName ?? null,
       billingContactEmail: input.billingContactEmail ?? null,
-      barometricPressureKpa: input.barometricPressureKpa ?? null,
+      barometricPressureKpa: siteColumns(input).barometricPressureKpa ?? null,
       siteAltitudeM: input.siteAltitudeM ?? null,
+      unitSystem: input.unitSystem,
+      currency: input.currency,
     };
     const res = await tx
       .update(accounts)
@@ -72,43 +99,71 @@ export async function updateAccount(user: CurrentUser, accountId: string, input:
 export async function inviteMember(user: CurrentUser, input: InviteInput): Promise<{ inviteUrl: string }> {
   assertAccountAccess(user, input.accountId);
   await enforce('invitations', ['invite.user', user.id], ['invite.account', input.accountId]);
-  const token = randomBytes(24).toString('base64url');
-  const inviteUrl = `${env.APP_URL}/invite/${token}`;
-  await db.transaction(async (tx) => {
+  return db.transaction(async (tx) => {
     const [acct] = await tx
       .select({ name: accounts.name })
       .from(accounts)
       .where(eq(accounts.id, input.accountId))
       .limit(1);
     if (!acct) throw new AppError('not_found', 'That account no longer exists.');
-    const [inv] = await tx
-      .insert(invitations)
-      .values({
-        accountId: input.accountId,
-        email: input.email,
-        tokenHash: hashToken(token),
-        invitedByUserId: user.id,
-        expiresAt: new Date(Date.now() + INVITE_DAYS * 86_400_000),
-      })
-      .returning({ id: invitations.id });
-    if (!inv) throw new Error('invitation insert returned no row');
-    await writeAudit(tx, {
-      actor: user,
-      action: 'member.invited',
-      entityType: 'account',
-      entityId: input.accountId,
-      accountId: input.accountId,
-      detail: { email: input.email },
-    });
+    const { inviteUrl, invitationId } = await createInvitation(tx, user, input);
     await enqueueEmail(tx, {
       template: 'invitation',
       to: input.email,
       accountId: input.accountId,
-      entity: { type: 'invitation', id: inv.id },
+      entity: { type: 'invitation', id: invitationId },
       props: { accountName: acct.name, inviterName: user.name, inviteUrl, expiresInDays: INVITE_DAYS },
     });
+    return { inviteUrl };
   });
-  return { inviteUrl };
+}
+
+/**
+ * Records an invitation to the account in the caller's transaction (audited) and returns its link; the caller
+ * sends it (the invitation e-mail, or the quote e-mail to a billing contact who is not yet a member). `next` is
+ * the app path the new member lands on after joining.
+ */
+export async function createInvitation(
+  tx: Tx,
+  user: CurrentUser,
+  input: InviteInput,
+  next?: string,
+): Promise<{ inviteUrl: string; invitationId: string }> {
+  const token = randomBytes(24).toString('base64url');
+  const inviteUrl = `${env.APP_URL}/invite/${token}${next ? `?next=${encodeURIComponent(next)}` : ''}`;
+  const [inv] = await tx
+    .insert(invitations)
+    .values({
+      accountId: input.accountId,
+      email: input.email,
+      tokenHash: hashToken(token),
+      invitedByUserId: user.id,
+      expiresAt: new Date(Date.now() + INVITE_DAYS * 86_400_000),
+    })
+    .returning({ id: invitations.id });
+  if (!inv) throw new Error('invitation insert returned no row');
+  await writeAudit(tx, {
+    actor: user,
+    action: 'member.invited',
+    entityType: 'account',
+    entityId: input.accountId,
+    accountId: input.accountId,
+    detail: { email: input.email, ...(next ? { next } : {}) },
+  });
+  return { inviteUrl, invitationId: inv.id };
+}
+
+/**
+ * Whether anyone already signs in to Dutywise with this e-mail. Only a new address can take an invitation
+ * (accepting one makes a user); an existing user reaches the quote by signing in.
+ */
+export async function hasUserWithEmail(tx: Tx, email: string): Promise<boolean> {
+  const [row] = await tx
+    .select({ id: users.id })
+    .from(users)
+    .where(eq(sql`lower(${users.email})`, email.toLowerCase()))
+    .limit(1);
+  return Boolean(row);
 }
 
 function liveInvitation(token: string) {

@@ -4,6 +4,7 @@ import { db } from '@/db';
 import { accounts, invitations, memberships, quotes, subscriptions, users } from '@/db/schema';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { accountScope, assertAccountAccess } from '@/lib/auth/guards';
+import { isStaff } from '@/lib/auth/roles';
 import { AppError } from '@/lib/errors';
 
 export type AccountSummary = {
@@ -24,7 +25,10 @@ export async function listAccounts(user: CurrentUser): Promise<AccountSummary[]>
       name: accounts.name,
       site: accounts.site,
       memberCount: sql<number>`(select count(*)::int from ${memberships} m where m.account_id = ${accounts.id})`,
-      quoteCount: sql<number>`(select count(*)::int from ${quotes} q where q.account_id = ${accounts.id})`,
+      // A customer counts only the quotes it can open (sent ones); staff count drafts too.
+      quoteCount: isStaff(user.role)
+        ? sql<number>`(select count(*)::int from ${quotes} q where q.account_id = ${accounts.id})`
+        : sql<number>`(select count(*)::int from ${quotes} q where q.account_id = ${accounts.id} and q.status <> 'draft')`,
       subscriptionStatus: sql<
         string | null
       >`(select s.status from ${subscriptions} s where s.account_id = ${accounts.id} order by s.updated_at desc limit 1)`,
@@ -43,6 +47,8 @@ export type AccountDetail = {
   billingContactEmail: string | null;
   barometricPressureKpa: number | null;
   siteAltitudeM: number | null;
+  unitSystem: 'si' | 'us';
+  currency: string;
   members: { id: string; name: string; email: string }[];
   pendingInvitations: { id: string; email: string; expiresAt: Date }[];
 };
@@ -58,6 +64,8 @@ export async function getAccount(user: CurrentUser, accountId: string): Promise<
       billingContactEmail: accounts.billingContactEmail,
       barometricPressureKpa: accounts.barometricPressureKpa,
       siteAltitudeM: accounts.siteAltitudeM,
+      unitSystem: accounts.unitSystem,
+      currency: accounts.currency,
     })
     .from(accounts)
     .where(eq(accounts.id, accountId))
@@ -79,15 +87,29 @@ export async function getAccount(user: CurrentUser, accountId: string): Promise<
   return { ...row, members, pendingInvitations };
 }
 
-/** Names for pickers (save-to-account, new quote), with each site's barometric pressure or altitude for the desk. */
-export async function listAccountOptions(
-  user: CurrentUser,
-): Promise<{ id: string; name: string; barometricPressureKpa: number | null; siteAltitudeM: number | null }[]> {
+export type AccountOption = {
+  id: string;
+  name: string;
+  site: string | null;
+  billingContactEmail: string | null;
+  barometricPressureKpa: number | null;
+  siteAltitudeM: number | null;
+  unitSystem: 'si' | 'us';
+};
+
+/**
+ * Accounts for pickers (save-to-account, new quote), with the site and billing contact that tell same-named
+ * accounts apart, and each site's barometric pressure or altitude and unit system for the desk.
+ */
+export async function listAccountOptions(user: CurrentUser): Promise<AccountOption[]> {
   const scope = accountScope(user);
   return db
     .select({
       id: accounts.id,
       name: accounts.name,
+      site: accounts.site,
+      billingContactEmail: accounts.billingContactEmail,
+      unitSystem: accounts.unitSystem,
       barometricPressureKpa: accounts.barometricPressureKpa,
       siteAltitudeM: accounts.siteAltitudeM,
     })

@@ -30,9 +30,22 @@ export const accountInputSchema = z.object({
     .optional()
     .transform((v) => (v ? v : undefined)),
   barometricPressureKpa: optionalNumber(50, 110, 'Site barometric pressure (kPa)'),
+  // US customary accounts give the barometric pressure in psia (50 to 110 kPa); it is stored in kPa.
+  barometricPressurePsia: optionalNumber(7.25, 15.95, 'Site barometric pressure (psia)'),
   siteAltitudeM: optionalNumber(-500, 6000, 'Site altitude (m)'),
+  unitSystem: z.enum(['si', 'us'], { message: 'Choose SI or US customary units.' }).default('si'),
+  currency: z
+    .string()
+    .trim()
+    .toUpperCase()
+    .regex(/^[A-Z]{3}$/, { message: 'Currency is a three-letter ISO 4217 code, such as USD or EUR.' })
+    .default('USD'),
 });
 export type AccountInput = z.output<typeof accountInputSchema>;
+
+/** Creating an account may go ahead despite a same-named one when the user confirms it is another company. */
+export const accountCreateSchema = accountInputSchema.extend({ confirmDuplicateName: z.boolean().optional() });
+export type AccountCreateInput = z.output<typeof accountCreateSchema>;
 
 export const accountUpdateSchema = accountInputSchema.extend({ accountId: z.uuid() });
 

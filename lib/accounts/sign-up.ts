@@ -7,6 +7,8 @@ import { hashPassword } from '@/lib/auth/local/passwords';
 import { mayMail, sendVerification } from '@/lib/auth/local/verification';
 import { enqueueEmail } from '@/lib/email/enqueue';
 import { env } from '@/lib/env';
+import { AppError } from '@/lib/errors';
+import { accountsNamed } from './duplicates';
 
 type SignUpInput = { name: string; email: string; password: string; company: string; site?: string };
 
@@ -40,6 +42,13 @@ export async function signUpCustomer(input: SignUpInput): Promise<void> {
   if (existing) return answerExisting({ ...existing, verified: Boolean(existing.verifiedAt) });
   if (!(await mayMail(input.email))) return;
   await db.transaction(async (tx) => {
+    // One company, one account: a second sign-up for it would split its sizings and datasheets in two.
+    if ((await accountsNamed(tx, input.company)).length)
+      throw new AppError(
+        'conflict',
+        `${input.company} already has a Dutywise account. Ask a colleague there, or your sales engineer, to invite you to it.`,
+        [{ path: 'company', message: 'This company already has an account; ask for an invitation to join it.' }],
+      );
     const [u] = await tx
       .insert(users)
       .values({ email: input.email, name: input.name, role: 'customer', passwordHash })

@@ -29,7 +29,8 @@ export type Permission =
   | 'batch:upload'
   | 'apikey:manage';
 
-// Support looks up anything but changes no engineering; admins manage people and roles.
+// Support looks up anything but changes no engineering; admins manage people and roles. Only vendor staff issue
+// datasheet revisions: a datasheet is the vendor's document.
 const grants: Record<UserRole, readonly Permission[]> = {
   sales_engineer: [
     'sizing:save',
@@ -50,7 +51,6 @@ const grants: Record<UserRole, readonly Permission[]> = {
     'quote:read',
     'account:read',
     'member:invite',
-    'datasheet:issue',
     'datasheet:read',
     'billing:manage',
     'batch:upload',

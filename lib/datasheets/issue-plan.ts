@@ -1,5 +1,5 @@
 import 'server-only';
-import { eq } from 'drizzle-orm';
+import { eq, sql } from 'drizzle-orm';
 import { db } from '@/db';
 import { accounts, datasheetRevisions, datasheets, users } from '@/db/schema';
 import type { CurrentUser } from '@/lib/auth/current-user';
@@ -10,7 +10,13 @@ import type { SizingDetail } from '@/lib/sizings/queries';
 import { compareRevisionLetters, nextRevisionLetter } from './revision-letter';
 import type { DatasheetSnapshot, RevisionEntry } from './snapshot';
 
-export type IssueAccount = { id: string; name: string; site: string | null; billingContactEmail: string | null };
+export type IssueAccount = {
+  id: string;
+  name: string;
+  site: string | null;
+  billingContactEmail: string | null;
+  unitSystem: 'si' | 'us';
+};
 
 /** What one attempt intends to write; the commit re-checks `previous` under the row lock. */
 export type IssuePlan = {
@@ -50,6 +56,7 @@ export async function loadIssueAccount(accountId: string): Promise<IssueAccount>
       name: accounts.name,
       site: accounts.site,
       billingContactEmail: accounts.billingContactEmail,
+      unitSystem: accounts.unitSystem,
     })
     .from(accounts)
     .where(eq(accounts.id, accountId))
@@ -65,6 +72,7 @@ async function history(datasheetId: string): Promise<RevisionEntry[]> {
       issuedAt: datasheetRevisions.issuedAt,
       note: datasheetRevisions.note,
       issuedByName: users.name,
+      sizingVersion: sql<number | null>`(${datasheetRevisions.snapshot} -> 'sizing' ->> 'revision')::int`,
     })
     .from(datasheetRevisions)
     .leftJoin(users, eq(users.id, datasheetRevisions.issuedByUserId))
@@ -75,6 +83,7 @@ async function history(datasheetId: string): Promise<RevisionEntry[]> {
       issuedAt: r.issuedAt.toISOString(),
       note: r.note,
       issuedByName: r.issuedByName,
+      ...(r.sizingVersion ? { sizingVersion: r.sizingVersion } : {}),
     }))
     .sort((a, b) => compareRevisionLetters(a.revision, b.revision));
 }
@@ -105,11 +114,18 @@ export async function planIssue(
     );
   const number = existing?.number ?? (await db.transaction((tx) => nextNumber(tx, 'datasheet')));
   const issuedAt = new Date();
-  const entry: RevisionEntry = { revision, issuedAt: issuedAt.toISOString(), note, issuedByName: user.name };
+  const entry: RevisionEntry = {
+    revision,
+    issuedAt: issuedAt.toISOString(),
+    note,
+    issuedByName: user.name,
+    sizingVersion: sizing.revision,
+  };
   const snapshot: DatasheetSnapshot = {
     schemaVersion: 1,
     datasheet: { number, revision, issuedAt: entry.issuedAt, note, issuedByName: user.name },
     account: { id: account.id, name: account.name, site: account.site },
+    units: account.unitSystem,
     sizing: {
       id: sizing.id,
       number: sizing.number,

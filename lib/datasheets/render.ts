@@ -1,6 +1,7 @@
 import 'server-only';
 import { createElement } from 'react';
 import { logger } from '@/lib/log/logger';
+import { withSheetUnits } from './format';
 import type { Block } from './pdf/blocks';
 import { DatasheetDocument } from './pdf/document';
 import { loadPdfKit, type PdfKit } from './pdf/kit';
@@ -30,7 +31,8 @@ export type RenderOptions = { layout?: 'planned' | 'flow'; capacityPt?: number }
  */
 export async function renderDatasheetPdf(snapshot: DatasheetSnapshot, opts: RenderOptions = {}): Promise<Buffer> {
   const kit = await loadPdfKit();
-  const blocks = datasheetBlocks(snapshot);
+  // Every figure's text is made here, in one synchronous pass, in the account's units.
+  const blocks = withSheetUnits(snapshot.units ?? 'si', () => datasheetBlocks(snapshot));
   const plan = opts.layout === 'flow' ? null : planPages(blocks, opts.capacityPt);
   if (plan) {
     const bytes = await renderWith(kit, snapshot, blocks, plan);

@@ -28,3 +28,9 @@ export function nextRevisionLetter(previous: string | null): string | null {
 export function compareRevisionLetters(a: string, b: string): number {
   return (revisionIndexOf(a) ?? -1) - (revisionIndexOf(b) ?? -1);
 }
+
+/** How a revision stands among the datasheet's revisions (given in issue order): current, or superseded by the next. */
+export function revisionStatus(revisions: readonly { revision: string }[], index: number): string {
+  const next = revisions[index + 1];
+  return next ? `Superseded by ${next.revision}` : 'Current';
+}

@@ -1,7 +1,13 @@
 import type { SizingResult } from '@/lib/engine';
 
-/** One line of the revision table. */
-export type RevisionEntry = { revision: string; issuedAt: string; note: string | null; issuedByName: string | null };
+/** One line of the revision table; `sizingVersion` is the version of the sizing the revision was issued from. */
+export type RevisionEntry = {
+  revision: string;
+  issuedAt: string;
+  note: string | null;
+  issuedByName: string | null;
+  sizingVersion?: number;
+};
 
 /**
  * Everything a revision was rendered from, stored with it: re-rendering the snapshot gives the same
@@ -11,6 +17,8 @@ export type DatasheetSnapshot = {
   schemaVersion: 1;
   datasheet: { number: string; revision: string; issuedAt: string; note: string | null; issuedByName: string };
   account: { id: string; name: string; site: string | null };
+  /** The account's unit system when issued (SI for revisions issued before accounts had one). */
+  units?: 'si' | 'us';
   sizing: {
     id: string;
     number: string;

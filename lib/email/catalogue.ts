@@ -8,7 +8,10 @@ export type EmailProps = {
     quoteTitle: string;
     senderName: string;
     quoteUrl: string;
-    lines: { title: string; tag: string | null; headline: string; quantity: number }[];
+    /** An invitation to join the account, for a billing contact with no Dutywise sign-in yet. */
+    joinUrl?: string | null;
+    lines: { title: string; tag: string | null; headline: string; quantity: number; price?: string | null }[];
+    total?: string | null;
   };
   'datasheet-issued': {
     accountName: string;
@@ -17,6 +20,10 @@ export type EmailProps = {
     sizingTitle: string;
     equipmentTag: string | null;
     datasheetUrl: string;
+    /** Set when support re-sends the notice: the subject and body say it is a copy. */
+    copy?: boolean;
+    /** The later revision that replaces this one, when a superseded revision is re-sent. */
+    supersededBy?: string | null;
   };
   'payment-failed': { accountName: string; billingUrl: string; graceDays: number };
   'subscription-ending': { accountName: string; periodEnd: string; billingUrl: string };
@@ -50,7 +57,9 @@ export function subjectFor<T extends EmailTemplate>(template: T, props: EmailPro
     }
     case 'datasheet-issued': {
       const p = props as EmailProps['datasheet-issued'];
-      return `Datasheet ${p.datasheetNumber} rev. ${p.revision} issued`;
+      const base = `Datasheet ${p.datasheetNumber} rev. ${p.revision}`;
+      if (!p.copy) return `${base} issued`;
+      return `Copy: ${base}${p.supersededBy ? ` (superseded by rev. ${p.supersededBy})` : ''}`;
     }
     case 'payment-failed':
       return 'Dutywise subscription payment failed';

@@ -25,11 +25,19 @@ export const emailPropsSchemas: { [T in EmailTemplate]: z.ZodType<EmailProps[T]>
     quoteTitle: name,
     senderName: name,
     quoteUrl: link,
+    joinUrl: link.nullable().optional(),
     lines: z
       .array(
-        z.object({ title: name, tag: z.string().nullable(), headline: z.string(), quantity: z.number().int().min(1) }),
+        z.object({
+          title: text,
+          tag: z.string().nullable(),
+          headline: z.string(),
+          quantity: z.number().int().min(1),
+          price: z.string().nullable().optional(),
+        }),
       )
       .max(200),
+    total: z.string().nullable().optional(),
   }),
   'datasheet-issued': z.object({
     accountName: name,
@@ -38,6 +46,8 @@ export const emailPropsSchemas: { [T in EmailTemplate]: z.ZodType<EmailProps[T]>
     sizingTitle: name,
     equipmentTag: z.string().nullable(),
     datasheetUrl: link,
+    copy: z.boolean().optional(),
+    supersededBy: z.string().max(2).nullable().optional(),
   }),
   'payment-failed': z.object({ accountName: name, billingUrl: link, graceDays: z.number().int().min(0).max(365) }),
   'subscription-ending': z.object({ accountName: name, periodEnd: text, billingUrl: link }),

@@ -1,5 +1,5 @@
 import 'server-only';
-import { and, desc, eq, sql } from 'drizzle-orm';
+import { and, desc, eq, inArray, or, sql } from 'drizzle-orm';
 import { db } from '@/db';
 import { outbox } from '@/db/schema';
 import { env } from '@/lib/env';
@@ -22,6 +22,17 @@ export type EmailLogEntry = {
  * look-up. Callers authorise first: this reads across accounts.
  */
 export async function listEmailsFor(entityType: string, entityId: string): Promise<EmailLogEntry[]> {
+  return listEmailsForAny([{ type: entityType, ids: [entityId] }]);
+}
+
+/** The mail sent about any of several things (a datasheet and each of its revisions), newest first. */
+export async function listEmailsForAny(entities: { type: string; ids: string[] }[]): Promise<EmailLogEntry[]> {
+  const match = or(
+    ...entities
+      .filter((e) => e.ids.length)
+      .map((e) => and(eq(outbox.entityType, e.type), inArray(outbox.entityId, e.ids))),
+  );
+  if (!match) return [];
   const rows = await db
     .select({
       id: outbox.id,
@@ -39,7 +50,7 @@ export async function listEmailsFor(entityType: string, entityId: string): Promi
       lastError: outbox.lastError,
     })
     .from(outbox)
-    .where(and(eq(outbox.entityType, entityType), eq(outbox.entityId, entityId)))
+    .where(match)
     .orderBy(desc(outbox.createdAt))
     .limit(100);
   // A retry time means something only while the mail is still waiting.

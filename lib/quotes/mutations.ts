@@ -1,5 +1,5 @@
 import 'server-only';
-import { and, eq, inArray, sql } from 'drizzle-orm';
+import { and, asc, eq, inArray, sql } from 'drizzle-orm';
 import { db, type Tx } from '@/db';
 import { accounts, quoteItems, quotes, sizings } from '@/db/schema';
 import { writeAudit } from '@/lib/audit/write';
@@ -9,7 +9,9 @@ import { enqueueEmail } from '@/lib/email/enqueue';
 import { env } from '@/lib/env';
 import { AppError } from '@/lib/errors';
 import { nextNumber } from '@/lib/numbering/next-number';
-import { formatHeadline } from '@/lib/sizings/headline';
+import { createInvitation, hasUserWithEmail } from '@/lib/accounts/mutations';
+import { lineFigures } from './line-figures';
+import { formatMoney, formatPriceTotal, priceCents, priceTotals } from './prices';
 import type { QuoteCreateInput } from './schema';
 
 async function lockQuote(tx: Tx, user: CurrentUser, quoteId: string) {
@@ -161,6 +163,32 @@ export async function removeQuoteItem(user: CurrentUser, quoteId: string, itemId
   });
 }
 
+/** Sets or clears one line's unit price (draft quotes only: a sent quote's prices are what the customer saw). */
+export async function setQuoteLinePrice(
+  user: CurrentUser,
+  input: { quoteId: string; itemId: string; unitPrice: string | null },
+): Promise<void> {
+  await db.transaction(async (tx) => {
+    const q = await lockQuote(tx, user, input.quoteId);
+    if (q.status !== 'draft')
+      throw new AppError('conflict', `Quote ${q.number} is ${q.status}; prices are fixed once it is sent.`);
+    const res = await tx
+      .update(quoteItems)
+      .set({ unitPrice: input.unitPrice })
+      .where(and(eq(quoteItems.id, input.itemId), eq(quoteItems.quoteId, input.quoteId)))
+      .returning({ id: quoteItems.id });
+    if (!res[0]) throw new AppError('not_found', 'That line is not on this quote.');
+    await writeAudit(tx, {
+      actor: user,
+      action: 'quote.price_set',
+      entityType: 'quote',
+      entityId: input.quoteId,
+      accountId: q.accountId,
+      detail: { itemId: input.itemId, unitPrice: input.unitPrice },
+    });
+  });
+}
+
 export async function setQuoteStatus(
   user: CurrentUser,
   quoteId: string,
@@ -180,12 +208,21 @@ export async function setQuoteStatus(
   });
 }
 
-/** Marks the quote sent and queues the e-mail to the account's billing contact, atomically. */
-export async function sendQuote(user: CurrentUser, quoteId: string): Promise<{ to: string }> {
+/**
+ * Marks the quote sent and queues the e-mail to the account's billing contact, atomically. A contact who has no
+ * Dutywise sign-in yet gets an invitation to join the account in the same e-mail, landing on the quote (without
+ * it, "Create an account" would make them a second company).
+ */
+export async function sendQuote(user: CurrentUser, quoteId: string): Promise<{ to: string; invited: boolean }> {
   return db.transaction(async (tx) => {
     const q = await lockQuote(tx, user, quoteId);
     const [acct] = await tx
-      .select({ name: accounts.name, email: accounts.billingContactEmail })
+      .select({
+        name: accounts.name,
+        email: accounts.billingContactEmail,
+        currency: accounts.currency,
+        unitSystem: accounts.unitSystem,
+      })
       .from(accounts)
       .where(eq(accounts.id, q.accountId))
       .limit(1);
@@ -201,15 +238,23 @@ export async function sendQuote(user: CurrentUser, quoteId: string): Promise<{ t
         service: sizings.service,
         headlineKw: sizings.headlineKw,
         quantity: quoteItems.quantity,
+        unitPrice: quoteItems.unitPrice,
+        result: sizings.result,
       })
       .from(quoteItems)
       .innerJoin(sizings, eq(sizings.id, quoteItems.sizingId))
-      .where(eq(quoteItems.quoteId, quoteId));
+      .where(eq(quoteItems.quoteId, quoteId))
+      .orderBy(asc(quoteItems.position), asc(quoteItems.createdAt));
     if (!lines.length) throw new AppError('unprocessable', 'Add at least one sizing before sending the quote.');
     await tx
       .update(quotes)
       .set({ status: 'sent', sentAt: new Date(), updatedAt: new Date() })
       .where(eq(quotes.id, quoteId));
+    const invited = !(await hasUserWithEmail(tx, acct.email));
+    const join = invited
+      ? await createInvitation(tx, user, { accountId: q.accountId, email: acct.email }, `/quotes/${quoteId}`)
+      : null;
+    const totals = priceTotals(lines);
     await enqueueEmail(tx, {
       template: 'quote-sent',
       to: acct.email,
@@ -221,12 +266,15 @@ export async function sendQuote(user: CurrentUser, quoteId: string): Promise<{ t
         quoteTitle: q.title,
         senderName: user.name,
         quoteUrl: `${env.APP_URL}/quotes/${quoteId}`,
+        joinUrl: join?.inviteUrl ?? null,
         lines: lines.map((l) => ({
           title: l.title,
           tag: l.tag,
-          headline: formatHeadline(l.service, l.headlineKw),
+          headline: lineFigures(l.service, l.headlineKw, l.result, acct.unitSystem),
           quantity: l.quantity,
+          price: l.unitPrice === null ? null : formatMoney(priceCents(l.unitPrice)! * l.quantity, acct.currency),
         })),
+        total: formatPriceTotal(totals, acct.currency),
       },
     });
     await writeAudit(tx, {
@@ -235,8 +283,8 @@ export async function sendQuote(user: CurrentUser, quoteId: string): Promise<{ t
       entityType: 'quote',
       entityId: quoteId,
       accountId: q.accountId,
-      detail: { to: acct.email },
+      detail: { to: acct.email, invited },
     });
-    return { to: acct.email };
+    return { to: acct.email, invited };
   });
 }

@@ -1,9 +1,10 @@
 import 'server-only';
-import { and, asc, desc, eq, ilike, or, sql, type SQL } from 'drizzle-orm';
+import { and, asc, desc, eq, ilike, ne, or, sql, type SQL } from 'drizzle-orm';
 import { db } from '@/db';
 import { accounts, quoteItems, quotes, sizings, users } from '@/db/schema';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { accountScope, assertAccountAccess } from '@/lib/auth/guards';
+import { isStaff } from '@/lib/auth/roles';
 import { AppError } from '@/lib/errors';
 import type { QuoteFilter } from './schema';
 
@@ -19,10 +20,17 @@ export type QuoteSummary = {
   sentAt: Date | null;
 };
 
+/** Customers see a quote once it is sent; drafts, with their internal lines, stay with vendor staff. */
+function visibleToCustomer(user: CurrentUser): SQL | undefined {
+  return isStaff(user.role) ? undefined : ne(quotes.status, 'draft');
+}
+
 export async function listQuotes(user: CurrentUser, filter: QuoteFilter = {}): Promise<QuoteSummary[]> {
   const scope = accountScope(user);
   const conds: SQL[] = [];
   if (scope) conds.push(eq(quotes.accountId, scope));
+  const visible = visibleToCustomer(user);
+  if (visible) conds.push(visible);
   if (filter.status) conds.push(eq(quotes.status, filter.status));
   if (filter.accountId) conds.push(eq(quotes.accountId, filter.accountId));
   if (filter.q) {
@@ -59,12 +67,15 @@ export type QuoteLine = {
   gasLabel: string;
   headlineKw: number;
   quantity: number;
+  /** Unit price in the account's currency, exact decimal; null when the line is not priced. */
+  unitPrice: string | null;
 };
 
 export type QuoteDetail = QuoteSummary & {
   notes: string | null;
   createdByName: string | null;
   billingContactEmail: string | null;
+  currency: string;
   lines: QuoteLine[];
 };
 
@@ -79,6 +90,7 @@ export async function getQuote(user: CurrentUser, quoteId: string): Promise<Quot
       accountId: quotes.accountId,
       accountName: accounts.name,
       billingContactEmail: accounts.billingContactEmail,
+      currency: accounts.currency,
       createdAt: quotes.createdAt,
       sentAt: quotes.sentAt,
       createdByName: users.name,
@@ -88,7 +100,7 @@ export async function getQuote(user: CurrentUser, quoteId: string): Promise<Quot
     .leftJoin(users, eq(users.id, quotes.createdByUserId))
     .where(eq(quotes.id, quoteId))
     .limit(1);
-  if (!q) throw new AppError('not_found', 'Not found');
+  if (!q || (!isStaff(user.role) && q.status === 'draft')) throw new AppError('not_found', 'Not found');
   assertAccountAccess(user, q.accountId);
   const lines = await db
     .select({
@@ -101,6 +113,7 @@ export async function getQuote(user: CurrentUser, quoteId: string): Promise<Quot
       gasLabel: sizings.gasLabel,
       headlineKw: sizings.headlineKw,
       quantity: quoteItems.quantity,
+      unitPrice: quoteItems.unitPrice,
     })
     .from(quoteItems)
     .innerJoin(sizings, eq(sizings.id, quoteItems.sizingId))

@@ -25,6 +25,25 @@ export const quoteItemSchema = z.object({
     .default(1),
 });
 
+/** A line's unit price in the account's currency; empty clears it. */
+export const quoteLinePriceSchema = z.object({
+  quoteId: z.uuid(),
+  itemId: z.uuid(),
+  unitPrice: z
+    .string()
+    .trim()
+    .transform((v) => v.replace(/,/g, ''))
+    .pipe(
+      z.union([
+        z.literal(''),
+        z.string().regex(/^\d{1,12}(\.\d{1,2})?$/, {
+          message: 'Enter the unit price as a number with up to 2 decimals, e.g. 12500 or 12500.50.',
+        }),
+      ]),
+    )
+    .transform((v) => (v === '' ? null : v)),
+});
+
 export const quoteStatusSchema = z.object({ quoteId: z.uuid(), status: z.enum(quoteStatuses) });
 export const quoteIdSchema = z.object({ quoteId: z.uuid() });
 export const quoteItemRemoveSchema = z.object({ quoteId: z.uuid(), itemId: z.uuid() });

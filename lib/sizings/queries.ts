@@ -1,5 +1,6 @@
 import 'server-only';
 import { and, desc, eq, type SQL } from 'drizzle-orm';
+import { alias } from 'drizzle-orm/pg-core';
 import { db } from '@/db';
 import { accounts, sizings, users } from '@/db/schema';
 import type { CurrentUser } from '@/lib/auth/current-user';
@@ -54,10 +55,17 @@ export type SizingDetail = SizingSummary & {
   input: unknown;
   result: unknown;
   engineVersion: string;
+  /** The current version; earlier ones are in sizing_versions. */
   revision: number;
-  revisedFromId: string | null;
+  /** When the current version was saved. */
+  updatedAt: Date;
   createdByName: string | null;
+  updatedByName: string | null;
+  massFlowKgPerS: number;
+  billingContactEmail: string | null;
 };
+
+const updater = alias(users, 'updater');
 
 export async function getSizing(user: CurrentUser, sizingId: string): Promise<SizingDetail> {
   const [row] = await db
@@ -68,12 +76,16 @@ export async function getSizing(user: CurrentUser, sizingId: string): Promise<Si
       result: sizings.result,
       engineVersion: sizings.engineVersion,
       revision: sizings.revision,
-      revisedFromId: sizings.revisedFromId,
+      updatedAt: sizings.updatedAt,
       createdByName: users.name,
+      updatedByName: updater.name,
+      massFlowKgPerS: sizings.massFlowKgPerS,
+      billingContactEmail: accounts.billingContactEmail,
     })
     .from(sizings)
     .innerJoin(accounts, eq(accounts.id, sizings.accountId))
     .leftJoin(users, eq(users.id, sizings.createdByUserId))
+    .leftJoin(updater, eq(updater.id, sizings.updatedByUserId))
     .where(eq(sizings.id, sizingId))
     .limit(1);
   if (!row) throw new AppError('not_found', 'Not found');

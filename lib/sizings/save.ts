@@ -7,34 +7,13 @@ import type { CurrentUser } from '@/lib/auth/current-user';
 import { assertAccountAccess } from '@/lib/auth/guards';
 import { can } from '@/lib/auth/roles';
 import { assertSubscribed } from '@/lib/billing/entitlements';
-import { calculate, ENGINE_VERSION, SizingInputError, type SizingResult } from '@/lib/engine';
+import { calculate, SizingInputError, type SizingResult } from '@/lib/engine';
 import { AppError } from '@/lib/errors';
 import { nextNumber, nextNumbers } from '@/lib/numbering/next-number';
 import { addQuoteItem } from '@/lib/quotes/mutations';
+import { computedColumns, type Computed } from './columns';
+import { reviseSizing } from './revise';
 import type { SizingMeta } from './schema';
-
-// Short gas names for lists and search: the preset's key, or the mixture's main components.
-function gasKeyAndLabel(gas: unknown): { key: string; label: string } {
-  const g = (gas ?? {}) as { preset?: unknown; components?: unknown; relativeHumidityPercent?: unknown };
-  if (typeof g.preset === 'string') {
-    const rh = typeof g.relativeHumidityPercent === 'number' ? ` ${g.relativeHumidityPercent}% RH` : '';
-    return { key: g.preset, label: `${g.preset.replace(/-/g, ' ')}${rh}` };
-  }
-  if (g.components && typeof g.components === 'object') {
-    const parts = Object.entries(g.components as Record<string, number>)
-      .filter(([, v]) => typeof v === 'number' && v > 0)
-      .sort((a, b) => b[1] - a[1])
-      .slice(0, 4)
-      .map(([k, v]) => `${k} ${(v * 100).toFixed(v < 0.1 ? 1 : 0)}%`);
-    return { key: 'mixture', label: `mixture: ${parts.join(', ')}` };
-  }
-  return { key: 'unknown', label: 'unknown' };
-}
-
-/** The engine's answer reduced to the scalar columns that lists, filters and search use. */
-export function headlineOf(result: SizingResult): number {
-  return result.service === 'heater' ? result.heater.designDutyKw : result.compressor.shaftPowerKw;
-}
 
 /**
  * Pins the equation of state the engine used into the stored input, so reopening the sizing later sizes it on the
@@ -60,26 +39,15 @@ export function computeForSave(input: unknown): { input: unknown; result: Sizing
   }
 }
 
-type Computed = { input: unknown; result: SizingResult };
-
 function sizingValues(user: CurrentUser, meta: SizingMeta, computed: Computed, number: string, revision: number) {
-  const gas = gasKeyAndLabel((computed.input as { gas?: unknown }).gas);
   return {
     number,
     accountId: meta.accountId,
     title: meta.title,
     equipmentTag: meta.equipmentTag,
     notes: meta.notes,
-    service: computed.result.service,
-    gasKey: gas.key,
-    gasLabel: gas.label,
-    input: computed.input,
-    result: computed.result,
-    engineVersion: ENGINE_VERSION,
-    headlineKw: headlineOf(computed.result),
-    massFlowKgPerS: computed.result.massFlowKgPerS,
+    ...computedColumns(computed),
     revision,
-    revisedFromId: meta.revisedFromId,
     createdByUserId: user.id,
   };
 }
@@ -110,7 +78,7 @@ export async function saveSizing(
   user: CurrentUser,
   meta: SizingMeta,
   rawInput: unknown,
-): Promise<{ id: string; number: string }> {
+): Promise<{ id: string; number: string; version: number }> {
   assertAccountAccess(user, meta.accountId);
   if (meta.quoteId && !can(user.role, 'quote:manage'))
     throw new AppError('forbidden', 'Only vendor staff add sizings to quotes.');
@@ -122,27 +90,21 @@ export async function saveSizing(
       throw new AppError('not_found', 'That customer account does not exist.', [
         { path: 'accountId', message: 'Unknown account.' },
       ]);
-    let revision = 1;
     if (meta.revisedFromId) {
-      const [prev] = await tx
-        .select({ accountId: sizings.accountId, revision: sizings.revision })
-        .from(sizings)
-        .where(eq(sizings.id, meta.revisedFromId))
-        .limit(1);
-      if (!prev || prev.accountId !== meta.accountId)
-        throw new AppError('unprocessable', 'The sizing being revised belongs to another account.');
-      revision = prev.revision + 1;
+      const row = await reviseSizing(tx, user, { ...meta, revisedFromId: meta.revisedFromId }, computed);
+      if (meta.quoteId) await addQuoteItem(user, meta.quoteId, row.id, 1, tx);
+      return row;
     }
-    const row = await insertSizing(tx, user, meta, computed, revision);
+    const row = await insertSizing(tx, user, meta, computed);
     if (meta.quoteId) await addQuoteItem(user, meta.quoteId, row.id, 1, tx);
     await writeAudit(tx, {
       actor: user,
-      action: meta.revisedFromId ? 'sizing.revised' : 'sizing.created',
+      action: 'sizing.created',
       entityType: 'sizing',
       entityId: row.id,
       accountId: meta.accountId,
       detail: { number: row.number, quoteId: meta.quoteId ?? null },
     });
-    return row;
+    return { ...row, version: 1 };
   });
 }

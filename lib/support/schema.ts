@@ -63,3 +63,22 @@ export const supportSearchSchema = z.object({
     .catch(25),
 });
 export type SupportSearch = z.output<typeof supportSearchSchema>;
+
+/** Support's resend of a datasheet notice: which revision (the latest when left out) and to whom (the billing contact). */
+export const resendSchema = z.object({
+  sizingId: z.uuid({ message: 'Unknown sizing.' }),
+  revisionId: z
+    .union([z.literal(''), z.uuid({ message: 'Choose a revision of this datasheet.' })])
+    .optional()
+    .transform((v) => v || undefined),
+  to: z
+    .union([
+      z.literal(''),
+      z.email({ message: 'Enter one e-mail address, such as name@example.com.' }).max(320, {
+        message: 'The address is limited to 320 characters.',
+      }),
+    ])
+    .optional()
+    .transform((v) => v?.trim() || undefined),
+});
+export type ResendInput = z.output<typeof resendSchema>;

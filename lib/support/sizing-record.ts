@@ -4,7 +4,7 @@ import { db } from '@/db';
 import { auditLog, datasheetRevisions, datasheets, users } from '@/db/schema';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { can } from '@/lib/auth/roles';
-import { listEmailsFor, type EmailLogEntry } from '@/lib/email/queries';
+import { listEmailsForAny, type EmailLogEntry } from '@/lib/email/queries';
 
 export type TrailEntry = {
   id: number;
@@ -58,7 +58,10 @@ export async function sizingTrail(user: CurrentUser, sizingId: string): Promise<
     .limit(200);
 }
 
-/** E-mails sent about the sizing's datasheet (support and admin only). */
+/**
+ * E-mails sent about the sizing's datasheet (support and admin only): the issue notices, recorded against each
+ * revision, and any older copies recorded against the datasheet itself.
+ */
 export async function sizingEmails(user: CurrentUser, sizingId: string): Promise<EmailLogEntry[] | null> {
   if (!can(user.role, 'audit:read')) return null;
   const [ds] = await db
@@ -66,5 +69,13 @@ export async function sizingEmails(user: CurrentUser, sizingId: string): Promise
     .from(datasheets)
     .where(eq(datasheets.sizingId, sizingId))
     .limit(1);
-  return ds ? listEmailsFor('datasheet', ds.id) : [];
+  if (!ds) return [];
+  const revs = await db
+    .select({ id: datasheetRevisions.id })
+    .from(datasheetRevisions)
+    .where(eq(datasheetRevisions.datasheetId, ds.id));
+  return listEmailsForAny([
+    { type: 'datasheet', ids: [ds.id] },
+    { type: 'datasheet_revision', ids: revs.map((r) => r.id) },
+  ]);
 }

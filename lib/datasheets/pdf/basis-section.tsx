@@ -1,6 +1,6 @@
 /** @jsxRuntime automatic @jsxImportSource react */
 import { EQUATION_NAMES } from '@/lib/engine';
-import { formatFixed, unitLabel } from '../format';
+import { formatKpa, unitLabel } from '../format';
 import type { DatasheetSnapshot } from '../snapshot';
 import { block, headingBlock, kvBlocks, type Block } from './blocks';
 import { pdfKit } from './kit';
@@ -31,7 +31,7 @@ export function basisBlocks(s: DatasheetSnapshot): Block[] {
       ['Standard flows reported', bases],
       [
         'Barometric pressure',
-        `${formatFixed(b.barometricPressureKpa, 3)} kPa (${b.barometricPressureSource})`,
+        `${formatKpa(b.barometricPressureKpa)} (${b.barometricPressureSource})`,
         'gauge pressures convert with this',
       ],
       [

@@ -81,7 +81,10 @@ function TableLine({
   );
 }
 
-/** A table as blocks: a shaded header row that stays with the first row, then one block per row. */
+/**
+ * A table as blocks: a shaded header row, then one block per row, each kept with the next so the page planner
+ * never splits a table across pages (a table taller than a page falls back to the flowing layout).
+ */
 export function tableBlocks(key: string, columns: Column[], rows: string[][], mono = true): Block[] {
   const height = (cells: string[], face: 'sans' | 'mono') =>
     rowHeight(columns.map((c, j) => ({ text: cells[j], widthPt: pct(c.widthPct) - 4, face: j > 0 ? face : 'sans' })));
@@ -100,6 +103,7 @@ export function tableBlocks(key: string, columns: Column[], rows: string[][], mo
       key: `${key}${i}`,
       heightPt: height(cells, mono ? 'mono' : 'sans'),
       node: <TableLine columns={columns} cells={cells} head={false} mono={mono} />,
+      keepWithNext: i < rows.length - 1,
     })),
   ];
 }

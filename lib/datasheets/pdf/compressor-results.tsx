@@ -1,9 +1,11 @@
 /** @jsxRuntime automatic @jsxImportSource react */
 import type { CompressorResult } from '@/lib/engine';
 import {
+  formatActualM3PerH,
   formatAmps,
   formatFigure,
   formatFixed,
+  formatKgPerH,
   formatKw,
   formatPercent,
   formatRating,
@@ -46,9 +48,7 @@ export function compressorResultBlocks(r: CompressorResult): Block[] {
       `total ${formatKw(m.totalIntercoolerDutyKw)}`,
     ],
     ...(m.aftercoolerDutyKw !== null ? [['Aftercooler duty', formatKw(m.aftercoolerDutyKw)] as KvRow] : []),
-    ...(m.condensateKgPerH > 0
-      ? [['Condensate knocked out', `${formatFigure(m.condensateKgPerH)} kg/h`] as KvRow]
-      : []),
+    ...(m.condensateKgPerH > 0 ? [['Condensate knocked out', formatKgPerH(m.condensateKgPerH)] as KvRow] : []),
     ...(c.idealGasDifferencePercent !== null
       ? [
           [
@@ -76,7 +76,7 @@ export function compressorResultBlocks(r: CompressorResult): Block[] {
         ]
       : []),
     ['Suggested stages', suggestion(c.suggestedStages, c.dischargeTemperatureLimitC)],
-    ['Discharge actual flow', `${formatFigure(c.dischargeActualFlowM3PerH)} m³/h`],
+    ['Discharge actual flow', formatActualM3PerH(c.dischargeActualFlowM3PerH)],
   ];
   return [
     headingBlock('3', 'Results: compressor'),

@@ -1,5 +1,18 @@
 import { METHOD_NAMES, headlineMethod, type CompressionMethodResult, type CompressorBlock } from '@/lib/engine';
-import { formatFigure, formatFixed, formatPercent } from '../format';
+import {
+  densityFigure,
+  densityUnit,
+  formatFigure,
+  formatFixed,
+  formatKgPerH,
+  formatPercent,
+  massFlowFigure,
+  massFlowUnit,
+  pressureFigure,
+  pressureUnit,
+  temperatureFigure,
+  temperatureUnit,
+} from '../format';
 import { tableBlocks, type Block, type Column } from './blocks';
 
 export const methodLabel = (basis: CompressorBlock['basis']) => METHOD_NAMES[basis];
@@ -12,27 +25,27 @@ export function stageStreamBlocks(c: CompressorBlock): Block[] {
   const m = headlineMethod(c);
   const rows = m.stages.map((st) => [
     String(st.stage),
-    formatFigure(st.inletPressureKpa),
-    formatFigure(st.dischargePressureKpa),
-    formatFixed(st.inletTemperatureC, 1),
-    formatFixed(st.dischargeTemperatureC, 1),
+    pressureFigure(st.inletPressureKpa),
+    pressureFigure(st.dischargePressureKpa),
+    temperatureFigure(st.inletTemperatureC),
+    temperatureFigure(st.dischargeTemperatureC),
     `${formatFixed(st.inletZ, 4)} / ${formatFixed(st.dischargeZ, 4)}`,
-    formatFigure(st.inletDensityKgPerM3),
+    densityFigure(st.inletDensityKgPerM3),
     formatFigure(st.inletActualFlowM3PerH),
     formatFigure(st.inletActualFlowAcfm),
-    formatFigure(st.massFlowKgPerS * 3600),
+    massFlowFigure(st.massFlowKgPerS * 3600),
   ]);
   const columns: Column[] = [
     { title: 'Stage', widthPct: 7 },
-    col('p in kPa a', 10),
-    col('p out kPa a', 11),
-    col('T in °C', 9),
-    col('T out °C', 9),
+    col(`p in ${pressureUnit().replace(' abs', ' a')}`, 10),
+    col(`p out ${pressureUnit().replace(' abs', ' a')}`, 11),
+    col(`T in ${temperatureUnit()}`, 9),
+    col(`T out ${temperatureUnit()}`, 9),
     col('Z in / out', 14),
-    col('Dens. kg/m³', 10),
+    col(`Dens. ${densityUnit()}`, 10),
     col('Q in m³/h', 10),
     col('Q in ACFM', 10),
-    col('m kg/h', 10),
+    col(`m ${massFlowUnit()}`, 10),
   ];
   return tableBlocks('ss', columns, rows);
 }
@@ -44,7 +57,7 @@ export function stageTableBlocks(c: CompressorBlock): Block[] {
     const cooler = st.cooler;
     const after = cooler
       ? `${formatFigure(cooler.dutyKw)}${cooler.kind === 'aftercooler' ? ' (after)' : ''}${
-          cooler.condensateKgPerH > 0 ? `; ${formatFigure(cooler.condensateKgPerH)} kg/h liquid` : ''
+          cooler.condensateKgPerH > 0 ? `; ${formatKgPerH(cooler.condensateKgPerH)} liquid` : ''
         }`
       : '—';
     return [
@@ -85,7 +98,7 @@ export function methodBlocks(c: CompressorBlock): Block[] {
   const rows = [
     ['Gas power, kW', ...methods.map(([, m]) => formatFigure(m.gasPowerKw))],
     ['Specific work, kJ/kg', ...methods.map(([, m]) => formatFigure(m.specificWorkKjPerKg))],
-    ['Highest discharge, °C', ...methods.map(([, m]) => formatFixed(maxDischargeC(m), 1))],
+    [`Highest discharge, ${temperatureUnit()}`, ...methods.map(([, m]) => temperatureFigure(maxDischargeC(m)))],
     ['Intercooling total, kW', ...methods.map(([, m]) => formatFigure(m.totalIntercoolerDutyKw))],
     ['Power vs headline', ...methods.map(([, m]) => (m === ref ? 'headline' : rel(m.gasPowerKw, ref.gasPowerKw)))],
     ['k / cp at suction', ...methods.map(([, m]) => `${formatFixed(m.k, 4)} / ${formatFigure(m.cpJPerKgK)}`)],

@@ -1,13 +1,17 @@
 /** @jsxRuntime automatic @jsxImportSource react */
 import { enteredConditions, type EnteredConditions } from '../entered-input';
 import {
+  formatActualM3PerH,
   formatEntered,
   formatFigure,
   formatFixed,
+  formatKgPerH,
+  formatKgPerS,
   formatKpa,
   formatPercent,
   formatRating,
   formatTemperatureC,
+  formatTemperatureDifferenceK,
 } from '../format';
 import type { DatasheetSnapshot } from '../snapshot';
 import { headingBlock, kvBlocks, type Block, type KvRow } from './blocks';
@@ -17,7 +21,7 @@ function heaterRows(s: DatasheetSnapshot, e: EnteredConditions): KvRow[] {
   const h = s.result.heater;
   return [
     ['Outlet temperature (target)', formatEntered(e.outletTemperature), formatTemperatureC(h.outletTemperatureC)],
-    ['Temperature rise', `${formatFixed(h.temperatureRiseK, 1)} K`],
+    ['Temperature rise', formatTemperatureDifferenceK(h.temperatureRiseK)],
     ['Heat-loss allowance', formatPercent(h.heatLossPercent)],
     ['Design margin', formatPercent(h.designMarginPercent)],
     ['Supply', `${formatRating(h.electrical.voltageV)} V, ${h.electrical.phases}-phase`],
@@ -62,13 +66,13 @@ export function conditionsBlocks(s: DatasheetSnapshot): Block[] {
   const e = enteredConditions(s.input);
   const rows: KvRow[] = [
     ['Flow as entered', formatEntered(e.flow)],
-    ['Mass flow', `${formatFigure(r.massFlowKgPerS * 3600)} kg/h`, `${formatFixed(r.massFlowKgPerS, 4)} kg/s`],
+    ['Mass flow', formatKgPerH(r.massFlowKgPerS * 3600), formatKgPerS(r.massFlowKgPerS)],
     [
       'Standard flows',
       `${formatFigure(r.flows.normalM3PerH)} Nm³/h`,
       `${formatFigure(r.flows.standardM3PerH)} Sm³/h, ${formatFigure(r.flows.scfm)} SCFM`,
     ],
-    ['Inlet actual flow', `${formatFigure(r.inletActualFlowM3PerH)} m³/h`],
+    ['Inlet actual flow', formatActualM3PerH(r.inletActualFlowM3PerH)],
     ['Inlet temperature', formatEntered(e.inletTemperature), formatTemperatureC(r.inletTemperatureC)],
     ['Inlet pressure', formatEntered(e.inletPressure), formatKpa(r.inletPressureKpa)],
     ...heaterRows(s, e),

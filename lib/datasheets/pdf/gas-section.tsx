@@ -10,13 +10,27 @@ import { styles } from './theme';
 const sum = (bs: Block[]) => bs.reduce((h, b) => h + b.heightPt, 0);
 const nodes = (bs: Block[]) => bs.map((b) => <Fragment key={b.key}>{b.node}</Fragment>);
 
+/**
+ * Components in the order the user entered them (the stored input keeps it), then any the engine added (water
+ * from humidity) by falling mole fraction; a preset gas is listed by falling mole fraction.
+ */
+export function componentOrder(input: unknown, moleFractions: Record<string, number | undefined>): string[] {
+  const entered = (input as { gas?: { components?: Record<string, unknown> } } | null)?.gas?.components;
+  const first = entered ? Object.keys(entered).filter((k) => k in moleFractions) : [];
+  const rest = Object.keys(moleFractions)
+    .filter((k) => !first.includes(k))
+    .sort((a, b) => (moleFractions[b] ?? 0) - (moleFractions[a] ?? 0));
+  return [...first, ...rest];
+}
+
 /** Composition as mole and mass percentages beside the mixture's molar mass and pseudo-critical point. */
 export function gasBlocks(s: DatasheetSnapshot): Block[] {
   const { View, Text } = pdfKit();
   const g = s.result.gas;
   const mass: Record<string, number | undefined> = g.massFractions;
-  const rows = Object.entries(g.moleFractions)
-    .sort((a, b) => (b[1] ?? 0) - (a[1] ?? 0))
+  const mole: Record<string, number | undefined> = g.moleFractions;
+  const rows = componentOrder(s.input, mole)
+    .map((species) => [species, mole[species]] as const)
     .map(([species, x]) => [species, formatFixed((x ?? 0) * 100, 4), formatFixed((mass[species] ?? 0) * 100, 4)]);
   const table = tableBlocks(
     'gt',

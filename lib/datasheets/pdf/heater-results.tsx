@@ -1,6 +1,15 @@
 /** @jsxRuntime automatic @jsxImportSource react */
 import { EQUATION_NAMES, type HeaterResult } from '@/lib/engine';
-import { formatAmps, formatFigure, formatFixed, formatKw, formatPercent, formatRating } from '../format';
+import {
+  formatActualM3PerH,
+  formatAmps,
+  formatFigure,
+  formatFixed,
+  formatKw,
+  formatPercent,
+  formatRating,
+  formatTemperatureC,
+} from '../format';
 import { headingBlock, kvBlocks, type Block, type KvRow } from './blocks';
 import { highlightBlock } from './highlight';
 import { colors } from './theme';
@@ -40,7 +49,7 @@ export function heaterResultBlocks(r: HeaterResult): Block[] {
     [
       'cp at mean temperature',
       `${formatFigure(h.cpMeanJPerKgK)} J/(kg K)`,
-      `at ${formatFixed(h.properties.mean.temperatureC, 1)} °C`,
+      `at ${formatTemperatureC(h.properties.mean.temperatureC)}`,
     ],
     ['Heat-loss allowance', formatKw(h.heatLossKw), formatPercent(h.heatLossPercent)],
     ['Design margin', formatKw(h.marginKw), formatPercent(h.designMarginPercent)],
@@ -50,7 +59,7 @@ export function heaterResultBlocks(r: HeaterResult): Block[] {
     ['Line current', formatAmps(e.currentA), `${basis} (${formatKw(e.powerBasisKw)})`],
     ['Continuous-load current (125 %)', formatAmps(e.continuousCurrentA), 'conductors and overcurrent protection'],
     ['Circuit subdivision', e.subdivisionRequired ? 'required' : 'not required', 'resistance loads above 48 A'],
-    ['Outlet actual flow', `${formatFigure(h.outletActualFlowM3PerH)} m³/h`, 'at the inlet pressure'],
+    ['Outlet actual flow', formatActualM3PerH(h.outletActualFlowM3PerH), 'at the inlet pressure'],
   ];
   return [
     headingBlock('3', 'Results: heater'),

@@ -1,5 +1,7 @@
 import path from 'node:path';
+import { createElement, type ReactNode } from 'react';
 import type ReactPdf from '@react-pdf/renderer';
+import { pdfSafeText } from './glyphs';
 import type { Styles } from '@react-pdf/renderer';
 
 export type PdfKit = typeof ReactPdf;
@@ -12,6 +14,21 @@ export const SANS = 'DutywiseSans';
 export const MONO = 'DutywiseMono';
 
 let kit: PdfKit | null = null;
+
+function safeChildren(children: ReactNode): ReactNode {
+  if (typeof children === 'string') return pdfSafeText(children);
+  if (Array.isArray(children)) return children.map(safeChildren);
+  return children;
+}
+
+/** The renderer with a Text that spells out characters the fonts lack (see glyphs.ts) in every string it prints. */
+function withSafeText(k: PdfKit): PdfKit {
+  const Plain = k.Text;
+  const Text = (({ children, ...props }: { children?: ReactNode }) =>
+    createElement(Plain, props, ...[safeChildren(children)].flat())) as unknown as typeof k.Text;
+  // Module namespaces are frozen: a new object with the module's members and this Text in its place.
+  return { ...k, Text } as unknown as PdfKit;
+}
 let loading: Promise<PdfKit> | null = null;
 
 function registerFonts(k: PdfKit): void {
@@ -35,8 +52,8 @@ export function loadPdfKit(): Promise<PdfKit> {
   loading ??= import('@react-pdf/renderer').then((m) => {
     const k = m as unknown as PdfKit;
     registerFonts(k);
-    kit = k;
-    return k;
+    kit = withSafeText(k);
+    return kit;
   });
   return loading;
 }

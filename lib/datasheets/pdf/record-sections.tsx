@@ -6,19 +6,27 @@ import { pdfKit } from './kit';
 import { HEADING_PT } from './measure';
 import { styles } from './theme';
 
-/** Every revision letter with its date, note and issuer. */
+/** What a revision line says when it was issued without a note. */
+function defaultDescription(index: number, sizingVersion: number | undefined): string {
+  const from = sizingVersion ? ` from sizing version ${sizingVersion}` : '';
+  return index === 0 ? `First issue${from}` : `Re-issued${from}`;
+}
+
+/** Every revision letter with its date, note, issuer and status: all but the last are superseded by the next. */
 export function revisionBlocks(s: DatasheetSnapshot): Block[] {
   const rows = s.revisions.map((r, i) => [
     r.revision,
     formatIssueDate(r.issuedAt),
-    r.note ?? (i === 0 ? 'First issue' : 'Re-issued'),
+    r.note ?? defaultDescription(i, r.sizingVersion),
     r.issuedByName ?? '—',
+    i < s.revisions.length - 1 ? `Superseded by ${s.revisions[i + 1]!.revision}` : 'Current',
   ]);
   const columns = [
-    { title: 'Rev.', widthPct: 8 },
-    { title: 'Date', widthPct: 14 },
-    { title: 'Description', widthPct: 54 },
-    { title: 'Issued by', widthPct: 24 },
+    { title: 'Rev.', widthPct: 7 },
+    { title: 'Date', widthPct: 13 },
+    { title: 'Description', widthPct: 42 },
+    { title: 'Issued by', widthPct: 20 },
+    { title: 'Status', widthPct: 18 },
   ];
   return [headingBlock('6', 'Revisions'), ...tableBlocks('rv', columns, rows, false)];
 }

@@ -1,11 +1,12 @@
 import { eq } from 'drizzle-orm';
+import { randomUUID } from 'node:crypto';
 import { describe, expect, it } from 'vitest';
 import { db } from '@/db';
 import { auditLog, outbox, quoteItems } from '@/db/schema';
 import { getAccount, listAccounts } from '@/lib/accounts/queries';
 import { createAccount, inviteMember, acceptInvitation } from '@/lib/accounts/mutations';
 import { accountInputSchema } from '@/lib/accounts/schema';
-import { createQuote, addQuoteItem, sendQuote } from '@/lib/quotes/mutations';
+import { createQuote, addQuoteItem, sendQuote, setQuoteStatus } from '@/lib/quotes/mutations';
 import { getQuote, listQuotes } from '@/lib/quotes/queries';
 import { makeAccount, makeUser } from '../helpers/fixtures';
 import { makeSizingRow } from '../helpers/sizing-rows';
@@ -33,7 +34,8 @@ describe('customer accounts are scoped', () => {
     const engineer = await makeUser('sales_engineer');
     const { id } = await createAccount(
       engineer,
-      accountInputSchema.parse({ name: 'Audit Check Ltd', barometricPressureKpa: '99.1' }),
+      // A fresh name each run: a company name that already has an account is refused.
+      accountInputSchema.parse({ name: `Audit Check ${randomUUID().slice(0, 8)} Ltd`, barometricPressureKpa: '99.1' }),
     );
     const rows = await db.select().from(auditLog).where(eq(auditLog.entityId, id));
     expect(rows.map((r) => r.action)).toEqual(['account.created']);
@@ -70,15 +72,19 @@ describe('quotes are scoped and keep lines inside their account', () => {
     expect(await db.select().from(quoteItems).where(eq(quoteItems.quoteId, id))).toHaveLength(0);
   });
 
-  it("a customer sees their account's quotes and gets not-found for another's", async () => {
+  it("a customer sees their account's sent quotes, never drafts, and gets not-found for another's", async () => {
     const a = await makeAccount();
     const b = await makeAccount();
     const engineer = await makeUser('sales_engineer');
     const s1 = await makeSizingRow(a.id, engineer.id);
     const qa = await createQuote(engineer, { accountId: a.id, title: 'For A', sizingIds: [s1] });
+    const draft = await createQuote(engineer, { accountId: a.id, title: 'Internal draft', sizingIds: [s1] });
     const qb = await createQuote(engineer, { accountId: b.id, title: 'For B', sizingIds: [] });
+    await setQuoteStatus(engineer, qa.id, 'sent');
     const customerA = await makeUser('customer', a.id);
     expect((await listQuotes(customerA)).map((q) => q.id)).toEqual([qa.id]);
+    await expect(getQuote(customerA, draft.id)).rejects.toMatchObject({ code: 'not_found' });
+    expect((await listQuotes(engineer, { accountId: a.id })).map((q) => q.id).sort()).toEqual([qa.id, draft.id].sort());
     expect((await getQuote(customerA, qa.id)).lines).toHaveLength(1);
     await expect(getQuote(customerA, qb.id)).rejects.toMatchObject({ code: 'not_found', status: 404 });
   });

@@ -115,8 +115,9 @@ describe('issuing through the server action', () => {
   it('refuses roles without the permission and other accounts, and issues the next letter otherwise', async () => {
     await actAs(support);
     expect(await issueDatasheetAction({ sizingId })).toMatchObject({ ok: false, status: 403 });
+    // A customer never issues, not even on its own account: the datasheet is the vendor's document.
     await actAs(otherCustomer);
-    expect(await issueDatasheetAction({ sizingId })).toMatchObject({ ok: false, status: 404 });
+    expect(await issueDatasheetAction({ sizingId })).toMatchObject({ ok: false, status: 403 });
     await actAs(engineer);
     const res = await issueDatasheetAction({ sizingId, note: 'Checked against the site survey' });
     expect(res).toMatchObject({ ok: true, data: { number: issued.number } });

@@ -72,7 +72,9 @@ describe('a datasheet carries the engine figures of its sizing', () => {
     expect(text.split(PRELIMINARY_STATEMENT).length - 1).toBe(totalPages);
     for (let p = 1; p <= totalPages; p++) expect(text).toContain(`Page ${p} of ${totalPages}`);
     for (const box of ['Prepared', 'Checked', 'Approved']) expect(text.toLowerCase()).toContain(box.toLowerCase());
-    expect(text).toMatch(/Rev\. Date Description Issued by A \d{4}-\d{2}-\d{2} First issue Test sales_engineer/);
+    expect(text).toMatch(
+      /Rev\. Date Description Issued by Status A \d{4}-\d{2}-\d{2} First issue from sizing version 1 Test sales_engineer Current/,
+    );
   });
 
   it('compressor: stages, both methods, coolers, shaft power and motor ratings', async () => {

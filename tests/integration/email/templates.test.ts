@@ -29,9 +29,16 @@ const cases: {
       senderName: 'Ilse Marrow',
       quoteUrl: `${appUrl}/quotes/q-9931`,
       lines: [
-        { title: 'Recycle booster', tag: 'K-4401', headline: '233 kW shaft power', quantity: 2 },
+        {
+          title: 'Recycle booster',
+          tag: 'K-4401',
+          headline: '233 kW shaft power',
+          quantity: 2,
+          price: 'CHF 81,406.00',
+        },
         { title: 'Start-up heater', tag: null, headline: '57.5 kW duty', quantity: 1 },
       ],
+      total: 'CHF 81,406.00 for the 1 priced line (1 not priced)',
     },
     facts: [
       'Q-9931',
@@ -41,6 +48,9 @@ const cases: {
       '233 kW shaft power',
       'Start-up heater',
       '57.5 kW duty',
+      'Price: CHF 81,406.00',
+      'Total price',
+      'CHF 81,406.00 for the 1 priced line (1 not priced)',
       `${appUrl}/quotes/q-9931`,
     ],
     subject: 'Quote Q-9931: Booster for pad 4',
@@ -132,6 +142,28 @@ describe('e-mail templates', () => {
     expect(flat(withTag.text)).toMatch(/Revision: C/);
     const noTag = await renderEmail('datasheet-issued', { ...base, equipmentTag: null }, appUrl);
     expect(noTag.text).not.toContain('Equipment tag');
+  });
+
+  it('invites a quote recipient with no sign-in through the join link instead of the plain quote link', async () => {
+    const base = cases['quote-sent'].props;
+    const joinUrl = `${appUrl}/invite/tok-5512?next=%2Fquotes%2Fq-9931`;
+    const out = await renderEmail('quote-sent', { ...base, joinUrl }, appUrl);
+    expect(unescape(out.html)).toContain(`href="${joinUrl}"`);
+    expect(flat(out.text)).toContain(`Join ${base.accountName} and open the quote`);
+    expect(flat(out.text)).toContain('no Dutywise sign-in yet');
+    expect(out.html).not.toContain(`href="${appUrl}/quotes/q-9931"`);
+    const plain = await renderEmail('quote-sent', base, appUrl);
+    expect(plain.text).not.toContain('Join');
+  });
+
+  it('leaves prices out of a quote mail whose lines have none', async () => {
+    const base = cases['quote-sent'].props;
+    const unpriced = await renderEmail(
+      'quote-sent',
+      { ...base, lines: base.lines.map((l) => ({ ...l, price: null })), total: null },
+      appUrl,
+    );
+    expect(unpriced.text).not.toMatch(/Price|Total price/);
   });
 
   it('turns an app path into an absolute link against the app URL', async () => {

@@ -22,8 +22,20 @@ function Unusable({ children }: { children: ReactNode }) {
   );
 }
 
-export default async function InvitePage({ params }: { params: Promise<{ token: string }> }) {
+// Only an app path may follow joining (a quote the invitation came with); anything else lands on the desk.
+function safeNext(next: string | string[] | undefined): string | undefined {
+  return typeof next === 'string' && /^\/(quotes|sizings|datasheets)\/[\w-]+$/.test(next) ? next : undefined;
+}
+
+export default async function InvitePage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ token: string }>;
+  searchParams: Promise<{ next?: string | string[] }>;
+}) {
   const { token: raw } = await params;
+  const next = safeNext((await searchParams).next);
   // Malformed tokens never reach the database; they read as any other dead link.
   const token = acceptInviteSchema.shape.token.safeParse(raw);
   const preview = token.success && !clerkEnabled ? await getInvitationPreview(token.data) : null;
@@ -45,7 +57,7 @@ export default async function InvitePage({ params }: { params: Promise<{ token: 
             <span className="font-mono">{preview.email}</span>. The invitation is open until{' '}
             {formatDate(preview.expiresAt)}.
           </p>
-          <AcceptInviteForm token={token.data} email={preview.email} />
+          <AcceptInviteForm token={token.data} email={preview.email} next={next} />
         </>
       ) : (
         <Unusable>

@@ -10,13 +10,19 @@ import { buttonLinkClass } from '@/app/_components/submit-button';
 import { getAccount, type AccountDetail } from '@/lib/accounts/queries';
 import { requirePageUser } from '@/lib/auth/guards';
 import { can } from '@/lib/auth/roles';
+import { PA_PER_PSI } from '@/lib/units';
 import { listQuotes } from '@/lib/quotes/queries';
 import { listSizings } from '@/lib/sizings/queries';
 import { AccountForm } from '../_components/account-form';
 import { MembersPanel } from './_components/members-panel';
 
+const KPA_PER_PSI = PA_PER_PSI / 1000;
+
 function siteAtmosphere(a: AccountDetail): string {
-  if (a.barometricPressureKpa !== null) return `${a.barometricPressureKpa} kPa barometric`;
+  if (a.barometricPressureKpa !== null)
+    return a.unitSystem === 'us'
+      ? `${(a.barometricPressureKpa / KPA_PER_PSI).toFixed(2)} psia barometric`
+      : `${a.barometricPressureKpa} kPa barometric`;
   if (a.siteAltitudeM !== null) return `${a.siteAltitudeM} m altitude (ISO 2533 standard atmosphere)`;
   return 'Not given: 101.325 kPa is assumed';
 }
@@ -29,6 +35,8 @@ function AccountDetails({ account }: { account: AccountDetail }) {
     ['Billing contact', account.billingContactName ?? '—'],
     ['Billing contact e-mail', account.billingContactEmail ?? 'None: quotes cannot be sent until one is added'],
     ['Site atmosphere', siteAtmosphere(account)],
+    ['Units', account.unitSystem === 'us' ? 'US customary (°F, psia/psig, lb/h)' : 'SI (°C, kPa/bar, kg/h)'],
+    ['Quote currency', account.currency],
   ];
   return <FactList rows={rows} testId="account-details" />;
 }
@@ -41,8 +49,15 @@ function formValues(a: AccountDetail) {
     site: a.site ?? '',
     billingContactName: a.billingContactName ?? '',
     billingContactEmail: a.billingContactEmail ?? '',
-    barometricPressureKpa: a.barometricPressureKpa === null ? '' : String(a.barometricPressureKpa),
+    barometricPressureKpa:
+      a.barometricPressureKpa === null || a.unitSystem === 'us' ? '' : String(a.barometricPressureKpa),
+    barometricPressurePsia:
+      a.barometricPressureKpa === null || a.unitSystem !== 'us'
+        ? ''
+        : String(Number((a.barometricPressureKpa / KPA_PER_PSI).toFixed(3))),
     siteAltitudeM: a.siteAltitudeM === null ? '' : String(a.siteAltitudeM),
+    unitSystem: a.unitSystem,
+    currency: a.currency,
   };
 }
 

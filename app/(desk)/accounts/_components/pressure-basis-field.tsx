@@ -14,6 +14,8 @@ type Props = {
   pressureError?: string;
   altitudeError?: string;
   className?: string;
+  /** The account's unit for barometric pressure. */
+  pressureUnit?: 'kPa' | 'psia';
 };
 
 /** Site barometric pressure or site altitude: gauge pressures at this site are converted with one of them. */
@@ -25,6 +27,7 @@ export function PressureBasisField({
   pressureError,
   altitudeError,
   className = '',
+  pressureUnit = 'kPa',
 }: Props) {
   const name = useId();
   return (
@@ -48,9 +51,15 @@ export function PressureBasisField({
       <div className="mt-3 max-w-xs">
         {basis === 'pressure' ? (
           <TextField
-            label="Site barometric pressure (kPa, absolute)"
+            label={
+              pressureUnit === 'psia' ? 'Site barometric pressure (psia)' : 'Site barometric pressure (kPa, absolute)'
+            }
             inputMode="decimal"
-            hint="50 to 110 kPa; leave empty for 101.325 kPa."
+            hint={
+              pressureUnit === 'psia'
+                ? '7.25 to 15.95 psia; leave empty for 14.70 psia.'
+                : '50 to 110 kPa; leave empty for 101.325 kPa.'
+            }
             error={pressureError}
             {...pressure}
           />

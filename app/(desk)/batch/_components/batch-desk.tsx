@@ -33,7 +33,7 @@ function download(name: string, text: string) {
 
 /** Upload, check, fix, re-check and confirm a sheet of duty points. */
 export function BatchDesk(props: {
-  accounts: { id: string; name: string }[];
+  accounts: { id: string; name: string; site?: string | null; billingContactEmail?: string | null }[];
   quotes: { id: string; number: string; title: string; accountId: string }[];
   canQuote: boolean;
   fixedAccountId: string | null;

@@ -2,9 +2,10 @@
 
 import { useState } from 'react';
 import type { BatchTarget } from '@/lib/batch/schema';
+import { accountOptionLabel } from '@/lib/accounts/label';
 
 type Props = {
-  accounts: { id: string; name: string }[];
+  accounts: { id: string; name: string; site?: string | null; billingContactEmail?: string | null }[];
   quotes: { id: string; number: string; title: string; accountId: string }[];
   canQuote: boolean;
   fixedAccountId: string | null;
@@ -55,7 +56,7 @@ export function BatchSavePanel({
           >
             {accounts.map((a) => (
               <option key={a.id} value={a.id}>
-                {a.name}
+                {accountOptionLabel(a)}
               </option>
             ))}
           </select>

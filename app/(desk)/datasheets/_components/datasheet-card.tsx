@@ -1,6 +1,7 @@
 import Link from 'next/link';
 import { formatDate } from '@/app/_components/format';
 import type { DatasheetSummary } from '@/lib/datasheets/queries';
+import { revisionStatus } from '@/lib/datasheets/revision-letter';
 import { LockedCard } from './locked-card';
 
 const kb = (bytes: number) => `${Math.max(1, Math.round(bytes / 1024))} kB`;
@@ -41,6 +42,7 @@ export function DatasheetCard({
         <thead className="text-left text-label text-ink-muted">
           <tr>
             <th className="py-1 pr-3">Rev.</th>
+            <th className="py-1 pr-3">Status</th>
             <th className="py-1 pr-3">Issued</th>
             <th className="py-1 pr-3">Note</th>
             <th className="py-1 pr-3">By</th>
@@ -53,9 +55,12 @@ export function DatasheetCard({
           </tr>
         </thead>
         <tbody>
-          {ds.revisions.map((r) => (
+          {ds.revisions.map((r, i) => (
             <tr key={r.id} className="border-t border-paper-line align-top">
               <td className="py-1.5 pr-3 font-mono font-semibold">{r.revision}</td>
+              <td data-testid="revision-status" className="py-1.5 pr-3 text-ink-soft">
+                {revisionStatus(ds.revisions, i)}
+              </td>
               <td className="py-1.5 pr-3 tabular">{formatDate(r.issuedAt)}</td>
               <td className="py-1.5 pr-3 text-ink-soft">{r.note ?? '—'}</td>
               <td className="py-1.5 pr-3 text-ink-soft">{r.issuedByName ?? '—'}</td>

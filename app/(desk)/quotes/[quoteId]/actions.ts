@@ -2,8 +2,14 @@
 
 import { revalidatePath } from 'next/cache';
 import { defineAction } from '@/lib/actions/define-action';
-import { addQuoteItem, removeQuoteItem, sendQuote, setQuoteStatus } from '@/lib/quotes/mutations';
-import { quoteIdSchema, quoteItemRemoveSchema, quoteItemSchema, quoteStatusSchema } from '@/lib/quotes/schema';
+import { addQuoteItem, removeQuoteItem, sendQuote, setQuoteLinePrice, setQuoteStatus } from '@/lib/quotes/mutations';
+import {
+  quoteIdSchema,
+  quoteItemRemoveSchema,
+  quoteItemSchema,
+  quoteLinePriceSchema,
+  quoteStatusSchema,
+} from '@/lib/quotes/schema';
 
 function refresh(quoteId: string) {
   revalidatePath('/quotes');
@@ -28,6 +34,16 @@ export const removeQuoteLineAction = defineAction(
   },
 );
 
+/** Sets or clears a draft line's unit price (in the account's currency). */
+export const setQuoteLinePriceAction = defineAction(
+  { permission: 'quote:manage', schema: quoteLinePriceSchema, name: 'quote.line_price' },
+  async (input, user) => {
+    await setQuoteLinePrice(user, input);
+    refresh(input.quoteId);
+    return { unitPrice: input.unitPrice };
+  },
+);
+
 export const setQuoteStatusAction = defineAction(
   { permission: 'quote:manage', schema: quoteStatusSchema, name: 'quote.set_status' },
   async (input, user) => {
@@ -37,12 +53,15 @@ export const setQuoteStatusAction = defineAction(
   },
 );
 
-/** Marks the quote sent and queues the e-mail to the account's billing contact; answers with the address. */
+/**
+ * Marks the quote sent and queues the e-mail to the account's billing contact; answers with the address and whether
+ * the e-mail also invited the contact to join the account.
+ */
 export const sendQuoteAction = defineAction(
   { permission: 'quote:manage', schema: quoteIdSchema, name: 'quote.send' },
   async (input, user) => {
-    const { to } = await sendQuote(user, input.quoteId);
+    const { to, invited } = await sendQuote(user, input.quoteId);
     refresh(input.quoteId);
-    return { to };
+    return { to, invited };
   },
 );

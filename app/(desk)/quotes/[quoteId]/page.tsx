@@ -45,7 +45,7 @@ export default async function QuotePage({ params }: { params: Promise<{ quoteId:
         <QuoteSummary quote={quote} linkAccount={isStaff(user.role) || user.accountId === quote.accountId} />
       </Section>
       <Section title="Lines" id="lines">
-        <QuoteLines quoteId={quote.id} lines={quote.lines} editable={editable} />
+        <QuoteLines quoteId={quote.id} lines={quote.lines} currency={quote.currency} editable={editable} />
         <p className="mt-3 text-hint text-ink-muted">
           Headlines come from preliminary sizings, each on the equation of state its record names. Confirm the design
           with a qualified engineer under the local codes before ordering.

@@ -3,8 +3,12 @@ import { SelectField } from '@/app/_components/select-field';
 import { quoteStatusLabels } from '@/app/_components/status-badge';
 import { TextField } from '@/app/_components/text-field';
 import { quoteStatuses, type QuoteFilter } from '@/lib/quotes/schema';
+import { accountOptionLabel } from '@/lib/accounts/label';
 
-type Props = { filter: QuoteFilter; accounts: { id: string; name: string }[] | null };
+type Props = {
+  filter: QuoteFilter;
+  accounts: { id: string; name: string; site?: string | null; billingContactEmail?: string | null }[] | null;
+};
 
 /** Filters held in the URL (a plain GET form), so a filtered list can be bookmarked or shared. */
 export function QuoteFilters({ filter, accounts }: Props) {
@@ -36,7 +40,7 @@ export function QuoteFilters({ filter, accounts }: Props) {
         <SelectField
           label="Customer account"
           name="accountId"
-          options={accounts.map((a) => ({ value: a.id, label: a.name }))}
+          options={accounts.map((a) => ({ value: a.id, label: accountOptionLabel(a) }))}
           placeholder="Any account"
           defaultValue={filter.accountId ?? ''}
           className="w-56"

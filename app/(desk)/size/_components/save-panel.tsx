@@ -29,11 +29,12 @@ type Props = {
 
 /** Title, tag and notes, an optional draft quote, then the server action that recomputes and stores it. */
 export function SavePanel({ input, accountId, accounts, quotes, canQuote, reopened }: Props) {
-  const [revisedFromId, setRevisedFromId] = useState(reopened?.revise ? reopened.id : undefined);
-  const [saved, setSaved] = useState<Saved | null>(null);
+  const [target, setTarget] = useState(reopened?.revise ? { id: reopened.id, number: reopened.number } : null);
+  const revisedFromId = target?.id;
+  const [saved, setSaved] = useState<(Saved & { key: string }) | null>(null);
   const [formError, setFormError] = useState<string | null>(null);
   const [pending, start] = useTransition();
-  const { register, handleSubmit, setError, formState } = useForm<MetaValues>({
+  const { register, handleSubmit, setError, formState, watch } = useForm<MetaValues>({
     resolver: zodResolver(metaForm),
     mode: 'onTouched',
     defaultValues: {
@@ -43,23 +44,34 @@ export function SavePanel({ input, accountId, accounts, quotes, canQuote, reopen
       quoteId: '',
     },
   });
+  // What a save would store; the button stays disarmed while it equals what was just saved.
+  const key = JSON.stringify([accountId, input, watch()]);
+  const unchanged = saved?.key === key;
   const account = accounts.find((a) => a.id === accountId);
   const accountQuotes = quotes.filter((q) => q.accountId === accountId);
-  const onSubmit = handleSubmit((meta) => {
-    setFormError(null);
-    if (!input) return setFormError('Fix the inputs first: only a sized duty can be saved.');
-    if (!account) return setFormError('Choose the customer account in step 1 first.');
-    start(async () => {
-      const res = await saveSizingAction({ ...meta, accountId, revisedFromId, input });
-      if (res.ok) {
-        setSaved({ ...res.data, revision: Boolean(revisedFromId) });
-        // A later save from this screen revises what was just saved, if this was a revision.
-        if (revisedFromId) setRevisedFromId(res.data.id);
-        return;
-      }
-      setFormError(showActionErrors(setError, res.errors, ['title', 'equipmentTag', 'notes', 'quoteId']));
+  const save = (asRevision: boolean) =>
+    handleSubmit((meta) => {
+      setFormError(null);
+      if (unchanged) return;
+      if (!input) return setFormError('Fix the inputs first: only a sized duty can be saved.');
+      if (!account) return setFormError('Choose the customer account in step 1 first.');
+      start(async () => {
+        const res = await saveSizingAction({
+          ...meta,
+          accountId,
+          revisedFromId: asRevision ? revisedFromId : undefined,
+          input,
+        });
+        if (res.ok) {
+          setSaved({ ...res.data, key });
+          // A later save from this screen makes a new version of what was just saved, not a second record.
+          setTarget({ id: res.data.id, number: res.data.number });
+          return;
+        }
+        setFormError(showActionErrors(setError, res.errors, ['title', 'equipmentTag', 'notes', 'quoteId']));
+      });
     });
-  });
+  const onSubmit = save(Boolean(revisedFromId));
   return (
     <section
       aria-labelledby="save-title"
@@ -67,7 +79,7 @@ export function SavePanel({ input, accountId, accounts, quotes, canQuote, reopen
       data-testid="save-panel"
     >
       <h2 id="save-title" className="text-base font-semibold">
-        {revisedFromId ? `Save as a revision of ${reopened?.number ?? 'the sizing'}` : 'Save this sizing'}
+        {target ? `Save as a revision of ${target.number}` : 'Save this sizing'}
       </h2>
       <p className="mt-1 text-hint text-ink-muted">
         To{' '}
@@ -125,16 +137,27 @@ export function SavePanel({ input, accountId, accounts, quotes, canQuote, reopen
         <button
           type="submit"
           data-testid="save-submit"
-          disabled={pending || !input}
+          disabled={pending || !input || unchanged}
           className="w-full rounded-md bg-tide-600 px-4 py-2 text-sm font-medium text-white hover:bg-tide-700 disabled:cursor-not-allowed disabled:opacity-60"
         >
-          {pending ? 'Saving…' : revisedFromId ? 'Save revision' : 'Save sizing'}
+          {pending ? 'Saving…' : unchanged ? 'Saved' : revisedFromId ? 'Save revision' : 'Save sizing'}
         </button>
+        {target && !unchanged && (
+          <button
+            type="button"
+            data-testid="save-as-new"
+            disabled={pending || !input}
+            onClick={save(false)}
+            className="w-full rounded-md border border-tide-600 px-4 py-1.5 text-sm text-tide-700 hover:bg-tide-50 disabled:opacity-60"
+          >
+            Save as a new sizing instead
+          </button>
+        )}
+        <SaveOutcome saved={saved} />
       </form>
-      <SaveOutcome saved={saved} />
       {reopened && (
         <p className="mt-3 text-hint text-ink-muted">
-          Opened from {reopened.number} (revision {reopened.revision}).{' '}
+          Opened from {reopened.number} (version {reopened.revision}).{' '}
           <Link
             className="text-tide-700 underline"
             href={`/size?sizing=${reopened.id}${reopened.revise ? '' : '&revise=1'}`}

@@ -2,6 +2,7 @@
 
 import { useFormContext } from 'react-hook-form';
 import { SelectField } from '@/app/_components/select-field';
+import { accountOptionLabel } from '@/lib/accounts/label';
 import { roundForField, switchUnitValue } from '../_lib/convert';
 import type { DeskValues } from '../_lib/form-types';
 import { sitePressureOf } from '../_lib/site-pressure';
@@ -41,7 +42,7 @@ export function ServiceStep({ accountChoice, fixedAccountName }: Props) {
             <SelectField
               label="Customer account"
               placeholder="Choose an account (needed to save)"
-              options={desk.accounts.map((a) => ({ value: a.id, label: a.name }))}
+              options={desk.accounts.map((a) => ({ value: a.id, label: accountOptionLabel(a) }))}
               hint="Sets the site barometric pressure and where the sizing is saved."
               data-testid="field-accountId"
               {...accountField}

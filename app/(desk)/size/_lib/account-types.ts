@@ -2,6 +2,9 @@
 export type AccountSite = {
   id: string;
   name: string;
+  site?: string | null;
+  billingContactEmail?: string | null;
+  unitSystem?: 'si' | 'us';
   barometricPressureKpa: number | null;
   siteAltitudeM: number | null;
 };
@@ -19,6 +22,6 @@ export type ReopenedSizing = {
   accountId: string;
   accountName: string;
   revision: number;
-  /** True for "revise" (saving records revisedFromId), false for "duplicate". */
+  /** True for "revise" (saving makes the next version of this sizing), false for "duplicate". */
   revise: boolean;
 };

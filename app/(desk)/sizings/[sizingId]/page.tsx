@@ -9,12 +9,15 @@ import { can, isStaff } from '@/lib/auth/roles';
 import { downloadAccess, listDatasheets } from '@/lib/datasheets/queries';
 import { getSizing } from '@/lib/sizings/queries';
 import { readStoredSizing } from '@/lib/sizings/stored-result';
+import { listSizingVersions } from '@/lib/sizings/versions';
+import { revisionStatus } from '@/lib/datasheets/revision-letter';
 import { auditLookup } from '@/lib/support/audit-lookup';
 import { sizingEmails, sizingTrail } from '@/lib/support/sizing-record';
 import { KeyValueTable } from './_components/key-value-table';
 import { AuditTrail, EmailLog, RevisionList } from './_components/record-sections';
 import { ResendButton } from './_components/resend-button';
 import { SizingMeta } from './_components/sizing-meta';
+import { VersionHistory } from './_components/version-history';
 
 /** Every saved sizing is a preliminary figure; this says so wherever one is shown in full. */
 function PreliminaryNote() {
@@ -36,11 +39,12 @@ export default async function SizingPage({ params }: { params: Promise<{ sizingI
   const user = await requirePageUser(`/sizings/${raw}`, 'sizing:read');
   const sizingId = uuidOrNotFound(raw);
   const sizing = await orNotFound(getSizing(user, sizingId));
-  const [datasheetList, access, emails, trail] = await Promise.all([
+  const [datasheetList, access, emails, trail, versions] = await Promise.all([
     listDatasheets(user, { sizingId }),
     downloadAccess(user),
     sizingEmails(user, sizingId),
     sizingTrail(user, sizingId),
+    listSizingVersions(sizing),
   ]);
   const datasheet = datasheetList[0];
   const stored = readStoredSizing(sizing.input, sizing.result);
@@ -68,7 +72,7 @@ export default async function SizingPage({ params }: { params: Promise<{ sizingI
           </Link>
           {can(user.role, 'sizing:save') && (
             <Link className="text-tide-700 underline" href={`/size?sizing=${sizing.id}&revise=1`}>
-              Revise
+              Revise (saves version {sizing.revision + 1})
             </Link>
           )}
           {can(user.role, 'sizing:save') && (
@@ -87,9 +91,20 @@ export default async function SizingPage({ params }: { params: Promise<{ sizingI
         <RevisionList datasheet={datasheet} canDownload={access.unlocked} />
         {can(user.role, 'support:search') && datasheet && (
           <div className="mt-3">
-            <ResendButton sizingId={sizing.id} />
+            <ResendButton
+              sizingId={sizing.id}
+              billingContact={sizing.billingContactEmail}
+              revisions={datasheet.revisions.map((r, i) => ({
+                id: r.id,
+                revision: r.revision,
+                status: revisionStatus(datasheet.revisions, i),
+              }))}
+            />
           </div>
         )}
+      </Section>
+      <Section title="Versions" id="versions">
+        <VersionHistory versions={versions} service={sizing.service} />
       </Section>
       {emails && (
         <Section title="E-mails sent" id="emails">

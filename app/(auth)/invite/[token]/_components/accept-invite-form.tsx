@@ -14,7 +14,8 @@ import { acceptInviteAction } from '../actions';
 
 type Values = z.input<typeof acceptInviteSchema>;
 
-export function AcceptInviteForm({ token, email }: { token: string; email: string }) {
+/** Sets a name and password for the invited address; the new member then lands on `next` (the desk by default). */
+export function AcceptInviteForm({ token, email, next = '/size' }: { token: string; email: string; next?: string }) {
   const router = useRouter();
   const [formError, setFormError] = useState<string | null>(null);
   const { register, handleSubmit, setError, formState } = useForm<Values>({
@@ -27,7 +28,7 @@ export function AcceptInviteForm({ token, email }: { token: string; email: strin
     setFormError(null);
     const res = await acceptInviteAction(values);
     if (res.ok) {
-      router.push('/size');
+      router.push(next);
       router.refresh();
     } else {
       setFormError(showActionErrors(setError, res.errors, ['name', 'password']));

@@ -2,13 +2,20 @@ import Link from 'next/link';
 import { DataTable, tableLinkClass, type Column } from '@/app/_components/data-table';
 import { EmptyState } from '@/app/_components/empty-state';
 import { ServiceBadge } from '@/app/_components/status-badge';
+import { formatMoney, formatPriceTotal, priceCents, priceTotals } from '@/lib/quotes/prices';
 import type { QuoteLine } from '@/lib/quotes/queries';
 import { quoteTotals } from '@/lib/quotes/totals';
 import { formatHeadline } from '@/lib/sizings/headline';
+import { LinePriceForm } from './line-price-form';
 import { RemoveLineButton } from './remove-line-button';
 
-/** The quote's lines: one saved sizing each, with the quantity quoted. */
-export function QuoteLines({ quoteId, lines, editable }: { quoteId: string; lines: QuoteLine[]; editable: boolean }) {
+type Props = { quoteId: string; lines: QuoteLine[]; currency: string; editable: boolean };
+
+const lineAmount = (l: QuoteLine, currency: string) =>
+  l.unitPrice === null ? '—' : formatMoney(priceCents(l.unitPrice)! * l.quantity, currency);
+
+/** The quote's lines: one saved sizing each, with the quantity quoted and its optional price. */
+export function QuoteLines({ quoteId, lines, currency, editable }: Props) {
   const columns: Column<QuoteLine>[] = [
     {
       key: 'number',
@@ -29,6 +36,26 @@ export function QuoteLines({ quoteId, lines, editable }: { quoteId: string; line
     { key: 'gas', header: 'Gas', cell: (l) => l.gasLabel },
     { key: 'headline', header: 'Headline', numeric: true, cell: (l) => formatHeadline(l.service, l.headlineKw) },
     { key: 'quantity', header: 'Qty', numeric: true, cell: (l) => l.quantity },
+    {
+      key: 'unitPrice',
+      header: 'Unit price',
+      numeric: true,
+      cell: (l) =>
+        editable ? (
+          <LinePriceForm
+            quoteId={quoteId}
+            itemId={l.itemId}
+            unitPrice={l.unitPrice}
+            currency={currency}
+            label={`${l.sizingNumber} ${l.title}`}
+          />
+        ) : l.unitPrice === null ? (
+          '—'
+        ) : (
+          formatMoney(priceCents(l.unitPrice)!, currency)
+        ),
+    },
+    { key: 'amount', header: 'Amount', numeric: true, cell: (l) => lineAmount(l, currency) },
   ];
   if (editable) {
     columns.push({
@@ -44,6 +71,7 @@ export function QuoteLines({ quoteId, lines, editable }: { quoteId: string; line
       (service) =>
         `${service === 'heater' ? 'heaters' : 'compressors'}, ${totals[service].units} ${totals[service].units === 1 ? 'unit' : 'units'}: ${formatHeadline(service, totals[service].kw)}`,
     );
+  const priceTotal = formatPriceTotal(priceTotals(lines), currency);
   return (
     <>
       <DataTable
@@ -61,6 +89,11 @@ export function QuoteLines({ quoteId, lines, editable }: { quoteId: string; line
       {parts.length > 0 && (
         <p className="mt-3 text-sm text-ink" data-testid="quote-totals">
           <span className="font-medium">Quoted quantities in total</span>: {parts.join('; ')}.
+        </p>
+      )}
+      {priceTotal && (
+        <p className="mt-1 text-sm text-ink" data-testid="quote-price-total">
+          <span className="font-medium">Price in total</span>: {priceTotal}.
         </p>
       )}
     </>

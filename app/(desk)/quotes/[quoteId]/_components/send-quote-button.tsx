@@ -14,14 +14,18 @@ export function SendQuoteButton({ quoteId, to, alreadySent, lineCount }: Props) 
   const router = useRouter();
   const [pending, start] = useTransition();
   const [error, setError] = useState<string | null>(null);
-  const [sentTo, setSentTo] = useState<string | null>(null);
+  const [sent, setSent] = useState<string | null>(null);
   const send = () =>
     start(async () => {
       setError(null);
-      setSentTo(null);
+      setSent(null);
       const res = await sendQuoteAction({ quoteId });
       if (res.ok) {
-        setSentTo(res.data.to);
+        setSent(
+          res.data.invited
+            ? `Quote sent to ${res.data.to}, with an invitation to join the account (no Dutywise sign-in yet).`
+            : `Quote sent to ${res.data.to}.`,
+        );
         router.refresh();
       } else setError(summaryOf(res.errors, 'The quote was not sent.'));
     });
@@ -30,7 +34,8 @@ export function SendQuoteButton({ quoteId, to, alreadySent, lineCount }: Props) 
       <p className="text-sm text-ink-soft">
         {to ? (
           <>
-            Goes to the billing contact <strong className="font-mono">{to}</strong> with a link to this page.
+            Goes to the billing contact <strong className="font-mono">{to}</strong> with a link to this page; a contact
+            with no Dutywise sign-in yet is invited to join the account.
           </>
         ) : (
           <>This customer account has no billing contact e-mail. Add one on the account page before sending.</>
@@ -46,7 +51,7 @@ export function SendQuoteButton({ quoteId, to, alreadySent, lineCount }: Props) 
       >
         {alreadySent ? 'Send to customer again' : 'Send to customer'}
       </SubmitButton>
-      <FormNotice message={sentTo && `Quote sent to ${sentTo}.`} testId="quote-sent" />
+      <FormNotice message={sent} testId="quote-sent" />
       <FormError message={error} />
     </div>
   );

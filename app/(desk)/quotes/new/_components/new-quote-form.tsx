@@ -12,12 +12,17 @@ import { SubmitButton } from '@/app/_components/submit-button';
 import { TextareaField } from '@/app/_components/textarea-field';
 import { TextField } from '@/app/_components/text-field';
 import { quoteCreateSchema, type QuoteCreateInput } from '@/lib/quotes/schema';
+import { accountOptionLabel } from '@/lib/accounts/label';
 import type { SizingOption } from '../../_components/sizing-option';
 import { createQuoteAction } from '../actions';
 import { SizingChecklist } from './sizing-checklist';
 
 type Values = z.input<typeof quoteCreateSchema>;
-type Props = { accounts: { id: string; name: string }[]; accountId: string | null; sizings: SizingOption[] };
+type Props = {
+  accounts: { id: string; name: string; site?: string | null; billingContactEmail?: string | null }[];
+  accountId: string | null;
+  sizings: SizingOption[];
+};
 
 /** A new draft quote: the account first (its sizings load from the server), then title, notes and lines. */
 export function NewQuoteForm({ accounts, accountId, sizings }: Props) {
@@ -45,7 +50,7 @@ export function NewQuoteForm({ accounts, accountId, sizings }: Props) {
     <form onSubmit={onSubmit} noValidate className="space-y-4" aria-label="New quote">
       <SelectField
         label="Customer account"
-        options={accounts.map((a) => ({ value: a.id, label: a.name }))}
+        options={accounts.map((a) => ({ value: a.id, label: accountOptionLabel(a) }))}
         placeholder="Choose the customer account"
         error={formState.errors.accountId?.message}
         className="max-w-md"

@@ -1,5 +1,6 @@
 import { formatDateTime } from '@/app/_components/format';
 import type { DatasheetSummary } from '@/lib/datasheets/queries';
+import { revisionStatus } from '@/lib/datasheets/revision-letter';
 import type { EmailLogEntry } from '@/lib/email/queries';
 import type { TrailEntry } from '@/lib/support/sizing-record';
 
@@ -18,6 +19,7 @@ export function RevisionList({
       <thead className="text-label text-ink-soft">
         <tr>
           <th>Rev.</th>
+          <th>Status</th>
           <th>Issued (UTC)</th>
           <th>By</th>
           <th>Note</th>
@@ -26,9 +28,12 @@ export function RevisionList({
         </tr>
       </thead>
       <tbody>
-        {datasheet.revisions.map((r) => (
+        {datasheet.revisions.map((r, i) => (
           <tr key={r.id} className="border-t border-paper-line">
             <td className="py-1 font-mono">{r.revision}</td>
+            <td data-testid="revision-status" className={i < datasheet.revisions.length - 1 ? 'text-ink-muted' : ''}>
+              {revisionStatus(datasheet.revisions, i)}
+            </td>
             <td>{formatDateTime(r.issuedAt)}</td>
             <td>{r.issuedByName ?? '—'}</td>
             <td>{r.note ?? '—'}</td>

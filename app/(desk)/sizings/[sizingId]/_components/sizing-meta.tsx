@@ -17,7 +17,12 @@ export function SizingMeta({ sizing, linkAccount }: { sizing: SizingDetail; link
         {sizing.number}
       </span>,
     ],
-    ['Revision', sizing.revision],
+    [
+      'Version',
+      <span key="v" data-testid="sizing-version">
+        {sizing.revision}
+      </span>,
+    ],
     [
       'Equipment tag',
       sizing.equipmentTag ? (
@@ -49,6 +54,12 @@ export function SizingMeta({ sizing, linkAccount }: { sizing: SizingDetail; link
     ['Created by', sizing.createdByName ?? '—'],
     ['Created', formatDateTime(sizing.createdAt)],
     ['Equation of state', <span key="q">{equationOf(sizing.result)}</span>],
+    ...(sizing.revision > 1
+      ? ([['Current version saved', `${formatDateTime(sizing.updatedAt)} by ${sizing.updatedByName ?? '—'}`]] as [
+          string,
+          ReactNode,
+        ][])
+      : []),
     [
       'Engine version',
       <span key="e" className="font-mono">
