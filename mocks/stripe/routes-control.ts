@@ -4,7 +4,7 @@ import { json, type Route, route } from './http-util';
 import { requireSubscription } from './lookup';
 import type { EventRecord } from './records';
 import { renderSubscription } from './render-billing';
-import { advancePeriodEnd, failPayment } from './subscription-actions';
+import { advancePeriodEnd, endSubscription, failPayment } from './subscription-actions';
 
 /** An event's identity and delivery state, without its payload, for /_control/events. */
 export function eventSummary(event: EventRecord) {
@@ -54,6 +54,11 @@ export function controlRoutes(ctx: FakeContext, onReset: () => void): Route[] {
     route('POST', '/_control/subscriptions/:id/fail-payment', ({ params }) => {
       const id = params[0] ?? '';
       failPayment(ctx, requireSubscription(ctx, id));
+      return subscriptionReply(id);
+    }),
+    route('POST', '/_control/subscriptions/:id/end', ({ params }) => {
+      const id = params[0] ?? '';
+      endSubscription(ctx, requireSubscription(ctx, id));
       return subscriptionReply(id);
     }),
     route('POST', '/_control/reset', () => {

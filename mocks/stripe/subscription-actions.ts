@@ -45,7 +45,8 @@ export function updateSubscription(ctx: FakeContext, sub: SubscriptionRecord, up
   });
 }
 
-function endSubscription(ctx: FakeContext, sub: SubscriptionRecord): void {
+/** Ends a subscription now (customer.subscription.deleted), as cancelling it without waiting for the period end does. */
+export function endSubscription(ctx: FakeContext, sub: SubscriptionRecord): void {
   const now = nowSeconds();
   sub.status = 'canceled';
   sub.canceledAt = sub.canceledAt ?? now;
