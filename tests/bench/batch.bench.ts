@@ -5,7 +5,7 @@ import { db, pool } from '@/db';
 import { accounts, users } from '@/db/schema';
 import { batchColumnNames } from '@/lib/batch/columns';
 import { saveBatch } from '@/lib/batch/commit';
-import { parseBatchCsv } from '@/lib/batch/evaluate';
+import { parseBatchCsv } from '@/lib/batch/parse';
 import { recordResults, verdict } from './stats';
 
 function sheet(n: number): string {

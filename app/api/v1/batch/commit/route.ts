@@ -1,15 +1,13 @@
 import { requireUser } from '@/lib/auth/guards';
 import { saveBatch } from '@/lib/batch/commit';
-import { parseBatchTarget, readBatchRequest } from '@/lib/batch/read-request';
+import { parseBatchTarget, readBatchCommit } from '@/lib/batch/read-request';
 import { guarded } from '@/lib/http/guarded';
 
 export const runtime = 'nodejs';
 
-/** Saves a checked sheet: the sized rows as sizings (and quote lines) plus the original file, in one transaction. */
+/** Saves the rows that passed the last check as sizings (and quote lines) plus the original file, in one transaction. */
 export const POST = guarded(async (req) => {
   const user = await requireUser('batch:upload');
-  const { sheet, file, target } = await readBatchRequest(req);
-  if (sheet.problems.length)
-    return Response.json({ errors: sheet.problems.map((message) => ({ path: 'file', message })) }, { status: 422 });
-  return Response.json(await saveBatch(user, parseBatchTarget(target), sheet.rows, file));
+  const { file, sheetRows, rows, target } = await readBatchCommit(req);
+  return Response.json(await saveBatch(user, parseBatchTarget(target), rows, file, sheetRows));
 });
