@@ -15,6 +15,7 @@ const protectedPrefixes = [
   '/admin',
   '/batch',
   '/mail',
+  '/home',
 ];
 
 function isProtected(pathname: string): boolean {

@@ -23,12 +23,14 @@ export type Permission =
   | 'datasheet:issue'
   | 'datasheet:read'
   | 'support:search'
+  | 'sizing:lookup'
   | 'audit:read'
   | 'users:manage'
   | 'billing:manage'
   | 'batch:upload';
 
-// Support looks up anything but changes no engineering; admins manage people and roles.
+// Support looks up anything but changes no engineering; sales engineers look up their own customers' sizings
+// (lib/support/scope.ts); admins manage people and roles.
 const grants: Record<UserRole, readonly Permission[]> = {
   sales_engineer: [
     'sizing:save',
@@ -40,6 +42,7 @@ const grants: Record<UserRole, readonly Permission[]> = {
     'member:invite',
     'datasheet:issue',
     'datasheet:read',
+    'sizing:lookup',
     'batch:upload',
   ],
   customer: [
@@ -53,7 +56,15 @@ const grants: Record<UserRole, readonly Permission[]> = {
     'billing:manage',
     'batch:upload',
   ],
-  support: ['sizing:read', 'quote:read', 'account:read', 'datasheet:read', 'support:search', 'audit:read'],
+  support: [
+    'sizing:read',
+    'quote:read',
+    'account:read',
+    'datasheet:read',
+    'support:search',
+    'sizing:lookup',
+    'audit:read',
+  ],
   admin: [
     'sizing:save',
     'sizing:read',
@@ -65,6 +76,7 @@ const grants: Record<UserRole, readonly Permission[]> = {
     'datasheet:issue',
     'datasheet:read',
     'support:search',
+    'sizing:lookup',
     'audit:read',
     'users:manage',
     'batch:upload',

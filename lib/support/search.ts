@@ -3,7 +3,9 @@ import { sql, type SQL } from 'drizzle-orm';
 import { db } from '@/db';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { accountScope } from '@/lib/auth/guards';
+import { effectiveSort, paddedDocumentNumber } from './numbers';
 import type { SupportSearch } from './schema';
+import { lookupScope } from './scope';
 
 export type SupportHit = {
   id: string;
@@ -46,6 +48,13 @@ function matchingIds(q: string, fuzzy: boolean): SQL {
   const lower = q.toLowerCase();
   const like = `%${escapeLike(lower)}%`;
   const prefix = `${escapeLike(q.toUpperCase())}%`;
+  const padded = paddedDocumentNumber(q);
+  const exact = padded
+    ? sql`
+    union select d.sizing_id from datasheets d where d.number = ${padded}
+    union select qi.sizing_id from quote_items qi join quotes q4 on q4.id = qi.quote_id where q4.number = ${padded}
+    union select t.id from sizings t where t.number = ${padded}`
+    : sql``;
   const typo = fuzzy
     ? sql`
     union select t.id from sizings t where lower(t.equipment_tag) % ${lower}
@@ -58,6 +67,7 @@ function matchingIds(q: string, fuzzy: boolean): SQL {
     union select t.id from sizings t where t.account_id in (select a2.id from accounts a2 where a2.name ilike ${like})
     union select d.sizing_id from datasheets d where d.number like ${prefix}
     union select qi.sizing_id from quote_items qi join quotes q2 on q2.id = qi.quote_id where q2.number like ${prefix} or lower(q2.title) like ${like}
+    ${exact}
     ${typo}`;
 }
 
@@ -65,6 +75,8 @@ function conditions(user: CurrentUser, f: SupportSearch, fuzzy: boolean): SQL[] 
   const c: SQL[] = [];
   const scope = accountScope(user);
   if (scope) c.push(sql`s.account_id = ${scope}`);
+  const mine = lookupScope(user);
+  if (mine) c.push(mine);
   if (f.accountId) c.push(sql`s.account_id = ${f.accountId}`);
   if (f.q) c.push(sql`s.id in (${matchingIds(f.q, fuzzy)})`);
   if (f.service) c.push(sql`s.service = ${f.service}`);
@@ -81,8 +93,16 @@ function conditions(user: CurrentUser, f: SupportSearch, fuzzy: boolean): SQL[] 
   return c;
 }
 
+/** Best match first: the document typed exactly, then the closest words in the sizing or its customer's name. */
+function relevance(q: string): SQL {
+  const number = paddedDocumentNumber(q) ?? q.trim().toUpperCase();
+  const lower = q.toLowerCase();
+  return sql`(case when s.number = ${number} or exists (select 1 from datasheets d where d.sizing_id = s.id and d.number = ${number}) then 2 else 0 end)
+    + greatest(word_similarity(${lower}, s.search_text), word_similarity(${lower}, lower(a.name))) desc, s.created_at desc, s.id`;
+}
+
 function orderBy(f: SupportSearch): SQL {
-  switch (f.sort) {
+  switch (effectiveSort(f.sort, f.q)) {
     case 'oldest':
       return sql`s.created_at asc, s.id`;
     case 'largest':
@@ -90,9 +110,7 @@ function orderBy(f: SupportSearch): SQL {
     case 'smallest':
       return sql`s.headline_kw asc, s.id`;
     case 'relevance':
-      return f.q
-        ? sql`similarity(${f.q.toLowerCase()}, s.search_text) desc, s.created_at desc`
-        : sql`s.created_at desc, s.id`;
+      return f.q ? relevance(f.q) : sql`s.created_at desc, s.id`;
     default:
       return sql`s.created_at desc, s.id`;
   }

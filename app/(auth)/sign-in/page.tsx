@@ -3,6 +3,7 @@ import Link from 'next/link';
 import { Logo } from '@/app/_components/logo';
 import { clerkEnabled } from '@/lib/env';
 import { demoSignIns } from '@/lib/auth/demo-users';
+import { HOME_PATH } from '@/lib/auth/home';
 import { ClerkSignIn } from './_components/clerk-sign-in';
 import { SignInForm } from './_components/sign-in-form';
 
@@ -10,8 +11,9 @@ export const metadata: Metadata = { title: 'Sign in' };
 
 function safeNext(next: string | string[] | undefined): string {
   const value = Array.isArray(next) ? next[0] : next;
-  // Only same-site paths: an absolute or protocol-relative URL would be an open redirect.
-  return value && value.startsWith('/') && !value.startsWith('//') ? value : '/size';
+  // Only same-site paths: an absolute or protocol-relative URL would be an open redirect. With none, each
+  // role lands on its own home.
+  return value && value.startsWith('/') && !value.startsWith('//') ? value : HOME_PATH;
 }
 
 export default async function SignInPage({

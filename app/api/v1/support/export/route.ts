@@ -10,7 +10,7 @@ export const dynamic = 'force-dynamic';
 
 /** The current look-up as CSV (up to 5,000 rows), with formula-looking cells neutralised. */
 export const GET = guarded(async (req) => {
-  const user = await requireUser('support:search');
+  const user = await requireUser('sizing:lookup');
   const parsed = supportSearchSchema.safeParse({
     ...Object.fromEntries(new URL(req.url).searchParams),
     page: 1,

@@ -10,7 +10,7 @@ export const dynamic = 'force-dynamic';
 
 /** Support look-up: the search behind /support, audited on every call. */
 export const GET = guarded(async (req) => {
-  const user = await requireUser('support:search');
+  const user = await requireUser('sizing:lookup');
   const parsed = supportSearchSchema.safeParse(Object.fromEntries(new URL(req.url).searchParams));
   if (!parsed.success) return Response.json({ errors: zodErrors(parsed.error) }, { status: 400 });
   const results = await searchSizings(user, parsed.data);
