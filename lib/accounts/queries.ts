@@ -1,9 +1,11 @@
 import 'server-only';
 import { and, asc, desc, eq, isNull, sql } from 'drizzle-orm';
 import { db } from '@/db';
-import { accounts, invitations, memberships, quotes, subscriptions, users } from '@/db/schema';
+import { accounts, invitations, memberships, users } from '@/db/schema';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { accountScope, assertAccountAccess, NotFoundError } from '@/lib/auth/guards';
+import type { SubscriptionState } from '@/lib/billing/labels';
+import { accountFigureColumns, subscriptionStateOf } from './figures';
 
 export type AccountSummary = {
   id: string;
@@ -11,27 +13,20 @@ export type AccountSummary = {
   site: string | null;
   memberCount: number;
   quoteCount: number;
-  subscriptionStatus: string | null;
+  sizingCount: number;
+  subscription: SubscriptionState;
 };
 
 /** Accounts the user may see: every account for staff, their own for customers. */
 export async function listAccounts(user: CurrentUser): Promise<AccountSummary[]> {
   const scope = accountScope(user);
-  return db
-    .select({
-      id: accounts.id,
-      name: accounts.name,
-      site: accounts.site,
-      memberCount: sql<number>`(select count(*)::int from ${memberships} m where m.account_id = ${accounts.id})`,
-      quoteCount: sql<number>`(select count(*)::int from ${quotes} q where q.account_id = ${accounts.id})`,
-      subscriptionStatus: sql<
-        string | null
-      >`(select s.status from ${subscriptions} s where s.account_id = ${accounts.id} order by s.updated_at desc limit 1)`,
-    })
+  const rows = await db
+    .select({ id: accounts.id, name: accounts.name, site: accounts.site, ...accountFigureColumns })
     .from(accounts)
     .where(scope ? eq(accounts.id, scope) : undefined)
     .orderBy(asc(accounts.name))
     .limit(500);
+  return rows.map(({ subscription, ...a }) => ({ ...a, subscription: subscriptionStateOf(subscription) }));
 }
 
 export type AccountDetail = {
@@ -42,6 +37,10 @@ export type AccountDetail = {
   billingContactEmail: string | null;
   barometricPressureKpa: number | null;
   siteAltitudeM: number | null;
+  memberCount: number;
+  quoteCount: number;
+  sizingCount: number;
+  subscription: SubscriptionState;
   members: { id: string; name: string; email: string }[];
   pendingInvitations: { id: string; email: string; expiresAt: Date }[];
 };
@@ -57,6 +56,7 @@ export async function getAccount(user: CurrentUser, accountId: string): Promise<
       billingContactEmail: accounts.billingContactEmail,
       barometricPressureKpa: accounts.barometricPressureKpa,
       siteAltitudeM: accounts.siteAltitudeM,
+      ...accountFigureColumns,
     })
     .from(accounts)
     .where(eq(accounts.id, accountId))
@@ -75,7 +75,7 @@ export async function getAccount(user: CurrentUser, accountId: string): Promise<
       and(eq(invitations.accountId, accountId), isNull(invitations.acceptedAt), sql`${invitations.expiresAt} > now()`),
     )
     .orderBy(desc(invitations.createdAt));
-  return { ...row, members, pendingInvitations };
+  return { ...row, subscription: subscriptionStateOf(row.subscription), members, pendingInvitations };
 }
 
 /** Names for pickers (save-to-account, new quote), with each site's barometric pressure or altitude for the desk. */
