@@ -10,6 +10,7 @@ import {
   uniqueIndex,
   uuid,
 } from 'drizzle-orm/pg-core';
+import { unitSystem } from './enums';
 import { users } from './users';
 
 /** A customer account: the company a vendor sizes equipment for, and the unit that subscribes. */
@@ -24,6 +25,8 @@ export const accounts = pgTable(
     // Site barometric pressure drives gauge conversions; altitude is kept when that is what was given.
     barometricPressureKpa: doublePrecision('barometric_pressure_kpa'),
     siteAltitudeM: doublePrecision('site_altitude_m'),
+    // The units the customer works in: the desk's defaults for its people and its documents follow it.
+    unitSystem: unitSystem('unit_system').notNull().default('si'),
     stripeCustomerId: text('stripe_customer_id'),
     createdByUserId: uuid('created_by_user_id').references(() => users.id, { onDelete: 'set null' }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),

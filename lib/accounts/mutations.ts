@@ -49,6 +49,7 @@ export async function updateAccount(user: CurrentUser, accountId: string, input:
       billingContactEmail: input.billingContactEmail ?? null,
       barometricPressureKpa: input.barometricPressureKpa ?? null,
       siteAltitudeM: input.siteAltitudeM ?? null,
+      unitSystem: input.unitSystem,
     };
     const res = await tx
       .update(accounts)
@@ -56,6 +57,16 @@ export async function updateAccount(user: CurrentUser, accountId: string, input:
       .where(eq(accounts.id, accountId))
       .returning({ id: accounts.id });
     if (!res[0]) throw new ActionError('That account no longer exists.', 404);
+    // The account's units are its people's desk defaults: members follow a change.
+    await tx
+      .update(users)
+      .set({ unitSystem: input.unitSystem, updatedAt: new Date() })
+      .where(
+        and(
+          sql`${users.id} in (select m.user_id from memberships m where m.account_id = ${accountId})`,
+          sql`${users.unitSystem} <> ${input.unitSystem}`,
+        ),
+      );
     await writeAudit(tx, {
       actor: user,
       action: 'account.updated',
@@ -136,9 +147,15 @@ export async function acceptInvitation(
       .where(eq(sql`lower(${users.email})`, inv.email.toLowerCase()))
       .limit(1);
     if (taken) throw new ActionError('A Dutywise user with this e-mail already exists; sign in instead.', 409);
+    // A new member starts in the units their company works in.
+    const [acct] = await tx
+      .select({ unitSystem: accounts.unitSystem })
+      .from(accounts)
+      .where(eq(accounts.id, inv.accountId))
+      .limit(1);
     const [u] = await tx
       .insert(users)
-      .values({ email: inv.email, name, role: 'customer', passwordHash })
+      .values({ email: inv.email, name, role: 'customer', passwordHash, unitSystem: acct?.unitSystem ?? 'si' })
       .returning({ id: users.id });
     if (!u) throw new Error('user insert returned no row');
     await tx.insert(memberships).values({ accountId: inv.accountId, userId: u.id });

@@ -37,6 +37,7 @@ export type AccountDetail = {
   billingContactEmail: string | null;
   barometricPressureKpa: number | null;
   siteAltitudeM: number | null;
+  unitSystem: 'si' | 'us';
   memberCount: number;
   quoteCount: number;
   sizingCount: number;
@@ -56,6 +57,7 @@ export async function getAccount(user: CurrentUser, accountId: string): Promise<
       billingContactEmail: accounts.billingContactEmail,
       barometricPressureKpa: accounts.barometricPressureKpa,
       siteAltitudeM: accounts.siteAltitudeM,
+      unitSystem: accounts.unitSystem,
       ...accountFigureColumns,
     })
     .from(accounts)
@@ -79,9 +81,15 @@ export async function getAccount(user: CurrentUser, accountId: string): Promise<
 }
 
 /** Names for pickers (save-to-account, new quote), with each site's barometric pressure or altitude for the desk. */
-export async function listAccountOptions(
-  user: CurrentUser,
-): Promise<{ id: string; name: string; barometricPressureKpa: number | null; siteAltitudeM: number | null }[]> {
+export async function listAccountOptions(user: CurrentUser): Promise<
+  {
+    id: string;
+    name: string;
+    barometricPressureKpa: number | null;
+    siteAltitudeM: number | null;
+    unitSystem: 'si' | 'us';
+  }[]
+> {
   const scope = accountScope(user);
   return db
     .select({
@@ -89,6 +97,7 @@ export async function listAccountOptions(
       name: accounts.name,
       barometricPressureKpa: accounts.barometricPressureKpa,
       siteAltitudeM: accounts.siteAltitudeM,
+      unitSystem: accounts.unitSystem,
     })
     .from(accounts)
     .where(scope ? eq(accounts.id, scope) : undefined)

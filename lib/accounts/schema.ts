@@ -34,6 +34,7 @@ export const accountInputSchema = z.object({
     .transform((v) => (v ? v : undefined)),
   barometricPressureKpa: optionalNumber(50, 110, 'Site barometric pressure (kPa)'),
   siteAltitudeM: optionalNumber(-500, 6000, 'Site altitude (m)'),
+  unitSystem: z.enum(['si', 'us'], { message: 'Choose SI or US customary units.' }).default('si'),
 });
 export type AccountInput = z.output<typeof accountInputSchema>;
 

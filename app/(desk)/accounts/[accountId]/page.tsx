@@ -30,6 +30,7 @@ function AccountDetails({ account }: { account: AccountDetail }) {
     ['Billing contact', account.billingContactName ?? '—'],
     ['Billing contact e-mail', account.billingContactEmail ?? 'None: quotes cannot be sent until one is added'],
     ['Site atmosphere', siteAtmosphere(account)],
+    ['Units', account.unitSystem === 'us' ? 'US customary (°F, psia/psig, lb/h)' : 'SI (°C, bar, kg/h)'],
   ];
   return (
     <>
@@ -68,6 +69,7 @@ function formValues(a: AccountDetail) {
     billingContactEmail: a.billingContactEmail ?? '',
     barometricPressureKpa: a.barometricPressureKpa === null ? '' : String(a.barometricPressureKpa),
     siteAltitudeM: a.siteAltitudeM === null ? '' : String(a.siteAltitudeM),
+    unitSystem: a.unitSystem,
   };
 }
 

@@ -7,6 +7,7 @@ import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { applyFieldErrors, formErrorText } from '@/app/_components/action-errors';
 import { FormError, FormNotice } from '@/app/_components/form-errors';
+import { SelectField } from '@/app/_components/select-field';
 import { SubmitButton } from '@/app/_components/submit-button';
 import { TextField } from '@/app/_components/text-field';
 import { accountInputSchema, type AccountInput } from '@/lib/accounts/schema';
@@ -24,7 +25,13 @@ const FIELDS = [
   'billingContactEmail',
   'barometricPressureKpa',
   'siteAltitudeM',
+  'unitSystem',
 ] as const;
+
+const UNIT_OPTIONS = [
+  { value: 'si', label: 'SI (°C, bar, kg/h)' },
+  { value: 'us', label: 'US customary (°F, psig, lb/h)' },
+];
 
 /** Customer account details, for a new prospect or to edit an existing account. */
 export function AccountForm({ mode, initial }: { mode: Mode; initial?: FormValues }) {
@@ -48,6 +55,7 @@ export function AccountForm({ mode, initial }: { mode: Mode; initial?: FormValue
       billingContactEmail: '',
       barometricPressureKpa: '',
       siteAltitudeM: '',
+      unitSystem: 'si',
     },
   });
 
@@ -109,6 +117,13 @@ export function AccountForm({ mode, initial }: { mode: Mode; initial?: FormValue
         hint="Quotes are sent to this address."
         error={e.billingContactEmail?.message}
         {...register('billingContactEmail')}
+      />
+      <SelectField
+        label="Units the customer works in"
+        hint="Sets the desk's units for its people, and its documents."
+        error={e.unitSystem?.message}
+        options={UNIT_OPTIONS}
+        {...register('unitSystem')}
       />
       <PressureBasisField
         className="md:col-span-2"

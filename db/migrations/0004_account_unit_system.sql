@@ -1,0 +1,1 @@
+ALTER TABLE "accounts" ADD COLUMN "unit_system" "unit_system" DEFAULT 'si' NOT NULL;
