@@ -4,24 +4,20 @@ import { Logo } from '@/app/_components/logo';
 import { clerkEnabled } from '@/lib/env';
 import { demoSignIns } from '@/lib/auth/demo-users';
 import { HOME_PATH } from '@/lib/auth/home';
+import { safeNextParam, withNext } from '../_lib/safe-next';
 import { ClerkSignIn } from './_components/clerk-sign-in';
 import { SignInForm } from './_components/sign-in-form';
 
 export const metadata: Metadata = { title: 'Sign in' };
-
-function safeNext(next: string | string[] | undefined): string {
-  const value = Array.isArray(next) ? next[0] : next;
-  // Only same-site paths: an absolute or protocol-relative URL would be an open redirect. With none, each
-  // role lands on its own home.
-  return value && value.startsWith('/') && !value.startsWith('//') ? value : HOME_PATH;
-}
 
 export default async function SignInPage({
   searchParams,
 }: {
   searchParams: Promise<Record<string, string | string[] | undefined>>;
 }) {
-  const next = safeNext((await searchParams).next);
+  const asked = safeNextParam((await searchParams).next);
+  // With no page asked for, each role lands on its own home.
+  const next = asked ?? HOME_PATH;
   return (
     <main className="mx-auto flex min-h-screen max-w-md flex-col justify-center px-6 py-12">
       <Link href="/" className="mb-8 flex items-center gap-2 text-xl font-semibold">
@@ -58,7 +54,7 @@ export default async function SignInPage({
       )}
       <p className="mt-6 text-sm text-ink-muted">
         New customer?{' '}
-        <Link className="text-tide-600 underline" href="/sign-up">
+        <Link className="text-tide-600 underline" href={withNext('/sign-up', asked)} data-testid="create-account-link">
           Create an account
         </Link>
       </p>

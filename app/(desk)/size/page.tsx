@@ -22,7 +22,12 @@ export default async function SizePage({ searchParams }: { searchParams: SearchP
   const [accounts, quotes, start] = await Promise.all([
     user && canSave ? listAccountOptions(user) : Promise.resolve([]),
     user && canQuote ? listOpenQuotes(user) : Promise.resolve([]),
-    loadDeskStart(user, { sizing: firstParam(sp.sizing), revise: firstParam(sp.revise), i: firstParam(sp.i) }),
+    loadDeskStart(user, {
+      sizing: firstParam(sp.sizing),
+      revise: firstParam(sp.revise),
+      i: firstParam(sp.i),
+      from: firstParam(sp.from),
+    }),
   ]);
   // A saved preference wins; a prospect opening a link sees it in the units it was made in.
   const i = start.input;

@@ -13,7 +13,7 @@ import { signUpAction } from '../actions';
 
 const FIELDS = ['name', 'email', 'password', 'company', 'site'] as const;
 
-export function SignUpForm() {
+export function SignUpForm({ next }: { next: string }) {
   const router = useRouter();
   const [formError, setFormError] = useState<string | null>(null);
   const { register, handleSubmit, setError, formState } = useForm<SignUpInput>({
@@ -26,7 +26,7 @@ export function SignUpForm() {
     setFormError(null);
     const res = await signUpAction(values);
     if (res.ok) {
-      router.push('/size');
+      router.push(next);
       router.refresh();
     } else {
       setFormError(formErrorText(res.formError, applyFieldErrors(setError, res.fieldErrors, FIELDS)));

@@ -22,6 +22,7 @@ import { SavePanel } from './save-panel';
 import { ShareActions } from './share-actions';
 import { SignInInvite } from './sign-in-invite';
 import { UnitSystemToggle } from './unit-system-toggle';
+import { useInputsInUrl } from './use-inputs-in-url';
 import { useLiveResult } from './use-live-result';
 import { useUnitSystem } from './use-unit-system';
 
@@ -72,6 +73,7 @@ export function SizingDesk({
   // eslint-disable-next-line react-hooks/exhaustive-deps -- keyed on the serialised values, not the object identity
   const validation = useMemo(() => validateDesk(values), [snapshot]);
   const live = useLiveResult(validation.ok ? validation.key : null);
+  useInputsInUrl(validation.ok ? validation.input : null, validation.ok ? validation.key : null);
   const units = useUnitSystem(initialSystem, viewer.signedIn, form, exact);
   const barometricSource = useBarometricSource(values, accounts);
   const server = live.failure?.kind === 'input' ? groupIssues(live.failure.issues, values.service) : null;
@@ -142,7 +144,7 @@ export function SizingDesk({
                   customers.
                 </p>
               ) : (
-                <SignInInvite nextPath={validation.ok ? sharePath(validation.input) : '/size'} />
+                <SignInInvite nextPath={validation.ok ? `${sharePath(validation.input)}&from=desk` : '/size'} />
               )}
               <ShareActions
                 input={validation.ok ? validation.input : null}
