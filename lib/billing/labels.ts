@@ -20,3 +20,15 @@ export const subscriptionTone: Readonly<Record<SubscriptionState, 'good' | 'caut
   none: 'neutral',
   lapsed: 'neutral',
 };
+
+/** The payment provider's subscription statuses in Dutywise's words, for the audit trail. */
+export const providerStatusWords: Readonly<Record<string, string>> = {
+  active: 'Active',
+  trialing: 'Active (trial)',
+  past_due: 'Payment failed',
+  unpaid: 'Ended (unpaid)',
+  canceled: 'Ended',
+  incomplete: 'Awaiting first payment',
+  incomplete_expired: 'First payment not made',
+  paused: 'Paused',
+};
