@@ -7,6 +7,7 @@ import { ActionError } from '@/lib/actions/define-action';
 import { writeAudit } from '@/lib/audit/write';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { assertAccountAccess } from '@/lib/auth/guards';
+import type { UserRole } from '@/lib/auth/roles';
 import { hashPassword } from '@/lib/auth/local/passwords';
 import { enqueueEmail } from '@/lib/email/enqueue';
 import { env } from '@/lib/env';
@@ -120,16 +121,21 @@ export async function inviteMember(user: CurrentUser, input: InviteInput): Promi
   return { inviteUrl };
 }
 
-/** Turns an invitation into a customer user of that account (local identity). */
+/** Turns an invitation into a user (local identity): a customer of its account, or staff in its role. */
 export async function acceptInvitation(
   token: string,
   name: string,
   password: string,
-): Promise<{ userId: string; role: 'customer' }> {
+): Promise<{ userId: string; role: UserRole }> {
   const passwordHash = await hashPassword(password);
   return db.transaction(async (tx) => {
     const [inv] = await tx
-      .select({ id: invitations.id, accountId: invitations.accountId, email: invitations.email })
+      .select({
+        id: invitations.id,
+        accountId: invitations.accountId,
+        role: invitations.role,
+        email: invitations.email,
+      })
       .from(invitations)
       .where(
         and(
@@ -148,27 +154,41 @@ export async function acceptInvitation(
       .limit(1);
     if (taken) throw new ActionError('A Dutywise user with this e-mail already exists; sign in instead.', 409);
     // A new member starts in the units their company works in.
-    const [acct] = await tx
-      .select({ unitSystem: accounts.unitSystem })
-      .from(accounts)
-      .where(eq(accounts.id, inv.accountId))
-      .limit(1);
+    const [acct] = inv.accountId
+      ? await tx
+          .select({ unitSystem: accounts.unitSystem })
+          .from(accounts)
+          .where(eq(accounts.id, inv.accountId))
+          .limit(1)
+      : [];
     const [u] = await tx
       .insert(users)
-      .values({ email: inv.email, name, role: 'customer', passwordHash, unitSystem: acct?.unitSystem ?? 'si' })
+      .values({ email: inv.email, name, role: inv.role, passwordHash, unitSystem: acct?.unitSystem ?? 'si' })
       .returning({ id: users.id });
     if (!u) throw new Error('user insert returned no row');
-    await tx.insert(memberships).values({ accountId: inv.accountId, userId: u.id });
+    if (inv.accountId) await tx.insert(memberships).values({ accountId: inv.accountId, userId: u.id });
     await tx.update(invitations).set({ acceptedAt: new Date() }).where(eq(invitations.id, inv.id));
-    await writeAudit(tx, {
-      actor: { id: u.id, role: 'customer' },
-      action: 'member.joined',
-      entityType: 'account',
-      entityId: inv.accountId,
-      accountId: inv.accountId,
-      detail: { email: inv.email },
-    });
-    return { userId: u.id, role: 'customer' as const };
+    await writeAudit(
+      tx,
+      inv.accountId
+        ? {
+            actor: { id: u.id, role: inv.role },
+            action: 'member.joined',
+            entityType: 'account',
+            entityId: inv.accountId,
+            accountId: inv.accountId,
+            detail: { email: inv.email },
+          }
+        : {
+            actor: { id: u.id, role: inv.role },
+            action: 'user.joined',
+            entityType: 'user',
+            entityId: u.id,
+            accountId: null,
+            detail: { email: inv.email, role: inv.role },
+          },
+    );
+    return { userId: u.id, role: inv.role };
   });
 }
 

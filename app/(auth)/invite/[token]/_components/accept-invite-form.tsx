@@ -10,6 +10,7 @@ import { FormError } from '@/app/_components/form-errors';
 import { SubmitButton } from '@/app/_components/submit-button';
 import { TextField } from '@/app/_components/text-field';
 import { acceptInviteSchema } from '@/lib/accounts/schema';
+import { HOME_PATH } from '@/lib/auth/home';
 import { acceptInviteAction } from '../actions';
 
 type Values = z.input<typeof acceptInviteSchema>;
@@ -27,7 +28,7 @@ export function AcceptInviteForm({ token, email }: { token: string; email: strin
     setFormError(null);
     const res = await acceptInviteAction(values);
     if (res.ok) {
-      router.push('/size');
+      router.push(HOME_PATH);
       router.refresh();
     } else {
       setFormError(formErrorText(res.formError, applyFieldErrors(setError, res.fieldErrors, ['name', 'password'])));
