@@ -18,6 +18,7 @@ import { DeskProvider } from './desk-context';
 import { DeskForm } from './desk-form';
 import { DeskHeader } from './desk-header';
 import { ResultPanel } from './result-panel';
+import { ResultSummaryBar } from './result-summary-bar';
 import { SavePanel } from './save-panel';
 import { ShareActions } from './share-actions';
 import { SignInInvite } from './sign-in-invite';
@@ -104,7 +105,7 @@ export function SizingDesk({
         <main
           data-testid="sizing-desk"
           data-hydrated={hydrated}
-          className="mx-auto w-full max-w-[96rem] px-4 py-5 md:px-6 xl:px-8"
+          className="mx-auto w-full max-w-[96rem] px-4 pt-5 pb-16 md:px-6 lg:pb-5 xl:px-8"
         >
           <DeskHeader
             toggle={<UnitSystemToggle system={units.system} onChange={units.change} note={units.note} />}
@@ -161,6 +162,7 @@ export function SizingDesk({
               stale={live.state === 'recomputing'}
             />
           )}
+          <ResultSummaryBar live={live} />
         </main>
       </DeskProvider>
     </FormProvider>

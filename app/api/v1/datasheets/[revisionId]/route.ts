@@ -9,13 +9,23 @@ export const dynamic = 'force-dynamic';
 const fail = (status: number, message: string, extra: Record<string, unknown> = {}) =>
   Response.json({ errors: [{ path: '', message }], ...extra }, { status, headers: { 'Cache-Control': 'no-store' } });
 
-const download = guarded(async (_req, { params }) => {
+/** A person who opened the link in a browser (not a script) gets a page, not a JSON body. */
+const wantsPage = (req: Request) => (req.headers.get('accept') ?? '').includes('text/html');
+
+const download = guarded(async (req, { params }) => {
   const user = await requireUser('datasheet:read');
   const { revisionId = '' } = await params;
   if (!z.uuid().safeParse(revisionId).success) return fail(404, 'No such datasheet revision.');
   const out = await getRevisionDownload(user, revisionId);
   if (out.status === 'not-found') return fail(404, 'No such datasheet revision.');
-  if (out.status === 'locked') return fail(402, out.message, { billingUrl: '/billing' });
+  if (out.status === 'locked') {
+    if (wantsPage(req))
+      return new Response(null, {
+        status: 303,
+        headers: { Location: '/billing?locked=datasheet', 'Cache-Control': 'no-store' },
+      });
+    return fail(402, out.message, { billingUrl: '/billing' });
+  }
   return new Response(new Uint8Array(out.bytes), {
     status: 200,
     headers: {
