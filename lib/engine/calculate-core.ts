@@ -1,5 +1,6 @@
 import { EosError } from '../thermo/eos/eos-error';
 import { ThermoRangeError } from '../thermo/errors';
+import { CoolerFloodedError } from './real-gas/condensation';
 import { STANDARD_FLOW_BASES } from '../units/flow';
 import { flowFromKgPerS as flowFromKgPerSImported } from '../units/flow';
 import { temperatureToK } from '../units/temperature';
@@ -139,7 +140,7 @@ function compressorCase(input: CompressorInput, common: ResolvedCommon, issues: 
   const r = common.gas.gasConstantJPerKgK;
   checkPropertyOverrides(input.k, input.cpJPerKgK, r, issues);
   checkEfficiencies(input, issues);
-  if (issues.length === 0 && !(limitK > common.inletTemperatureK)) {
+  if (issues.length === 0 && input.dischargeTemperatureLimit && !(limitK > common.inletTemperatureK)) {
     issues.push({
       path: 'dischargeTemperatureLimit',
       message: `the discharge-temperature limit ${c2(limitK)} must be above the suction temperature ${c2(common.inletTemperatureK)}`,
@@ -200,6 +201,9 @@ function compressorResult(input: CompressorInput, common: ResolvedCommon, issues
   try {
     compressor = sizeCompressor(c);
   } catch (err) {
+    if (err instanceof CoolerFloodedError) {
+      throw new SizingInputError([{ path: 'intercoolerOutletTemperature', message: err.message }]);
+    }
     if (err instanceof EosError) {
       throw new SizingInputError([
         {

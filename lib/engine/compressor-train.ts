@@ -10,7 +10,14 @@ import {
   type StageState,
 } from './compression';
 import type { CompressionMethodResult, CompressorStage, CoolerResult } from './result-types';
-import { condensateLiquids, coolerSplit, liquidState, vapourGas } from './real-gas/condensation';
+import {
+  CoolerFloodedError,
+  MIN_VAPOUR_FRACTION,
+  condensateLiquids,
+  coolerSplit,
+  liquidState,
+  vapourGas,
+} from './real-gas/condensation';
 import { idealPolytropic, stageRow } from './stage-row';
 
 // Imports used per call, re-bound to module constants once: under tsx's CommonJS output every use of an
@@ -91,6 +98,7 @@ type IdealCooled = { cooler: CoolerResult; next: TrainCase };
 function idealCooler(
   c: TrainCase,
   method: Method,
+  stage: number,
   kind: CoolerResult['kind'],
   fromK: number,
   toK: number,
@@ -100,6 +108,8 @@ function idealCooler(
   const sensible = coolerDutyKw(c, method, fromK, toK, cpJPerKgK);
   const split = toK < fromK ? coolerSplit(c.gas, toK, outletPa) : null;
   if (!split) return { cooler: dryCooler(kind, toK, outletPa, sensible), next: c };
+  const total = split.vapourFraction <= MIN_VAPOUR_FRACTION;
+  if (total && kind === 'intercooler') throw new CoolerFloodedError(stage, toK, outletPa);
   const molPerS = c.massFlowKgPerS / (c.gas.molarMassKgPerKmol / 1000);
   const liquidMolPerS = molPerS * (1 - split.vapourFraction);
   let latentPerMol = 0;
@@ -109,7 +119,7 @@ function idealCooler(
     latentPerMol -= liquid.share * state.enthalpyDepartureJPerMol;
     liquidKgPerMol += liquid.share * fluid.kgPerMol;
   }
-  const vapour = vapourGas(split);
+  const vapour = total ? c.gas : vapourGas(split);
   const latentKw = (liquidMolPerS * latentPerMol) / 1000;
   const cooler: CoolerResult = {
     ...dryCooler(kind, toK, outletPa, sensible + latentKw),
@@ -153,12 +163,12 @@ export function runTrain(suction: TrainCase, method: Method, stages: number, eta
     if (i < stages - 1) {
       nextK = cooledK(c, s.dischargeK);
       const outPa = dischargePa * (1 - c.interstageDropFraction);
-      cooled = idealCooler(c, method, 'intercooler', s.dischargeK, nextK, outPa, s.cpJPerKgK);
+      cooled = idealCooler(c, method, i + 1, 'intercooler', s.dischargeK, nextK, outPa, s.cpJPerKgK);
       intercoolerDutiesKw.push(cooled.cooler.dutyKw);
       coolerTotal += cooled.cooler.dutyKw;
     } else if (c.aftercoolerOutletTemperatureK !== null) {
       const outK = Math.min(c.aftercoolerOutletTemperatureK, s.dischargeK);
-      cooled = idealCooler(c, method, 'aftercooler', s.dischargeK, outK, dischargePa, s.cpJPerKgK);
+      cooled = idealCooler(c, method, i + 1, 'aftercooler', s.dischargeK, outK, dischargePa, s.cpJPerKgK);
       aftercoolerDutyKw = cooled.cooler.dutyKw;
     }
     out.push(idealStageRow(c, method, i + 1, ratio, inletK, inletPa, dischargePa, s, cooled?.cooler ?? null));

@@ -109,7 +109,7 @@ export type CoolerResult = {
   outletPressureKpa: number;
   /** Heat removed, kW: sensible plus the latent heat of any condensate. */
   dutyKw: number;
-  /** Part of the duty released by condensation, kW (0 when nothing condenses). */
+  /** Part of the duty beyond cooling the stream as a gas to the same outlet state: the condensation, kW. */
   latentDutyKw: number;
   /** Liquid knocked out at the cooler outlet, kg/h (0 when nothing condenses). */
   condensateKgPerH: number;

@@ -79,6 +79,24 @@ function present(...items: (SizingWarning | null)[]): SizingWarning[] {
   return items.filter((w): w is SizingWarning => w !== null);
 }
 
+/**
+ * Low-voltage motors are built up to a few hundred kW; above about 400 kW the current at 400-690 V makes
+ * cables and switchgear impractical and drives are supplied at medium voltage (3.3-11 kV; 2.3-4.16 kV in North
+ * American practice) [cp].
+ */
+export const LOW_VOLTAGE_MAX_V = 1000;
+export const LOW_VOLTAGE_MOTOR_LIMIT_KW = 400;
+
+function mediumVoltageWarning(c: CompressorBlock): SizingWarning | null {
+  const rating = c.motor.iecKw ?? c.shaftPowerKw * 1.1;
+  if (!c.drive || c.drive.voltageV > LOW_VOLTAGE_MAX_V || rating <= LOW_VOLTAGE_MOTOR_LIMIT_KW) return null;
+  return {
+    code: 'medium-voltage-drive',
+    severity: 'caution',
+    message: `A ${Math.round(rating)} kW motor at ${c.drive.voltageV} V would draw about ${Math.round(c.drive.lineCurrentA)} A: above about ${LOW_VOLTAGE_MOTOR_LIMIT_KW} kW, drives are normally supplied at medium voltage (3.3-11 kV, or 2.3-4.16 kV in North American practice). Enter the medium-voltage supply for the line current.`,
+  };
+}
+
 /** All cautions for a heater duty; always ends with the preliminary note. */
 export function heaterWarnings(common: ResolvedCommon, h: HeaterBlock): SizingWarning[] {
   const { gas, inletPressurePa: pressurePa, barometricPressurePa: barometricPa } = common;
@@ -241,6 +259,8 @@ export function compressorWarnings(common: ResolvedCommon, c: CompressorBlock, c
         'Shaft power with 10 % margin is above the motor series listed (to 10 000 kW and 10 000 hp): select a large machine, or a turbine or engine driver, with its maker.',
     });
   }
+  const mv = mediumVoltageWarning(c);
+  if (mv) out.push(mv);
   if (c.drive) {
     out.push({
       code: 'motor-data-assumed',

@@ -12,7 +12,7 @@ export const SEVERITY_LABEL: Readonly<Record<Severity, string>> = {
 
 /** Shown when a result somehow lacks the engine's own statement: the sizing is never unqualified. */
 export const FALLBACK_PRELIMINARY =
-  'Preliminary sizing on ideal-gas properties. Confirm with a qualified engineer under the local codes before purchase or construction.';
+  'Preliminary sizing. Confirm with a qualified engineer under the local codes before purchase or construction.';
 
 /** The engine's preliminary statement for this result. */
 export function preliminaryOf(result: SizingResult): string {

@@ -53,7 +53,7 @@ export function compressorResultBlocks(r: CompressorResult): Block[] {
       ? [
           [
             'Ideal gas vs real gas',
-            `${formatPercent(c.idealGasDifferencePercent)} % in gas power`,
+            `${formatPercent(c.idealGasDifferencePercent)} in gas power`,
             `variable cp against ${r.basis.equationOfState}`,
           ] as KvRow,
         ]

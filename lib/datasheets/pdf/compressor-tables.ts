@@ -62,13 +62,13 @@ export function stageTableBlocks(c: CompressorBlock): Block[] {
   const columns: Column[] = [
     { title: 'Stage', widthPct: 7 },
     col('Ratio', 8),
-    col('Hs kJ/kg', 9),
+    col('Hs kJ/kg', 8),
     col('Hp kJ/kg / m', 14),
-    col('Eff. s / p', 11),
-    col('n', 7),
+    col('Eff. s / p', 14),
+    col('n', 6),
     col('Work kJ/kg', 10),
-    col('Gas kW', 9),
-    col('Cooler kW', 25),
+    col('Gas kW', 8),
+    col('Cooler kW', 23),
   ];
   return tableBlocks('st', columns, rows);
 }
@@ -81,7 +81,7 @@ export function methodBlocks(c: CompressorBlock): Block[] {
     ['Constant k', c.constantK] as const,
   ];
   const ref = headlineMethod(c);
-  const rel = (a: number, b: number) => (b === 0 ? '—' : `${formatPercent(((a - b) / b) * 100)} %`);
+  const rel = (a: number, b: number) => (b === 0 ? '—' : formatPercent(((a - b) / b) * 100));
   const rows = [
     ['Gas power, kW', ...methods.map(([, m]) => formatFigure(m.gasPowerKw))],
     ['Specific work, kJ/kg', ...methods.map(([, m]) => formatFigure(m.specificWorkKjPerKg))],

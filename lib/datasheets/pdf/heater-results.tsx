@@ -28,7 +28,7 @@ export function heaterResultBlocks(r: HeaterResult): Block[] {
           [
             'Ideal-gas duty',
             formatKw(h.idealGasDutyKw),
-            `difference ${formatPercent(h.idealGasDifferencePercent)} % from the real-gas duty`,
+            `difference ${formatPercent(h.idealGasDifferencePercent)} from the real-gas duty`,
           ] as KvRow,
           [
             'Z at inlet / outlet',

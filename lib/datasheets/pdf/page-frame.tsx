@@ -5,7 +5,7 @@ import { styles } from './theme';
 
 /** The statement every page carries: the figures are preliminary and qualified engineers decide. */
 export const PRELIMINARY_STATEMENT =
-  'Preliminary sizing on an ideal-gas basis and the stated method. It is not a design: a qualified engineer must confirm it under the local ' +
+  'Preliminary sizing on the stated equation of state and method. It is not a design: a qualified engineer must confirm it under the local ' +
   'pressure-equipment, electrical and hazardous-area codes before any equipment is ordered, built or installed.';
 
 /** The thin line at the top of every page: who issued it and which document this is. */

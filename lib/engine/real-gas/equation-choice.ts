@@ -46,21 +46,21 @@ export function outsideGerg(gas: GasModel): SpeciesId[] {
  */
 export function chooseEquation(gas: GasModel, requested: EquationOfStateId | undefined): EquationChoice {
   if (requested === 'ideal-gas') {
-    return { id: 'ideal-gas', requested, reason: 'ideal gas as requested: Z = 1, no real-gas departures' };
+    return { id: 'ideal-gas', requested, reason: 'as requested: Z = 1, no real-gas departures' };
   }
   if (requested === 'peng-robinson') {
-    return { id: requested, requested, reason: 'Peng-Robinson as requested' };
+    return { id: requested, requested, reason: 'as requested' };
   }
   const missing = outsideGerg(gas);
   if (requested === 'gerg-2008') {
-    return { id: requested, requested, reason: 'GERG-2008 as requested' };
+    return { id: requested, requested, reason: 'as requested' };
   }
   if (missing.length === 0) {
-    return { id: 'gerg-2008', requested: null, reason: 'GERG-2008 chosen: it covers every component of this gas' };
+    return { id: 'gerg-2008', requested: null, reason: 'chosen by the engine: it covers every component of this gas' };
   }
   return {
     id: 'peng-robinson',
     requested: null,
-    reason: `Peng-Robinson chosen: GERG-2008 does not cover ${missing.join(', ')}`,
+    reason: `chosen by the engine: GERG-2008 does not cover ${missing.join(', ')}`,
   };
 }

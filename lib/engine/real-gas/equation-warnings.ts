@@ -80,6 +80,15 @@ export function coolerWarnings(method: CompressionMethodResult): SizingWarning[]
     const cooler = s.cooler;
     if (!cooler || !(cooler.condensateKgPerH > 0)) continue;
     const where = cooler.kind === 'aftercooler' ? 'aftercooler' : `intercooler after stage ${s.stage}`;
+    const all = cooler.condensateKgPerH >= 0.999 * s.massFlowKgPerS * 3600;
+    if (all) {
+      out.push({
+        code: 'cooler-condensate',
+        severity: 'warning',
+        message: `The ${where} condenses the whole stream (${f1(cooler.condensateKgPerH)} kg/h) at ${f1(cooler.outletTemperatureC)} °C: it leaves as a liquid, and its duty includes ${f1(cooler.latentDutyKw)} kW of condensation. Design the cooler and what follows it for liquid.`,
+      });
+      continue;
+    }
     out.push({
       code: 'cooler-condensate',
       severity: 'warning',
@@ -90,16 +99,17 @@ export function coolerWarnings(method: CompressionMethodResult): SizingWarning[]
 }
 
 /** Suction or heater inlets closer than this to their dew point are flagged [cp: a common design margin]. */
-export const DEW_MARGIN_K = 10;
+export const DEW_MARGIN_K = 5;
 
 /** A caution when the inlet is a gas within 10 K of its dew point: a little cooling or a pressure swing condenses it. */
 export function dewMarginWarning(common: ResolvedCommon): SizingWarning | null {
   const c = common.inletClass;
   if (c.phase !== 'gas' || c.dewMarginK === undefined || c.dewPointK === undefined) return null;
   if (c.dewMarginK >= DEW_MARGIN_K) return null;
+  const water = Object.keys(common.gas.moleFractions).length > 1 && common.gas.moleFractions.H2O !== undefined;
   return {
     code: 'near-dew-point',
-    severity: 'warning',
-    message: `The inlet is only ${f1(c.dewMarginK)} K above its dew point (${f1(c.dewPointK - 273.15)} °C at ${f1(common.inletPressurePa / 1000)} kPa, Peng-Robinson): liquid can form with a little cooling or a pressure change upstream. Keep at least ${DEW_MARGIN_K} K of superheat, e.g. with a knock-out drum and a preheater.`,
+    severity: 'caution',
+    message: `The inlet is only ${f1(c.dewMarginK)} K above its dew point (${f1(c.dewPointK - 273.15)} °C at ${f1(common.inletPressurePa / 1000)} kPa${water ? '' : ', Peng-Robinson'}): liquid can form with a little cooling or a pressure change upstream. Keep at least ${DEW_MARGIN_K} K of superheat, e.g. with a knock-out drum and a preheater.`,
   };
 }

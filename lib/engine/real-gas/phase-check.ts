@@ -3,6 +3,7 @@ import type { GasModel } from '../../thermo/gas-model';
 import { classifyInlet, type InletClassification } from '../../thermo/phase';
 import { SPECIES, type SpeciesId } from '../../thermo/species-data';
 import type { SizingIssue } from '../input-error';
+import { classifyHumidGas, isHumidLightGas } from './humid-gas';
 
 // Classifying costs tens of microseconds (a stability test, a dew point); desks and batches repeat the same
 // gas and inlet, so the answers are kept, keyed by gas and state. Bounded and cleared wholesale.
@@ -15,7 +16,9 @@ export function inletPhase(gas: GasModel, temperatureK: number, pressurePa: numb
   const hit = cache.get(key);
   if (hit) return hit;
   if (cache.size >= MAX_ENTRIES) cache.clear();
-  const result = classifyInlet(gas.moleFractions, temperatureK, pressurePa);
+  const result = isHumidLightGas(gas, pressurePa)
+    ? classifyHumidGas(gas, temperatureK, pressurePa)
+    : classifyInlet(gas.moleFractions, temperatureK, pressurePa);
   cache.set(key, result);
   return result;
 }

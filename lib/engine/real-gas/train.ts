@@ -96,7 +96,7 @@ export function runRealGasTrain(
     if (target !== null) {
       const outPa = last ? dischargePa : dischargePa * (1 - c.interstageDropFraction);
       const outK = Math.min(target, st.discharge.temperatureK);
-      next = coolGas(fluid, st.discharge, outK, outPa, massFlow);
+      next = coolGas(fluid, st.discharge, outK, outPa, massFlow, i + 1, last);
       cooler = { ...next.cooler, kind: last ? 'aftercooler' : 'intercooler' };
       condensate += next.cooler.condensateKgPerH;
       if (last) aftercoolerDutyKw = next.cooler.dutyKw;

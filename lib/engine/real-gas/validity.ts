@@ -1,6 +1,7 @@
 import { GAS_CONSTANT_J_PER_MOL_K } from '../../thermo/constants';
 import { EosError } from '../../thermo/eos/eos-error';
 import { ThermoRangeError } from '../../thermo/errors';
+import { CoolerFloodedError } from './condensation';
 import type { CompressorCase } from '../compressor';
 import { pseudoCritical } from '../pseudo-critical';
 import type { ResolvedCommon } from '../resolve';
@@ -145,7 +146,7 @@ export function compressorValidity(common: ResolvedCommon, c: CompressorBlock, c
           : { isentropic: null, polytropic: cc.polytropicEfficiency ?? 1 };
       real = runRealGasTrain(cc, ref, cc.stages, eff);
     } catch (err) {
-      if (err instanceof EosError || err instanceof ThermoRangeError) return [];
+      if (err instanceof EosError || err instanceof ThermoRangeError || err instanceof CoolerFloodedError) return [];
       throw err;
     }
   }

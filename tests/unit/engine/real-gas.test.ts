@@ -204,3 +204,71 @@ describe('real-gas compressor', () => {
     expect(r.warnings.map((w) => w.code)).toContain('real-gas-effect');
   });
 });
+
+// Carbon dioxide's vapour pressure at 25 °C is 6434 kPa and at 15 °C 5087 kPa [calc: Span-Wagner CO2, CoolProp 8.0].
+describe('coolers that condense carbon dioxide', () => {
+  const co2 = (o: Record<string, unknown>) =>
+    compressor({
+      gas: { preset: 'carbon-dioxide' },
+      flow: q(5000, 'kg/h'),
+      inlet: { temperature: q(25, 'degC'), pressure: q(20, 'bar') },
+      dischargePressure: q(75, 'bar'),
+      isentropicEfficiency: 0.8,
+      equationOfState: 'gerg-2008',
+      ...o,
+    });
+
+  it('an aftercooler to 25 °C at 75 bar turns the whole stream to liquid, latent heat in its duty', () => {
+    const r = co2({
+      stages: 3,
+      intercoolerOutletTemperature: q(25, 'degC'),
+      aftercoolerOutletTemperature: q(25, 'degC'),
+    });
+    const after = r.compressor.realGas!.stages[2]!.cooler!;
+    expect(after.kind).toBe('aftercooler');
+    expect(after.condensateKgPerH).toBeCloseTo(5000, 6);
+    expect(after.latentDutyKw).toBeGreaterThan(0.5 * after.dutyKw);
+    expect(after.latentDutyKw).toBeLessThanOrEqual(after.dutyKw);
+    expect(r.warnings.find((w) => w.code === 'cooler-condensate')?.message).toMatch(/condenses the whole stream/);
+  });
+
+  it('refuses an intercooler that would leave the next stage no gas, on the intercooler field', () => {
+    const issues = issuesOf(
+      compressorRequest({
+        gas: { preset: 'carbon-dioxide' },
+        inlet: { temperature: q(25, 'degC'), pressure: q(20, 'bar') },
+        dischargePressure: q(75, 'bar'),
+        stages: 4,
+        intercoolerOutletTemperature: q(15, 'degC'),
+        isentropicEfficiency: 0.8,
+        equationOfState: undefined,
+      }),
+    );
+    expect(issues).toEqual([
+      {
+        path: 'intercoolerOutletTemperature',
+        message: expect.stringMatching(/after stage 3 condenses the whole stream/),
+      },
+    ]);
+  });
+});
+
+// Moist air condenses where the water's partial pressure reaches its saturation pressure [pub: ASHRAE Handbook
+// Fundamentals, ch. 1]: at 30 °C and 101.325 kPa that is 100 % relative humidity, dew point 30 °C.
+describe('humid air', () => {
+  it.each([60, 90, 97, 100])(
+    'is a gas at %i %% relative humidity, with its dew point from the saturation curve',
+    (rh) => {
+      const r = heater({
+        gas: { preset: 'humid-air', relativeHumidityPercent: rh },
+        inlet: { temperature: q(30, 'degC'), pressure: q(101.325, 'kPa') },
+        equationOfState: undefined,
+      });
+      expect(r.basis.equationOfState).toBe('gerg-2008');
+      const near = r.warnings.find((w) => w.code === 'near-dew-point');
+      // 90 % RH at 30 °C has its dew point at 28.2 °C [calc: ASHRAE saturation pressure].
+      if (rh >= 90) expect(near?.message).toMatch(/above its dew point \((28\.2|29\.\d|30\.0) °C/);
+      else expect(near).toBeUndefined();
+    },
+  );
+});

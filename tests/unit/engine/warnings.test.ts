@@ -132,3 +132,18 @@ describe('warnings as data', () => {
     );
   });
 });
+
+describe('drive supply', () => {
+  // Above about 400 kW a low-voltage motor's current is impractical; medium voltage is the norm [cp].
+  it('suggests a medium-voltage supply for a large motor on a low-voltage supply, not for a small one', () => {
+    const big = compressorRequest({
+      flow: q(10, 'kg/s'),
+      isentropicEfficiency: 0.8,
+      supply: { voltageV: 480, phases: 3 },
+    });
+    const large = calculate(big);
+    expect(find(large, 'medium-voltage-drive')?.message).toMatch(/kW motor at 480 V would draw about \d+ A/);
+    expect(codes(calculate({ ...big, supply: { voltageV: 6600, phases: 3 } }))).not.toContain('medium-voltage-drive');
+    expect(codes(calculate({ ...big, flow: q(0.5, 'kg/s') }))).not.toContain('medium-voltage-drive');
+  });
+});

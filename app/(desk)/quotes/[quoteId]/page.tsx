@@ -47,8 +47,8 @@ export default async function QuotePage({ params }: { params: Promise<{ quoteId:
       <Section title="Lines" id="lines">
         <QuoteLines quoteId={quote.id} lines={quote.lines} editable={editable} />
         <p className="mt-3 text-hint text-ink-muted">
-          Headlines come from preliminary sizings on an ideal-gas basis. Confirm the design with a qualified engineer
-          under the local codes before ordering.
+          Headlines come from preliminary sizings, each on the equation of state its record names. Confirm the design
+          with a qualified engineer under the local codes before ordering.
         </p>
         {editable && (
           <div className="mt-4 border-t border-paper-line pt-4">

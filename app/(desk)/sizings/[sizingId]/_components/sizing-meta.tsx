@@ -1,3 +1,4 @@
+import { EQUATION_NAMES } from '@/lib/engine';
 import Link from 'next/link';
 import type { ReactNode } from 'react';
 import { tableLinkClass } from '@/app/_components/data-table';
@@ -47,6 +48,7 @@ export function SizingMeta({ sizing, linkAccount }: { sizing: SizingDetail; link
     ],
     ['Created by', sizing.createdByName ?? '—'],
     ['Created', formatDateTime(sizing.createdAt)],
+    ['Equation of state', <span key="q">{equationOf(sizing.result)}</span>],
     [
       'Engine version',
       <span key="e" className="font-mono">
@@ -55,4 +57,12 @@ export function SizingMeta({ sizing, linkAccount }: { sizing: SizingDetail; link
     ],
   ];
   return <FactList rows={rows} testId="sizing-meta" notes={sizing.notes} />;
+}
+
+/** The equation of state a saved result was sized on; results from before real-gas sizing were ideal gas. */
+function equationOf(result: unknown): string {
+  const basis = (result as { basis?: { equationOfState?: unknown } } | null)?.basis;
+  const id = basis?.equationOfState;
+  if (id === 'gerg-2008' || id === 'peng-robinson' || id === 'ideal-gas') return EQUATION_NAMES[id];
+  return 'ideal gas (sized before real-gas properties were offered)';
 }
