@@ -18,6 +18,7 @@ const protectedPrefixes = [
   '/batch',
   '/mail',
   '/api-keys',
+  '/home',
 ];
 
 function isProtected(pathname: string): boolean {

@@ -47,12 +47,13 @@ export function DatasheetIssuedEmail({
   );
 }
 
-// Invented example for previews only.
+// Invented example for previews only: the demo scenario's vendor and customer (db/seed-scenario.ts), with
+// numbers and figures in the formats the app itself writes.
 export const datasheetIssuedPreview: Props = {
-  accountName: 'Harrowgate Fuel Terminal',
-  datasheetNumber: 'DS-2025-0107',
+  accountName: 'Tarnside Polymers',
+  datasheetNumber: 'DS26-0501',
   revision: 'B',
-  sizingTitle: 'Fuel gas preheater, train 2',
-  equipmentTag: 'E-2204',
-  datasheetUrl: 'http://localhost:3000/datasheets/preview',
+  sizingTitle: 'Pellet dryer air heater',
+  equipmentTag: 'EH-301',
+  datasheetUrl: 'http://localhost:3000/datasheets',
 };

@@ -33,10 +33,11 @@ export function InvitationEmail({ accountName, inviterName, inviteUrl, expiresIn
   );
 }
 
-// Invented example for previews only.
+// Invented example for previews only: the demo scenario's vendor and customer (db/seed-scenario.ts), with
+// numbers and figures in the formats the app itself writes.
 export const invitationPreview: Props = {
-  accountName: 'Harrowgate Fuel Terminal',
-  inviterName: 'Mina Okafor',
+  accountName: 'Tarnside Polymers',
+  inviterName: 'Ines Marlow',
   inviteUrl: 'http://localhost:3000/invite/preview-token',
   expiresInDays: 14,
 };

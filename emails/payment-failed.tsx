@@ -31,9 +31,10 @@ export function PaymentFailedEmail({ accountName, billingUrl, graceDays }: Props
   );
 }
 
-// Invented example for previews only.
+// Invented example for previews only: the demo scenario's vendor and customer (db/seed-scenario.ts), with
+// numbers and figures in the formats the app itself writes.
 export const paymentFailedPreview: Props = {
-  accountName: 'Harrowgate Fuel Terminal',
+  accountName: 'Tarnside Polymers',
   billingUrl: 'http://localhost:3000/billing',
   graceDays: 7,
 };

@@ -74,22 +74,23 @@ export function QuoteSentEmail(props: Props) {
   );
 }
 
-// Invented example for previews only.
+// Invented example for previews only: the demo scenario's vendor and customer (db/seed-scenario.ts), with
+// numbers and figures in the formats the app itself writes.
 export const quoteSentPreview: Props = {
-  accountName: 'Harrowgate Fuel Terminal',
-  quoteNumber: 'Q-2025-0042',
-  quoteTitle: 'Fuel gas preheat and booster, train 2',
-  senderName: 'Mina Okafor',
-  quoteUrl: 'http://localhost:3000/quotes/preview',
+  accountName: 'Tarnside Polymers',
+  quoteNumber: 'Q26-0101',
+  quoteTitle: 'Dryer air heating and conveying air',
+  senderName: 'Ines Marlow',
+  quoteUrl: 'http://localhost:3000/quotes',
   lines: [
     {
-      title: 'Fuel gas preheater',
-      tag: 'E-2204',
-      headline: '412 kW duty, 1,850 kg/h, 15.0 °C to 60.0 °C',
+      title: 'Pellet dryer air heater',
+      tag: 'EH-301',
+      headline: '412 kW design duty',
       quantity: 1,
       price: 'USD 48,200.00',
     },
-    { title: 'Fuel gas booster', tag: 'K-2210A/B', headline: '186 kW shaft power', quantity: 2, price: null },
+    { title: 'Conveying air compressor', tag: 'K-110', headline: '186 kW shaft power', quantity: 2, price: null },
   ],
   total: 'USD 48,200.00 for the 1 priced line (1 not priced)',
 };

@@ -32,9 +32,10 @@ export function SubscriptionEndingEmail({ accountName, periodEnd, billingUrl }: 
   );
 }
 
-// Invented example for previews only.
+// Invented example for previews only: the demo scenario's vendor and customer (db/seed-scenario.ts), with
+// numbers and figures in the formats the app itself writes.
 export const subscriptionEndingPreview: Props = {
-  accountName: 'Harrowgate Fuel Terminal',
-  periodEnd: '2025-11-30',
+  accountName: 'Tarnside Polymers',
+  periodEnd: '2026-11-30',
   billingUrl: 'http://localhost:3000/billing',
 };

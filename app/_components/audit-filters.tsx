@@ -3,7 +3,19 @@ import { SelectField } from './select-field';
 import { TextField } from './text-field';
 import type { AuditFilter } from '@/lib/audit/queries';
 
-const ENTITY_TYPES = ['account', 'quote', 'sizing', 'datasheet', 'user', 'subscription', 'invitation', 'api_key'];
+const ENTITY_TYPES = [
+  'account',
+  'quote',
+  'sizing',
+  'datasheet',
+  'datasheet_revision',
+  'user',
+  'subscription',
+  'invitation',
+  'upload',
+  'search',
+  'api_key',
+];
 
 /** Entity type and id filters held in the URL (a plain GET form). */
 export function AuditFilters({ filter }: { filter: AuditFilter }) {
@@ -20,17 +32,17 @@ export function AuditFilters({ filter }: { filter: AuditFilter }) {
       className="flex flex-wrap items-end gap-3 rounded-panel border border-paper-line bg-paper-raised p-3"
     >
       <SelectField
-        label="Entity type"
+        label="Kind of record"
         name="entityType"
-        options={types.map((t) => ({ value: t, label: t }))}
+        options={types.map((t) => ({ value: t, label: t.replace(/_/g, ' ') }))}
         placeholder="Any type"
         defaultValue={filter.entityType ?? ''}
         className="w-44"
       />
       <TextField
-        label="Entity id"
+        label="Record number or id"
         name="entityId"
-        hint="A quote, account or sizing id, or a user id"
+        hint="S26-01001, Q26-0101 or DS26-0501 (leading zeros may be left out), or a record id"
         defaultValue={filter.entityId ?? ''}
         className="min-w-72 flex-1"
       />

@@ -2,6 +2,7 @@ import Link from 'next/link';
 import { DataTable, tableLinkClass, type Column } from './data-table';
 import { EmptyState } from './empty-state';
 import { formatDateTime } from './format';
+import { actionWords, detailWords } from './audit-words';
 import type { AuditRow } from '@/lib/audit/queries';
 import { roleLabels, type UserRole } from '@/lib/auth/roles';
 
@@ -11,12 +12,6 @@ const entityPages: Record<string, (id: string) => string> = {
   quote: (id) => `/quotes/${id}`,
   sizing: (id) => `/sizings/${id}`,
 };
-
-function detailText(detail: unknown): string {
-  if (detail === null || detail === undefined) return '';
-  const text = JSON.stringify(detail);
-  return text.length > 240 ? `${text.slice(0, 240)}…` : text;
-}
 
 function roleText(role: string | null): string {
   return role && role in roleLabels ? roleLabels[role as UserRole] : (role ?? '');
@@ -37,28 +32,28 @@ const columns: Column<AuditRow>[] = [
         <span className="text-ink-muted">system</span>
       ),
   },
-  { key: 'action', header: 'Action', cell: (r) => <span className="font-mono">{r.action}</span> },
+  { key: 'action', header: 'What happened', cell: (r) => actionWords(r.action) },
   {
     key: 'entity',
-    header: 'Entity',
+    header: 'Record',
     cell: (r) => {
       const page = entityPages[r.entityType];
+      const name = r.recordName ?? `${r.entityType.replace(/_/g, ' ')} (no longer exists)`;
       return (
-        <span className="font-mono text-hint">
-          <Link
-            href={`/support/audit?entityType=${encodeURIComponent(r.entityType)}&entityId=${encodeURIComponent(r.entityId)}`}
-            className={tableLinkClass}
-            title="Show this entity's history"
-          >
-            {r.entityType}
-          </Link>{' '}
-          {page ? (
-            <Link href={page(r.entityId)} className="break-all underline">
-              {r.entityId}
+        <span>
+          {page && r.recordName ? (
+            <Link href={page(r.entityId)} className={tableLinkClass}>
+              {name}
             </Link>
           ) : (
-            <span className="break-all">{r.entityId}</span>
-          )}
+            name
+          )}{' '}
+          <Link
+            href={`/support/audit?entityType=${encodeURIComponent(r.entityType)}&entityId=${encodeURIComponent(r.entityId)}`}
+            className="text-hint text-tide-600 underline"
+          >
+            history
+          </Link>
         </span>
       );
     },
@@ -77,8 +72,8 @@ const columns: Column<AuditRow>[] = [
   },
   {
     key: 'detail',
-    header: 'Detail',
-    cell: (r) => <span className="break-all font-mono text-hint text-ink-soft">{detailText(r.detail)}</span>,
+    header: 'What changed',
+    cell: (r) => <span className="text-hint text-ink-soft">{detailWords(r.action, r.detail)}</span>,
   },
 ];
 

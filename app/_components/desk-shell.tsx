@@ -10,11 +10,14 @@ type NavItem = { href: string; label: string; permission?: Permission };
 /** The signed-in shell's sections; each shows only to roles holding its permission. */
 const deskNav: NavItem[] = [
   { href: '/size', label: 'Size' },
+  { href: '/batch', label: 'Batch sizing', permission: 'batch:upload' },
   { href: '/sizings', label: 'Sizings', permission: 'sizing:read' },
   { href: '/quotes', label: 'Quotes', permission: 'quote:read' },
   { href: '/accounts', label: 'Accounts', permission: 'account:read' },
   { href: '/datasheets', label: 'Datasheets', permission: 'datasheet:read' },
-  { href: '/support', label: 'Look-up', permission: 'support:search' },
+  { href: '/support', label: 'Look-up', permission: 'sizing:lookup' },
+  { href: '/support/audit', label: 'Audit trail', permission: 'audit:read' },
+  { href: '/mail', label: 'Demo inbox', permission: 'audit:read' },
   { href: '/billing', label: 'Subscription', permission: 'billing:manage' },
   { href: '/admin', label: 'People', permission: 'users:manage' },
   { href: '/api-keys', label: 'API keys', permission: 'apikey:manage' },

@@ -1,4 +1,5 @@
 import type { ReactNode } from 'react';
+import { subscriptionLabels, subscriptionTone, type SubscriptionState } from '@/lib/billing/labels';
 
 export type BadgeTone = 'neutral' | 'info' | 'good' | 'caution' | 'danger' | 'heat';
 
@@ -43,20 +44,13 @@ export function QuoteStatusBadge({ status }: { status: string }) {
   );
 }
 
-const subscriptionTones: Record<string, BadgeTone> = {
-  active: 'good',
-  trialing: 'info',
-  past_due: 'caution',
-  unpaid: 'danger',
-  canceled: 'neutral',
-  incomplete: 'caution',
-  incomplete_expired: 'neutral',
-  paused: 'neutral',
-};
-
-export function SubscriptionBadge({ status }: { status: string | null }) {
-  if (!status) return <StatusBadge tone="neutral">No subscription</StatusBadge>;
-  return <StatusBadge tone={subscriptionTones[status] ?? 'neutral'}>{status.replace(/_/g, ' ')}</StatusBadge>;
+/** A subscription's state in Dutywise's words (lib/billing/labels.ts), never the payment provider's code. */
+export function SubscriptionBadge({ state }: { state: SubscriptionState }) {
+  return (
+    <StatusBadge tone={subscriptionTone[state]} testId="subscription-badge">
+      {subscriptionLabels[state]}
+    </StatusBadge>
+  );
 }
 
 /** Heater duties take the copper accent, compressor power the teal. */

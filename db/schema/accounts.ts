@@ -10,7 +10,7 @@ import {
   uniqueIndex,
   uuid,
 } from 'drizzle-orm/pg-core';
-import { unitSystem } from './enums';
+import { unitSystem, userRole } from './enums';
 import { users } from './users';
 
 /** A customer account: the company a vendor sizes equipment for, and the unit that subscribes. */
@@ -64,9 +64,9 @@ export const invitations = pgTable(
   'invitations',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    accountId: uuid('account_id')
-      .notNull()
-      .references(() => accounts.id, { onDelete: 'cascade' }),
+    // Customer invitations name their account; staff invitations (sales engineer, support, admin) name none.
+    accountId: uuid('account_id').references(() => accounts.id, { onDelete: 'cascade' }),
+    role: userRole('role').notNull().default('customer'),
     email: text('email').notNull(),
     tokenHash: text('token_hash').notNull(),
     invitedByUserId: uuid('invited_by_user_id').references(() => users.id, { onDelete: 'set null' }),
@@ -74,7 +74,11 @@ export const invitations = pgTable(
     acceptedAt: timestamp('accepted_at', { withTimezone: true }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [uniqueIndex('invitations_token_uq').on(t.tokenHash), index('invitations_account_idx').on(t.accountId)],
+  (t) => [
+    uniqueIndex('invitations_token_uq').on(t.tokenHash),
+    index('invitations_account_idx').on(t.accountId),
+    check('invitations_account_for_customers', sql`(${t.role} = 'customer') = (${t.accountId} is not null)`),
+  ],
 );
 
 export type Account = typeof accounts.$inferSelect;

@@ -6,6 +6,7 @@ import { accounts, invitations, memberships, users } from '@/db/schema';
 import { writeAudit } from '@/lib/audit/write';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { assertAccountAccess } from '@/lib/auth/guards';
+import type { UserRole } from '@/lib/auth/roles';
 import { hashPassword } from '@/lib/auth/local/passwords';
 import { enqueueEmail } from '@/lib/email/enqueue';
 import { env } from '@/lib/env';
@@ -84,6 +85,16 @@ export async function updateAccount(user: CurrentUser, accountId: string, input:
       .where(eq(accounts.id, accountId))
       .returning({ id: accounts.id });
     if (!res[0]) throw new AppError('not_found', 'That account no longer exists.');
+    // The account's units are its people's desk defaults: members follow a change.
+    await tx
+      .update(users)
+      .set({ unitSystem: input.unitSystem, updatedAt: new Date() })
+      .where(
+        and(
+          sql`${users.id} in (select m.user_id from memberships m where m.account_id = ${accountId})`,
+          sql`${users.unitSystem} <> ${input.unitSystem}`,
+        ),
+      );
     await writeAudit(tx, {
       actor: user,
       action: 'account.updated',
@@ -177,20 +188,25 @@ function liveInvitation(token: string) {
 const deadInvitation = () => new AppError('gone', 'This invitation is not valid any more. Ask for a new one.');
 
 /**
- * Turns an invitation into a customer user of that account (local identity). The token is checked before the
+ * Turns an invitation into a user (local identity): a customer of its account, or staff in its role. The token is checked before the
  * password is hashed. The invitation went to this address alone, so accepting it verifies the address.
  */
 export async function acceptInvitation(
   token: string,
   name: string,
   password: string,
-): Promise<{ userId: string; role: 'customer' }> {
+): Promise<{ userId: string; role: UserRole }> {
   const [open] = await db.select({ id: invitations.id }).from(invitations).where(liveInvitation(token)).limit(1);
   if (!open) throw deadInvitation();
   const passwordHash = await hashPassword(password);
   return db.transaction(async (tx) => {
     const [inv] = await tx
-      .select({ id: invitations.id, accountId: invitations.accountId, email: invitations.email })
+      .select({
+        id: invitations.id,
+        accountId: invitations.accountId,
+        role: invitations.role,
+        email: invitations.email,
+      })
       .from(invitations)
       .where(liveInvitation(token))
       .for('update')
@@ -202,21 +218,49 @@ export async function acceptInvitation(
       .where(eq(sql`lower(${users.email})`, inv.email.toLowerCase()))
       .limit(1);
     if (taken) throw new AppError('conflict', 'A Dutywise user with this e-mail already exists; sign in instead.');
+    // A new member starts in the units their company works in.
+    const [acct] = inv.accountId
+      ? await tx
+          .select({ unitSystem: accounts.unitSystem })
+          .from(accounts)
+          .where(eq(accounts.id, inv.accountId))
+          .limit(1)
+      : [];
     const [u] = await tx
       .insert(users)
-      .values({ email: inv.email, name, role: 'customer', passwordHash, emailVerifiedAt: new Date() })
+      .values({
+        email: inv.email,
+        name,
+        role: inv.role,
+        passwordHash,
+        unitSystem: acct?.unitSystem ?? 'si',
+        // The invitation went to this address alone, so accepting it verifies the address.
+        emailVerifiedAt: new Date(),
+      })
       .returning({ id: users.id });
     if (!u) throw new Error('user insert returned no row');
-    await tx.insert(memberships).values({ accountId: inv.accountId, userId: u.id });
+    if (inv.accountId) await tx.insert(memberships).values({ accountId: inv.accountId, userId: u.id });
     await tx.update(invitations).set({ acceptedAt: new Date() }).where(eq(invitations.id, inv.id));
-    await writeAudit(tx, {
-      actor: { id: u.id, role: 'customer' },
-      action: 'member.joined',
-      entityType: 'account',
-      entityId: inv.accountId,
-      accountId: inv.accountId,
-      detail: { email: inv.email },
-    });
-    return { userId: u.id, role: 'customer' as const };
+    await writeAudit(
+      tx,
+      inv.accountId
+        ? {
+            actor: { id: u.id, role: inv.role },
+            action: 'member.joined',
+            entityType: 'account',
+            entityId: inv.accountId,
+            accountId: inv.accountId,
+            detail: { email: inv.email },
+          }
+        : {
+            actor: { id: u.id, role: inv.role },
+            action: 'user.joined',
+            entityType: 'user',
+            entityId: u.id,
+            accountId: null,
+            detail: { email: inv.email, role: inv.role },
+          },
+    );
+    return { userId: u.id, role: inv.role };
   });
 }

@@ -1,11 +1,13 @@
 import 'server-only';
 import { and, asc, desc, eq, isNull, sql } from 'drizzle-orm';
 import { db } from '@/db';
-import { accounts, invitations, memberships, quotes, subscriptions, users } from '@/db/schema';
+import { accounts, invitations, memberships, users } from '@/db/schema';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { accountScope, assertAccountAccess } from '@/lib/auth/guards';
 import { isStaff } from '@/lib/auth/roles';
+import type { SubscriptionState } from '@/lib/billing/labels';
 import { AppError } from '@/lib/errors';
+import { accountFigureColumns, subscriptionStateOf } from './figures';
 
 export type AccountSummary = {
   id: string;
@@ -13,30 +15,20 @@ export type AccountSummary = {
   site: string | null;
   memberCount: number;
   quoteCount: number;
-  subscriptionStatus: string | null;
+  sizingCount: number;
+  subscription: SubscriptionState;
 };
 
 /** Accounts the user may see: every account for staff, their own for customers. */
 export async function listAccounts(user: CurrentUser): Promise<AccountSummary[]> {
   const scope = accountScope(user);
-  return db
-    .select({
-      id: accounts.id,
-      name: accounts.name,
-      site: accounts.site,
-      memberCount: sql<number>`(select count(*)::int from ${memberships} m where m.account_id = ${accounts.id})`,
-      // A customer counts only the quotes it can open (sent ones); staff count drafts too.
-      quoteCount: isStaff(user.role)
-        ? sql<number>`(select count(*)::int from ${quotes} q where q.account_id = ${accounts.id})`
-        : sql<number>`(select count(*)::int from ${quotes} q where q.account_id = ${accounts.id} and q.status <> 'draft')`,
-      subscriptionStatus: sql<
-        string | null
-      >`(select s.status from ${subscriptions} s where s.account_id = ${accounts.id} order by s.updated_at desc limit 1)`,
-    })
+  const rows = await db
+    .select({ id: accounts.id, name: accounts.name, site: accounts.site, ...accountFigureColumns(isStaff(user.role)) })
     .from(accounts)
     .where(scope ? eq(accounts.id, scope) : undefined)
     .orderBy(asc(accounts.name))
     .limit(500);
+  return rows.map(({ subscription, ...a }) => ({ ...a, subscription: subscriptionStateOf(subscription) }));
 }
 
 export type AccountDetail = {
@@ -49,6 +41,10 @@ export type AccountDetail = {
   siteAltitudeM: number | null;
   unitSystem: 'si' | 'us';
   currency: string;
+  memberCount: number;
+  quoteCount: number;
+  sizingCount: number;
+  subscription: SubscriptionState;
   members: { id: string; name: string; email: string }[];
   pendingInvitations: { id: string; email: string; expiresAt: Date }[];
 };
@@ -66,6 +62,7 @@ export async function getAccount(user: CurrentUser, accountId: string): Promise<
       siteAltitudeM: accounts.siteAltitudeM,
       unitSystem: accounts.unitSystem,
       currency: accounts.currency,
+      ...accountFigureColumns(isStaff(user.role)),
     })
     .from(accounts)
     .where(eq(accounts.id, accountId))
@@ -84,7 +81,7 @@ export async function getAccount(user: CurrentUser, accountId: string): Promise<
       and(eq(invitations.accountId, accountId), isNull(invitations.acceptedAt), sql`${invitations.expiresAt} > now()`),
     )
     .orderBy(desc(invitations.createdAt));
-  return { ...row, members, pendingInvitations };
+  return { ...row, subscription: subscriptionStateOf(row.subscription), members, pendingInvitations };
 }
 
 export type AccountOption = {
@@ -109,9 +106,9 @@ export async function listAccountOptions(user: CurrentUser): Promise<AccountOpti
       name: accounts.name,
       site: accounts.site,
       billingContactEmail: accounts.billingContactEmail,
-      unitSystem: accounts.unitSystem,
       barometricPressureKpa: accounts.barometricPressureKpa,
       siteAltitudeM: accounts.siteAltitudeM,
+      unitSystem: accounts.unitSystem,
     })
     .from(accounts)
     .where(scope ? eq(accounts.id, scope) : undefined)

@@ -23,14 +23,16 @@ export type Permission =
   | 'datasheet:issue'
   | 'datasheet:read'
   | 'support:search'
+  | 'sizing:lookup'
   | 'audit:read'
   | 'users:manage'
   | 'billing:manage'
   | 'batch:upload'
   | 'apikey:manage';
 
-// Support looks up anything but changes no engineering; admins manage people and roles. Only vendor staff issue
-// datasheet revisions: a datasheet is the vendor's document.
+// Support looks up anything but changes no engineering; sales engineers look up their own customers' sizings
+// (lib/support/scope.ts); admins manage people and roles. Only vendor staff issue datasheet revisions: a datasheet
+// is the vendor's document.
 const grants: Record<UserRole, readonly Permission[]> = {
   sales_engineer: [
     'sizing:save',
@@ -42,6 +44,7 @@ const grants: Record<UserRole, readonly Permission[]> = {
     'member:invite',
     'datasheet:issue',
     'datasheet:read',
+    'sizing:lookup',
     'batch:upload',
     'apikey:manage',
   ],
@@ -62,6 +65,7 @@ const grants: Record<UserRole, readonly Permission[]> = {
     'account:read',
     'datasheet:read',
     'support:search',
+    'sizing:lookup',
     'audit:read',
     'apikey:manage',
   ],
@@ -76,6 +80,7 @@ const grants: Record<UserRole, readonly Permission[]> = {
     'datasheet:issue',
     'datasheet:read',
     'support:search',
+    'sizing:lookup',
     'audit:read',
     'users:manage',
     'batch:upload',

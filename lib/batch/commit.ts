@@ -12,11 +12,12 @@ import { accountKey, getBlobStore } from '@/lib/blob';
 import { addQuoteItems, createQuote } from '@/lib/quotes/mutations';
 import { insertSizings, withEquationUsed } from '@/lib/sizings/save';
 import { evaluateSheet, type BatchRow } from './evaluate';
-import type { BatchCells } from './row-to-request';
+import type { SheetRow } from './parse';
 import type { BatchTarget } from './schema';
 
 export type BatchSaved = {
   saved: number;
+  /** Rows of the sheet that were not sent to be saved (they did not pass the check). */
   skipped: number;
   uploadId: string;
   quoteId: string | null;
@@ -52,15 +53,28 @@ async function writeRows(tx: Tx, user: CurrentUser, target: BatchTarget, sized: 
   return { quoteId, quoteNumber: quote?.number ?? null, numbers: saved.map((s) => s.number) };
 }
 
+function refuseFailed(failed: BatchRow[]): never {
+  const list = failed
+    .slice(0, 5)
+    .map((r) => `row ${r.row} (${r.problems.map((p) => `${p.column}: ${p.message}`).join('; ')})`)
+    .join(', ');
+  throw new AppError(
+    'unprocessable',
+    `Nothing was saved: ${failed.length === 1 ? 'a row does' : `${failed.length} rows do`} not pass the check: ${list}${failed.length > 5 ? ', …' : ''}. Check the sheet again.`,
+  );
+}
+
 /**
- * Saves the sheet's sized rows, the original upload and (for vendor staff) the quote they go on, all or nothing.
- * Rows are sized again here: the browser's preview is never trusted.
+ * Saves exactly the rows sent (those that passed the desk's last check), the original upload and (for vendor
+ * staff) the quote they go on, all or nothing. Rows are sized again here, since the browser is never trusted:
+ * if any sent row does not pass, nothing is saved.
  */
 export async function saveBatch(
   user: CurrentUser,
   target: BatchTarget,
-  cells: BatchCells[],
+  checked: readonly SheetRow[],
   file: { name: string; type: string; bytes: Buffer },
+  sheetRows = checked.length,
 ): Promise<BatchSaved> {
   assertAccountAccess(user, target.accountId);
   if ((target.quoteId || target.newQuoteTitle) && !can(user.role, 'quote:manage'))
@@ -70,10 +84,12 @@ export async function saveBatch(
     throw new AppError('invalid_input', 'The quote title needs 3 to 160 characters.', [
       { path: 'newQuoteTitle', message: '3 to 160 characters' },
     ]);
-  const rows = evaluateSheet(cells);
-  const sized = rows.filter((r) => r.result && r.input);
-  if (!sized.length)
-    throw new AppError('unprocessable', 'No row of the sheet could be sized; fix the problems and check again.');
+  if (new Set(checked.map((r) => r.row)).size !== checked.length)
+    throw new AppError('invalid_input', 'Each row may be sent once; check the sheet again.');
+  const sized = evaluateSheet(checked);
+  const failed = sized.filter((r) => !r.result || !r.input);
+  if (failed.length) refuseFailed(failed);
+  if (!sized.length) throw new AppError('unprocessable', 'No checked row was sent: check the sheet, then save.');
   const store = getBlobStore();
   const uploadId = randomUUID();
   const key = accountKey(target.accountId, 'uploads', `${uploadId}.csv`);
@@ -89,7 +105,7 @@ export async function saveBatch(
         contentType: 'text/csv',
         byteSize: file.bytes.byteLength,
         blobKey: key,
-        rowCount: rows.length,
+        rowCount: sheetRows,
       });
       const written = await writeRows(tx, user, target, sized);
       await writeAudit(tx, {
@@ -98,11 +114,11 @@ export async function saveBatch(
         entityType: 'upload',
         entityId: uploadId,
         accountId: target.accountId,
-        detail: { rows: rows.length, saved: sized.length, quoteId: written.quoteId, sizings: written.numbers },
+        detail: { rows: sheetRows, saved: sized.length, quoteId: written.quoteId, sizings: written.numbers },
       });
       return { quoteId: written.quoteId, quoteNumber: written.quoteNumber };
     });
-    return { saved: sized.length, skipped: rows.length - sized.length, uploadId, ...out };
+    return { saved: sized.length, skipped: Math.max(0, sheetRows - sized.length), uploadId, ...out };
   } catch (err) {
     if (!store.transactional) await store.delete(key).catch(() => undefined);
     throw err;

@@ -1,4 +1,3 @@
-import Papa from 'papaparse';
 import {
   calculateCore,
   sizingRequestSchema,
@@ -7,10 +6,9 @@ import {
   type SizingResult,
 } from '@/lib/engine';
 import { issuesOf } from '@/lib/errors';
-import { batchColumnNames, columnForPath } from './columns';
+import { columnForPath } from './columns';
+import type { SheetRow } from './parse';
 import { rowToRequest, type BatchCells, type RowProblem } from './row-to-request';
-
-export const BATCH_MAX_ROWS = 2_000;
 
 export type BatchRow = {
   row: number;
@@ -20,39 +18,6 @@ export type BatchRow = {
   input: SizingInput | null;
   result: SizingResult | null;
 };
-
-export type ParsedSheet = { rows: BatchCells[]; problems: string[] };
-
-/** Reads CSV text into cell maps keyed by the template's column names; '#' rows are comments. */
-export function parseBatchCsv(text: string): ParsedSheet {
-  const parsed = Papa.parse<Record<string, string>>(text.replace(/^\uFEFF/, ''), {
-    header: true,
-    skipEmptyLines: 'greedy',
-    transformHeader: (h) => h.trim().toLowerCase(),
-  });
-  const problems: string[] = [];
-  const headers = parsed.meta.fields ?? [];
-  const unknown = headers.filter((h) => h && !batchColumnNames.includes(h));
-  if (unknown.length)
-    problems.push(`Unknown columns: ${unknown.join(', ')}. Download the template for the expected names.`);
-  if (!headers.includes('service'))
-    problems.push('The sheet has no "service" column; download the template for the expected layout.');
-  const rows = parsed.data.filter(
-    (r) =>
-      !String(Object.values(r)[0] ?? '')
-        .trim()
-        .startsWith('#'),
-  );
-  if (rows.length > BATCH_MAX_ROWS)
-    problems.push(`The sheet has ${rows.length} duty points; the limit is ${BATCH_MAX_ROWS} a batch.`);
-  if (!rows.length) problems.push('The sheet has no duty points.');
-  return {
-    rows: rows
-      .slice(0, BATCH_MAX_ROWS)
-      .map((r) => Object.fromEntries(Object.entries(r).map(([k, v]) => [k, String(v ?? '')]))),
-    problems,
-  };
-}
 
 /** Validates one row with the engine's schema and sizes it when valid; every problem names its column. */
 export function evaluateRow(cells: BatchCells, row: number): BatchRow {
@@ -93,7 +58,7 @@ function dedupe(list: RowProblem[]): RowProblem[] {
   return list.filter((p) => (seen.has(p.column + p.message) ? false : (seen.add(p.column + p.message), true)));
 }
 
-/** Evaluates a whole sheet; rows are numbered as a spreadsheet shows them (header is row 1). */
-export function evaluateSheet(rows: BatchCells[]): BatchRow[] {
-  return rows.map((cells, i) => evaluateRow(cells, i + 2));
+/** Evaluates rows of a sheet; each keeps the line number it has in the file. */
+export function evaluateSheet(rows: readonly SheetRow[]): BatchRow[] {
+  return rows.map((r) => evaluateRow(r.cells, r.row));
 }

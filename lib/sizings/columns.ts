@@ -1,24 +1,26 @@
 import { ENGINE_VERSION, type SizingResult } from '@/lib/engine';
+import { findPreset } from '@/lib/thermo';
 
 /** A validated input with the engine's answer to it, as saved together. */
 export type Computed = { input: unknown; result: SizingResult };
 
-// Short gas names for lists and search: the preset's key, or the mixture's main components.
-function gasKeyAndLabel(gas: unknown): { key: string; label: string } {
+// Gas names for lists and search, in words: the preset's name ("Air (dry)"), or the mixture's main components.
+export function gasKeyAndLabel(gas: unknown): { key: string; label: string } {
   const g = (gas ?? {}) as { preset?: unknown; components?: unknown; relativeHumidityPercent?: unknown };
   if (typeof g.preset === 'string') {
-    const rh = typeof g.relativeHumidityPercent === 'number' ? ` ${g.relativeHumidityPercent}% RH` : '';
-    return { key: g.preset, label: `${g.preset.replace(/-/g, ' ')}${rh}` };
+    const rh = typeof g.relativeHumidityPercent === 'number' ? `, ${g.relativeHumidityPercent} % RH` : '';
+    const name = findPreset(g.preset)?.displayName ?? g.preset.replace(/-/g, ' ');
+    return { key: g.preset, label: `${name}${rh}` };
   }
   if (g.components && typeof g.components === 'object') {
     const parts = Object.entries(g.components as Record<string, number>)
       .filter(([, v]) => typeof v === 'number' && v > 0)
       .sort((a, b) => b[1] - a[1])
       .slice(0, 4)
-      .map(([k, v]) => `${k} ${(v * 100).toFixed(v < 0.1 ? 1 : 0)}%`);
-    return { key: 'mixture', label: `mixture: ${parts.join(', ')}` };
+      .map(([k, v]) => `${k} ${(v * 100).toFixed(v < 0.1 ? 1 : 0)} %`);
+    return { key: 'mixture', label: `Mixture: ${parts.join(', ')}` };
   }
-  return { key: 'unknown', label: 'unknown' };
+  return { key: 'unknown', label: 'Not recorded' };
 }
 
 /** The engine's answer reduced to the scalar columns that lists, filters and search use. */

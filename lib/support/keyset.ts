@@ -31,7 +31,7 @@ const headline = {
   valid: (k: string) => k.length < 40 && Number.isFinite(Number(k)),
 };
 
-export type KeyedSort = Exclude<SupportSearch['sort'], 'relevance'>;
+export type KeyedSort = Exclude<NonNullable<SupportSearch['sort']>, 'relevance'>;
 
 export const SORTS: Record<KeyedSort, SortSpec> = {
   newest: { ...created, desc: true },

@@ -45,7 +45,8 @@ export const supportSearchSchema = z.object({
   creator: z.uuid().optional().catch(undefined),
   quoteStatus: z.enum(['draft', 'sent', 'won', 'lost']).optional().catch(undefined),
   accountId: z.uuid().optional().catch(undefined),
-  sort: z.enum(searchSorts).default('newest').catch('newest'),
+  // No sort chosen: best match while text is typed, newest otherwise (lib/support/numbers.ts effectiveSort).
+  sort: z.enum(searchSorts).optional().catch(undefined),
   // Where the page starts: an opaque token from the previous page's `nextCursor` (keyset paging).
   cursor: z
     .string()

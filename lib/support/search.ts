@@ -13,6 +13,8 @@ import { keyedPage, RELEVANCE_POOL, relevancePage, type SupportHit } from './pag
 import type { SupportSearch } from './schema';
 import { parseLookupText } from './terms';
 import { textMatches } from './text-walk';
+import { effectiveSort, paddedDocumentNumber } from './numbers';
+import { lookupScope } from './scope';
 
 export type { SupportHit } from './page-query';
 
@@ -80,10 +82,17 @@ export async function searchSizings(user: CurrentUser, f: SupportSearch): Promis
     const setup = await tx.execute<{ rows: number }>(sql`select set_config('pg_trgm.similarity_threshold', '0.4', true),
       set_config('pg_trgm.word_similarity_threshold', '0.6', true), set_config('jit', 'off', true),
       (select greatest(reltuples, 0)::float8 from pg_class where oid = 'sizings'::regclass) as rows`);
-    const sort = f.sort === 'relevance' ? (f.q ? null : SORTS.newest) : SORTS[f.sort];
+    // No sort chosen: best match while text is typed, newest otherwise. A short document number ("DS26-501")
+    // is looked up as its padded form.
+    const chosen = effectiveSort(f.sort, f.q);
+    const sort = chosen === 'relevance' ? (f.q ? null : SORTS.newest) : SORTS[chosen];
+    if (f.q) f = { ...f, q: paddedDocumentNumber(f.q) ?? f.q };
     const cursor = decodeCursor(f.cursor, sort);
     const first = !cursor.after && !cursor.offset;
     const filters = filterConditions(accountScope(user), f);
+    // Sales engineers look across their own customers only.
+    const mine = lookupScope(user);
+    if (mine) filters.push(mine);
     const tableRows = setup.rows[0]?.rows ?? 0;
     const p: Plan = { branches: null, filters, sort, cursor, close: false, tableRows, floor: 0 };
     if (f.q) {

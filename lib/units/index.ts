@@ -24,6 +24,7 @@ export {
   type UnitListKind,
 } from './unit-strings';
 export { UnitError } from './unit-error';
+export { decimalsFor, figure, fixed } from './figure';
 export {
   J_PER_KG_K_PER_BTU_PER_LB_F,
   KG_PER_LB,

@@ -3,8 +3,9 @@ import { and, eq, isNull, sql } from 'drizzle-orm';
 import { db } from '@/db';
 import { accounts, invitations } from '@/db/schema';
 import { hashToken } from '@/lib/accounts/mutations';
+import type { UserRole } from '@/lib/auth/roles';
 
-export type InvitationPreview = { email: string; accountName: string; expiresAt: Date };
+export type InvitationPreview = { email: string; accountName: string | null; role: UserRole; expiresAt: Date };
 
 /**
  * What an invitation link offers, so the page can say who is joining which customer account before
@@ -12,9 +13,14 @@ export type InvitationPreview = { email: string; accountName: string; expiresAt:
  */
 export async function getInvitationPreview(token: string): Promise<InvitationPreview | null> {
   const [row] = await db
-    .select({ email: invitations.email, accountName: accounts.name, expiresAt: invitations.expiresAt })
+    .select({
+      email: invitations.email,
+      accountName: accounts.name,
+      role: invitations.role,
+      expiresAt: invitations.expiresAt,
+    })
     .from(invitations)
-    .innerJoin(accounts, eq(accounts.id, invitations.accountId))
+    .leftJoin(accounts, eq(accounts.id, invitations.accountId))
     .where(
       and(
         eq(invitations.tokenHash, hashToken(token)),

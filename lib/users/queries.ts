@@ -1,5 +1,5 @@
 import 'server-only';
-import { asc, eq } from 'drizzle-orm';
+import { asc, eq, ilike, or } from 'drizzle-orm';
 import { db } from '@/db';
 import { accounts, memberships, users } from '@/db/schema';
 import type { CurrentUser } from '@/lib/auth/current-user';
@@ -17,8 +17,10 @@ export type UserSummary = {
   createdAt: Date;
 };
 
-/** Everyone with a Dutywise sign-in, for the people and roles page (admins only). */
-export async function listUsers(actor: CurrentUser): Promise<UserSummary[]> {
+const like = (q: string) => `%${q.replace(/[%_\\]/g, (c) => `\\${c}`)}%`;
+
+/** Everyone with a Dutywise sign-in, for the people and roles page (admins only); `q` matches name, e-mail or company. */
+export async function listUsers(actor: CurrentUser, q?: string): Promise<UserSummary[]> {
   if (!can(actor.role, 'users:manage')) throw new AppError('forbidden', 'Your role does not allow this.');
   return db
     .select({
@@ -34,6 +36,7 @@ export async function listUsers(actor: CurrentUser): Promise<UserSummary[]> {
     .from(users)
     .leftJoin(memberships, eq(memberships.userId, users.id))
     .leftJoin(accounts, eq(accounts.id, memberships.accountId))
+    .where(q ? or(ilike(users.name, like(q)), ilike(users.email, like(q)), ilike(accounts.name, like(q))) : undefined)
     .orderBy(asc(users.role), asc(users.name))
     .limit(1000);
 }

@@ -25,3 +25,14 @@ export const unitSystemSchema = z.object({
   unitSystem: z.enum(['si', 'us'], { error: 'Unit system must be "si" or "us".' }),
 });
 export type UnitSystemInput = z.output<typeof unitSystemSchema>;
+
+export const staffInviteSchema = z.object({
+  email: z.email({ message: 'Enter a valid e-mail address.' }).max(254),
+  role: z.enum(staffRoleValues, { message: 'Choose sales engineer, support or admin.' }),
+});
+export type StaffInviteInput = z.output<typeof staffInviteSchema>;
+
+/** The people page's search, from the URL. */
+export const peopleSearchSchema = z.object({
+  q: z.string().trim().max(100).optional().catch(undefined),
+});

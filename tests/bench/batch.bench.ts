@@ -3,7 +3,7 @@ import { randomUUID } from 'node:crypto';
 import { db, pool } from '@/db';
 import { accounts, users } from '@/db/schema';
 import { saveBatch } from '@/lib/batch/commit';
-import { parseBatchCsv } from '@/lib/batch/evaluate';
+import { parseBatchCsv } from '@/lib/batch/parse';
 import { batchSheet as sheet } from './batch-sheet';
 import { recordResults, verdict } from './stats';
 

@@ -36,6 +36,8 @@ export const accessTable: AccessRow[] = [
     expect: all('ok'),
   },
   { file: 'app/(desk)/no-access/page.tsx', path: '/no-access', expect: all('ok') },
+  // Sign-in's default destination: each role is sent on to its own home.
+  { file: 'app/(desk)/home/page.tsx', path: '/home', expect: signedIn(307) },
   { file: 'app/(desk)/size/page.tsx', path: '/size', expect: all('ok') },
   {
     file: 'app/(desk)/size/page.tsx',
@@ -70,7 +72,7 @@ export const accessTable: AccessRow[] = [
   {
     file: 'app/(desk)/support/page.tsx',
     path: '/support',
-    expect: { anon: 'sign-in', sales_engineer: 'no-access', customer: 'no-access', support: 'ok', admin: 'ok' },
+    expect: { anon: 'sign-in', sales_engineer: 'ok', customer: 'no-access', support: 'ok', admin: 'ok' },
   },
   {
     file: 'app/(desk)/support/audit/page.tsx',
@@ -137,12 +139,12 @@ export const accessTable: AccessRow[] = [
   {
     file: 'app/api/v1/support/search/route.ts',
     path: '/api/v1/support/search?q=EH-301',
-    expect: { anon: 401, sales_engineer: 403, customer: 403, support: 200, admin: 200 },
+    expect: { anon: 401, sales_engineer: 200, customer: 403, support: 200, admin: 200 },
   },
   {
     file: 'app/api/v1/support/export/route.ts',
     path: '/api/v1/support/export?q=EH-301',
-    expect: { anon: 401, sales_engineer: 403, customer: 403, support: 200, admin: 200 },
+    expect: { anon: 401, sales_engineer: 200, customer: 403, support: 200, admin: 200 },
   },
   {
     file: 'app/api/v1/datasheets/[revisionId]/route.ts',

@@ -1,9 +1,10 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { demoSignIns } from '@/lib/auth/demo-users';
-import { clerkEnabled, demoMode, env } from '@/lib/env';
-import { safeNextPath } from '@/lib/security/safe-redirect';
+import { HOME_PATH } from '@/lib/auth/home';
+import { clerkEnabled, demoMode } from '@/lib/env';
 import { AuthFrame } from '../_components/auth-frame';
+import { safeNextParam, withNext } from '../_lib/safe-next';
 import { ClerkSignIn } from './_components/clerk-sign-in';
 import { SignInForm } from './_components/sign-in-form';
 
@@ -42,8 +43,10 @@ export default async function SignInPage({
 }: {
   searchParams: Promise<Record<string, string | string[] | undefined>>;
 }) {
-  // Only paths on this site: another origin, or a backslash or control-character trick, lands on the desk.
-  const next = safeNextPath((await searchParams).next, env.APP_URL);
+  // Only paths on this site: another origin, or a backslash or control-character trick, is ignored.
+  const asked = safeNextParam((await searchParams).next);
+  // With no page asked for, each role lands on its own home.
+  const next = asked ?? HOME_PATH;
   return (
     <AuthFrame title="Sign in to your sizing desk">
       {clerkEnabled ? (
@@ -61,7 +64,7 @@ export default async function SignInPage({
       )}
       <p className="mt-6 text-sm text-ink-muted">
         New customer?{' '}
-        <Link className="text-tide-600 underline" href="/sign-up">
+        <Link className="text-tide-600 underline" href={withNext('/sign-up', asked)} data-testid="create-account-link">
           Create an account
         </Link>
       </p>

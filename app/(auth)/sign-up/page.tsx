@@ -2,13 +2,20 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { Logo } from '@/app/_components/logo';
 import { clerkEnabled } from '@/lib/env';
+import { safeNextParam, withNext } from '../_lib/safe-next';
 import { ClerkSignUp } from './_components/clerk-sign-up';
 import { SignUpForm } from './_components/sign-up-form';
 
 export const metadata: Metadata = { title: 'Create an account' };
 export const dynamic = 'force-dynamic';
 
-export default function SignUpPage() {
+export default async function SignUpPage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+}) {
+  // A prospect coming from the desk keeps their sizing: `next` carries its inputs on to sign-in.
+  const next = safeNextParam((await searchParams).next);
   return (
     <main className="mx-auto flex min-h-screen max-w-md flex-col justify-center px-6 py-12">
       <Link href="/" className="mb-8 flex items-center gap-2 text-xl font-semibold">
@@ -22,7 +29,7 @@ export default function SignUpPage() {
       {clerkEnabled ? <ClerkSignUp /> : <SignUpForm />}
       <p className="mt-6 text-sm text-ink-muted">
         Already use Dutywise?{' '}
-        <Link className="text-tide-600 underline" href="/sign-in">
+        <Link className="text-tide-600 underline" href={withNext('/sign-in', next)}>
           Sign in
         </Link>
       </p>

@@ -24,7 +24,8 @@ const columns: Column<AccountSummary>[] = [
   { key: 'site', header: 'Site', cell: (a) => a.site ?? '—' },
   { key: 'members', header: 'Members', numeric: true, cell: (a) => a.memberCount },
   { key: 'quotes', header: 'Quotes', numeric: true, cell: (a) => a.quoteCount },
-  { key: 'subscription', header: 'Subscription', cell: (a) => <SubscriptionBadge status={a.subscriptionStatus} /> },
+  { key: 'sizings', header: 'Sizings', numeric: true, cell: (a) => a.sizingCount },
+  { key: 'subscription', header: 'Subscription', cell: (a) => <SubscriptionBadge state={a.subscription} /> },
 ];
 
 export default async function AccountsPage() {

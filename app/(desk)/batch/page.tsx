@@ -28,6 +28,7 @@ export default async function BatchPage() {
         quotes={quotes}
         canQuote={can(user.role, 'quote:manage')}
         fixedAccountId={user.role === 'customer' ? user.accountId : null}
+        unitSystem={user.unitSystem}
       />
     </main>
   );

@@ -22,6 +22,16 @@ export default async function BillingPage({
         A subscription unlocks downloads of every datasheet issued to your account and lets your team run and save
         sizings.
       </p>
+      {sp.locked === 'datasheet' && entitlement && !entitlement.unlocked && (
+        <p
+          className="mt-4 rounded-md border border-copper-100 bg-copper-50 p-3 text-sm"
+          role="status"
+          data-testid="datasheet-locked"
+        >
+          That datasheet is locked: datasheets issued to your account download while a subscription is active. Choose a
+          plan below and the link works straight away.
+        </p>
+      )}
       {entitlement ? (
         <BillingPanel initial={entitlement} checkout={checkout} plans={[...plans]} />
       ) : (

@@ -4,7 +4,7 @@ import { listAccountOptions } from '@/lib/accounts/queries';
 import { getCurrentUser } from '@/lib/auth/current-user';
 import { can, isStaff, roleLabels } from '@/lib/auth/roles';
 import { listOpenQuotes } from '@/lib/quotes/queries';
-import { systemOfUnits } from '@/lib/units';
+import { PA_PER_PSI, systemOfUnits } from '@/lib/units';
 import { SizingDesk } from './_components/sizing-desk';
 import { defaultValues } from './_lib/defaults';
 import { valuesFromInput } from './_lib/from-request';
@@ -22,7 +22,12 @@ export default async function SizePage({ searchParams }: { searchParams: SearchP
   const [accounts, quotes, start] = await Promise.all([
     user && canSave ? listAccountOptions(user) : Promise.resolve([]),
     user && canQuote ? listOpenQuotes(user) : Promise.resolve([]),
-    loadDeskStart(user, { sizing: firstParam(sp.sizing), revise: firstParam(sp.revise), i: firstParam(sp.i) }),
+    loadDeskStart(user, {
+      sizing: firstParam(sp.sizing),
+      revise: firstParam(sp.revise),
+      i: firstParam(sp.i),
+      from: firstParam(sp.from),
+    }),
   ]);
   // A saved preference wins; a prospect opening a link sees it in the units it was made in.
   const i = start.input;
@@ -34,8 +39,14 @@ export default async function SizePage({ searchParams }: { searchParams: SearchP
   values.accountId = start.reopened?.accountId ?? customerAccountId ?? '';
   // A new sizing for a known account starts from that site's pressure; reopened inputs keep their own.
   const account = accounts.find((a) => a.id === values.accountId);
-  if (!start.input && account)
-    values.site.barometricPressure = { value: String(sitePressureOf(account).kpa), unit: 'kPa' };
+  if (!start.input && account) {
+    const kpa = sitePressureOf(account).kpa;
+    // In the system's barometric unit: a US customary desk shows psia, not kPa.
+    values.site.barometricPressure =
+      system === 'us'
+        ? { value: String(Number(((kpa * 1000) / PA_PER_PSI).toFixed(3))), unit: 'psia' }
+        : { value: String(kpa), unit: 'kPa' };
+  }
   const notices = [...start.notices];
   if (opened.dropped.length)
     notices.push(`Inputs the desk has no field for were left out: ${opened.dropped.join(', ')}.`);

@@ -11,16 +11,18 @@ export default async function SupportPage({
 }: {
   searchParams: Promise<Record<string, string | string[] | undefined>>;
 }) {
-  await requirePageUser('/support', 'support:search');
+  const user = await requirePageUser('/support', 'sizing:lookup');
   const raw = Object.fromEntries(Object.entries(await searchParams).map(([k, v]) => [k, Array.isArray(v) ? v[0] : v]));
   const initial = supportSearchSchema.parse(raw);
   const creators = await listStaffOptions();
   return (
     <main className="px-6 py-8">
       <h1 className="text-2xl font-semibold">Look-up</h1>
-      <p className="mt-1 text-ink-soft">
-        Find any sizing by datasheet or quote number, customer, equipment tag, title or notes. Close spellings match
-        too.
+      <p className="mt-1 text-ink-soft" data-testid="lookup-scope">
+        {user.role === 'sales_engineer'
+          ? 'Find your customers’ sizings (accounts you opened, sized or quoted for)'
+          : 'Find any sizing'}{' '}
+        by datasheet or quote number, customer, equipment tag, title or notes. Close spellings match too.
       </p>
       <LookupDesk initial={initial} creators={creators} />
     </main>

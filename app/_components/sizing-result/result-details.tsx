@@ -46,7 +46,7 @@ export const ResultDetails = memo(function ResultDetails({ result, input, system
       )}
       <ResultCharts result={result} input={input} system={system} />
       <DetailCard title="Warnings and cautions" id="result-warnings">
-        <WarningsList warnings={result.warnings} />
+        <WarningsList warnings={result.warnings} system={system} />
       </DetailCard>
       <DetailCard title="Flows and gas" id="detail-flows">
         <FlowsTable result={result} system={system} />

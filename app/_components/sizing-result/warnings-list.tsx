@@ -1,4 +1,6 @@
 import type { SizingWarning } from '@/lib/engine';
+import type { UnitSystem } from '@/lib/units';
+import { localiseText } from './localise-text';
 import { SEVERITY_LABEL, groupWarnings } from './severity';
 import { SEVERITY_TEXT, SeverityIcon } from './severity-icon';
 
@@ -9,8 +11,8 @@ const BORDER: Record<string, string> = {
   info: 'border-l-severity-info',
 };
 
-/** Warnings and cautions grouped most severe first, each with its severity in words and shape. */
-export function WarningsList({ warnings }: { warnings: readonly SizingWarning[] }) {
+/** Warnings and cautions grouped most severe first, each with its severity in words and shape, in the user's units. */
+export function WarningsList({ warnings, system }: { warnings: readonly SizingWarning[]; system: UnitSystem }) {
   const groups = groupWarnings(warnings);
   if (!groups.length) return <p className="text-sm text-ink-muted">No warnings beyond the preliminary statement.</p>;
   return (
@@ -32,7 +34,7 @@ export function WarningsList({ warnings }: { warnings: readonly SizingWarning[] 
                 className={`border-l-4 ${BORDER[w.severity]} bg-paper px-3 py-1.5 text-sm text-ink`}
               >
                 <span className="sr-only">{SEVERITY_LABEL[w.severity]}: </span>
-                {w.message}
+                {localiseText(w.message, system)}
               </li>
             ))}
           </ul>

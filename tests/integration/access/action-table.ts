@@ -19,6 +19,7 @@ export const actionTable: Record<string, ActionAccess> = {
   'app/(desk)/accounts/[accountId]/actions.ts#inviteMemberAction': { allowed: ['sales_engineer', 'customer', 'admin'] },
   'app/(desk)/admin/actions.ts#changeUserRoleAction': { allowed: ['admin'] },
   'app/(desk)/admin/actions.ts#setUserDisabledAction': { allowed: ['admin'] },
+  'app/(desk)/admin/actions.ts#inviteStaffAction': { allowed: ['admin'] },
   'app/(desk)/billing/actions.ts#startCheckoutAction': { allowed: ['customer'] },
   'app/(desk)/billing/actions.ts#openPortalAction': { allowed: ['customer'] },
   'app/(desk)/quotes/new/actions.ts#createQuoteAction': { allowed: staffWrite },

@@ -8,6 +8,10 @@ import { grantSubscription } from '../helpers/datasheet-fixtures';
 import { makeAccount, makeUser } from '../helpers/fixtures';
 
 const row = (i: number, over: Record<string, string> = {}) => ({
+  row: i + 1,
+  cells: cellsOf(i, over),
+});
+const cellsOf = (i: number, over: Record<string, string>) => ({
   service: 'heater',
   title: `Batch heater ${i}`,
   equipment_tag: `BH-${i}`,
@@ -35,8 +39,9 @@ describe('saving a batch', () => {
     const res = await saveBatch(
       engineer,
       { accountId: acct.id, newQuoteTitle: 'Batch enquiry' },
-      [row(1), row(2), row(3, { flow_unit: '' })],
+      [row(1), row(2)],
       file,
+      3,
     );
     expect(res).toMatchObject({ saved: 2, skipped: 1 });
     expect(res.quoteNumber).toMatch(/^Q\d{2}-/);
@@ -46,6 +51,16 @@ describe('saving a batch', () => {
     const [blob] = await db.select().from(blobs).where(eq(blobs.key, up!.blobKey));
     expect(blob!.data.equals(file.bytes)).toBe(true);
     expect(up!.blobKey.startsWith(`accounts/${acct.id}/`)).toBe(true);
+  });
+
+  it('saves nothing when a sent row does not pass the check, naming the row', async () => {
+    const acct = await makeAccount();
+    const engineer = await makeUser('sales_engineer');
+    await expect(
+      saveBatch(engineer, { accountId: acct.id }, [row(1), row(2), row(3, { flow_unit: '' })], file),
+    ).rejects.toThrow(/Nothing was saved: a row does not pass the check: row 4 \(flow_unit/);
+    expect(await db.select().from(sizings).where(eq(sizings.accountId, acct.id))).toHaveLength(0);
+    expect(await db.select().from(uploads).where(eq(uploads.accountId, acct.id))).toHaveLength(0);
   });
 
   it('saves nothing at all when any part fails (a quote of another account)', async () => {

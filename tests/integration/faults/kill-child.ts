@@ -27,7 +27,7 @@ saveBatch(
     unitSystem: 'si',
   },
   { accountId: accountId!, newQuoteTitle: 'Killed midway' },
-  cells,
+  cells.map((c, i) => ({ row: i + 2, cells: c })),
   { name: 'k.csv', type: 'text/csv', bytes: Buffer.from('service\nheater\n') },
 )
   .then(() => console.log('finished'))

@@ -79,11 +79,11 @@ describe('batch upload under hostile input', () => {
         const res = await preview(form(text, name), { params: Promise.resolve({}) });
         expect(res.status).toBeLessThan(500);
         const json = (await res.json()) as {
-          rows?: { row: number; problems: { column: string }[]; result: unknown }[];
+          rows?: { row: number; problems: { column: string }[]; figures: unknown }[];
         };
         for (const r of json.rows ?? []) {
           expect(r.row).toBeGreaterThanOrEqual(2);
-          if (r.result) expect(allFinite(r.result)).toBe(true);
+          if (r.figures) expect(allFinite(r.figures)).toBe(true);
           else expect(r.problems.length).toBeGreaterThan(0);
         }
       }),
@@ -99,7 +99,8 @@ describe('batch upload under hostile input', () => {
           fields: batchColumnNames,
           data: broken.map((r) => batchColumnNames.map((c) => r[c] ?? '')),
         });
-        const res = await commit(form(text, 'enquiry.csv', { target: JSON.stringify({ accountId }) }), {
+        const sent = JSON.stringify(broken.map((cells, i) => ({ row: i + 2, cells })));
+        const res = await commit(form(text, 'enquiry.csv', { target: JSON.stringify({ accountId }), rows: sent }), {
           params: Promise.resolve({}),
         });
         expect(res.status).toBeGreaterThanOrEqual(400);
@@ -112,7 +113,7 @@ describe('batch upload under hostile input', () => {
 
   it('refuses files that are too large or not CSV text', async () => {
     expect(
-      (await preview(form('a'.repeat(2 * 1024 * 1024 + 10), 'big.csv'), { params: Promise.resolve({}) })).status,
+      (await preview(form('a'.repeat(8 * 1024 * 1024 + 10), 'big.csv'), { params: Promise.resolve({}) })).status,
     ).toBe(413);
     expect((await preview(form('service\nheater', 'sheet.xlsx'), { params: Promise.resolve({}) })).status).toBe(415);
     expect((await preview(form('service\u0000\nheater', 'bin.csv'), { params: Promise.resolve({}) })).status).toBe(415);

@@ -18,7 +18,7 @@ export async function makeSizingRow(
       equipmentTag: tag,
       service: 'heater',
       gasKey: 'air',
-      gasLabel: 'air',
+      gasLabel: 'Air (dry)',
       input: { fixture: true },
       result: { fixture: true },
       engineVersion: 'fixture',

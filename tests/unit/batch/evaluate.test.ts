@@ -1,9 +1,11 @@
 import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
 import { batchColumnNames } from '@/lib/batch/columns';
-import { evaluateSheet, parseBatchCsv } from '@/lib/batch/evaluate';
+import { evaluateSheet } from '@/lib/batch/evaluate';
+import { parseBatchCsv } from '@/lib/batch/parse';
 import { batchResultCsv } from '@/lib/batch/result-csv';
 import { batchTemplateCsv } from '@/lib/batch/template';
+import { toRowView } from '@/lib/batch/view';
 import { calculate } from '@/lib/engine';
 
 const heaterRow = (i: number): Record<string, string> => ({
@@ -101,7 +103,7 @@ describe('batch sizing from a CSV', () => {
   });
 
   it('writes a result CSV whose figures match the engine', () => {
-    const csv = Papa.parse<Record<string, string>>(batchResultCsv(evaluated), { header: true }).data;
+    const csv = Papa.parse<Record<string, string>>(batchResultCsv(evaluated.map(toRowView)), { header: true }).data;
     const first = evaluated.find((r) => r.result?.service === 'heater')!;
     const line = csv.find((l) => l.row === String(first.row))!;
     expect(Number(line.design_duty_kw)).toBeCloseTo(

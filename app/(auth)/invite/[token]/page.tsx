@@ -4,6 +4,7 @@ import type { ReactNode } from 'react';
 import { Logo } from '@/app/_components/logo';
 import { formatDate } from '@/app/_components/format';
 import { acceptInviteSchema } from '@/lib/accounts/schema';
+import { roleLabels } from '@/lib/auth/roles';
 import { clerkEnabled } from '@/lib/env';
 import { getInvitationPreview } from '@/lib/users/invitation-preview';
 import { AcceptInviteForm } from './_components/accept-invite-form';
@@ -44,7 +45,9 @@ export default async function InvitePage({
       <Link href="/" className="mb-8 flex items-center gap-2 text-xl font-semibold">
         <Logo /> Dutywise
       </Link>
-      <h1 className="text-2xl font-semibold">Join a customer account</h1>
+      <h1 className="text-2xl font-semibold">
+        {preview && !preview.accountName ? 'Join the Dutywise team' : 'Join a customer account'}
+      </h1>
       {clerkEnabled ? (
         <Unusable>
           Invitations on this installation are accepted through the hosted sign-up. Ask the person who invited you for
@@ -53,7 +56,15 @@ export default async function InvitePage({
       ) : preview && token.success ? (
         <>
           <p className="mt-2 text-sm text-ink-soft">
-            You are invited to <strong>{preview.accountName}</strong> on Dutywise as{' '}
+            {preview.accountName ? (
+              <>
+                You are invited to <strong>{preview.accountName}</strong> on Dutywise as{' '}
+              </>
+            ) : (
+              <>
+                You are invited to Dutywise as <strong>{roleLabels[preview.role]}</strong>, signing in as{' '}
+              </>
+            )}
             <span className="font-mono">{preview.email}</span>. The invitation is open until{' '}
             {formatDate(preview.expiresAt)}.
           </p>

@@ -6,6 +6,7 @@ import { PageBody, PageHeader, Section } from '@/app/_components/page-header';
 import { QuotesTable } from '@/app/_components/quotes/quotes-table';
 import { orNotFound, uuidOrNotFound } from '@/app/_components/route-guards';
 import { SizingsTable } from '@/app/_components/sizings/sizings-table';
+import { SubscriptionBadge } from '@/app/_components/status-badge';
 import { buttonLinkClass } from '@/app/_components/submit-button';
 import { getAccount, type AccountDetail } from '@/lib/accounts/queries';
 import { requirePageUser } from '@/lib/auth/guards';
@@ -38,7 +39,31 @@ function AccountDetails({ account }: { account: AccountDetail }) {
     ['Units', account.unitSystem === 'us' ? 'US customary (°F, psia/psig, lb/h)' : 'SI (°C, kPa/bar, kg/h)'],
     ['Quote currency', account.currency],
   ];
-  return <FactList rows={rows} testId="account-details" />;
+  return (
+    <>
+      <FactList rows={rows} testId="account-details" />
+      <dl className="mt-3 flex flex-wrap gap-x-6 gap-y-1 text-sm" data-testid="account-figures">
+        <div className="flex items-center gap-2">
+          <dt className="text-ink-muted">Subscription</dt>
+          <dd>
+            <SubscriptionBadge state={account.subscription} />
+          </dd>
+        </div>
+        <div className="flex gap-2">
+          <dt className="text-ink-muted">Members</dt>
+          <dd data-testid="account-member-count">{account.memberCount}</dd>
+        </div>
+        <div className="flex gap-2">
+          <dt className="text-ink-muted">Quotes</dt>
+          <dd data-testid="account-quote-count">{account.quoteCount}</dd>
+        </div>
+        <div className="flex gap-2">
+          <dt className="text-ink-muted">Sizings</dt>
+          <dd data-testid="account-sizing-count">{account.sizingCount}</dd>
+        </div>
+      </dl>
+    </>
+  );
 }
 
 export const metadata: Metadata = { title: 'Customer account' };

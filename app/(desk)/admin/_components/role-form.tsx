@@ -1,54 +1,80 @@
 'use client';
 
-import { zodResolver } from '@hookform/resolvers/zod';
 import { useRouter } from 'next/navigation';
-import { useState } from 'react';
-import { useForm } from 'react-hook-form';
-import { showActionErrors } from '@/app/_components/action-errors';
-import { FormError } from '@/app/_components/form-errors';
-import { SelectField } from '@/app/_components/select-field';
+import { summaryOf } from '@/app/_components/action-errors';
+import { useState, useTransition } from 'react';
+import { FormError, FormNotice } from '@/app/_components/form-errors';
 import { SubmitButton } from '@/app/_components/submit-button';
-import { roleLabels } from '@/lib/auth/roles';
-import { staffRoleValues, userRoleChangeSchema, type UserRoleChangeInput } from '@/lib/users/schema';
+import { roleLabels, type UserRole } from '@/lib/auth/roles';
+import { staffRoleValues } from '@/lib/users/schema';
 import { changeUserRoleAction } from '../actions';
+import { ConfirmStep } from './confirm-step';
 
-/** Moves a staff member between sales engineer, support and admin. */
-export function RoleForm({ userId, role, name }: { userId: string; role: UserRoleChangeInput['role']; name: string }) {
+/** Moves a staff member between sales engineer, support and admin, after saying what will change. */
+export function RoleForm({ userId, role, name }: { userId: string; role: UserRole; name: string }) {
   const router = useRouter();
-  const [formError, setFormError] = useState<string | null>(null);
-  const { register, handleSubmit, setError, formState } = useForm<UserRoleChangeInput>({
-    resolver: zodResolver(userRoleChangeSchema),
-    defaultValues: { userId, role },
-  });
-
-  const onSubmit = handleSubmit(async (values) => {
-    setFormError(null);
-    const res = await changeUserRoleAction(values);
-    if (!res.ok) setFormError(showActionErrors(setError, res.errors, ['role']));
-    else router.refresh();
-  });
-
+  const [chosen, setChosen] = useState<UserRole>(role);
+  const [asking, setAsking] = useState(false);
+  const [pending, start] = useTransition();
+  const [error, setError] = useState<string | null>(null);
+  const [notice, setNotice] = useState<string | null>(null);
+  const confirm = () =>
+    start(async () => {
+      setError(null);
+      const res = await changeUserRoleAction({ userId, role: chosen });
+      setAsking(false);
+      if (!res.ok) return setError(summaryOf(res.errors, 'Nothing was changed.'));
+      setNotice(`${name} is now ${roleLabels[chosen]} (was ${roleLabels[role]}).`);
+      router.refresh();
+    });
   return (
-    <form onSubmit={onSubmit} noValidate aria-label={`Change the role of ${name}`} className="space-y-1">
-      <input type="hidden" {...register('userId')} />
+    <div className="space-y-1">
       <div className="flex items-end gap-2">
-        <SelectField
-          label={`Role of ${name}`}
-          className="w-44 [&>label]:sr-only"
-          options={staffRoleValues.map((r) => ({ value: r, label: roleLabels[r] }))}
-          error={formState.errors.role?.message}
-          {...register('role')}
-        />
-        <SubmitButton
-          variant="secondary"
-          pending={formState.isSubmitting}
-          pendingLabel="Saving…"
-          className="px-3 py-1.5"
-        >
-          Change
-        </SubmitButton>
+        <label className="text-label">
+          <span className="sr-only">Role of {name}</span>
+          <select
+            className="w-44 rounded border border-paper-line px-2 py-1.5"
+            value={chosen}
+            aria-label={`Role of ${name}`}
+            onChange={(e) => {
+              setChosen(e.target.value as UserRole);
+              setNotice(null);
+              setAsking(false);
+            }}
+          >
+            {staffRoleValues.map((r) => (
+              <option key={r} value={r}>
+                {roleLabels[r]}
+              </option>
+            ))}
+          </select>
+        </label>
+        {!asking && (
+          <SubmitButton
+            type="button"
+            variant="secondary"
+            className="px-3 py-1.5"
+            disabled={chosen === role}
+            onClick={() => setAsking(true)}
+          >
+            Change
+          </SubmitButton>
+        )}
       </div>
-      <FormError message={formError} />
-    </form>
+      {asking && (
+        <ConfirmStep
+          question={`Change ${name} from ${roleLabels[role]} to ${roleLabels[chosen]}?`}
+          confirmLabel="Change role"
+          pending={pending}
+          onConfirm={confirm}
+          onCancel={() => {
+            setAsking(false);
+            setChosen(role);
+          }}
+        />
+      )}
+      <FormError message={error} />
+      <FormNotice message={notice} testId="people-notice" />
+    </div>
   );
 }

@@ -1,28 +1,18 @@
 'use client';
 
 import { useMutation } from '@tanstack/react-query';
-import { useState } from 'react';
-import type { BatchRow } from '@/lib/batch/evaluate';
+import { useRef, useState } from 'react';
+import { BATCH_MAX_ROWS, parseBatchCsv, type ParsedSheet, type SheetRow } from '@/lib/batch/parse';
 import { batchResultCsv } from '@/lib/batch/result-csv';
 import type { BatchTarget } from '@/lib/batch/schema';
+import { checkUpload, describeLimit } from '@/lib/batch/upload-limits';
+import type { UnitSystem } from '@/lib/units';
+import { apiError, checkInChunks, type Checked } from '../_lib/check-sheet';
 import { BatchRowsTable } from './batch-rows-table';
 import { BatchSavePanel } from './batch-save-panel';
+import { CheckProgress } from './check-progress';
 
-type Preview = { rows: BatchRow[]; sized: number; withProblems: number };
-
-async function post(url: string, file: File, extra: Record<string, string>): Promise<unknown> {
-  const body = new FormData();
-  body.set('file', file);
-  for (const [k, v] of Object.entries(extra)) body.set(k, v);
-  const res = await fetch(url, { method: 'POST', body });
-  const json = await res.json().catch(() => null);
-  if (!res.ok)
-    throw new Error(
-      (json as { errors?: { message: string }[] })?.errors?.map((e) => e.message).join(' ') ??
-        `Request failed (${res.status})`,
-    );
-  return json;
-}
+type Saved = { saved: number; quoteId: string | null; quoteNumber: string | null };
 
 function download(name: string, text: string) {
   const url = URL.createObjectURL(new Blob([text], { type: 'text/csv' }));
@@ -31,71 +21,97 @@ function download(name: string, text: string) {
   URL.revokeObjectURL(url);
 }
 
-/** Upload, check, fix, re-check and confirm a sheet of duty points. */
+async function readSheet(file: File): Promise<ParsedSheet> {
+  const check = checkUpload(file);
+  if (!check.ok) return { rows: [], problems: [check.message] };
+  return parseBatchCsv(await file.text());
+}
+
+/** Upload, check (in chunks, with progress), fix, check again and save exactly the rows that passed. */
 export function BatchDesk(props: {
   accounts: { id: string; name: string; site?: string | null; billingContactEmail?: string | null }[];
   quotes: { id: string; number: string; title: string; accountId: string }[];
   canQuote: boolean;
   fixedAccountId: string | null;
+  unitSystem: UnitSystem;
 }) {
   const [file, setFile] = useState<File | null>(null);
+  const [sheet, setSheet] = useState<ParsedSheet | null>(null);
   const [edits, setEdits] = useState<Record<number, Record<string, string>>>({});
-  const check = useMutation({
-    mutationFn: (rows?: BatchRow[]) =>
-      post(
-        '/api/v1/batch/preview',
-        file!,
-        rows ? { rows: JSON.stringify(rows.map((r) => ({ ...r.cells, ...edits[r.row] }))) } : {},
-      ) as Promise<Preview>,
-  });
+  const [checked, setChecked] = useState<Checked | null>(null);
+  const [progress, setProgress] = useState<{ done: number; total: number } | null>(null);
+  const [checkError, setCheckError] = useState<string | null>(null);
+  const abort = useRef<AbortController | null>(null);
   const save = useMutation({
-    mutationFn: (target: BatchTarget) =>
-      post('/api/v1/batch/commit', file!, {
-        rows: JSON.stringify(check.data!.rows.map((r) => ({ ...r.cells, ...edits[r.row] }))),
-        target: JSON.stringify(target),
-      }) as Promise<{ saved: number; quoteId: string | null; quoteNumber: string | null }>,
+    mutationFn: async (target: BatchTarget): Promise<Saved> => {
+      const passed: SheetRow[] = checked!.rows.filter((r) => r.figures).map((r) => ({ row: r.row, cells: r.cells }));
+      const body = new FormData();
+      body.set('file', file!);
+      body.set('rows', JSON.stringify(passed));
+      body.set('target', JSON.stringify(target));
+      const res = await fetch('/api/v1/batch/commit', { method: 'POST', body });
+      if (!res.ok) throw await apiError(res);
+      return res.json();
+    },
   });
-  const preview = check.data;
+
+  const choose = async (next: File | null) => {
+    abort.current?.abort();
+    setFile(next);
+    setEdits({});
+    setChecked(null);
+    setProgress(null);
+    setCheckError(null);
+    save.reset();
+    setSheet(next ? await readSheet(next) : null);
+  };
+
+  const check = async () => {
+    if (!sheet || sheet.problems.length) return;
+    abort.current?.abort();
+    const controller = new AbortController();
+    abort.current = controller;
+    const rows = sheet.rows.map((r) => ({ row: r.row, cells: { ...r.cells, ...edits[r.row] } }));
+    setCheckError(null);
+    save.reset();
+    try {
+      const result = await checkInChunks(rows, (done) => setProgress({ done, total: rows.length }), controller.signal);
+      setChecked(result);
+    } catch (err) {
+      if (!controller.signal.aborted) setCheckError((err as Error).message);
+    } finally {
+      if (abort.current === controller) abort.current = null;
+      setProgress(null);
+    }
+  };
+
+  const checking = progress !== null;
   return (
     <div className="mt-6 space-y-5">
       <div className="flex flex-wrap items-end gap-3 rounded-panel border border-paper-line bg-paper-raised p-4">
         <label className="text-label">
-          CSV file (up to 2 MiB, 2,000 rows)
+          CSV file (up to {describeLimit()}, {BATCH_MAX_ROWS.toLocaleString('en-US')} rows)
           <input
             type="file"
             accept=".csv,text/csv"
             className="mt-1 block text-sm"
             data-testid="batch-file"
-            onChange={(e) => {
-              setFile(e.target.files?.[0] ?? null);
-              setEdits({});
-              check.reset();
-              save.reset();
-            }}
+            onChange={(e) => void choose(e.target.files?.[0] ?? null)}
           />
         </label>
         <button
           type="button"
-          disabled={!file || check.isPending}
-          onClick={() => check.mutate(undefined)}
+          disabled={!sheet || sheet.problems.length > 0 || checking}
+          onClick={() => void check()}
           className="rounded-md bg-tide-600 px-4 py-2 text-white hover:bg-tide-700 disabled:opacity-50"
           data-testid="batch-check"
         >
-          {check.isPending ? 'Checking…' : 'Check the sheet'}
+          {checking ? 'Checking…' : checked ? 'Check again with my fixes' : 'Check the sheet'}
         </button>
-        {preview && Object.keys(edits).length > 0 && (
+        {checked && (
           <button
             type="button"
-            onClick={() => check.mutate(preview.rows)}
-            className="rounded-md border border-tide-600 px-4 py-2 text-tide-700"
-          >
-            Re-check with my fixes
-          </button>
-        )}
-        {preview && (
-          <button
-            type="button"
-            onClick={() => download('dutywise-batch-results.csv', batchResultCsv(preview.rows))}
+            onClick={() => download('dutywise-batch-results.csv', batchResultCsv(checked.rows))}
             className="ml-auto text-sm text-tide-700 underline"
             data-testid="batch-download"
           >
@@ -103,26 +119,40 @@ export function BatchDesk(props: {
           </button>
         )}
       </div>
-      {check.isError && (
+      {sheet && sheet.problems.length > 0 && (
         <p role="alert" data-testid="form-error" className="text-severity-danger">
-          {(check.error as Error).message}
+          {sheet.problems.join(' ')}
         </p>
       )}
-      {preview && (
+      {sheet && !sheet.problems.length && !checked && !checking && (
+        <p className="text-sm text-ink-soft" data-testid="batch-read">
+          {sheet.rows.length.toLocaleString('en-US')} duty points read; check them to size each one.
+        </p>
+      )}
+      {progress && <CheckProgress {...progress} />}
+      {checkError && (
+        <p role="alert" data-testid="form-error" className="text-severity-danger">
+          {checkError}
+        </p>
+      )}
+      {checked && (
         <>
           <p className="text-sm" data-testid="batch-summary">
-            {preview.sized} rows sized · {preview.withProblems} rows need attention
+            {checked.sized} rows sized · {checked.withProblems} rows need attention ·{' '}
+            {checked.rows.filter((r) => r.warnings.length).length} rows with warnings
           </p>
           <BatchRowsTable
-            rows={preview.rows}
+            rows={checked.rows}
             edits={edits}
+            unitSystem={props.unitSystem}
             onEdit={(row, col, v) => setEdits((e) => ({ ...e, [row]: { ...e[row], [col]: v } }))}
           />
           <BatchSavePanel
             {...props}
-            sized={preview.sized}
-            withProblems={preview.withProblems}
+            sized={checked.sized}
+            withProblems={checked.withProblems}
             pending={save.isPending}
+            used={save.isSuccess}
             onSave={(t) => save.mutate(t)}
           />
         </>

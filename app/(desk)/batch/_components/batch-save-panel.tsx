@@ -12,6 +12,8 @@ type Props = {
   sized: number;
   withProblems: number;
   pending: boolean;
+  /** The rows of this check were saved: saving again needs a new check. */
+  used: boolean;
   onSave: (t: BatchTarget) => void;
 };
 
@@ -24,9 +26,11 @@ export function BatchSavePanel({
   sized,
   withProblems,
   pending,
+  used,
   onSave,
 }: Props) {
-  const [accountId, setAccountId] = useState(fixedAccountId ?? accounts[0]?.id ?? '');
+  // No account is chosen for the user: saving a sheet to the wrong customer is worse than one more click.
+  const [accountId, setAccountId] = useState(fixedAccountId ?? '');
   const [quoteId, setQuoteId] = useState('');
   const [title, setTitle] = useState('');
   const open = quotes.filter((q) => q.accountId === accountId);
@@ -53,7 +57,11 @@ export function BatchSavePanel({
               setQuoteId('');
             }}
             data-testid="batch-account"
+            required
           >
+            <option value="" disabled>
+              Choose the customer account…
+            </option>
             {accounts.map((a) => (
               <option key={a.id} value={a.id}>
                 {accountOptionLabel(a)}
@@ -95,15 +103,18 @@ export function BatchSavePanel({
       )}
       <button
         type="submit"
-        disabled={pending || !sized || !accountId}
+        disabled={pending || used || !sized || !accountId}
         className="rounded-md bg-copper-500 px-4 py-2 font-medium text-white hover:bg-copper-600 disabled:opacity-50"
         data-testid="batch-save"
       >
-        {pending ? 'Saving…' : `Save ${sized} sized rows`}
+        {pending ? 'Saving…' : used ? 'Saved' : `Save the ${sized} rows that passed`}
       </button>
+      {!accountId && !used && (
+        <p className="w-full text-hint text-ink-muted">Choose the customer account the sizings belong to.</p>
+      )}
       {withProblems > 0 && (
         <p className="w-full text-hint text-ink-muted">
-          {withProblems} rows with problems will not be saved unless you fix and re-check them.
+          {withProblems} rows with problems will not be saved unless you fix them and check again.
         </p>
       )}
     </form>

@@ -4,16 +4,19 @@ import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { summaryOf } from '@/app/_components/action-errors';
 import type { ActionResult } from '@/lib/actions/define-action';
+import { formatDate } from '@/app/_components/format';
 import type { Entitlement } from '@/lib/billing/entitlements';
+import { subscriptionLabels } from '@/lib/billing/labels';
 import type { Plan } from '@/lib/billing/plans';
 import { openPortalAction, startCheckoutAction } from '../actions';
 
+// What each state means for the customer; the state's name comes from lib/billing/labels.ts.
 const statusText: Record<Entitlement['reason'], string> = {
-  active: 'Active: datasheets are unlocked.',
-  grace: 'Payment failed: datasheets stay unlocked during the grace period. Update your payment method.',
-  'period-remaining': 'Cancelled at period end: datasheets stay unlocked until the paid period ends.',
-  none: 'No subscription yet: datasheets are locked.',
-  lapsed: 'Subscription ended: datasheets are locked.',
+  active: 'datasheets are unlocked.',
+  grace: 'datasheets stay unlocked during the grace period. Update your payment method.',
+  'period-remaining': 'datasheets stay unlocked until the paid period ends.',
+  none: 'datasheets are locked.',
+  lapsed: 'datasheets are locked.',
 };
 
 /** Subscription state with checkout and portal buttons; polls while a fresh payment is being confirmed. */
@@ -60,11 +63,11 @@ export function BillingPanel({
       <div className="rounded-panel border border-paper-line bg-paper-raised p-panel shadow-panel">
         <p className="text-label uppercase text-ink-muted">Status</p>
         <p className="mt-1 text-lg font-medium" data-testid="subscription-status">
-          {statusText[ent.reason]}
+          {subscriptionLabels[ent.reason]}: {statusText[ent.reason]}
         </p>
         {ent.periodEnd && (
           <p className="mt-1 text-sm text-ink-muted">
-            {ent.cancelAtPeriodEnd ? 'Ends' : 'Renews'} on {new Date(ent.periodEnd).toLocaleDateString('en-GB')}
+            {ent.cancelAtPeriodEnd ? 'Ends' : 'Renews'} on {formatDate(ent.periodEnd)}
           </p>
         )}
         {ent.status && (

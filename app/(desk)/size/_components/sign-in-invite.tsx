@@ -22,11 +22,17 @@ export function SignInInvite({ nextPath }: { nextPath: string }) {
         >
           Sign in to save this sizing
         </Link>
-        <Link href="/sign-up" className="text-sm text-tide-700 underline">
+        <Link
+          href={`/sign-up?next=${encodeURIComponent(nextPath)}`}
+          className="text-sm text-tide-700 underline"
+          data-testid="create-account-to-save"
+        >
           Create an account
         </Link>
       </div>
-      <p className="mt-2 text-hint text-ink-muted">Your inputs come back with you after signing in.</p>
+      <p className="mt-2 text-hint text-ink-muted">
+        Your inputs come back with you after signing in or creating an account.
+      </p>
     </section>
   );
 }

@@ -18,10 +18,12 @@ import { DeskProvider } from './desk-context';
 import { DeskForm } from './desk-form';
 import { DeskHeader } from './desk-header';
 import { ResultPanel } from './result-panel';
+import { ResultSummaryBar } from './result-summary-bar';
 import { SavePanel } from './save-panel';
 import { ShareActions } from './share-actions';
 import { SignInInvite } from './sign-in-invite';
 import { UnitSystemToggle } from './unit-system-toggle';
+import { useInputsInUrl } from './use-inputs-in-url';
 import { useLiveResult } from './use-live-result';
 import { useUnitSystem } from './use-unit-system';
 
@@ -72,6 +74,7 @@ export function SizingDesk({
   // eslint-disable-next-line react-hooks/exhaustive-deps -- keyed on the serialised values, not the object identity
   const validation = useMemo(() => validateDesk(values), [snapshot]);
   const live = useLiveResult(validation.ok ? validation.key : null);
+  useInputsInUrl(validation.ok ? validation.input : null, validation.ok ? validation.key : null);
   const units = useUnitSystem(initialSystem, viewer.signedIn, form, exact);
   const barometricSource = useBarometricSource(values, accounts);
   const server = live.failure?.kind === 'input' ? groupIssues(live.failure.issues, values.service) : null;
@@ -102,7 +105,7 @@ export function SizingDesk({
         <main
           data-testid="sizing-desk"
           data-hydrated={hydrated}
-          className="mx-auto w-full max-w-[96rem] px-4 py-5 md:px-6 xl:px-8"
+          className="mx-auto w-full max-w-[96rem] px-4 pt-5 pb-16 md:px-6 lg:pb-5 xl:px-8"
         >
           <DeskHeader
             toggle={<UnitSystemToggle system={units.system} onChange={units.change} note={units.note} />}
@@ -142,7 +145,7 @@ export function SizingDesk({
                   customers.
                 </p>
               ) : (
-                <SignInInvite nextPath={validation.ok ? sharePath(validation.input) : '/size'} />
+                <SignInInvite nextPath={validation.ok ? `${sharePath(validation.input)}&from=desk` : '/size'} />
               )}
               <ShareActions
                 input={validation.ok ? validation.input : null}
@@ -159,6 +162,7 @@ export function SizingDesk({
               stale={live.state === 'recomputing'}
             />
           )}
+          <ResultSummaryBar live={live} />
         </main>
       </DeskProvider>
     </FormProvider>

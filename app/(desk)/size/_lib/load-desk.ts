@@ -58,12 +58,23 @@ async function fromSaved(user: CurrentUser | null, id: string, revise: boolean):
 /** What the desk opens with: a saved sizing (revise or duplicate), shared inputs, or nothing. */
 export async function loadDeskStart(
   user: CurrentUser | null,
-  params: { sizing?: string; revise?: string; i?: string },
+  params: { sizing?: string; revise?: string; i?: string; from?: string },
 ): Promise<DeskStart> {
-  if (params.sizing) return fromSaved(user, params.sizing, params.revise === '1');
+  if (params.sizing) {
+    const saved = await fromSaved(user, params.sizing, params.revise === '1');
+    // Edits to a reopened sizing live in the URL beside its id: a reload keeps them.
+    const edited = params.i && saved.reopened ? decodeShareParam(params.i) : null;
+    return edited?.ok ? { ...saved, input: edited.input, notices: [] } : saved;
+  }
   if (params.i) {
     const decoded = decodeShareParam(params.i);
-    if (decoded.ok) return { input: decoded.input, reopened: null, notices: ['Opened from a shared link.'] };
+    // The desk writes its own inputs into the URL (from=desk); only a link from elsewhere is announced.
+    if (decoded.ok)
+      return {
+        input: decoded.input,
+        reopened: null,
+        notices: params.from === 'desk' ? [] : ['Opened from a shared link.'],
+      };
     return { input: null, reopened: null, notices: [`The shared link could not be opened: ${decoded.reason}.`] };
   }
   return { input: null, reopened: null, notices: [] };

@@ -136,9 +136,10 @@ export function LookupFilters({ query, update, creators }: Props) {
         Sort
         <select
           className={`${field} block`}
-          value={query.sort}
-          onChange={(e) => update({ sort: e.target.value as SupportSearch['sort'] })}
+          value={query.sort ?? ''}
+          onChange={(e) => update({ sort: (e.target.value || undefined) as SupportSearch['sort'] })}
         >
+          <option value="">{query.q ? 'Best match (text typed)' : 'Newest first (no text typed)'}</option>
           <option value="newest">Newest first</option>
           <option value="oldest">Oldest first</option>
           <option value="largest">Largest kW</option>

@@ -5,9 +5,9 @@ import Link from 'next/link';
 import { useState } from 'react';
 import type { SupportSearch } from '@/lib/support/schema';
 import type { SupportHit, SupportResults } from '@/lib/support/search';
+import { figure } from '@/lib/units';
 
 const col = createColumnHelper<SupportHit>();
-const kw = new Intl.NumberFormat('en-GB', { maximumFractionDigits: 1 });
 
 const columns = [
   col.accessor('number', {
@@ -28,7 +28,7 @@ const columns = [
   col.accessor('gasLabel', { header: 'Gas' }),
   col.accessor('headlineKw', {
     header: 'kW',
-    cell: (c) => <span className="tabular block text-right">{kw.format(c.getValue())}</span>,
+    cell: (c) => <span className="tabular block text-right">{figure(c.getValue())}</span>,
   }),
   col.accessor('datasheetNumber', {
     header: 'Datasheet',

@@ -27,7 +27,7 @@ export function toSearchParams(q: SupportSearch): string {
   const p = new URLSearchParams();
   for (const [k, v] of Object.entries(q)) {
     if (v === undefined || v === null || v === '') continue;
-    if ((k === 'page' && v === 1) || (k === 'pageSize' && v === 25) || (k === 'sort' && v === 'newest')) continue;
+    if ((k === 'page' && v === 1) || (k === 'pageSize' && v === 25)) continue;
     p.set(k, String(v));
   }
   return p.toString();

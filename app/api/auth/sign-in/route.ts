@@ -1,5 +1,6 @@
 import { checkLocalCredentials, startLocalSession } from '@/lib/auth/local/session';
 import { resendVerification } from '@/lib/auth/local/verification';
+import { HOME_PATH } from '@/lib/auth/home';
 import { signInSchema } from '@/lib/auth/schema';
 import { appOrigin, clerkEnabled, env } from '@/lib/env';
 import { AppError, parseOrThrow } from '@/lib/errors';
@@ -47,7 +48,7 @@ export const POST = defineHandler(
     }
     await startLocalSession(outcome.user.id);
     const next = (body as { next?: unknown }).next;
-    return Response.json({ signedIn: true, redirectTo: safeNextPath(next, env.APP_URL) });
+    return Response.json({ signedIn: true, redirectTo: safeNextPath(next, env.APP_URL, HOME_PATH) });
   },
   { name: 'auth.sign_in' },
 );

@@ -10,12 +10,13 @@ import { FormError } from '@/app/_components/form-errors';
 import { SubmitButton } from '@/app/_components/submit-button';
 import { TextField } from '@/app/_components/text-field';
 import { acceptInviteSchema } from '@/lib/accounts/schema';
+import { HOME_PATH } from '@/lib/auth/home';
 import { acceptInviteAction } from '../actions';
 
 type Values = z.input<typeof acceptInviteSchema>;
 
-/** Sets a name and password for the invited address; the new member then lands on `next` (the desk by default). */
-export function AcceptInviteForm({ token, email, next = '/size' }: { token: string; email: string; next?: string }) {
+/** Sets a name and password for the invited address; the new member then lands on `next` (each role's home by default). */
+export function AcceptInviteForm({ token, email, next = HOME_PATH }: { token: string; email: string; next?: string }) {
   const router = useRouter();
   const [formError, setFormError] = useState<string | null>(null);
   const { register, handleSubmit, setError, formState } = useForm<Values>({

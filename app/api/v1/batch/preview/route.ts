@@ -1,21 +1,25 @@
 import { requireUser } from '@/lib/auth/guards';
 import { admitBatch } from '@/lib/batch/guard';
 import { evaluateSheet } from '@/lib/batch/evaluate';
-import { readBatchRequest, sheetProblems } from '@/lib/batch/read-request';
+import { readBatchCheck, sheetProblems } from '@/lib/batch/read-request';
+import { toRowView } from '@/lib/batch/view';
 import { defineHandler } from '@/lib/http/define-handler';
 
 export const runtime = 'nodejs';
 
-/** Sizes an uploaded sheet without saving anything: sized rows and per-row, per-column problems. */
+/**
+ * Checks rows without saving anything: each row's problems (per column), headline figure and warnings. The desk
+ * sends the sheet in chunks of {row, cells} to show progress; a whole CSV file may be sent instead.
+ */
 export const POST = defineHandler(
   async (req) => {
     await admitBatch(await requireUser('batch:upload'));
-    const { sheet } = await readBatchRequest(req);
+    const sheet = await readBatchCheck(req);
     if (sheet.problems.length) throw sheetProblems(sheet.problems);
-    const rows = evaluateSheet(sheet.rows);
+    const rows = evaluateSheet(sheet.rows).map(toRowView);
     return Response.json({
       rows,
-      sized: rows.filter((r) => r.result).length,
+      sized: rows.filter((r) => r.figures).length,
       withProblems: rows.filter((r) => r.problems.length).length,
     });
   },

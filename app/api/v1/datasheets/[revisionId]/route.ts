@@ -10,16 +10,25 @@ export const dynamic = 'force-dynamic';
 
 const missing = () => new AppError('not_found', 'No such datasheet revision.');
 
+/** A person who opened the link in a browser (not a script) gets a page, not a JSON body. */
+const wantsPage = (req: Request) => (req.headers.get('accept') ?? '').includes('text/html');
+
 const download = defineHandler(
-  async (_req, { params }) => {
+  async (req, { params }) => {
     const user = await requireUser('datasheet:read');
     const { revisionId = '' } = await params;
     if (!z.uuid().safeParse(revisionId).success) throw missing();
     const out = await getRevisionDownload(user, revisionId);
     if (out.status === 'not-found') throw missing();
-    // The one answer with a field beyond `errors`: where to subscribe.
-    if (out.status === 'locked')
+    if (out.status === 'locked') {
+      if (wantsPage(req))
+        return new Response(null, {
+          status: 303,
+          headers: { Location: '/billing?locked=datasheet', 'Cache-Control': 'no-store' },
+        });
+      // The one answer with a field beyond `errors`: where to subscribe.
       return errorResponse(new AppError('payment_required', out.message), { billingUrl: '/billing' });
+    }
     return new Response(new Uint8Array(out.bytes), {
       status: 200,
       headers: {

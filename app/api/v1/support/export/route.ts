@@ -11,7 +11,7 @@ export const dynamic = 'force-dynamic';
 /** The current look-up as CSV (up to 5,000 rows), with formula-looking cells neutralised. */
 export const GET = defineHandler(
   async (req) => {
-    const user = await requireUser('support:search');
+    const user = await requireUser('sizing:lookup');
     const query = parseOrThrow(supportSearchSchema, {
       ...Object.fromEntries(new URL(req.url).searchParams),
       page: 1,

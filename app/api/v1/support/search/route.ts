@@ -11,7 +11,7 @@ export const dynamic = 'force-dynamic';
 /** Support look-up: the search behind /support, audited on every call. */
 export const GET = defineHandler(
   async (req) => {
-    const user = await requireUser('support:search');
+    const user = await requireUser('sizing:lookup');
     const query = parseOrThrow(supportSearchSchema, Object.fromEntries(new URL(req.url).searchParams));
     const results = await searchSizings(user, query);
     await auditLookup(user, 'support.searched', 'search', 'sizings', { query: query, total: results.total });
