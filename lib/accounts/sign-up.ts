@@ -10,7 +10,7 @@ import { env } from '@/lib/env';
 import { AppError } from '@/lib/errors';
 import { accountsNamed } from './duplicates';
 
-type SignUpInput = { name: string; email: string; password: string; company: string; site?: string };
+type SignUpInput = { name: string; email: string; password: string; company: string; site?: string; next?: string };
 
 /** When the address already has a sign-in: a fresh confirmation link if it never confirmed, else a notice. */
 async function answerExisting(existing: { id: string; email: string; name: string; verified: boolean }) {
@@ -70,6 +70,6 @@ export async function signUpCustomer(input: SignUpInput): Promise<void> {
       accountId: a.id,
       detail: { company: input.company },
     });
-    await sendVerification(tx, { id: u.id, email: input.email, name: input.name });
+    await sendVerification(tx, { id: u.id, email: input.email, name: input.name }, input.next);
   });
 }

@@ -35,6 +35,8 @@ export const signUpSchema = z.object({
   password: newPasswordSchema,
   company: nameText('your company name', 2, 120),
   site: z.string().trim().max(120).optional(),
+  // The page to open after the address is confirmed and the person signs in (a desk link keeps its inputs).
+  next: z.string().max(2000).optional(),
 });
 export type SignUpInput = z.infer<typeof signUpSchema>;
 

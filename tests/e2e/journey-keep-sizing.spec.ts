@@ -1,4 +1,5 @@
 import { expect, test, type Page } from '@playwright/test';
+import { linkFromInbox } from './support/inbox';
 
 async function deskReady(page: Page) {
   await expect(page.getByTestId('sizing-desk')).toHaveAttribute('data-hydrated', 'true');
@@ -28,14 +29,29 @@ test('a prospect keeps their sizing through reload, Back and creating an account
   await deskReady(page);
   await expect(page.getByTestId('field-flow')).toHaveValue('2345');
 
-  // "Create an account" from the desk, then sign-up, brings the inputs back.
+  // "Create an account" from the desk, then sign-up, the mailed confirmation and sign-in bring the inputs back.
+  const email = `wren.ashby.${suffix}@fellmoor.example`;
+  const password = 'a-long-enough-password';
   await page.getByTestId('create-account-to-save').click();
   await expect(page).toHaveURL(/\/sign-up\?next=/);
   await page.getByLabel('Your name').fill('Wren Ashby');
-  await page.getByLabel('Work e-mail').fill(`wren.ashby.${suffix}@fellmoor.example`);
-  await page.getByLabel('Password').fill('a-long-enough-password');
-  await page.getByLabel('Company').fill(`Fellmoor Dairy ${suffix}`);
+  await page.getByLabel('Work e-mail').fill(email);
+  await page.getByLabel('Password').fill(password);
+  await page.getByLabel('Company', { exact: true }).fill(`Fellmoor Dairy ${suffix}`);
   await page.getByRole('button', { name: 'Create customer account' }).click();
+  await expect(page.getByTestId('sign-up-sent')).toContainText(email);
+  const verify = await linkFromInbox(
+    email,
+    /Confirm your e-mail address/,
+    /http:\/\/\S+\/verify\/[\w-]+\?next=[\w%.~-]+/,
+  );
+  await page.goto(verify);
+  await page.getByRole('button', { name: 'Confirm my e-mail address' }).click();
+  await page.getByTestId('verified-sign-in').click();
+  await expect(page).toHaveURL(/\/sign-in\?next=/);
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
   await page.waitForURL((url) => url.pathname === '/size' && url.searchParams.has('i'));
   await deskReady(page);
   await expect(page.getByTestId('field-flow')).toHaveValue('2345');

@@ -14,7 +14,7 @@ export default async function SignUpPage({
 }: {
   searchParams: Promise<Record<string, string | string[] | undefined>>;
 }) {
-  // A prospect coming from the desk keeps their sizing: `next` carries its inputs on to sign-in.
+  // A prospect coming from the desk keeps their sizing: `next` carries its inputs through the confirmation link to sign-in.
   const next = safeNextParam((await searchParams).next);
   return (
     <main className="mx-auto flex min-h-screen max-w-md flex-col justify-center px-6 py-12">
@@ -26,7 +26,7 @@ export default async function SignUpPage({
         One sign-in for you and a customer account for your company: save heater and compressor sizings, see your
         vendor’s quotes and download datasheets.
       </p>
-      {clerkEnabled ? <ClerkSignUp /> : <SignUpForm />}
+      {clerkEnabled ? <ClerkSignUp /> : <SignUpForm next={next} />}
       <p className="mt-6 text-sm text-ink-muted">
         Already use Dutywise?{' '}
         <Link className="text-tide-600 underline" href={withNext('/sign-in', next)}>

@@ -8,6 +8,7 @@ import { env } from '@/lib/env';
 import { logger } from '@/lib/log/logger';
 import { consume, digestKey } from '@/lib/ratelimit/limit';
 import { issueEmailToken, useEmailToken } from './email-tokens';
+import { safeNextPath } from '@/lib/security/safe-redirect';
 
 export const VERIFY_HOURS = 48;
 
@@ -19,13 +20,20 @@ export async function mayMail(address: string): Promise<boolean> {
 }
 
 /** Queues the one-time confirmation link for a user's address, in the caller's transaction. */
-export async function sendVerification(tx: Tx, user: { id: string; email: string; name: string }): Promise<void> {
+export async function sendVerification(
+  tx: Tx,
+  user: { id: string; email: string; name: string },
+  next?: string,
+): Promise<void> {
   const token = await issueEmailToken(tx, user.id, 'verify-email', VERIFY_HOURS * 60);
+  // Where to go after confirming and signing in, when it is a path on this site (a desk link with its inputs).
+  const then = next ? safeNextPath(next, env.APP_URL, '') : '';
+  const verifyUrl = `${env.APP_URL}/verify/${token}${then ? `?next=${encodeURIComponent(then)}` : ''}`;
   await enqueueEmail(tx, {
     template: 'verify-email',
     to: user.email,
     entity: { type: 'user', id: user.id },
-    props: { name: user.name, verifyUrl: `${env.APP_URL}/verify/${token}`, expiresInHours: VERIFY_HOURS },
+    props: { name: user.name, verifyUrl, expiresInHours: VERIFY_HOURS },
   });
 }
 

@@ -12,7 +12,8 @@ import { signUpAction } from '../actions';
 
 const FIELDS = ['name', 'email', 'password', 'company', 'site'] as const;
 
-export function SignUpForm() {
+/** `next`: the page to open after the address is confirmed and the person signs in (carried in the mailed link). */
+export function SignUpForm({ next }: { next?: string }) {
   const [formError, setFormError] = useState<string | null>(null);
   const [sentTo, setSentTo] = useState<string | null>(null);
   const { register, handleSubmit, setError, formState } = useForm<SignUpInput>({
@@ -23,7 +24,7 @@ export function SignUpForm() {
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
-    const res = await signUpAction(values);
+    const res = await signUpAction({ ...values, next });
     if (res.ok) {
       setSentTo(res.data.email);
     } else {

@@ -2,13 +2,21 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { mailedTokenSchema } from '@/lib/auth/schema';
 import { AuthFrame, DeadLink } from '../../_components/auth-frame';
+import { safeNextParam, withNext } from '../../_lib/safe-next';
 import { ConfirmButton } from './_components/confirm-button';
 
 export const metadata: Metadata = { title: 'Confirm your e-mail address' };
 export const dynamic = 'force-dynamic';
 
-export default async function VerifyPage({ params }: { params: Promise<{ token: string }> }) {
+export default async function VerifyPage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ token: string }>;
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+}) {
   const token = mailedTokenSchema.safeParse((await params).token);
+  const next = safeNextParam((await searchParams).next);
   return (
     <AuthFrame title="Confirm your e-mail address">
       {token.success ? (
@@ -16,7 +24,7 @@ export default async function VerifyPage({ params }: { params: Promise<{ token: 
           <p className="mt-2 text-sm text-ink-soft">
             Confirm that the address you signed up with is yours; then sign in with your password.
           </p>
-          <ConfirmButton token={token.data} />
+          <ConfirmButton token={token.data} signInHref={withNext('/sign-in', next)} />
         </>
       ) : (
         <DeadLink>

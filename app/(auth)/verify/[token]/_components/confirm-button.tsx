@@ -8,7 +8,7 @@ import { SubmitButton } from '@/app/_components/submit-button';
 import { verifyEmailAction } from '../actions';
 
 /** One press confirms the address (a POST, so mail scanners that open links do not use the token up). */
-export function ConfirmButton({ token }: { token: string }) {
+export function ConfirmButton({ token, signInHref = '/sign-in' }: { token: string; signInHref?: string }) {
   const [pending, setPending] = useState(false);
   const [error, setError] = useState<string | null>(null);
   const [done, setDone] = useState(false);
@@ -16,7 +16,7 @@ export function ConfirmButton({ token }: { token: string }) {
     return (
       <div role="status" data-testid="email-verified" className="mt-6 space-y-3 text-sm">
         <p>Your address is confirmed.</p>
-        <Link href="/sign-in" className="text-tide-600 underline">
+        <Link href={signInHref} className="text-tide-600 underline" data-testid="verified-sign-in">
           Sign in to your desk
         </Link>
       </div>
