@@ -53,11 +53,20 @@ export async function callAction(base: string, ref: ActionRef, arg: unknown, coo
   for (const line of text.split('\n')) {
     const m = /^[0-9a-f]+:(\{.*\})$/.exec(line);
     if (!m) continue;
-    const value = JSON.parse(m[1]!) as { ok?: boolean; data?: unknown; formError?: string; status?: number };
+    const value = JSON.parse(m[1]!) as {
+      ok?: boolean;
+      data?: unknown;
+      errors?: { message: string }[];
+      status?: number;
+    };
     if (typeof value.ok === 'boolean')
       return value.ok
         ? { ok: true, status: res.status, data: value.data }
-        : { ok: false, status: value.status ?? res.status, error: value.formError ?? 'refused' };
+        : {
+            ok: false,
+            status: value.status ?? res.status,
+            error: value.errors?.map((e) => e.message).join(' ') || 'refused',
+          };
   }
   return { ok: false, status: res.status, error: `no action result in the answer: ${text.slice(0, 200)}` };
 }

@@ -20,7 +20,7 @@ describe('one company, one account', () => {
     const sameName = `  ${existing.name.toUpperCase().replace(/ /g, '  ')} `;
     await expect(createAccount(engineer, fields(sameName))).rejects.toMatchObject({
       status: 409,
-      fieldErrors: { name: ['An account with this name already exists.'] },
+      issues: expect.arrayContaining([{ path: 'name', message: 'An account with this name already exists.' }]),
     });
     const second = await createAccount(engineer, { ...fields(sameName), confirmDuplicateName: true });
     expect(second.id).not.toBe(existing.id);

@@ -143,7 +143,8 @@ describe('requests while PostgreSQL is stopped', () => {
         company: 'Fenwick Drying',
       }),
     );
-    for (const r of results) expect(r).toMatchObject({ ok: false, status: 503, formError: UNAVAILABLE_MESSAGE });
+    for (const r of results)
+      expect(r).toMatchObject({ ok: false, status: 503, errors: [{ path: '', message: UNAVAILABLE_MESSAGE }] });
   });
 
   it('the very first request after the restart is served, without restarting anything', async () => {

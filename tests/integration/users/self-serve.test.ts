@@ -15,7 +15,13 @@ import { getInvitationPreview } from '@/lib/users/invitation-preview';
 import { makeAccount, makeUser } from '../helpers/fixtures';
 import { actAs, actFrom } from '../helpers/session';
 
-const form = (email: string) => ({ name: 'Ada Fenwick', email, password: 'long-enough-pw', company: 'Fenwick Kilns' });
+// Each sign-up names its own company: one company has one account (a second sign-up for it is refused).
+const form = (email: string) => ({
+  name: 'Ada Fenwick',
+  email,
+  password: 'long-enough-pw',
+  company: `Fenwick Kilns ${randomUUID().slice(0, 6)}`,
+});
 
 async function lastMailTo(email: string) {
   const [row] = await db
