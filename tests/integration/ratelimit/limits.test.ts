@@ -57,11 +57,11 @@ describe('rate limits', () => {
     const rows = await db
       .select()
       .from(rateLimitCounters)
-      .where(sql`${rateLimitCounters.key} = ${`calculate:${ip}`}`);
+      .where(sql`${rateLimitCounters.key} = ${`calculate.address:${ip}`}`);
     expect(rows).toHaveLength(1);
     expect(rows[0]!.expire).toBeGreaterThan(Date.now());
     expect(rows[0]!.expire).toBeLessThanOrEqual(Date.now() + 60_000);
-    const stale = `calculate:stale-${ip}`;
+    const stale = `calculate.address:stale-${ip}`;
     await db.insert(rateLimitCounters).values({ key: stale, points: 3, expire: Date.now() - 2 * 3_600_000 });
     expect(await purgeExpiredCounters()).toBeGreaterThanOrEqual(1);
     expect(
@@ -74,7 +74,7 @@ describe('rate limits', () => {
       await db
         .select()
         .from(rateLimitCounters)
-        .where(sql`${rateLimitCounters.key} = ${`calculate:${ip}`}`),
+        .where(sql`${rateLimitCounters.key} = ${`calculate.address:${ip}`}`),
     ).toHaveLength(1);
   });
 });

@@ -25,7 +25,7 @@ describe('what a customer may do', () => {
     expect(await saveSizingAction({ ...payload, accountId: other.id })).toMatchObject({ ok: true });
   });
 
-  it('a customer cannot issue a new revision of a datasheet the vendor issued, but may issue their own', async () => {
+  it('only vendor staff issue datasheet revisions: a customer may not issue one, of a vendor sheet or of its own', async () => {
     const acct = await makeAccount('Revisions');
     const engineer = await makeUser('sales_engineer');
     const customer = await makeUser('customer', acct.id);
@@ -33,13 +33,13 @@ describe('what a customer may do', () => {
     await issueDatasheet(engineer, { sizingId: vendors.id });
     await expect(issueDatasheet(customer, { sizingId: vendors.id, note: 'Customer edit' })).rejects.toMatchObject({
       status: 403,
-      message: expect.stringMatching(/Your vendor issued this datasheet/),
+      message: expect.stringMatching(/does not allow issuing datasheets/),
     });
     const own = await makeEngineSizing(customer, acct.id, nitrogenHeater, { title: 'Own sheet', tag: 'EH-2' });
-    expect((await issueDatasheet(customer, { sizingId: own.id })).revision).toBe('A');
-    expect((await issueDatasheet(customer, { sizingId: own.id })).revision).toBe('B');
-    // The vendor may still revise a sheet the customer started.
-    expect((await issueDatasheet(engineer, { sizingId: own.id })).revision).toBe('C');
+    await expect(issueDatasheet(customer, { sizingId: own.id })).rejects.toMatchObject({ status: 403 });
+    // The vendor issues the customer's own sizing as its datasheet.
+    expect((await issueDatasheet(engineer, { sizingId: own.id })).revision).toBe('A');
+    expect((await issueDatasheet(engineer, { sizingId: vendors.id })).revision).toBe('B');
   });
 
   it('the inviter is not shown the invitation link outside demo mode', async () => {
