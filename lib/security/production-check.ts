@@ -2,7 +2,7 @@ import { DEV_DEFAULTS } from '@/lib/env';
 import { parseTrustedProxies } from './client-address';
 
 // What a deployment must not start with. Pure, so tests feed it settings directly; lib/security/start-check.ts
-// applies it when the server (and the mail worker) starts.
+// applies it when the server (and the job worker) starts.
 
 export type StartSettings = {
   NODE_ENV: string;

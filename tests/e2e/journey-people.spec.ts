@@ -5,7 +5,7 @@ import { signIn } from './support/sign-in';
 
 const inbox = `http://127.0.0.1:${e2ePorts.smtpHttp}`;
 
-/** The invitation link in the newest message to `to`, once the mail worker has delivered it. */
+/** The invitation link in the newest message to `to`, once the job worker has delivered it. */
 async function invitationLink(to: string): Promise<string | null> {
   const list = (await (await fetch(`${inbox}/messages?to=${encodeURIComponent(to)}`)).json()) as {
     data: { id: string }[];

@@ -16,7 +16,7 @@ export async function openSession(userId: string): Promise<{ token: string; ttlS
     .values({ userId, expiresAt: new Date(Date.now() + ttlSeconds * 1000) })
     .returning({ id: userSessions.id });
   if (!row) throw new Error('session insert returned no row');
-  // The same user's expired rows go while we are here; the mail worker sweeps everyone's.
+  // The same user's expired rows go while we are here; the job worker's session sweep clears everyone's (lib/jobs).
   await db.delete(userSessions).where(and(eq(userSessions.userId, userId), lt(userSessions.expiresAt, new Date())));
   return { token: await signLocalSession(userId, row.id, env.SESSION_SECRET, ttlSeconds), ttlSeconds };
 }
