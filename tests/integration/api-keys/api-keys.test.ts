@@ -9,13 +9,14 @@ import { POST } from '@/app/api/v1/calculate/route';
 import { hashApiKey } from '@/lib/api-keys/format';
 import { listApiKeys } from '@/lib/api-keys/queries';
 import { API_KEY_ACTIVE_LIMIT } from '@/lib/api-keys/schema';
+import { heaterJson } from '../helpers/heater-json';
 
-const body = JSON.stringify({
-  service: 'heater',
-  gas: { preset: 'nitrogen' },
-  flow: { value: 400, unit: 'kg/h' },
-  inlet: { temperature: { value: 20, unit: 'degC' }, pressure: { value: 5, unit: 'barg' } },
-  outletTemperature: { value: 180, unit: 'degC' },
+const body = heaterJson({
+  gas: 'nitrogen',
+  flowKgH: 400,
+  inletC: 20,
+  pressure: { value: 5, unit: 'barg' },
+  outletC: 180,
 });
 const calc = (authorization?: string) =>
   POST(

@@ -31,6 +31,7 @@ import { issueDatasheetAction } from '@/app/(desk)/datasheets/actions';
 import { setQuoteStatusAction } from '@/app/(desk)/quotes/[quoteId]/actions';
 import { signUpAction } from '@/app/(auth)/sign-up/actions';
 import { UNAVAILABLE_MESSAGE } from '@/lib/ops/unavailable';
+import { heaterJson } from '../helpers/heater-json';
 
 const pg = clusterFor(`requests-${cfg.port}`, cfg.port);
 const someId = '7d0c5a52-6a8e-4e38-9d59-3f1e0f6c2b11';
@@ -110,12 +111,12 @@ describe('requests while PostgreSQL is stopped', () => {
   });
 
   it('the desk keeps calculating for a signed-in person; a request with an API key that cannot be checked gets 503', async () => {
-    const sizing = JSON.stringify({
-      service: 'heater',
-      gas: { preset: 'air' },
-      flow: { value: 900, unit: 'kg/h' },
-      inlet: { temperature: { value: 15, unit: 'degC' }, pressure: { value: 2, unit: 'barg' } },
-      outletTemperature: { value: 200, unit: 'degC' },
+    const sizing = heaterJson({
+      gas: 'air',
+      flowKgH: 900,
+      inletC: 15,
+      pressure: { value: 2, unit: 'barg' },
+      outletC: 200,
     });
     const session = await signLocalSession(someId, randomUUID(), env.SESSION_SECRET, 600);
     const desk = await calculate(post('/api/v1/calculate', sizing, { cookie: `${LOCAL_SESSION_COOKIE}=${session}` }));

@@ -16,14 +16,15 @@ import { POST as calculate } from '@/app/api/v1/calculate/route';
 import { clusterFor } from './private-cluster';
 import middleware from '@/middleware';
 import { NextRequest, type NextFetchEvent } from 'next/server';
+import { heaterJson } from '../helpers/heater-json';
 
 const pg = clusterFor(`down-${cfg.port}`, cfg.port);
-const body = JSON.stringify({
-  service: 'heater',
-  gas: { preset: 'nitrogen' },
-  flow: { value: 1000, unit: 'kg/h' },
-  inlet: { temperature: { value: 20, unit: 'degC' }, pressure: { value: 500, unit: 'kPa' } },
-  outletTemperature: { value: 300, unit: 'degC' },
+const body = heaterJson({
+  gas: 'nitrogen',
+  flowKgH: 1000,
+  inletC: 20,
+  pressure: { value: 500, unit: 'kPa' },
+  outletC: 300,
 });
 
 beforeAll(() => {

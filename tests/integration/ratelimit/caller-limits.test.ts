@@ -11,13 +11,14 @@ import { randomUUID } from 'node:crypto';
 import { POST } from '@/app/api/v1/calculate/route';
 import { env } from '@/lib/env';
 import { LOCAL_SESSION_COOKIE, signLocalSession } from '@/lib/auth/local/session-token';
+import { heaterJson } from '../helpers/heater-json';
 
-const body = JSON.stringify({
-  service: 'heater',
-  gas: { preset: 'air' },
-  flow: { value: 100, unit: 'kg/h' },
-  inlet: { temperature: { value: 20, unit: 'degC' }, pressure: { value: 101.325, unit: 'kPa' } },
-  outletTemperature: { value: 80, unit: 'degC' },
+const body = heaterJson({
+  gas: 'air',
+  flowKgH: 100,
+  inletC: 20,
+  pressure: { value: 101.325, unit: 'kPa' },
+  outletC: 80,
 });
 const office = () => `203.0.113.${Math.floor(Math.random() * 250)}-${randomUUID().slice(0, 6)}`;
 const calc = (address: string, cookie?: string) =>

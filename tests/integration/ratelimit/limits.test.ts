@@ -10,13 +10,14 @@ import { POST as calculatePost } from '@/app/api/v1/calculate/route';
 import { db } from '@/db';
 import { rateLimitCounters } from '@/db/schema';
 import { purgeExpiredCounters } from '@/lib/ratelimit/store';
+import { heaterJson } from '../helpers/heater-json';
 
-const body = JSON.stringify({
-  service: 'heater',
-  gas: { preset: 'air' },
-  flow: { value: 100, unit: 'kg/h' },
-  inlet: { temperature: { value: 20, unit: 'degC' }, pressure: { value: 101.325, unit: 'kPa' } },
-  outletTemperature: { value: 80, unit: 'degC' },
+const body = heaterJson({
+  gas: 'air',
+  flowKgH: 100,
+  inletC: 20,
+  pressure: { value: 101.325, unit: 'kPa' },
+  outletC: 80,
 });
 const addr = () => `198.51.100.${Math.floor(Math.random() * 250) + 1}`;
 const calc = (ip: string, post = calculatePost, spoofed = `203.0.113.${Math.floor(Math.random() * 250)}`) =>
