@@ -16,7 +16,8 @@ export type SeedQuote = {
   title: string;
   status: 'draft' | 'sent' | 'won' | 'lost';
   by: string;
-  lines: { tag: string; quantity: number }[];
+  /** Unit prices in the account's currency (decimal strings), set while the quote is a draft. */
+  lines: { tag: string; quantity: number; unitPrice?: string }[];
   notes?: string;
 };
 
@@ -44,6 +45,8 @@ export const seedAccounts = [
     billingContactName: 'Dev Hartigan',
     billingContactEmail: 'dev.hartigan@oakhollow.example',
     barometricPressureKpa: 101.325,
+    // A US customary customer: its desk defaults, datasheets and e-mails read in °F, psia and lb/h.
+    unitSystem: 'us',
   },
 ] as const;
 
@@ -187,8 +190,8 @@ export const seedQuotes: SeedQuote[] = [
     status: 'sent',
     by: 'ines.marlow@halvard.example',
     lines: [
-      { tag: 'EH-301', quantity: 1 },
-      { tag: 'EH-305', quantity: 2 },
+      { tag: 'EH-301', quantity: 1, unitPrice: '48200.00' },
+      { tag: 'EH-305', quantity: 2, unitPrice: '12650.00' },
     ],
   },
   {
@@ -213,12 +216,25 @@ export const seedQuotes: SeedQuote[] = [
   },
 ];
 
-/** Datasheets issued in the scenario: tag, issuer and a note per revision (one entry per revision). */
-export const seedDatasheets: { tag: string; by: string; notes: string[] }[] = [
+/**
+ * Datasheets issued in the scenario: tag, issuer and a note per revision (one entry per revision). `revise` saves a
+ * new version of the sizing (same record, same datasheet) before the revision of that index is issued.
+ */
+export const seedDatasheets: {
+  tag: string;
+  by: string;
+  notes: string[];
+  revise?: { before: number; notes: string; change: Record<string, unknown> };
+}[] = [
   {
     tag: 'EH-301',
     by: 'ines.marlow@halvard.example',
     notes: ['Issued for quotation', 'Heat-loss allowance confirmed with the customer'],
+    revise: {
+      before: 1,
+      notes: 'Enquiry 14 Feb: dryer inlet air, 3 barg header. Heat loss raised to 8 % after the site survey.',
+      change: { heatLossPercent: 8 },
+    },
   },
   { tag: 'K-201', by: 'tobias.rennick@halvard.example', notes: ['Issued for quotation'] },
   { tag: 'EH-410', by: 'ines.marlow@halvard.example', notes: ['Issued for order'] },

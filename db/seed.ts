@@ -7,7 +7,7 @@ import { accounts, memberships, quotes, sizings, users } from '@/db/schema';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { DEMO_PASSWORD } from '@/lib/auth/demo-users';
 import { createQuote, setQuoteStatus } from '@/lib/quotes/mutations';
-import { computeForSave, insertSizing } from '@/lib/sizings/save';
+import { computeForSave, insertSizing, saveSizing } from '@/lib/sizings/save';
 import { hashPassword } from '@/lib/auth/local/passwords';
 import { issueDatasheet } from '@/lib/datasheets/issue';
 import { seedAccounts, seedDatasheets, seedQuotes, seedSizings, seedUsers } from './seed-scenario';
@@ -83,18 +83,26 @@ async function main() {
       .where(eq(sizings.accountId, accountId));
     const ids = qd.lines.map((l) => tagged.find((t) => t.tag === l.tag)!.id);
     const { id } = await createQuote(user, { accountId, title: qd.title, notes: qd.notes, sizingIds: ids });
-    for (const l of qd.lines.filter((x) => x.quantity !== 1)) {
+    for (const l of qd.lines.filter((x) => x.quantity !== 1 || x.unitPrice)) {
       const sid = tagged.find((t) => t.tag === l.tag)!.id;
       await db.execute(
-        sql`update quote_items set quantity = ${l.quantity} where quote_id = ${id} and sizing_id = ${sid}`,
+        sql`update quote_items set quantity = ${l.quantity}, unit_price = ${l.unitPrice ?? null} where quote_id = ${id} and sizing_id = ${sid}`,
       );
     }
     if (qd.status !== 'draft') await setQuoteStatus(user, id, qd.status);
     if (qd.status !== 'draft') await db.update(quotes).set({ sentAt: new Date() }).where(eq(quotes.id, id));
   }
   for (const d of seedDatasheets) {
-    const [row] = await db.select({ id: sizings.id }).from(sizings).where(eq(sizings.equipmentTag, d.tag)).limit(1);
-    for (const note of d.notes) await issueDatasheet(people.get(d.by)!, { sizingId: row!.id, note });
+    const [row] = await db.select().from(sizings).where(eq(sizings.equipmentTag, d.tag)).limit(1);
+    const by = people.get(d.by)!;
+    for (const [i, note] of d.notes.entries()) {
+      if (d.revise?.before === i) {
+        const meta = { accountId: row!.accountId, title: row!.title, equipmentTag: d.tag, notes: d.revise.notes };
+        const input = { ...(row!.input as Record<string, unknown>), ...d.revise.change };
+        await saveSizing(by, { ...meta, quoteId: undefined, revisedFromId: row!.id }, input);
+      }
+      await issueDatasheet(by, { sizingId: row!.id, note });
+    }
   }
   console.log(
     `seeded ${seedAccounts.length} accounts, ${seedUsers.length} users, ${seedSizings.length} sizings, ${seedQuotes.length} quotes, ${seedDatasheets.length} datasheets`,
