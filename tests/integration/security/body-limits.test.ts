@@ -11,6 +11,7 @@ import { POST as signIn } from '@/app/api/auth/sign-in/route';
 import { POST as batchPreview } from '@/app/api/v1/batch/preview/route';
 import { POST as calculate } from '@/app/api/v1/calculate/route';
 import { POST as webhook } from '@/app/api/webhooks/stripe/route';
+import { BATCH_MAX_BYTES } from '@/lib/batch/upload-limits';
 import { makeUser } from '../helpers/fixtures';
 import { actAs } from '../helpers/session';
 
@@ -58,14 +59,14 @@ describe('request bodies are bounded while they are read', () => {
     expect(process.memoryUsage().rss - before).toBeLessThan(8 * 1024 * 1024);
   });
 
-  it('the batch upload (6 MiB request)', async () => {
+  it('the batch check (an 8 MiB file and its form framing)', async () => {
     await actAs(await makeUser('sales_engineer'));
     const { req, pulled } = post('http://localhost/api/v1/batch/preview', {
       'content-type': 'multipart/form-data; boundary=x',
     });
     const res = await batchPreview(req, { params: Promise.resolve({}) });
     expect(res.status).toBe(413);
-    expect(pulled.bytes).toBeLessThanOrEqual(6 * 1024 * 1024 + 2 * CHUNK);
+    expect(pulled.bytes).toBeLessThanOrEqual(BATCH_MAX_BYTES + 64 * 1024 + 2 * CHUNK);
   });
 
   it('a declared Content-Length over the limit is refused without reading', async () => {
