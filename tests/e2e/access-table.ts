@@ -123,13 +123,15 @@ export const accessTable: AccessRow[] = [
     file: 'app/api/v1/batch/preview/route.ts',
     path: '/api/v1/batch/preview',
     method: 'POST',
-    expect: { anon: 401, sales_engineer: 400, customer: 400, support: 403, admin: 400 },
+    // The scenario's customer has no subscription: batch upload is a subscriber's (402 before the body is read).
+    expect: { anon: 401, sales_engineer: 400, customer: 402, support: 403, admin: 400 },
   },
   {
     file: 'app/api/v1/batch/commit/route.ts',
     path: '/api/v1/batch/commit',
     method: 'POST',
-    expect: { anon: 401, sales_engineer: 400, customer: 400, support: 403, admin: 400 },
+    // The scenario's customer has no subscription: batch upload is a subscriber's (402 before the body is read).
+    expect: { anon: 401, sales_engineer: 400, customer: 402, support: 403, admin: 400 },
   },
   {
     file: 'app/api/v1/billing/status/route.ts',

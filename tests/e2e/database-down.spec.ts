@@ -20,10 +20,19 @@ test.beforeAll(async () => {
   test.setTimeout(240_000);
   pg.start();
   pg.migrate();
-  app = spawn('node', ['node_modules/next/dist/bin/next', 'start', '-p', String(e2ePorts.faultApp)], {
+  // server.mjs, as the journeys' own app: a production start is refused without it. Demo mode accepts the private
+  // cluster's owner role and the local fakes.
+  app = spawn('node', ['server.mjs', '--port', String(e2ePorts.faultApp)], {
     cwd: root,
     stdio: 'ignore',
-    env: { ...process.env, DATABASE_URL: pg.url, APP_URL: base, NEXT_DIST_DIR: '.next-test', LOG_LEVEL: 'fatal' },
+    env: {
+      ...process.env,
+      DATABASE_URL: pg.url,
+      APP_URL: base,
+      DEMO_MODE: 'on',
+      NEXT_DIST_DIR: '.next-test',
+      LOG_LEVEL: 'fatal',
+    },
   });
   for (let i = 0; i < 120; i++) {
     const up = await fetch(`${base}/api/health`).then(

@@ -5,6 +5,7 @@ import { linkFromInbox } from './support/inbox';
 import { query, signInFor } from './support/scenario';
 import { signIn } from './support/sign-in';
 import { formatHeadline } from '@/lib/sizings/headline';
+import { chooseAccount } from './support/choose-account';
 
 const suffix = Date.now().toString(36);
 const company = `Brackwater Maltings ${suffix}`;
@@ -77,7 +78,7 @@ test('a sales engineer opens an account and quotes two sizings; the customer see
   await se.getByTestId('batch-file').setInputFiles({ name: 'enquiry.csv', mimeType: 'text/csv', buffer: enquiryCsv() });
   await se.getByTestId('batch-check').click();
   await expect(se.getByTestId('batch-summary')).toContainText('2 rows sized');
-  await se.getByTestId('batch-account').selectOption({ label: company });
+  await chooseAccount(se.getByTestId('batch-account'), company);
   await se.getByTestId('batch-quote-title').fill('Kiln house heat and gas');
   await se.getByTestId('batch-save').click();
   await expect(se.getByTestId('batch-saved')).toContainText('Saved 2 sizings to quote Q');

@@ -4,6 +4,7 @@ import { batchColumnNames } from '../../lib/batch/columns';
 import { BATCH_CHECK_CHUNK } from '../../lib/batch/parse';
 import { query, signInFor } from './support/scenario';
 import { signIn } from './support/sign-in';
+import { chooseAccount } from './support/choose-account';
 
 const suffix = Date.now().toString(36);
 
@@ -82,7 +83,7 @@ test('batch: rows keep their line numbers, warnings show, the failed row is neve
   await expect(page.getByTestId('batch-save')).toBeDisabled();
   // A fix typed after the check is not saved until the sheet is checked again.
   await page.getByLabel('Line 5 flow_unit').fill('kg/h');
-  await page.getByTestId('batch-account').selectOption({ label: 'Oakhollow Glassworks' });
+  await chooseAccount(page.getByTestId('batch-account'), 'Oakhollow Glassworks');
   await page.getByTestId('batch-quote-title').fill(`Batch journey ${suffix}`);
   await page.getByTestId('batch-save').click();
   await expect(page.getByTestId('batch-saved')).toContainText('Saved 2 sizings');
