@@ -35,7 +35,7 @@ test('numbers agree: list counts equal the account page; states in our words; US
   await page.goto('/accounts');
   await page.getByRole('link', { name: 'Oakhollow Glassworks' }).click();
   await page.getByText('Edit details').click();
-  await page.getByLabel('Units the customer works in').selectOption('us');
+  await page.getByLabel('Units for datasheets, e-mails and the desk').selectOption('us');
   await page.getByRole('button', { name: 'Save changes' }).click();
   await expect(page.getByTestId('account-details')).toContainText('US customary');
 
