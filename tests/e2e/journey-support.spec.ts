@@ -35,7 +35,7 @@ test('support finds a sizing from a mistyped tag, narrows it, reads its record a
 
   const before = (await inboxFor('olu.bennet@tarnside.example')).length;
   await page.getByTestId('resend-datasheet-email').click();
-  await expect(page.getByTestId('resend-result')).toContainText('Queued to olu.bennet@tarnside.example');
+  await expect(page.getByTestId('resend-result')).toContainText('Copy queued to olu.bennet@tarnside.example');
   await expect
     .poll(async () => (await inboxFor('olu.bennet@tarnside.example')).length, { timeout: 30_000 })
     .toBeGreaterThan(before);

@@ -3,8 +3,11 @@ import { e2ePorts } from '../ports';
 
 type Listed = { id: string; subject: string };
 
-/** Waits for a mail to `address` whose subject matches, then returns the first link in it that matches `link`. */
-export async function linkFromInbox(address: string, subject: RegExp, link: RegExp): Promise<string> {
+/**
+ * Waits until `atLeast` mails to `address` have a matching subject, then returns the first link matching `link` in
+ * the newest. Wait for every mail the journey caused: a newer one-time link makes the older ones invalid.
+ */
+export async function linkFromInbox(address: string, subject: RegExp, link: RegExp, atLeast = 1): Promise<string> {
   const base = `http://127.0.0.1:${e2ePorts.smtpHttp}`;
   let found: Listed | undefined;
   await expect
@@ -13,8 +16,9 @@ export async function linkFromInbox(address: string, subject: RegExp, link: RegE
         const res = await fetch(`${base}/messages?to=${encodeURIComponent(address)}`);
         const body = (await res.json()) as Listed[] | { data?: Listed[] };
         const list = Array.isArray(body) ? body : (body.data ?? []);
-        found = list.filter((m) => subject.test(m.subject)).at(-1);
-        return Boolean(found);
+        const matching = list.filter((m) => subject.test(m.subject));
+        found = matching.at(-1);
+        return matching.length >= atLeast;
       },
       { timeout: 30_000, message: `a mail to ${address} with subject ${subject}` },
     )
