@@ -5,6 +5,9 @@ import type PgBoss from 'pg-boss';
 /** pg-boss keeps its tables in this schema unless JOBS_SCHEMA names another (tests use one per file). */
 export const DEFAULT_JOBS_SCHEMA = 'pgboss';
 
+/** pg-boss 10's internal queue that turns cron schedules into jobs (timekeeper.js, QUEUES.SEND_IT). */
+const CRON_QUEUE = '__pgboss__send-it';
+
 export type QueueSpec = {
   name: string;
   options: Omit<PgBoss.Queue, 'name'>;
@@ -45,6 +48,9 @@ export const queues: readonly QueueSpec[] = [
 
 /** Creates every queue, or brings an existing one's retry policy up to date. Safe to run again. */
 export async function installQueues(boss: PgBoss): Promise<void> {
+  // pg-boss's own queue for cron schedules; its worker creates it on start, which the app role (dutywise_app, no
+  // CREATE in the jobs schema) cannot do, so the owner installs it here with the others.
+  await boss.createQueue(CRON_QUEUE);
   for (const q of queues) {
     await boss.createQueue(q.name, { name: q.name, ...q.options });
     await boss.updateQueue(q.name, { name: q.name, ...q.options });
