@@ -10,7 +10,9 @@ import { DUMP_FILE, MANIFEST_FORMAT, sha256File, writeManifest, type BackupManif
 import { libpqEnv, pgTool, redactUrl, runTool, toolVersion } from './pg-tools';
 import { migrationLevel, openSnapshot, referencedBlobs, serverVersion, tableCounts } from './snapshot';
 
-const url = process.env.DATABASE_URL ?? 'postgres://postgres@127.0.0.1:55432/dutywise';
+// The schema's owner: it reads every schema (pg-boss's included) and restores objects with their grants.
+const url =
+  process.env.MIGRATION_DATABASE_URL ?? process.env.DATABASE_URL ?? 'postgres://postgres@127.0.0.1:55432/dutywise_demo';
 const storeKind = process.env.BLOB_STORE === 's3' ? 's3' : 'postgres';
 const outArg = process.argv.indexOf('--out');
 const dbName = new URL(url).pathname.slice(1);

@@ -1,4 +1,4 @@
-// `npm run db:restore -- --from DIR`: brings a backup back into the empty database named by DATABASE_URL
+// `npm run db:restore -- --from DIR`: brings a backup back into the empty database named by MIGRATION_DATABASE_URL (else DATABASE_URL)
 // (and, for a backup of the S3 store, its documents into the store BLOB_STORE names). Refuses a damaged
 // backup and a target that already holds tables, then checks every restored document against its hash.
 import { Client } from 'pg';
@@ -7,7 +7,9 @@ import { damagedFiles, DUMP_FILE, readManifest } from './manifest';
 import { libpqEnv, pgTool, redactUrl, runTool } from './pg-tools';
 import path from 'node:path';
 
-const url = process.env.DATABASE_URL ?? 'postgres://postgres@127.0.0.1:55432/dutywise';
+// The schema's owner: it reads every schema (pg-boss's included) and restores objects with their grants.
+const url =
+  process.env.MIGRATION_DATABASE_URL ?? process.env.DATABASE_URL ?? 'postgres://postgres@127.0.0.1:55432/dutywise_demo';
 const fromArg = process.argv.indexOf('--from');
 const from = fromArg > 0 ? process.argv[fromArg + 1] : undefined;
 
@@ -28,6 +30,14 @@ async function existingRelations(): Promise<string[]> {
 
 async function main(): Promise<boolean> {
   if (!from) throw new Error('name the backup folder: npm run db:restore -- --from <folder>');
+  // The restored documents are checked through the app's own connection (DATABASE_URL): it must name the same
+  // database, or the check would read another one.
+  const app = process.env.DATABASE_URL ? new URL(process.env.DATABASE_URL) : null;
+  const target = new URL(url);
+  if (app && (app.host !== target.host || app.pathname !== target.pathname))
+    throw new Error(
+      `DATABASE_URL names ${app.host}${app.pathname} but the restore goes into ${target.host}${target.pathname}: point both at the empty target database`,
+    );
   const dir = path.resolve(from);
   const manifest = await readManifest(dir);
   const damaged = await damagedFiles(dir, manifest);

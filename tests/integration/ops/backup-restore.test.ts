@@ -45,7 +45,8 @@ let seeded = '';
 
 // Seeded once: the demo scenario with its issued datasheets, in the PostgreSQL store.
 beforeAll(async () => {
-  seeded = await fresh(`dutywise_bk_src_${tag}`);
+  // Named *_test: the demo seed refuses any other database (its users share a published password).
+  seeded = await fresh(`dutywise_bk_src_${tag}_test`);
   await runScript(['db:migrate'], { DATABASE_URL: seeded });
   await runScript(['db:seed'], { DATABASE_URL: seeded });
 }, 300_000);

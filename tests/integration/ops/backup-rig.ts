@@ -5,7 +5,12 @@ import { Client } from 'pg';
 // Databases of their own on the test cluster, and the project's npm scripts run as an operator would.
 const root = path.resolve(__dirname, '../../..');
 const clusterUrl = (name: string) => {
-  const u = new URL(process.env.DATABASE_URL ?? 'postgres://postgres@127.0.0.1:55433/dutywise_test');
+  // The cluster's owner: it creates databases; the app role may not.
+  const u = new URL(
+    process.env.MIGRATION_DATABASE_URL ??
+      process.env.DATABASE_URL ??
+      'postgres://postgres@127.0.0.1:55433/dutywise_test',
+  );
   u.pathname = `/${name}`;
   return u.toString();
 };
@@ -50,7 +55,18 @@ export function runScript(args: string[], env: ScriptEnv): Promise<string> {
     execFile(
       'npm',
       ['run', '--silent', ...args],
-      { cwd: root, env: { ...process.env, BLOB_STORE: 'postgres', LOG_LEVEL: 'warn', ...env }, encoding: 'utf8' },
+      {
+        cwd: root,
+        // The scripts run as the owner of the database they are given (as an operator runs them).
+        env: {
+          ...process.env,
+          BLOB_STORE: 'postgres',
+          LOG_LEVEL: 'warn',
+          ...(env.DATABASE_URL ? { MIGRATION_DATABASE_URL: env.DATABASE_URL } : {}),
+          ...env,
+        },
+        encoding: 'utf8',
+      },
       (err, stdout, stderr) =>
         err ? reject(new Error(`npm run ${args[0]} exited with ${err.code}: ${stderr}${stdout}`)) : resolve(stdout),
     );
