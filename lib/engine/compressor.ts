@@ -33,8 +33,6 @@ export const MAX_STAGES = 6;
 export const DEFAULT_DISCHARGE_LIMIT_K = ZERO_CELSIUS_K + 150;
 /** Hydrogen-rich service: about 135 °C [mem: API 618, 5th ed.]; applied by default from 50 mol % H2 [cp]. */
 export const HYDROGEN_DISCHARGE_LIMIT_K = ZERO_CELSIUS_K + 135;
-/** Bearings, seals and gear [cp]. */
-export const DEFAULT_MECHANICAL_EFFICIENCY = 0.98;
 /** Assumed when the user gives a supply but no motor data [cp: typical for IE3 motors of tens of kW]. */
 export const DEFAULT_MOTOR_EFFICIENCY = 0.95;
 export const DEFAULT_MOTOR_POWER_FACTOR = 0.85;

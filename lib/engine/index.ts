@@ -8,6 +8,7 @@ export { EQUATION_NAMES, METHOD_NAMES, headlineMethod } from './headline-method'
 export { ENGINE_VERSION, calculateCore } from './calculate-core';
 export { SizingInputError, type SizingIssue } from './input-error';
 export {
+  DEFAULT_MECHANICAL_EFFICIENCY,
   LIMITS,
   compressorRequestSchema,
   heaterRequestSchema,
@@ -40,13 +41,7 @@ export type {
   StandardFlowBasisInfo,
 } from './result-types';
 export { sizeHeater, absorbedDutyKw, averageCpDutyKw, DESIGN_DUTY_CONVENTION, type HeaterCase } from './heater';
-export {
-  sizeCompressor,
-  suggestStages,
-  DEFAULT_DISCHARGE_LIMIT_K,
-  DEFAULT_MECHANICAL_EFFICIENCY,
-  type CompressorCase,
-} from './compressor';
+export { sizeCompressor, suggestStages, DEFAULT_DISCHARGE_LIMIT_K, type CompressorCase } from './compressor';
 export { isentropicFromPolytropic, stagePressureRatio } from './compression';
 export { DEFAULT_HEATER_RATINGS_KW, selectRating } from './ratings';
 export { IEC_MOTOR_RATINGS_KW, NEMA_MOTOR_RATINGS_HP, MOTOR_MARGIN_PERCENT, selectMotor } from './motor-ratings';

@@ -3,8 +3,12 @@ import { checkComposition } from '../thermo/composition';
 import { findPreset, PRESET_IDS } from '../thermo/presets';
 import { ASHRAE_MAX_TEMPERATURE_K, ASHRAE_MIN_TEMPERATURE_K } from '../thermo/water-saturation';
 import { ABSOLUTE_PRESSURE_UNITS, FLOW_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS } from '../units/unit-strings';
-import { DEFAULT_MECHANICAL_EFFICIENCY } from './compressor';
 import { numberField, quantityField, temperatureField } from './schema-fields';
+
+// Here rather than in ./compressor so that the desk's form, which parses with this schema in the browser, does not
+// pull the compressor engine into its bundle.
+/** Bearings, seals and gear [cp]. */
+export const DEFAULT_MECHANICAL_EFFICIENCY = 0.98;
 
 /** Ranges the schema enforces; the form shows the same figures. */
 export const LIMITS = {

@@ -1,4 +1,5 @@
-import { EQUATION_NAMES, type BasisInfo } from '@/lib/engine';
+import type { BasisInfo } from '@/lib/engine';
+import { EQUATION_NAMES } from '@/lib/engine/headline-method';
 import { fixed } from './quantity-format';
 
 /** What the figures rest on: property data, composition, site pressure and the conventions used. */

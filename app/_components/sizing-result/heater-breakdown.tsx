@@ -1,4 +1,5 @@
-import { EQUATION_NAMES, type HeaterResult } from '@/lib/engine';
+import type { HeaterResult } from '@/lib/engine';
+import { EQUATION_NAMES } from '@/lib/engine/headline-method';
 import type { UnitSystem } from '@/lib/units';
 import { FigureTable, type FigureRow } from './figure-table';
 import { PropertiesTable } from './properties-table';

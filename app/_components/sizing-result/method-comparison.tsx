@@ -1,4 +1,5 @@
-import { EQUATION_NAMES, type BasisInfo, type CompressionMethodResult, type CompressorBlock } from '@/lib/engine';
+import type { BasisInfo, CompressionMethodResult, CompressorBlock } from '@/lib/engine';
+import { EQUATION_NAMES } from '@/lib/engine/headline-method';
 import type { UnitSystem } from '@/lib/units';
 import { fixed, formatKw, formatPercent, joined, showTemperature } from './quantity-format';
 

@@ -1,10 +1,10 @@
 'use client';
 
+import dynamic from 'next/dynamic';
 import { memo } from 'react';
 import type { SizingInput, SizingResult } from '@/lib/engine';
 import type { UnitSystem } from '@/lib/units';
 import { BasisPanel } from './basis-panel';
-import { ResultCharts } from './charts/result-charts';
 import { DriveTable } from './drive-table';
 import { DutyPointTable } from './duty-point-table';
 import { DetailCard } from './figure-table';
@@ -14,6 +14,10 @@ import { MethodComparison } from './method-comparison';
 import { PreliminaryStatement } from './preliminary-statement';
 import { StageTable } from './stage-table';
 import { WarningsList } from './warnings-list';
+
+// The charts (recharts, and the sizing engine the stage sweep runs) load after the page, only where a result
+// is shown: they sit below the figures and would otherwise more than double the page's first-load JavaScript.
+const ResultCharts = dynamic(() => import('./charts/result-charts').then((m) => m.ResultCharts), { ssr: false });
 
 type Props = { result: SizingResult; input: SizingInput; system: UnitSystem; stale: boolean };
 

@@ -1,13 +1,8 @@
 'use client';
 
 import { useState } from 'react';
-import {
-  METHOD_NAMES,
-  headlineMethod,
-  type CompressionMethodResult,
-  type CompressorBlock,
-  type CompressorStage,
-} from '@/lib/engine';
+import type { CompressionMethodResult, CompressorBlock, CompressorStage } from '@/lib/engine';
+import { METHOD_NAMES, headlineMethod } from '@/lib/engine/headline-method';
 import { KG_PER_LB, M3_PER_FT3, type UnitSystem } from '@/lib/units';
 import { figure, fixed, formatKw, showPressure, showTemperature } from './quantity-format';
 import { SeverityIcon } from './severity-icon';

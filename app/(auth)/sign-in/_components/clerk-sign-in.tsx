@@ -1,6 +1,9 @@
 'use client';
 
-import { SignIn } from '@clerk/nextjs';
+import dynamic from 'next/dynamic';
+
+// Loaded only when Clerk is the identity: the local sign-in page never ships Clerk's components.
+const SignIn = dynamic(() => import('@clerk/nextjs').then((m) => m.SignIn));
 
 /** Clerk's sign-in component, shown on Dutywise's own page when Clerk is configured. */
 export function ClerkSignIn({ next }: { next: string }) {

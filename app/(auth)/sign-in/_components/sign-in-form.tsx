@@ -1,21 +1,19 @@
 'use client';
 
-import { zodResolver } from '@hookform/resolvers/zod';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
-import { useForm } from 'react-hook-form';
 import { TextField } from '@/app/_components/text-field';
-import { signInSchema, type SignInInput } from '@/lib/auth/schema';
+import { signInErrors } from '../../_lib/field-checks';
+import { usePlainForm } from '../../_lib/use-plain-form';
+
+const FIELDS = ['email', 'password'] as const;
 
 export function SignInForm({ next }: { next: string }) {
   const router = useRouter();
   const [formError, setFormError] = useState<string | null>(null);
-  const { register, handleSubmit, formState } = useForm<SignInInput>({
-    resolver: zodResolver(signInSchema),
-    mode: 'onTouched',
-  });
+  const { field, onSubmit: submitWith, submitting } = usePlainForm(FIELDS, signInErrors);
 
-  const onSubmit = handleSubmit(async (values) => {
+  const onSubmit = submitWith(async (values) => {
     setFormError(null);
     const res = await fetch('/api/auth/sign-in', {
       method: 'POST',
@@ -36,20 +34,8 @@ export function SignInForm({ next }: { next: string }) {
   return (
     // method and action keep credentials out of the URL if the form is submitted before it is interactive.
     <form onSubmit={onSubmit} method="post" action="/api/auth/sign-in" noValidate className="mt-6 space-y-4">
-      <TextField
-        label="E-mail"
-        type="email"
-        autoComplete="username"
-        error={formState.errors.email?.message}
-        {...register('email')}
-      />
-      <TextField
-        label="Password"
-        type="password"
-        autoComplete="current-password"
-        error={formState.errors.password?.message}
-        {...register('password')}
-      />
+      <TextField label="E-mail" type="email" autoComplete="username" {...field('email')} />
+      <TextField label="Password" type="password" autoComplete="current-password" {...field('password')} />
       {formError && (
         <p
           data-testid="form-error"
@@ -61,10 +47,10 @@ export function SignInForm({ next }: { next: string }) {
       )}
       <button
         type="submit"
-        disabled={formState.isSubmitting}
+        disabled={submitting}
         className="w-full rounded-md bg-tide-600 px-4 py-2.5 font-medium text-white hover:bg-tide-700 disabled:opacity-60"
       >
-        {formState.isSubmitting ? 'Signing in…' : 'Sign in'}
+        {submitting ? 'Signing in…' : 'Sign in'}
       </button>
     </form>
   );

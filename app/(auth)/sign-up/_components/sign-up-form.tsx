@@ -1,13 +1,12 @@
 'use client';
 
-import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
-import { useForm } from 'react-hook-form';
-import { showActionErrors } from '@/app/_components/action-errors';
+import { messagesAt, summaryOf } from '@/app/_components/action-errors';
 import { FormError } from '@/app/_components/form-errors';
 import { SubmitButton } from '@/app/_components/submit-button';
 import { TextField } from '@/app/_components/text-field';
-import { signUpSchema, type SignUpInput } from '@/lib/auth/schema';
+import { signUpErrors } from '../../_lib/field-checks';
+import { usePlainForm } from '../../_lib/use-plain-form';
 import { signUpAction } from '../actions';
 
 const FIELDS = ['name', 'email', 'password', 'company', 'site'] as const;
@@ -16,23 +15,27 @@ const FIELDS = ['name', 'email', 'password', 'company', 'site'] as const;
 export function SignUpForm({ next }: { next?: string }) {
   const [formError, setFormError] = useState<string | null>(null);
   const [sentTo, setSentTo] = useState<string | null>(null);
-  const { register, handleSubmit, setError, formState } = useForm<SignUpInput>({
-    resolver: zodResolver(signUpSchema),
-    mode: 'onTouched',
-    defaultValues: { name: '', email: '', password: '', company: '', site: '' },
-  });
+  const { field, onSubmit: submitWith, submitting, setServerErrors } = usePlainForm(FIELDS, signUpErrors);
 
-  const onSubmit = handleSubmit(async (values) => {
+  const onSubmit = submitWith(async (values) => {
     setFormError(null);
     const res = await signUpAction({ ...values, next });
     if (res.ok) {
       setSentTo(res.data.email);
-    } else {
-      setFormError(showActionErrors(setError, res.errors, FIELDS));
+      return;
     }
+    // The server's messages beside their fields; the rest (and any field this form lacks) above the button.
+    const placed = Object.fromEntries(FIELDS.map((f) => [f, messagesAt(res.errors, f) || undefined]));
+    const unplaced = [...new Set(res.errors.map((x) => x.path))].filter(
+      (p) => p && !(FIELDS as readonly string[]).includes(p),
+    );
+    setServerErrors(placed);
+    setFormError(
+      [summaryOf(res.errors, 'Some fields need attention.'), ...unplaced.map((p) => messagesAt(res.errors, p))].join(
+        ' ',
+      ),
+    );
   });
-
-  const e = formState.errors;
   if (sentTo)
     return (
       <div
@@ -50,31 +53,23 @@ export function SignUpForm({ next }: { next?: string }) {
     );
   return (
     <form onSubmit={onSubmit} noValidate className="mt-6 space-y-4" aria-label="Create your customer account">
-      <TextField label="Your name" autoComplete="name" error={e.name?.message} {...register('name')} />
-      <TextField
-        label="Work e-mail"
-        type="email"
-        autoComplete="email"
-        error={e.email?.message}
-        {...register('email')}
-      />
+      <TextField label="Your name" autoComplete="name" {...field('name')} />
+      <TextField label="Work e-mail" type="email" autoComplete="email" {...field('email')} />
       <TextField
         label="Password"
         type="password"
         autoComplete="new-password"
         hint="10 characters to 72 bytes."
-        error={e.password?.message}
-        {...register('password')}
+        {...field('password')}
       />
-      <TextField label="Company" autoComplete="organization" error={e.company?.message} {...register('company')} />
+      <TextField label="Company" autoComplete="organization" {...field('company')} />
       <TextField
         label="Site (optional)"
         hint="The plant these duties are for; more sites can be described later."
-        error={e.site?.message}
-        {...register('site')}
+        {...field('site')}
       />
       <FormError message={formError} />
-      <SubmitButton className="w-full py-2.5" pending={formState.isSubmitting} pendingLabel="Creating your account…">
+      <SubmitButton className="w-full py-2.5" pending={submitting} pendingLabel="Creating your account…">
         Create customer account
       </SubmitButton>
     </form>

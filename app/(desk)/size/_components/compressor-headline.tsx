@@ -7,7 +7,8 @@ import {
   showTemperature,
 } from '@/app/_components/sizing-result/quantity-format';
 import { SeverityIcon } from '@/app/_components/sizing-result/severity-icon';
-import { EQUATION_NAMES, METHOD_NAMES, headlineMethod, type CompressorResult } from '@/lib/engine';
+import type { CompressorResult } from '@/lib/engine';
+import { EQUATION_NAMES, METHOD_NAMES, headlineMethod } from '@/lib/engine/headline-method';
 import type { UnitSystem } from '@/lib/units';
 import { KeyFigure, KeyFigures } from './key-figure';
 

@@ -8,7 +8,8 @@ import {
   showTemperatureDifference,
 } from '@/app/_components/sizing-result/quantity-format';
 import { SeverityIcon } from '@/app/_components/sizing-result/severity-icon';
-import { EQUATION_NAMES, type HeaterResult } from '@/lib/engine';
+import type { HeaterResult } from '@/lib/engine';
+import { EQUATION_NAMES } from '@/lib/engine/headline-method';
 import type { UnitSystem } from '@/lib/units';
 import { KeyFigure, KeyFigures } from './key-figure';
 

@@ -1,6 +1,6 @@
 'use client';
 
-import { DEFAULT_HEATER_RATINGS_KW } from '@/lib/engine';
+import { DEFAULT_HEATER_RATINGS_KW } from '@/lib/engine/ratings';
 import { DESK_STEPS } from '../_lib/steps';
 import { ChoiceGroup } from './choice-group';
 import { useDesk } from './desk-context';

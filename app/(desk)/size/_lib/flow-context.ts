@@ -1,4 +1,4 @@
-import { heaterRequestSchema } from '@/lib/engine';
+import { heaterRequestSchema } from '@/lib/engine/schema';
 import { parseNumeric } from '@/lib/engine/schema-fields';
 import {
   MAX_TEMPERATURE_K,

@@ -1,4 +1,4 @@
-import { sizingRequestSchema, type SizingInput, type SizingRequest } from '@/lib/engine';
+import { sizingRequestSchema, type SizingInput, type SizingRequest } from '@/lib/engine/schema';
 import { issuesOf } from '@/lib/errors';
 
 /** Longest `i` parameter accepted: a request is a few hundred bytes; anything far larger is not ours. */

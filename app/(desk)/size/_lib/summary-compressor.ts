@@ -8,7 +8,8 @@ import {
   showPressure,
   showTemperature,
 } from '@/app/_components/sizing-result/quantity-format';
-import { EQUATION_NAMES, METHOD_NAMES, headlineMethod, type CompressorResult, type MotorSelection } from '@/lib/engine';
+import type { CompressorResult, MotorSelection } from '@/lib/engine';
+import { EQUATION_NAMES, METHOD_NAMES, headlineMethod } from '@/lib/engine/headline-method';
 import type { UnitSystem } from '@/lib/units';
 
 const kw = (v: number) => `${formatKw(v)} kW`;

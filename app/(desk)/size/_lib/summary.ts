@@ -1,4 +1,4 @@
-import { EQUATION_NAMES } from '@/lib/engine';
+import { EQUATION_NAMES } from '@/lib/engine/headline-method';
 import { figure, fixed, joined, showMassFlow, showTemperature } from '@/app/_components/sizing-result/quantity-format';
 import { SEVERITY_LABEL, groupWarnings, preliminaryOf } from '@/app/_components/sizing-result/severity';
 import type { SizingResult } from '@/lib/engine';

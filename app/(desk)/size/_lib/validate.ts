@@ -1,4 +1,4 @@
-import { sizingRequestSchema, type SizingInput, type SizingRequest } from '@/lib/engine';
+import { sizingRequestSchema, type SizingInput, type SizingRequest } from '@/lib/engine/schema';
 import { issuesOf } from '@/lib/errors';
 import { groupIssues, type DeskIssues } from './field-paths';
 import { numberEntryIssues } from './number-entry';

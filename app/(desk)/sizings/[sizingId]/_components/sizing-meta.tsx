@@ -1,4 +1,4 @@
-import { EQUATION_NAMES } from '@/lib/engine';
+import { EQUATION_NAMES } from '@/lib/engine/headline-method';
 import Link from 'next/link';
 import type { ReactNode } from 'react';
 import { tableLinkClass } from '@/app/_components/data-table';
