@@ -269,6 +269,8 @@ test.describe('sizing desk', () => {
   });
 
   test('three-stage nitrogen compressor in US customary units', async ({ page }) => {
+    // Two full passes (fill, then reopen the share link), each waiting for real-gas figures.
+    test.setTimeout(150_000);
     await page.setViewportSize({ width: 1024, height: 800 });
     await openDesk(page);
     await fillCompressor(page, usCompressor);
