@@ -84,6 +84,15 @@ test('a sales engineer opens an account and quotes two sizings; the customer see
   await expect(se.getByTestId('batch-saved')).toContainText('Saved 2 sizings to quote Q');
   const quoteNumber = (await se.getByTestId('batch-saved').textContent())!.match(/Q\d{2}-\d+/)![0];
   const [quote] = await query<{ id: string }>('select id from quotes where number = $1', [quoteNumber]);
+  // A customer sees a quote once it is sent (drafts stay internal): mark it sent.
+  await se.goto(`/quotes/${quote!.id}`);
+  await se.getByLabel('Mark quote as').selectOption('sent');
+  await se.getByRole('button', { name: 'Change status' }).click();
+  await expect
+    .poll(
+      async () => (await query<{ status: string }>('select status from quotes where id = $1', [quote!.id]))[0]?.status,
+    )
+    .toBe('sent');
 
   // 3. invite the customer, who joins through the link
   await se.goto(accountUrl);

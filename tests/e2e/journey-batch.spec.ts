@@ -115,7 +115,8 @@ test('batch: a large sheet is checked in chunks with progress', async ({ page })
   await page.route('**/api/v1/batch/preview', async (route) => {
     calls += 1;
     if (calls === 2) await held;
-    await route.continue();
+    // Fetched by the test runner and handed back whole (continuing a held POST upset the server's body reading).
+    await route.fulfill({ response: await route.fetch() });
   });
   await page.getByTestId('batch-check').click();
   await expect(page.getByTestId('batch-progress')).toContainText(

@@ -42,7 +42,7 @@ test('a customer signs up, confirms the address from the mailed link, signs in, 
   await expect(other.getByTestId('reset-sent')).toBeVisible();
   const reset = await linkFromInbox(email, /Choose a new Dutywise password/, /http:\/\/\S+\/reset-password\/[\w-]+/);
   await other.goto(reset);
-  await other.getByLabel('New password').fill('fresh-brine-2027');
+  await other.getByLabel('New password', { exact: true }).fill('fresh-brine-2027');
   await other.getByRole('button', { name: 'Set the new password' }).click();
   await expect(other.getByTestId('password-reset-done')).toBeVisible();
   await page.goto('/sizings');

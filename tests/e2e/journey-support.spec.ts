@@ -40,7 +40,7 @@ test('support finds a sizing from a mistyped tag, narrows it, reads its record a
     .poll(async () => (await inboxFor('olu.bennet@tarnside.example')).length, { timeout: 30_000 })
     .toBeGreaterThan(before);
   const latest = (await inboxFor('olu.bennet@tarnside.example')).at(-1);
-  expect(latest?.subject).toMatch(/Datasheet DS\d{2}-\d+ rev\. [A-Z]+ issued/);
+  expect(latest?.subject).toMatch(/Copy: Datasheet DS\d{2}-\d+ rev\. [A-Z]+/);
 
   // the look-up itself is on record
   await page.reload();

@@ -26,7 +26,9 @@ export function IssueDatasheetButton({ sizingId, latestRevision }: Props) {
   const [issued, setIssued] = useState<string | null>(null);
 
   // A page refresh after an issue brings the new letter down; keep the button in step with it.
-  useEffect(() => setLatest(latestRevision ?? null), [latestRevision]);
+  useEffect(() => {
+    setLatest(latestRevision ?? null);
+  }, [latestRevision]);
 
   const issue = () =>
     start(async () => {

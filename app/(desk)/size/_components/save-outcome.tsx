@@ -9,7 +9,9 @@ export type Saved = { id: string; number: string; version: number };
 export function SaveOutcome({ saved }: { saved: Saved | null }) {
   const ref = useRef<HTMLParagraphElement>(null);
   // The confirmation is brought into view: on a long desk it would otherwise sit below the fold.
-  useEffect(() => ref.current?.scrollIntoView({ block: 'nearest' }), [saved]);
+  useEffect(() => {
+    ref.current?.scrollIntoView({ block: 'nearest' });
+  }, [saved]);
   if (!saved) return null;
   return (
     <p

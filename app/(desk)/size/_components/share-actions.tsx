@@ -12,7 +12,9 @@ type Props = { input: SizingInput | null; result: SizingResult | null; system: U
 /** A link that reopens these inputs, and the plain-text summary, both for the clipboard. */
 export function ShareActions({ input, result, system }: Props) {
   const [origin, setOrigin] = useState('');
-  useEffect(() => setOrigin(window.location.origin), []);
+  useEffect(() => {
+    setOrigin(window.location.origin);
+  }, []);
   const link = useMemo(() => (input ? `${origin}${sharePath(input)}` : ''), [input, origin]);
   const summary = useMemo(
     () => (result ? buildSummary(result, system, link || undefined) : ''),

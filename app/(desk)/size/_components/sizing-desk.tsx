@@ -68,7 +68,9 @@ export function SizingDesk({
   const exact = useRef<ExactValues>({});
   // Browser tests wait for this before typing, so no keystroke lands before React is listening.
   const [hydrated, setHydrated] = useState(false);
-  useEffect(() => setHydrated(true), []);
+  useEffect(() => {
+    setHydrated(true);
+  }, []);
   const values = form.watch();
   const snapshot = JSON.stringify(values);
   // eslint-disable-next-line react-hooks/exhaustive-deps -- keyed on the serialised values, not the object identity
