@@ -54,6 +54,12 @@ export async function openOffice(base: string, distDir: string, client: Client):
     if (!made.ok) throw new Error(`could not create a draft quote: ${made.error}`);
     e.quoteId = (made.data as { id: string }).id;
   }
+  // The customer saves sizings, which a subscriber may: the soak's copy of the demo gives its account one.
+  await client.query(
+    `insert into subscriptions (account_id, stripe_subscription_id, status, current_period_end)
+     values ($1, 'sub_soak_' || $1, 'active', now() + interval '30 days') on conflict (stripe_subscription_id) do nothing`,
+    [tarnside],
+  );
   const desk = [
     ...engineers,
     await person('admin@halvard.example', tarnside),

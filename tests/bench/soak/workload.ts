@@ -1,5 +1,6 @@
 // What each person does and how often: the mix of a busy office hour. Every action resolves when it got
 // the answer it should, and throws (counted as an error) when it did not.
+import { parseBatchCsv } from '@/lib/batch/parse';
 import { batchSheet } from '../batch-sheet';
 import type { Office, Person } from './office';
 import { callAction } from './server-actions';
@@ -126,6 +127,8 @@ export function officeActors(office: Office): Actor[] {
       await expectOk(await post('/api/v1/batch/preview', form()), 'batch preview');
       const commit = form();
       commit.set('target', JSON.stringify({ accountId: uploader.accountId }));
+      // The save sends the rows that passed the check, as the desk does.
+      commit.set('rows', JSON.stringify(parseBatchCsv(csv).rows));
       await expectOk(await post('/api/v1/batch/commit', commit), 'batch commit');
     },
   });
