@@ -57,8 +57,8 @@ export async function openOffice(base: string, distDir: string, client: Client):
   // The customer saves sizings, which a subscriber may: the soak's copy of the demo gives its account one.
   await client.query(
     `insert into subscriptions (account_id, stripe_subscription_id, status, current_period_end)
-     values ($1, 'sub_soak_' || $1, 'active', now() + interval '30 days') on conflict (stripe_subscription_id) do nothing`,
-    [tarnside],
+     values ($1, $2, 'active', now() + interval '30 days') on conflict (stripe_subscription_id) do nothing`,
+    [tarnside, `sub_soak_${tarnside}`],
   );
   const desk = [
     ...engineers,
