@@ -1,0 +1,150 @@
+// The sizing desk as a visitor feels it: Debian's Chromium opens /size on the production server (loopback), and the
+// page's own clock times Largest Contentful Paint, a keystroke in the flow field until the design duty shows the new
+// figure, and the SI to US customary switch until the fields show converted values. Each run uses a fresh browser
+// context, so the cache is cold; one run before them warms the server and is reported on its own. Figures only:
+// nothing here fails on a missed target.
+import os from 'node:os';
+import { chromium, type ElementHandle, type Locator, type Page } from '@playwright/test';
+import { armKeystroke, armUnitSwitch, awaitChange, readPaint, type PaintProbe } from './desk-probes';
+import { percentile, replaceResults } from './stats';
+
+const base = process.env.BENCH_APP_URL ?? 'http://127.0.0.1:3205';
+const runs = Number(process.env.BENCH_BROWSER_RUNS ?? 7);
+const chromiumPath = process.env.BENCH_CHROMIUM ?? '/usr/bin/chromium';
+const viewport = { width: 1280, height: 800 };
+
+type Run = PaintProbe & { firstResultMs: number; keystrokeMs: number; calculateMs: number; switchMs: number };
+
+/** The element a locator finds, typed for the probe that receives it. */
+const handle = async <T extends Element>(l: Locator) =>
+  (await l.elementHandle()) as ElementHandle<Node> as ElementHandle<T>;
+
+const dutyKw = (text: string) => Number(text.replace(/[^\d.]/g, ''));
+
+/** Loads the desk cold and times the three things a visitor does first. */
+async function measure(page: Page): Promise<Run> {
+  await page.goto(`${base}/size`, { waitUntil: 'load' });
+  const desk = page.getByTestId('sizing-desk');
+  await desk.and(page.locator('[data-hydrated="true"]')).waitFor();
+  const result = page.getByRole('region', { name: 'Result' });
+  // The first sized answer on screen, read on the next animation frame after it arrives.
+  const firstResult = await page.waitForFunction(
+    () => document.querySelector('[data-testid="result-panel"][data-state="ready"]') && performance.now(),
+    undefined,
+    { polling: 'raf' },
+  );
+  const firstResultMs = (await firstResult.jsonValue()) as number;
+  const paint = await page.evaluate(readPaint);
+
+  // Keystroke: the default 1000 kg/h becomes 10000 kg/h by one more zero, so the duty must grow tenfold.
+  const flow = page.getByLabel('Flow', { exact: true });
+  await flow.focus();
+  await flow.press('End');
+  const figure = result.getByTestId('result-design-duty-kw');
+  await page.evaluate(armKeystroke, {
+    field: await handle<HTMLInputElement>(flow),
+    figure: await handle<Element>(figure),
+    region: await handle<Element>(result),
+  });
+  await page.keyboard.press('0');
+  const typed = await page.evaluate(awaitChange);
+  const ratio = dutyKw(typed.after) / dutyKw(typed.before);
+  if (Math.abs(ratio / 10 - 1) > 0.02)
+    throw new Error(`the duty went from ${typed.before} to ${typed.after} kW, not tenfold: measured the wrong change`);
+  const calculateMs = await page.evaluate(() => {
+    const calls = performance.getEntriesByType('resource').filter((e) => e.name.endsWith('/api/v1/calculate'));
+    return calls.at(-1)?.duration ?? NaN;
+  });
+  await page.locator('[data-testid="result-panel"][data-state="ready"]').waitFor();
+
+  // Unit switch: SI to US customary, until the flow field shows the converted number in its new unit.
+  const us = page.getByRole('radio', { name: /^US customary/ });
+  await page.evaluate(armUnitSwitch, {
+    control: await handle<HTMLInputElement>(us),
+    field: await handle<HTMLInputElement>(flow),
+    unit: await handle<HTMLSelectElement>(page.getByLabel('Flow unit')),
+  });
+  await us.click();
+  const switched = await page.evaluate(awaitChange);
+  if (!/lb/.test(switched.after)) throw new Error(`after the switch the flow read ${switched.after}, not in lb`);
+  return { ...paint, firstResultMs, keystrokeMs: typed.ms, calculateMs, switchMs: switched.ms };
+}
+
+function summary(values: number[], unit: 's' | 'ms'): string {
+  const f = (v: number) => (unit === 's' ? (v / 1000).toFixed(2) : v.toFixed(0));
+  const sorted = [...values].sort((a, b) => a - b);
+  return `${f(percentile(values, 50))} ${unit} (${f(sorted[0]!)}–${f(sorted.at(-1)!)})`;
+}
+
+const met = (ok: boolean) => (ok ? 'met' : 'MISS');
+
+async function main() {
+  if (!['localhost', '127.0.0.1'].includes(new URL(base).hostname)) throw new Error('loopback servers only');
+  if (!(runs >= 3 && runs <= 50)) throw new Error(`BENCH_BROWSER_RUNS must be 3 to 50 (got ${runs})`);
+  const browser = await chromium.launch({
+    executablePath: chromiumPath,
+    args: ['--no-sandbox', '--disable-gpu', '--no-first-run', '--disable-background-networking', '--disable-sync'],
+  });
+  const chromiumVersion = browser.version();
+  // The machine is shared: the load before the runs says how much else competed for the cores.
+  const load = os.loadavg()[0]!.toFixed(1);
+  const all: Run[] = [];
+  try {
+    for (let i = 0; i <= runs; i++) {
+      const context = await browser.newContext({ viewport });
+      try {
+        all.push(await measure(await context.newPage()));
+      } finally {
+        await context.close();
+      }
+    }
+  } finally {
+    await browser.close();
+  }
+  const [warm, ...measured] = all as [Run, ...Run[]];
+  const of = (k: keyof Run) => measured.map((r) => r[k] as number);
+  const lcp = percentile(of('lcpMs'), 50);
+  const key = percentile(of('keystrokeMs'), 50);
+  const sw = percentile(of('switchMs'), 50);
+  const elements = [...new Set(measured.map((r) => r.element))].join('; ').replace(/\|/g, '\\|');
+  const cpu = os.cpus()[0]?.model ?? 'unknown CPU';
+  replaceResults(
+    `Browser: the desk at /size as a visitor (median of ${runs} cold-cache runs, min–max)`,
+    [
+      ['Largest Contentful Paint, loopback', summary(of('lcpMs'), 's'), '< 1.0 s', met(lcp < 1000)],
+      [
+        'keystroke in Flow to the new design duty (300 ms debounce included)',
+        summary(of('keystrokeMs'), 'ms'),
+        '< 400 ms',
+        met(key < 400),
+      ],
+      ['SI to US customary: click to converted fields', summary(of('switchMs'), 'ms'), '< 100 ms', met(sw < 100)],
+      ['largest contentful element', elements, 'info', '—'],
+      [
+        'time to first byte / DOM content loaded',
+        `${summary(of('ttfbMs'), 'ms')} / ${summary(of('domContentLoadedMs'), 'ms')}`,
+        'info',
+        '—',
+      ],
+      [
+        'first sized result on screen (after the page calls calculate)',
+        summary(of('firstResultMs'), 'ms'),
+        'info',
+        '—',
+      ],
+      ['of the keystroke: the calculate request', summary(of('calculateMs'), 'ms'), 'info', '—'],
+      [
+        'first load after the server started (not in the medians): LCP',
+        `${(warm.lcpMs / 1000).toFixed(2)} s`,
+        'info',
+        '—',
+      ],
+    ],
+    `Chromium ${chromiumVersion} (${chromiumPath}, headless, ${viewport.width}×${viewport.height}) and the server on ${os.cpus().length} × ${cpu}, Node ${process.version}; one machine, loopback, no throttling; load average ${load} before the runs.`,
+  );
+}
+
+main().catch((err) => {
+  console.error(err);
+  process.exit(1);
+});
