@@ -2,8 +2,9 @@
 // declares no named helpers). Times are the page's own clock: an event's timeStamp and performance.now() share
 // the navigation's time origin, so nothing here waits on Playwright's polling.
 
-export type PaintProbe = { lcpMs: number; element: string; ttfbMs: number; domContentLoadedMs: number };
-export type Change = { ms: number; before: string; after: string };
+export type PaintProbe = { lcpMs: number; element: string; ttfbMs: number; fcpMs: number; domContentLoadedMs: number };
+/** A timed change: `ms` from the user's event, `at` the page time the change was seen. */
+export type Change = { ms: number; at: number; before: string; after: string };
 
 /** Largest Contentful Paint so far (buffered entries), the element it painted, and the navigation's milestones. */
 export function readPaint(): Promise<PaintProbe> {
@@ -19,6 +20,7 @@ export function readPaint(): Promise<PaintProbe> {
         lcpMs: last.startTime,
         element: el ? `<${el.tagName.toLowerCase()}> "${text}"` : 'element removed since',
         ttfbMs: nav?.responseStart ?? NaN,
+        fcpMs: performance.getEntriesByName('first-contentful-paint')[0]?.startTime ?? NaN,
         domContentLoadedMs: nav?.domContentLoadedEventEnd ?? NaN,
       });
     });
@@ -43,7 +45,7 @@ export function armKeystroke({ field, figure, region }: KeystrokeArgs): void {
       const after = figure.textContent ?? '';
       if (Number.isNaN(typedAt) || after === before) return;
       observer.disconnect();
-      resolve({ ms: now - typedAt, before, after });
+      resolve({ ms: now - typedAt, at: now, before, after });
     });
     observer.observe(region, { subtree: true, childList: true, characterData: true });
     setTimeout(() => reject(new Error(`the headline still read ${before} 10 s after the keystroke`)), 10_000);
@@ -67,7 +69,7 @@ export function armUnitSwitch({ control, field, unit }: SwitchArgs): void {
       if (Number.isNaN(clickedAt) || unit.value === before.split(' ')[1] || field.value === before.split(' ')[0])
         return;
       observer.disconnect();
-      resolve({ ms: now - clickedAt, before, after });
+      resolve({ ms: now - clickedAt, at: now, before, after });
     });
     observer.observe(document.body, { subtree: true, childList: true, characterData: true, attributes: true });
     setTimeout(() => reject(new Error(`the flow field still read ${before} 5 s after the click`)), 5_000);
