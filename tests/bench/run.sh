@@ -4,8 +4,9 @@
 # scenario plus a million generated sizings; the look-up is also timed on dutywise_bench_100k and
 # dutywise_bench_5m (BENCH_SIZES to choose). Each is generated once and kept; the first run takes a while.
 # BENCH_SKIP_LOAD=1 leaves out the HTTP load run; BENCH_REUSE_BUILD=1 keeps an existing production build.
-# Ends with the soak run (SOAK_SECONDS, default 600). BENCH_ONLY=soak runs just the soak and keeps the other
-# sections of RESULTS.md; BENCH_SKIP_SOAK=1 leaves it out.
+# Then Debian's Chromium drives the desk (BENCH_SKIP_BROWSER=1 leaves it out), and the soak run ends it
+# (SOAK_SECONDS, default 600; BENCH_SKIP_SOAK=1 leaves it out). BENCH_ONLY=browser or BENCH_ONLY=soak runs just that
+# section and keeps the other sections of RESULTS.md (no look-up data is generated).
 set -uo pipefail
 cd "$(dirname "${BASH_SOURCE[0]}")/../.."
 export NEXT_TELEMETRY_DISABLED=1
@@ -19,13 +20,23 @@ app_url() { echo "postgres://dutywise_app:${PG_APP_PASSWORD:-dutywise-app-local}
 export MIGRATION_DATABASE_URL="$(owner_url dutywise_bench)"
 export DATABASE_URL="$(app_url dutywise_bench)"
 only="${BENCH_ONLY:-}"
-[ "$only" = soak ] || rm -f tests/bench/RESULTS.md
+case "$only" in '' | browser | soak) ;; *) echo "BENCH_ONLY is browser or soak (got $only)" >&2; exit 2 ;; esac
+[ -n "$only" ] || rm -f tests/bench/RESULTS.md
 node_script() { npx tsx --require ./db/script-preload.cjs "$@"; }
 fail=0
+built=0
+# One production build per run, shared by the HTTP load, browser and soak sections.
+build_app() {
+  export NEXT_DIST_DIR=.next-bench
+  [ "$built" = 1 ] && return 0
+  if [ "${BENCH_REUSE_BUILD:-0}" != 1 ] || [ ! -f .next-bench/BUILD_ID ]; then npx next build || exit 1; fi
+  built=1
+}
+wait_healthy() { for _ in $(seq 1 60); do curl -fs "http://127.0.0.1:$1/api/health" >/dev/null 2>&1 && break; sleep 1; done; }
 npx tsx db/migrate.mts || exit 1
 node_script db/seed.ts || exit 1
 
-if [ "$only" != soak ]; then
+if [ -z "$only" ]; then
 
 engine_out="$(mktemp)"
 echo "== engine (one core)";         npx tsx tests/bench/engine.bench.mts | tee "$engine_out" || fail=1
@@ -45,8 +56,7 @@ done
 
 if [ "${BENCH_SKIP_LOAD:-0}" != 1 ]; then
   echo "== HTTP load (production builds of Dutywise and of the minimal floor app)"
-  export NEXT_DIST_DIR=.next-bench
-  if [ "${BENCH_REUSE_BUILD:-0}" != 1 ] || [ ! -f .next-bench/BUILD_ID ]; then npx next build || exit 1; fi
+  build_app
   echo "== first-load JavaScript per page"
   node_script tests/bench/bundle.bench.ts || fail=1
   (unset NEXT_DIST_DIR; npx next build tests/bench/floor-app) > .data/bench-floor-build.log 2>&1 || { cat .data/bench-floor-build.log; exit 1; }
@@ -58,7 +68,7 @@ if [ "${BENCH_SKIP_LOAD:-0}" != 1 ]; then
   env -u NEXT_DIST_DIR node node_modules/next/dist/bin/next start tests/bench/floor-app -p "$floor_port" \
     --keepAliveTimeout 120000 > .data/bench-floor.log 2>&1 &
   floor_pid=$!
-  for _ in $(seq 1 60); do curl -fs "http://127.0.0.1:$app_port/api/health" >/dev/null 2>&1 && break; sleep 1; done
+  wait_healthy "$app_port"
   BENCH_APP_URL="http://127.0.0.1:$app_port" BENCH_FLOOR_URL="http://127.0.0.1:$floor_port" \
     BENCH_APP_PID=$app_pid BENCH_FLOOR_PID=$floor_pid node_script tests/bench/load.bench.ts || fail=1
   kill "$app_pid" "$floor_pid" 2>/dev/null
@@ -67,7 +77,20 @@ fi
 rm -f "$engine_out"
 fi
 
-if [ "${BENCH_SKIP_SOAK:-0}" != 1 ]; then
+if [ "$only" != soak ] && [ "${BENCH_SKIP_BROWSER:-0}" != 1 ]; then
+  echo "== the desk in a browser (Debian's Chromium, production build, a visitor on loopback)"
+  build_app
+  browser_port=$((3205 + offset))
+  # A fresh server with the deployment's own limits; APP_URL is the address the browser uses.
+  APP_URL="http://127.0.0.1:$browser_port" DEMO_MODE=on LOG_LEVEL=warn node server.mjs --port "$browser_port" \
+    > .data/bench-browser.log 2>&1 &
+  browser_pid=$!
+  wait_healthy "$browser_port"
+  BENCH_APP_URL="http://127.0.0.1:$browser_port" node_script tests/bench/browser.bench.ts || fail=1
+  kill "$browser_pid" 2>/dev/null
+fi
+
+if [ "$only" != browser ] && [ "${BENCH_SKIP_SOAK:-0}" != 1 ]; then
   echo "== soak: mixed office load for ${SOAK_SECONDS:-600} s (production build, default limits)"
   export NEXT_DIST_DIR=.next-bench
   [ -f .next-bench/BUILD_ID ] || npx next build || exit 1
@@ -75,7 +98,7 @@ if [ "${BENCH_SKIP_SOAK:-0}" != 1 ]; then
   # A fresh server with the deployment's own limits, so memory and connections are the soak's alone.
   DEMO_MODE=on LOG_LEVEL=warn node server.mjs --port "$soak" > .data/bench-soak.log 2>&1 &
   soak_pid=$!
-  for _ in $(seq 1 60); do curl -fs "http://127.0.0.1:$soak/api/health" >/dev/null 2>&1 && break; sleep 1; done
+  wait_healthy "$soak"
   BENCH_APP_URL="http://127.0.0.1:$soak" BENCH_APP_PID=$soak_pid node_script tests/bench/soak.bench.ts || fail=1
   kill "$soak_pid" 2>/dev/null
 fi

@@ -11,28 +11,29 @@ export function percentile(samples: number[], p: number): number {
 
 const resultsFile = path.join(__dirname, 'RESULTS.md');
 
-/** Appends a section to tests/bench/RESULTS.md (started fresh by run.sh). */
-export function recordResults(title: string, rows: [string, string, string, string][]): void {
+/** Appends a section to tests/bench/RESULTS.md (started fresh by run.sh); `note` is a paragraph above its table. */
+export function recordResults(title: string, rows: [string, string, string, string][], note?: string): void {
   if (!existsSync(resultsFile)) writeFileSync(resultsFile, machineHeader());
   const lines = [
     `\n## ${title}\n`,
+    ...(note ? [note, ''] : []),
     '| measure | result | target | verdict |',
     '|---|---|---|---|',
     ...rows.map((r) => `| ${r.join(' | ')} |`),
   ];
   appendFileSync(resultsFile, `${lines.join('\n')}\n`);
-  console.log(`\n${title}`);
+  console.log(`\n${title}${note ? `\n  ${note}` : ''}`);
   for (const r of rows) console.log(`  ${r[0].padEnd(48)} ${r[1].padStart(14)}   target ${r[2].padEnd(14)} ${r[3]}`);
 }
 
 /** Like recordResults, but first removes an earlier section of the same kind (the first word of its title). */
-export function replaceResults(title: string, rows: [string, string, string, string][]): void {
+export function replaceResults(title: string, rows: [string, string, string, string][], note?: string): void {
   if (existsSync(resultsFile)) {
     const kind = title.split(' ')[0]!;
     const sections = readFileSync(resultsFile, 'utf8').split(/\n(?=## )/);
     writeFileSync(resultsFile, sections.filter((s) => !s.startsWith(`## ${kind} `)).join('\n'));
   }
-  recordResults(title, rows);
+  recordResults(title, rows, note);
 }
 
 export function machineHeader(): string {
