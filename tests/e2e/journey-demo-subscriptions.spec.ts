@@ -2,7 +2,8 @@ import { expect, test, type Page } from '@playwright/test';
 import { formatDate } from '../../app/_components/format';
 import { demoSignIns, DEMO_PASSWORD } from '../../lib/auth/demo-users';
 import { subscriptionLabels } from '../../lib/billing/labels';
-import { e2ePorts } from './ports';
+import { e2eBaseUrl, e2ePorts } from './ports';
+import { linkFromInbox } from './support/inbox';
 import { query } from './support/scenario';
 import { signIn } from './support/sign-in';
 
@@ -68,6 +69,9 @@ test('demo subscriptions: active downloads and manages, past due keeps downloads
   await expect(p.locator('main')).not.toContainText('past_due');
   await downloadsPdf(p);
   await p.context().close();
+  // The failed renewal reached the app as the payment service's event: its billing contact was told, with the way back.
+  const billing = await linkFromInbox(pastDue.email, /subscription payment failed/, /http\S+\/billing/);
+  expect(billing).toBe(`${e2eBaseUrl}/billing`);
 
   // Never subscribed: the datasheet is locked, and its download link lands on the subscription page.
   const [revision] = await query<{ id: string }>(
