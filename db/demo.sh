@@ -1,7 +1,8 @@
 #!/usr/bin/env bash
 # `npm run demo`: everything a fresh machine needs to show Dutywise with its invented demo scenario.
 # Installs dependencies when missing, starts PostgreSQL (port 55432), migrates, seeds once, starts the
-# local Stripe and SMTP fakes and the job worker, builds when sources changed, serves on :3000.
+# local Stripe and SMTP fakes and the job worker, builds when sources changed, serves on :3000, then brings the
+# demo's subscriptions and the Stripe fake's saved state into agreement (on every start).
 set -euo pipefail
 cd "$(dirname "${BASH_SOURCE[0]}")/.."
 export NEXT_TELEMETRY_DISABLED=1 NEXT_PUBLIC_CLERK_TELEMETRY_DISABLED=1
@@ -50,6 +51,12 @@ node server.mjs --port "$port" &
 pids+=($!)
 
 for _ in $(seq 1 60); do curl -fs "http://localhost:$port/api/health" >/dev/null 2>&1 && break; sleep 1; done
+
+# The fake keeps its customers and subscriptions in .data/stripe-fake.json; the database follows it on every start,
+# and the scenario's subscription accounts get their states where they have none (a fresh clone, a removed state
+# file). Run once the app is up, so the fake's events (the failed renewal's e-mail) reach its webhook.
+for _ in $(seq 1 30); do curl -fs http://127.0.0.1:12111/_control/health >/dev/null 2>&1 && break; sleep 1; done
+npx tsx --require ./db/script-preload.cjs db/seed-billing.ts
 cat <<MSG
 
   Dutywise is running at http://localhost:$port
@@ -58,7 +65,7 @@ cat <<MSG
   Fake payments:     http://localhost:12111 (test card 4242 4242 4242 4242 succeeds, 4000 0000 0000 0002 is declined)
 
   Demo sign-ins (password for all: dutywise-demo):
-$(npx tsx -e "import('./lib/auth/demo-users.ts').then(m=>(m.demoSignIns ?? m.default.demoSignIns).forEach(u=>console.log('    '+u.label.padEnd(32)+u.email)))")
+$(npx tsx -e "import('./lib/auth/demo-users.ts').then(m=>(m.demoSignIns ?? m.default.demoSignIns).forEach(u=>console.log('    '+u.label.padEnd(52)+u.email)))")
 
   Press Ctrl-C to stop (PostgreSQL keeps running; stop it with npm run db:stop).
 MSG

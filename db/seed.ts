@@ -11,6 +11,14 @@ import { computeForSave, insertSizing, saveSizing } from '@/lib/sizings/save';
 import { hashPassword } from '@/lib/auth/local/passwords';
 import { issueDatasheet } from '@/lib/datasheets/issue';
 import { seedAccounts, seedDatasheets, seedQuotes, seedSizings, seedUsers } from './seed-scenario';
+import { billingAccounts, billingDatasheets, billingSizings, billingUsers } from './seed-scenario-billing';
+
+// The accounts with demo subscriptions come after the rest, so the first accounts, sizings and datasheets keep their
+// numbers; db/seed-billing.ts gives them their subscriptions once the Stripe fake is up.
+const allAccounts = [...seedAccounts, ...billingAccounts];
+const allUsers = [...seedUsers, ...billingUsers];
+const allSizings = [...seedSizings, ...billingSizings];
+const allDatasheets = [...seedDatasheets, ...billingDatasheets];
 
 const reset = process.argv.includes('--reset');
 const force = process.argv.includes('--force');
@@ -42,12 +50,12 @@ async function main() {
   const accountIds = new Map<string, string>();
   const people = new Map<string, CurrentUser>();
   await db.transaction(async (tx) => {
-    for (const a of seedAccounts) {
+    for (const a of allAccounts) {
       const { key, ...values } = a;
       const [row] = await tx.insert(accounts).values(values).returning({ id: accounts.id });
       accountIds.set(key, row!.id);
     }
-    for (const u of seedUsers) {
+    for (const u of allUsers) {
       const [row] = await tx
         .insert(users)
         .values({ email: u.email, name: u.name, role: u.role, passwordHash, emailVerifiedAt: new Date() })
@@ -64,7 +72,7 @@ async function main() {
       });
     }
     await tx.update(users).set({ unitSystem: 'us' }).where(eq(users.email, 'dev.hartigan@oakhollow.example'));
-    for (const s of seedSizings) {
+    for (const s of allSizings) {
       const accountId = accountIds.get(s.account)!;
       await insertSizing(
         tx,
@@ -92,7 +100,7 @@ async function main() {
     if (qd.status !== 'draft') await setQuoteStatus(user, id, qd.status);
     if (qd.status !== 'draft') await db.update(quotes).set({ sentAt: new Date() }).where(eq(quotes.id, id));
   }
-  for (const d of seedDatasheets) {
+  for (const d of allDatasheets) {
     const [row] = await db.select().from(sizings).where(eq(sizings.equipmentTag, d.tag)).limit(1);
     const by = people.get(d.by)!;
     for (const [i, note] of d.notes.entries()) {
@@ -105,7 +113,7 @@ async function main() {
     }
   }
   console.log(
-    `seeded ${seedAccounts.length} accounts, ${seedUsers.length} users, ${seedSizings.length} sizings, ${seedQuotes.length} quotes, ${seedDatasheets.length} datasheets`,
+    `seeded ${allAccounts.length} accounts, ${allUsers.length} users, ${allSizings.length} sizings, ${seedQuotes.length} quotes, ${allDatasheets.length} datasheets`,
   );
 }
 

@@ -11,6 +11,8 @@ const ACTIONS: Readonly<Record<string, string>> = {
   'batch.saved': 'Saved a batch upload',
   'billing.customer_created': 'Set up billing',
   'billing.subscription_status': 'Subscription changed',
+  'billing.customer_unlinked': 'Removed a billing link the payment service no longer holds',
+  'billing.subscription_dropped': 'Removed a subscription the payment service no longer holds',
   'datasheet.downloaded': 'Downloaded a datasheet',
   'datasheet.email_resent': 'Sent the datasheet e-mail again',
   'datasheet.issued': 'Issued a datasheet',

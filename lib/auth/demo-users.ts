@@ -11,4 +11,20 @@ export const demoSignIns = [
   { label: 'Customer (Tarnside Polymers)', email: 'olu.bennet@tarnside.example', password: DEMO_PASSWORD },
   { label: 'Customer (Greyfen Biogas)', email: 'marta.quill@greyfen.example', password: DEMO_PASSWORD },
   { label: 'Customer (Oakhollow Glassworks)', email: 'dev.hartigan@oakhollow.example', password: DEMO_PASSWORD },
+  // One customer per subscription state (db/seed-scenario-billing.ts), labelled with the state Dutywise shows them.
+  {
+    label: 'Customer, subscription active (Cobbleford Maltings)',
+    email: 'aster.penhallow@cobbleford.example',
+    password: DEMO_PASSWORD,
+  },
+  {
+    label: 'Customer, payment failed (Wrayburn Kilnworks)',
+    email: 'ludo.sarratt@wrayburn.example',
+    password: DEMO_PASSWORD,
+  },
+  {
+    label: 'Customer, no subscription (Lowmere Water)',
+    email: 'nell.oyelaran@lowmere.example',
+    password: DEMO_PASSWORD,
+  },
 ] as const;

@@ -13,6 +13,14 @@ export function periodEndOf(sub: Stripe.Subscription): Date | null {
   return typeof secs === 'number' ? new Date(secs * 1000) : null;
 }
 
+/**
+ * Holds one subscription's lock until the transaction ends: whoever writes its row (the webhook, the demo seed) reads
+ * the service's current state while holding it, so whichever commits last stored the newest state.
+ */
+export async function lockSubscription(tx: Tx, subscriptionId: string): Promise<void> {
+  await tx.execute(sql`select pg_advisory_xact_lock(hashtext(${`stripe-subscription:${subscriptionId}`}))`);
+}
+
 /** The event names an account that the stored customer link contradicts: refused, nothing is changed. */
 export class AccountMismatchError extends Error {
   constructor(message: string) {

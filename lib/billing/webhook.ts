@@ -1,12 +1,12 @@
 import 'server-only';
-import { eq, sql } from 'drizzle-orm';
+import { eq } from 'drizzle-orm';
 import type Stripe from 'stripe';
 import { db } from '@/db';
 import { accounts, webhookEvents } from '@/db/schema';
 import { enqueueEmail } from '@/lib/email/enqueue';
 import { env } from '@/lib/env';
 import { stripe } from './stripe-client';
-import { accountIdFor, periodEndOf, storeSubscription } from './subscription-sync';
+import { accountIdFor, lockSubscription, periodEndOf, storeSubscription } from './subscription-sync';
 
 export const handledEventTypes = [
   'checkout.session.completed',
@@ -49,7 +49,7 @@ export async function applyStripeEvent(event: Stripe.Event): Promise<'applied' |
   return db.transaction(async (tx) => {
     // Events of one subscription are applied one at a time, each reading the subscription's current state while it
     // holds the lock: whichever commits last stored the newest state, so no older status can be left behind.
-    if (subId) await tx.execute(sql`select pg_advisory_xact_lock(hashtext(${`stripe-subscription:${subId}`}))`);
+    if (subId) await lockSubscription(tx, subId);
     const inserted = await tx
       .insert(webhookEvents)
       .values({ id: event.id, source: 'stripe', type: event.type })

@@ -1,4 +1,4 @@
-import { badParam, noSuchParam } from './api-error';
+import { badParam, noSuch, noSuchParam } from './api-error';
 import { createCustomer } from './checkout-actions';
 import { readCheckoutParams } from './checkout-params';
 import type { FakeContext } from './context';
@@ -53,7 +53,8 @@ function newSession(ctx: FakeContext, body: Parameters<typeof readCheckoutParams
 
 /**
  * The API calls Dutywise makes (create a customer, a checkout session and a portal session; read a
- * subscription) and the one the browser journeys add (read a checkout session). Nothing else is served.
+ * subscription), the one the browser journeys add (read a checkout session) and the one the demo seed adds (read a
+ * customer, to see whether the fake still holds it). Nothing else is served.
  */
 export function apiRoutes(ctx: FakeContext): Route[] {
   return [
@@ -67,6 +68,12 @@ export function apiRoutes(ctx: FakeContext): Route[] {
         metadata: optionalMetadata(body, 'metadata') ?? {},
       });
       ctx.store.save();
+      return json(renderCustomer(customer));
+    }),
+    route('GET', '/v1/customers/:id', ({ params, body }) => {
+      assertKnownParams(body, []);
+      const customer = ctx.store.state.customers[params[0] ?? ''];
+      if (!customer) throw noSuch('customer', params[0] ?? '');
       return json(renderCustomer(customer));
     }),
     route('POST', '/v1/checkout/sessions', ({ body }) => {

@@ -1,10 +1,13 @@
-import { noSuch } from './api-error';
+import { noSuch, noSuchParam } from './api-error';
 import type { FakeContext } from './context';
+import { emitEvent } from './events';
 import { json, type Route, route } from './http-util';
+import { assertKnownParams, optionalMetadata, requiredString } from './params';
 import { requireSubscription } from './lookup';
 import type { EventRecord } from './records';
-import { renderSubscription } from './render-billing';
+import { renderInvoice, renderSubscription } from './render-billing';
 import { advancePeriodEnd, endSubscription, failPayment } from './subscription-actions';
+import { openSubscription } from './subscription-create';
 
 /** An event's identity and delivery state, without its payload, for /_control/events. */
 export function eventSummary(event: EventRecord) {
@@ -46,6 +49,24 @@ export function controlRoutes(ctx: FakeContext, onReset: () => void): Route[] {
       return json({ data: events.map(eventSummary) });
     }),
     route('POST', '/_control/events/:id/resend', ({ params }) => json(eventSummary(resendEvent(ctx, params[0] ?? '')))),
+    // The demo seed's way to a paying customer without driving the checkout page: an active subscription with a
+    // paid first invoice, announced by the events a checkout would send about it.
+    route('POST', '/_control/customers/:id/subscriptions', ({ params, body }) => {
+      assertKnownParams(body, ['price', 'metadata']);
+      const customerId = params[0] ?? '';
+      if (!ctx.store.state.customers[customerId]) throw noSuch('customer', customerId);
+      const priceId = requiredString(body, 'price', 200);
+      if (!ctx.catalogue.find(priceId)) throw noSuchParam('price', priceId, 'price');
+      const { sub, invoice } = openSubscription(ctx, {
+        customerId,
+        lineItems: [{ priceId, quantity: 1 }],
+        metadata: optionalMetadata(body, 'metadata') ?? {},
+      });
+      ctx.store.save();
+      emitEvent(ctx, 'customer.subscription.created', renderSubscription(ctx, sub));
+      emitEvent(ctx, 'invoice.paid', renderInvoice(ctx, invoice));
+      return subscriptionReply(sub.id);
+    }),
     route('POST', '/_control/subscriptions/:id/advance-period-end', ({ params }) => {
       const id = params[0] ?? '';
       advancePeriodEnd(ctx, requireSubscription(ctx, id));

@@ -1,6 +1,6 @@
 import { StripeApiError } from './api-error';
 import type { FakeContext } from './context';
-import { createInvoice } from './checkout-actions';
+import { createInvoice } from './subscription-create';
 import { emitEvent, previousAttributes } from './events';
 import { nowSeconds } from './ids';
 import { addInterval } from './periods';

@@ -19,6 +19,13 @@ export default function globalSetup() {
     stdio: 'inherit',
     env: { ...env, DATABASE_URL: owner },
   });
+  // The demo's subscriptions, as the demo start script makes them: Playwright starts the fakes and the app (its
+  // webServer list) before this setup, so the fake's events reach the app's webhook.
+  execFileSync('npx', ['tsx', '--require', './db/script-preload.cjs', 'db/seed-billing.ts'], {
+    cwd: root,
+    stdio: 'inherit',
+    env: { ...env, STRIPE_API_PORT: String(e2ePorts.stripe) },
+  });
   const worker = spawn(
     'node',
     ['--require', './db/script-preload.cjs', '--import', 'tsx', 'lib/jobs/worker.mts', '--interval-ms', '500'],

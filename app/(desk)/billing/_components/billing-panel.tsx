@@ -65,10 +65,17 @@ export function BillingPanel({
         <p className="mt-1 text-lg font-medium" data-testid="subscription-status">
           {subscriptionLabels[ent.reason]}: {statusText[ent.reason]}
         </p>
-        {ent.periodEnd && (
-          <p className="mt-1 text-sm text-ink-muted">
-            {ent.cancelAtPeriodEnd ? 'Ends' : 'Renews'} on {formatDate(ent.periodEnd)}
+        {ent.reason === 'grace' && ent.graceEndsAt ? (
+          <p className="mt-1 text-sm text-severity-warning" data-testid="grace-ends">
+            Grace period ends on {formatDate(ent.graceEndsAt)}; if the payment has not gone through by then, datasheets
+            lock until it does.
           </p>
+        ) : (
+          ent.periodEnd && (
+            <p className="mt-1 text-sm text-ink-muted">
+              {ent.cancelAtPeriodEnd ? 'Ends' : 'Renews'} on {formatDate(ent.periodEnd)}
+            </p>
+          )
         )}
         {ent.status && (
           <button
