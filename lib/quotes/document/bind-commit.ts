@@ -94,7 +94,9 @@ export async function commitBind(
           edition: plan.edition,
           sha256,
           byteSize: bytes.byteLength,
-          lines,
+          pages: plan.pageCount,
+          // In words for the audit trail; the ids stay in the row's `lines`.
+          datasheets: lines.flatMap((l) => (l.datasheetNumber ? [`${l.datasheetNumber} Rev. ${l.revision}`] : [])),
           store: store.kind,
         },
       });
