@@ -34,7 +34,7 @@ test('a sales engineer binds the sent quote into one PDF; the customer sees the 
   const engineer = signInFor.sales_engineer;
   await signIn(page, engineer.email, engineer.password, `/quotes/${quoteId}`);
   await page.goto(`/quotes/${quoteId}`);
-  const section = page.locator('#quote-pdf');
+  const section = page.getByRole('region', { name: 'Quote PDF' });
   await section.getByRole('button', { name: 'Bind the quote PDF' }).click();
   await expect(page.getByTestId('quote-pdf-bound')).toContainText(
     /Edition \d+ bound: \d+ pages\.|Nothing changed since/,
