@@ -8,7 +8,7 @@ import type { QuoteSource } from './source';
  */
 export function contentKeyOf(q: QuoteSource): string {
   const state = {
-    quote: [q.number, q.title, q.status, q.sentAt?.toISOString() ?? null],
+    quote: [q.number, q.title, q.status],
     account: [q.accountName, q.site, q.currency, q.unitSystem],
     lines: q.lines.map((l) => [
       l.itemId,

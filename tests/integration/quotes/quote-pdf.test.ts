@@ -13,6 +13,7 @@ import { issueDatasheet } from '@/lib/datasheets/issue';
 import { bindQuoteDocument } from '@/lib/quotes/document/bind';
 import { getQuoteDocumentDownload } from '@/lib/quotes/document/download';
 import { pdfPageCount } from '@/lib/quotes/document/merge';
+import { sendQuote, setQuoteStatus } from '@/lib/quotes/mutations';
 import { getQuote } from '@/lib/quotes/queries';
 import { formatHeadline } from '@/lib/sizings/headline';
 import { sentQuoteWithDatasheets } from './quote-pdf-fixture';
@@ -105,7 +106,7 @@ describe('the quote as one PDF', () => {
     expect(audits.map((a) => a.action)).toContain('quote.document_bound');
   });
 
-  it('an unchanged quote answers its latest edition; a new datasheet revision makes the next edition', async () => {
+  it('an unchanged quote answers its latest edition; a new datasheet revision or status makes the next edition', async () => {
     const again = await bindQuoteDocument(f.engineer, f.quoteId);
     expect(again.created).toBe(false);
     expect(again.edition.edition).toBe(1);
@@ -117,6 +118,14 @@ describe('the quote as one PDF', () => {
     const rows = await db.select().from(quoteDocuments).where(eq(quoteDocuments.quoteId, f.quoteId));
     expect(rows.map((r) => r.edition).sort()).toEqual([1, 2]);
     expect(rows.find((r) => r.edition === 1)!.lines[1]!.revisionId).toBe(f.compressorA.revisionId);
+    // Sending the same quote again changes nothing printed; closing it as won changes its status on the cover.
+    await sendQuote(f.engineer, f.quoteId);
+    expect((await bindQuoteDocument(f.engineer, f.quoteId)).created).toBe(false);
+    await setQuoteStatus(f.engineer, f.quoteId, 'won');
+    const won = await bindQuoteDocument(f.engineer, f.quoteId);
+    expect(won).toMatchObject({ created: true, edition: { edition: 3 } });
+    const cover = (await pagesOf(await editionBytes(won.edition.id)))[0]!;
+    expect(cover).toMatch(/STATUS Won/i);
   });
 
   it('the database refuses to change or delete a stored edition, even for the schema owner', async () => {
