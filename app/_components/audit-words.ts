@@ -22,6 +22,8 @@ const ACTIONS: Readonly<Record<string, string>> = {
   'quote.line_added': 'Added a quote line',
   'quote.line_removed': 'Removed a quote line',
   'quote.lines_added': 'Added quote lines',
+  'quote.document_bound': 'Bound the quote PDF',
+  'quote.document_downloaded': 'Downloaded the quote PDF',
   'quote.sent': 'Sent the quote',
   'quote.status_changed': 'Changed the quote status',
   'user.created': 'Created a sign-in',

@@ -8,8 +8,8 @@ const BLOB_DIR = 'blobs';
 
 /**
  * Downloads every listed object into `<dir>/blobs/<key>`; keys are already validated account paths
- * (accounts/<uuid>/<plain segments>), so they map to folders safely. A datasheet whose bytes no longer
- * match the hash recorded at issue fails the backup: copying a damaged document would hide the damage.
+ * (accounts/<uuid>/<plain segments>), so they map to folders safely. A datasheet or quote PDF whose bytes no
+ * longer match the hash recorded when it was stored fails the backup: copying a damaged document would hide the damage.
  */
 export async function copyBlobsOut(store: BlobStore, blobs: BackedUpBlob[], dir: string): Promise<BackedUpBlob[]> {
   const out: BackedUpBlob[] = [];
@@ -17,7 +17,7 @@ export async function copyBlobsOut(store: BlobStore, blobs: BackedUpBlob[], dir:
     const got = await store.get(blob.key);
     if (!got) throw new Error(`object ${blob.key} is referenced by ${blob.kind}s but missing from the store`);
     const sha256 = sha256Hex(got.bytes);
-    if (blob.kind === 'datasheet' && sha256 !== blob.sha256)
+    if (blob.kind !== 'upload' && sha256 !== blob.sha256)
       throw new Error(`object ${blob.key} does not match the SHA-256 recorded when it was issued`);
     const file = path.posix.join(BLOB_DIR, blob.key);
     await mkdir(path.join(dir, path.dirname(file)), { recursive: true });

@@ -12,7 +12,7 @@ export const MANIFEST_FORMAT = 'dutywise-backup/1';
 export type BackedUpBlob = {
   key: string;
   /** Which table points at it. */
-  kind: 'datasheet' | 'upload';
+  kind: 'datasheet' | 'quote-document' | 'upload';
   contentType: string;
   byteSize: number;
   sha256: string;

@@ -12,23 +12,28 @@ export async function openSnapshot(client: Client): Promise<string> {
 
 /**
  * Every stored object a row points at. With the PostgreSQL store the bytes are hashed where they lie (and
- * travel in the dump); with S3 the revision's recorded hash is the reference and uploads are hashed on copy.
+ * travel in the dump); with S3 the recorded hash of a revision or quote PDF is the reference and uploads are hashed on copy.
  */
 export async function referencedBlobs(client: Client, store: 'postgres' | 's3'): Promise<BackedUpBlob[]> {
   if (store === 'postgres') {
     const { rows } = await client.query<BackedUpBlob>(`
-      select b.key, case when r.blob_key is not null then 'datasheet' else 'upload' end as kind,
+      select b.key,
+             case when r.blob_key is not null then 'datasheet'
+                  when q.blob_key is not null then 'quote-document' else 'upload' end as kind,
              b.content_type as "contentType", b.byte_size as "byteSize", encode(sha256(b.data), 'hex') as sha256
       from blobs b
       left join datasheet_revisions r on r.blob_key = b.key
+      left join quote_documents q on q.blob_key = b.key
       left join uploads u on u.blob_key = b.key
-      where r.blob_key is not null or u.blob_key is not null
+      where r.blob_key is not null or q.blob_key is not null or u.blob_key is not null
       order by b.key`);
     return rows;
   }
   const { rows } = await client.query<BackedUpBlob>(`
     select blob_key as key, 'datasheet' as kind, 'application/pdf' as "contentType", byte_size as "byteSize", sha256
     from datasheet_revisions
+    union all
+    select blob_key, 'quote-document', 'application/pdf', byte_size, sha256 from quote_documents
     union all
     select blob_key, 'upload', content_type, byte_size, '' from uploads
     order by key`);

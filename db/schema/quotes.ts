@@ -1,5 +1,16 @@
 import { sql } from 'drizzle-orm';
-import { check, index, integer, numeric, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import {
+  check,
+  index,
+  integer,
+  jsonb,
+  numeric,
+  pgTable,
+  text,
+  timestamp,
+  uniqueIndex,
+  uuid,
+} from 'drizzle-orm/pg-core';
 import { accounts } from './accounts';
 import { quoteStatus } from './enums';
 import { sizings } from './sizings';
@@ -55,7 +66,19 @@ export const quoteItems = pgTable(
   ],
 );
 
-/** The quote as one stored PDF (cover sheet, then each line's current datasheet), one row per time it was made. */
+/** One datasheet revision a quote document holds (or none yet for its line), in line order. */
+export type QuoteDocumentLine = {
+  itemId: string;
+  sizingNumber: string;
+  datasheetNumber: string | null;
+  revision: string | null;
+  revisionId: string | null;
+};
+
+/**
+ * The quote as one stored PDF (cover sheet, then each line's current datasheet), one edition per distinct state of
+ * the quote and its datasheets. Immutable: a trigger in the migrations refuses UPDATE and DELETE.
+ */
 export const quoteDocuments = pgTable(
   'quote_documents',
   {
@@ -66,6 +89,11 @@ export const quoteDocuments = pgTable(
     accountId: uuid('account_id')
       .notNull()
       .references(() => accounts.id, { onDelete: 'restrict' }),
+    edition: integer('edition').notNull(),
+    /** SHA-256 of everything the document prints and holds; an unchanged quote reuses its latest edition. */
+    contentKey: text('content_key').notNull(),
+    lines: jsonb('lines').$type<QuoteDocumentLine[]>().notNull(),
+    pageCount: integer('page_count').notNull(),
     blobKey: text('blob_key').notNull(),
     sha256: text('sha256').notNull(),
     byteSize: integer('byte_size').notNull(),
@@ -75,6 +103,10 @@ export const quoteDocuments = pgTable(
   (t) => [
     index('quote_documents_quote_idx').on(t.quoteId, t.madeAt.desc()),
     uniqueIndex('quote_documents_blob_uq').on(t.blobKey),
+    uniqueIndex('quote_documents_edition_uq').on(t.quoteId, t.edition),
+    check('quote_documents_edition_positive', sql`${t.edition} >= 1`),
+    check('quote_documents_sha256', sql`${t.sha256} ~ '^[0-9a-f]{64}$'`),
+    check('quote_documents_blob_namespaced', sql`${t.blobKey} like 'accounts/' || ${t.accountId}::text || '/%'`),
   ],
 );
 

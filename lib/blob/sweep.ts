@@ -1,7 +1,7 @@
 import 'server-only';
 import { inArray } from 'drizzle-orm';
 import { db } from '@/db';
-import { datasheetRevisions, uploads } from '@/db/schema';
+import { datasheetRevisions, quoteDocuments, uploads } from '@/db/schema';
 import { logger } from '@/lib/log/logger';
 import { getBlobStore } from './store';
 import type { BlobStore } from './types';
@@ -21,20 +21,21 @@ async function referencedKeys(keys: string[]): Promise<Set<string>> {
   const found = new Set<string>();
   for (let i = 0; i < keys.length; i += BATCH) {
     const batch = keys.slice(i, i + BATCH);
-    const [revs, ups] = await Promise.all([
+    const [revs, ups, docs] = await Promise.all([
       db
         .select({ key: datasheetRevisions.blobKey })
         .from(datasheetRevisions)
         .where(inArray(datasheetRevisions.blobKey, batch)),
       db.select({ key: uploads.blobKey }).from(uploads).where(inArray(uploads.blobKey, batch)),
+      db.select({ key: quoteDocuments.blobKey }).from(quoteDocuments).where(inArray(quoteDocuments.blobKey, batch)),
     ]);
-    for (const r of [...revs, ...ups]) found.add(r.key);
+    for (const r of [...revs, ...ups, ...docs]) found.add(r.key);
   }
   return found;
 }
 
 /**
- * Deletes objects under accounts/ that no datasheet revision or upload references and that are older than
+ * Deletes objects under accounts/ that no datasheet revision, quote document or upload references and that are older than
  * the cut-off: what is left when the process dies after an S3 upload and before its transaction commits.
  */
 export async function sweepOrphanBlobs(opts: SweepOptions = {}): Promise<SweepReport> {

@@ -159,6 +159,12 @@ export const accessTable: AccessRow[] = [
     expect: { anon: 401, sales_engineer: 200, customer: 402, support: 200, admin: 200 },
   },
   {
+    // The demo holds no bound quote PDF: an unknown edition is not found for everyone signed in.
+    file: 'app/api/v1/quote-documents/[documentId]/route.ts',
+    path: '/api/v1/quote-documents/00000000-0000-4000-8000-000000000000',
+    expect: { anon: 401, sales_engineer: 404, customer: 404, support: 404, admin: 404 },
+  },
+  {
     file: 'app/api/webhooks/stripe/route.ts',
     path: '/api/webhooks/stripe',
     method: 'POST',

@@ -32,6 +32,16 @@ export default async function BillingPage({
           plan below and the link works straight away.
         </p>
       )}
+      {sp.locked === 'quote-pdf' && entitlement && !entitlement.unlocked && (
+        <p
+          className="mt-4 rounded-md border border-copper-100 bg-copper-50 p-3 text-sm"
+          role="status"
+          data-testid="quote-pdf-locked"
+        >
+          That quote PDF is locked: it carries the datasheets issued to your account, which download while a
+          subscription is active. Choose a plan below and the link works straight away.
+        </p>
+      )}
       {entitlement ? (
         <BillingPanel initial={entitlement} checkout={checkout} plans={[...plans]} />
       ) : (

@@ -28,6 +28,7 @@ export const actionTable: Record<string, ActionAccess> = {
   'app/(desk)/quotes/[quoteId]/actions.ts#setQuoteLinePriceAction': { allowed: staffWrite },
   'app/(desk)/quotes/[quoteId]/actions.ts#setQuoteStatusAction': { allowed: staffWrite },
   'app/(desk)/quotes/[quoteId]/actions.ts#sendQuoteAction': { allowed: staffWrite },
+  'app/(desk)/quotes/[quoteId]/actions.ts#bindQuotePdfAction': { allowed: staffWrite },
   'app/(desk)/size/actions.ts#saveSizingAction': { allowed: ['sales_engineer', 'customer', 'admin'] },
   'app/(desk)/size/actions.ts#setUnitSystemAction': { allowed: everyone },
   'app/(desk)/sizings/[sizingId]/actions.ts#resendDatasheetEmailAction': { allowed: ['support', 'admin'] },

@@ -2,6 +2,7 @@
 
 import { revalidatePath } from 'next/cache';
 import { defineAction } from '@/lib/actions/define-action';
+import { bindQuoteDocument } from '@/lib/quotes/document/bind';
 import { addQuoteItem, removeQuoteItem, sendQuote, setQuoteLinePrice, setQuoteStatus } from '@/lib/quotes/mutations';
 import {
   quoteIdSchema,
@@ -63,5 +64,15 @@ export const sendQuoteAction = defineAction(
     const { to, invited } = await sendQuote(user, input.quoteId);
     refresh(input.quoteId);
     return { to, invited };
+  },
+);
+
+/** Binds the sent quote and its current datasheets into one stored PDF, or answers the unchanged latest edition. */
+export const bindQuotePdfAction = defineAction(
+  { permission: 'quote:manage', schema: quoteIdSchema, name: 'quote.bind_pdf' },
+  async (input, user) => {
+    const { edition, created } = await bindQuoteDocument(user, input.quoteId);
+    refresh(input.quoteId);
+    return { edition: edition.edition, pageCount: edition.pageCount, created };
   },
 );

@@ -4,12 +4,16 @@ import { PageBody, PageHeader, Section } from '@/app/_components/page-header';
 import { orNotFound, uuidOrNotFound } from '@/app/_components/route-guards';
 import { requirePageUser } from '@/lib/auth/guards';
 import { can, isStaff } from '@/lib/auth/roles';
+import { downloadAccess } from '@/lib/datasheets/queries';
+import { listQuoteEditions } from '@/lib/quotes/document/editions';
 import { getQuote } from '@/lib/quotes/queries';
 import type { QuoteStatus } from '@/db/schema/enums';
 import { listSizings } from '@/lib/sizings/queries';
 import { toSizingOption } from '../_components/sizing-option';
 import { AddLineForm } from './_components/add-line-form';
+import { BindPdfButton } from './_components/bind-pdf-button';
 import { QuoteLines } from './_components/quote-lines';
+import { QuotePdfEditions } from './_components/quote-pdf-editions';
 import { QuoteSummary } from './_components/quote-summary';
 import { SendQuoteButton } from './_components/send-quote-button';
 import { StatusForm } from './_components/status-form';
@@ -23,6 +27,7 @@ export default async function QuotePage({ params }: { params: Promise<{ quoteId:
   const quote = await orNotFound(getQuote(user, quoteId));
   const mayManage = can(user.role, 'quote:manage');
   const editable = mayManage && quote.status === 'draft';
+  const [editions, access] = await Promise.all([listQuoteEditions(user, quoteId), downloadAccess(user)]);
   const onQuote = new Set(quote.lines.map((l) => l.sizingId));
   const addable = editable
     ? (await listSizings(user, { accountId: quote.accountId, limit: 500 }))
@@ -62,6 +67,20 @@ export default async function QuotePage({ params }: { params: Promise<{ quoteId:
           </p>
         )}
       </Section>
+      {(quote.status !== 'draft' || editions.length > 0) && (
+        <Section title="Quote PDF" id="quote-pdf">
+          <p className="mb-3 text-sm text-ink-soft">
+            One PDF: a cover sheet with the lines and totals, then the current revision of each line&apos;s datasheet
+            exactly as issued. A new edition is bound only when the quote or a datasheet revision has changed.
+          </p>
+          <QuotePdfEditions editions={editions} locked={!access.unlocked} />
+          {mayManage && quote.status !== 'draft' && (
+            <div className="mt-4 border-t border-paper-line pt-4">
+              <BindPdfButton quoteId={quote.id} />
+            </div>
+          )}
+        </Section>
+      )}
       {mayManage && (
         <div className="grid gap-6 md:grid-cols-2">
           <Section title="Send to customer" id="send">
