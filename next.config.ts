@@ -14,6 +14,9 @@ const nextConfig: NextConfig = {
   // Tests build into their own folder so they never overwrite the demo's build.
   distDir: process.env.NEXT_DIST_DIR ?? '.next',
   poweredByHeader: false,
+  // Fixed at build time: a build without Clerk's publishable key leaves Clerk's client code out of every page
+  // (app/_components/identity-provider.tsx); starting such a build with Clerk keys is refused.
+  env: { DUTYWISE_CLERK_BUILD: process.env.NEXT_PUBLIC_CLERK_PUBLISHABLE_KEY ? 'on' : 'off' },
   reactStrictMode: true,
   // The local fakes and the database are separate processes; nothing here downloads at build time.
   serverExternalPackages: ['pg', 'pino', 'nodemailer', '@react-pdf/renderer', 'bcryptjs'],

@@ -1,9 +1,8 @@
 import type { Metadata } from 'next';
 import type { ReactNode } from 'react';
-import { ClerkProvider } from '@clerk/nextjs';
 import { headers } from 'next/headers';
-import { clerkEnabled } from '@/lib/env';
 import { plexMono, plexSans } from './fonts';
+import { IdentityProvider } from './_components/identity-provider';
 import { Providers } from './_components/providers';
 import './globals.css';
 
@@ -16,13 +15,13 @@ export default async function RootLayout({ children }: { children: ReactNode }) 
   // Reading the request renders every page per request, which the per-request script nonce (middleware.ts) needs:
   // a page prerendered at build time would carry scripts without it.
   await headers();
-  const page = (
-    <html lang="en" className={`${plexSans.variable} ${plexMono.variable}`}>
-      <body className="min-h-screen">
-        <Providers>{children}</Providers>
-      </body>
-    </html>
+  return (
+    <IdentityProvider>
+      <html lang="en" className={`${plexSans.variable} ${plexMono.variable}`}>
+        <body className="min-h-screen">
+          <Providers>{children}</Providers>
+        </body>
+      </html>
+    </IdentityProvider>
   );
-  // Clerk's provider only when Clerk is the identity: the demo and tests never load its hosted script.
-  return clerkEnabled ? <ClerkProvider>{page}</ClerkProvider> : page;
 }

@@ -1,7 +1,7 @@
 // Seeds the invented demo scenario once. `--reset` empties every table first (test databases only).
 // The scenario's sign-ins share one published password, so the seed refuses any database whose name does not
 // end in _demo, _test or _bench unless `--force` is given.
-import { eq, sql } from 'drizzle-orm';
+import { and, eq, inArray, sql } from 'drizzle-orm';
 import { db, pool } from '@/db';
 import { accounts, memberships, quotes, sizings, users } from '@/db/schema';
 import type { CurrentUser } from '@/lib/auth/current-user';
@@ -101,7 +101,12 @@ async function main() {
     if (qd.status !== 'draft') await db.update(quotes).set({ sentAt: new Date() }).where(eq(quotes.id, id));
   }
   for (const d of allDatasheets) {
-    const [row] = await db.select().from(sizings).where(eq(sizings.equipmentTag, d.tag)).limit(1);
+    // The scenario's own sizing with that tag: a benchmark database also holds generated sizings with the same tags.
+    const [row] = await db
+      .select()
+      .from(sizings)
+      .where(and(eq(sizings.equipmentTag, d.tag), inArray(sizings.accountId, [...accountIds.values()])))
+      .limit(1);
     const by = people.get(d.by)!;
     for (const [i, note] of d.notes.entries()) {
       if (d.revise?.before === i) {

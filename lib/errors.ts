@@ -1,7 +1,9 @@
 // The one error model. Every layer throws AppError; its code decides the HTTP status, and handlers and
 // actions answer with the same list of { path, message }. Pure: no framework, database or React code,
 // so the sizing engine may use issuesOf too.
-import type { z } from 'zod';
+import type * as zc from 'zod/v4/core';
+import * as z from 'zod/mini';
+import '@/lib/validation/english-messages';
 
 /** One problem: dotted path into the request ("" for the request as a whole) and what is wrong with it. */
 export type Issue = { path: string; message: string };
@@ -70,7 +72,7 @@ export function errorBody(err: AppError): ErrorBody {
 }
 
 /** Flattens zod issues into path/message pairs: every issue, one entry per unknown key, plainer "required" text. */
-export function issuesOf(error: z.ZodError): Issue[] {
+export function issuesOf(error: zc.$ZodError): Issue[] {
   const out: Issue[] = [];
   const seen = new Set<string>();
   const add = (path: string, message: string) => {
@@ -94,8 +96,8 @@ export function issuesOf(error: z.ZodError): Issue[] {
 }
 
 /** Parses with a zod schema or throws the refused request with every issue (led by `summary` when given). */
-export function parseOrThrow<S extends z.ZodType>(schema: S, raw: unknown, summary?: string): z.output<S> {
-  const parsed = schema.safeParse(raw);
+export function parseOrThrow<S extends zc.$ZodType>(schema: S, raw: unknown, summary?: string): zc.output<S> {
+  const parsed = z.safeParse(schema, raw);
   if (parsed.success) return parsed.data;
   const issues = issuesOf(parsed.error);
   throw summary ? new AppError('invalid_input', summary, issues) : invalidInput(issues);

@@ -1,5 +1,5 @@
 import 'server-only';
-import type { z } from 'zod';
+import type * as zc from 'zod/v4/core';
 import { requireUser } from '@/lib/auth/guards';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import type { Permission } from '@/lib/auth/roles';
@@ -16,7 +16,7 @@ import { UNAVAILABLE_MESSAGE, UNAVAILABLE_RETRY_AFTER_S } from '@/lib/ops/unavai
 export type ActionFailure = { ok: false; status: number } & ErrorBody;
 export type ActionResult<T> = { ok: true; data: T } | ActionFailure;
 
-type ActionOptions<S extends z.ZodType> = {
+type ActionOptions<S extends zc.$ZodType> = {
   schema: S;
   /** `<concern>.<verb>_<object>` in snake case, as it appears in logs. */
   name: string;
@@ -28,7 +28,7 @@ function failureOf(err: AppError): ActionFailure {
   return { ok: false, status: err.status, ...errorBody(err) };
 }
 
-async function run<S extends z.ZodType, T>(
+async function run<S extends zc.$ZodType, T>(
   opts: ActionOptions<S>,
   work: (raw: unknown) => Promise<T>,
   raw: unknown,
@@ -56,9 +56,9 @@ async function run<S extends z.ZodType, T>(
  * The one wrapper for server actions: authenticate, authorise, parse with the shared zod schema, call the
  * domain code. Expected failures (AppError) come back as values; anything else is logged and reported generically.
  */
-export function defineAction<S extends z.ZodType, T>(
+export function defineAction<S extends zc.$ZodType, T>(
   opts: ActionOptions<S> & { permission: Permission },
-  handler: (input: z.output<S>, user: CurrentUser) => Promise<T>,
+  handler: (input: zc.output<S>, user: CurrentUser) => Promise<T>,
 ) {
   return (raw: unknown): Promise<ActionResult<T>> =>
     run(
@@ -76,9 +76,9 @@ export function defineAction<S extends z.ZodType, T>(
  * confirmation): local identity only, parse with the shared schema, spend the client address's budget for this
  * form, call the domain code. Expected failures come back as values, like defineAction's.
  */
-export function definePublicAction<S extends z.ZodType, T>(
+export function definePublicAction<S extends zc.$ZodType, T>(
   opts: ActionOptions<S> & { limit: PolicyName; clerkMessage: string },
-  handler: (input: z.output<S>) => Promise<T>,
+  handler: (input: zc.output<S>) => Promise<T>,
 ) {
   return (raw: unknown): Promise<ActionResult<T>> =>
     run(

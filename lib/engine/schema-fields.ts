@@ -1,4 +1,5 @@
-import { z } from 'zod';
+import * as z from 'zod/mini';
+import '@/lib/validation/english-messages';
 import { MAX_TEMPERATURE_K, MIN_TEMPERATURE_K } from '../thermo/constants';
 import { temperatureFromK, temperatureToK } from '../units/temperature';
 import { normalizeUnit } from '../units/unit-strings';

@@ -1,4 +1,5 @@
-import { z } from 'zod';
+import * as z from 'zod/mini';
+import '@/lib/validation/english-messages';
 import { checkComposition } from '../thermo/composition';
 import { findPreset, PRESET_IDS } from '../thermo/presets';
 import { ASHRAE_MAX_TEMPERATURE_K, ASHRAE_MIN_TEMPERATURE_K } from '../thermo/water-saturation';
@@ -52,23 +53,26 @@ const pressure = quantityField(PRESSURE_UNITS, 'pressure');
 
 const supply = z.strictObject({
   voltageV: numberField({ ...LIMITS.voltageV, unit: 'V', hint: 'line-to-line for three-phase' }),
-  phases: z
-    .union([z.literal(1), z.literal(3), z.literal('1'), z.literal('3')], { error: 'phases must be 1 or 3' })
-    .transform((p) => (Number(p) === 1 ? 1 : 3) as 1 | 3),
+  phases: z.pipe(
+    z.union([z.literal(1), z.literal(3), z.literal('1'), z.literal('3')], { error: 'phases must be 1 or 3' }),
+    z.transform((p) => (Number(p) === 1 ? 1 : 3) as 1 | 3),
+  ),
 });
 
 const gas = z
   .strictObject({
-    preset: z.string({ error: 'preset must be a string' }).optional(),
-    components: z.record(z.string(), numberField({ min: 0, max: 1 })).optional(),
-    basis: z.enum(['mole', 'mass'], { error: 'basis must be "mole" or "mass"' }).optional(),
-    relativeHumidityPercent: numberField({ min: 0, max: 100, unit: '%' }).optional(),
-    dewPoint: temperatureField(
-      TEMPERATURE_UNITS,
-      ASHRAE_MIN_TEMPERATURE_K,
-      ASHRAE_MAX_TEMPERATURE_K,
-      'the ASHRAE saturation-pressure range',
-    ).optional(),
+    preset: z.optional(z.string({ error: 'preset must be a string' })),
+    components: z.optional(z.record(z.string(), numberField({ min: 0, max: 1 }))),
+    basis: z.optional(z.enum(['mole', 'mass'], { error: 'basis must be "mole" or "mass"' })),
+    relativeHumidityPercent: z.optional(numberField({ min: 0, max: 100, unit: '%' })),
+    dewPoint: z.optional(
+      temperatureField(
+        TEMPERATURE_UNITS,
+        ASHRAE_MIN_TEMPERATURE_K,
+        ASHRAE_MAX_TEMPERATURE_K,
+        'the ASHRAE saturation-pressure range',
+      ),
+    ),
   })
   .check((ctx) => {
     const g = ctx.value;
@@ -99,49 +103,49 @@ const gas = z
 
 const common = {
   gas,
-  equationOfState: z
-    .enum(EQUATIONS_OF_STATE, {
+  equationOfState: z.optional(
+    z.enum(EQUATIONS_OF_STATE, {
       error:
         'equationOfState must be "ideal-gas", "peng-robinson" or "gerg-2008" (leave it out to let the engine choose)',
-    })
-    .optional(),
+    }),
+  ),
   flow: quantityField(FLOW_UNITS, 'flow', { min: 0, minExclusive: true }),
   inlet: z.strictObject({ temperature, pressure }),
-  site: z
-    .strictObject({
-      barometricPressure: quantityField(ABSOLUTE_PRESSURE_UNITS, 'absolute pressure', {
-        min: 0,
-        minExclusive: true,
-      }).optional(),
-      altitudeM: numberField({ ...LIMITS.siteAltitudeM, unit: 'm' }).optional(),
-    })
-    .check((ctx) => {
-      if (ctx.value.barometricPressure !== undefined && ctx.value.altitudeM !== undefined) {
-        ctx.issues.push({
-          code: 'custom',
-          path: ['altitudeM'],
-          message: 'give barometricPressure or altitudeM, not both',
-          input: ctx.value,
-        });
-      }
-    })
-    .optional(),
+  site: z.optional(
+    z
+      .strictObject({
+        barometricPressure: z.optional(
+          quantityField(ABSOLUTE_PRESSURE_UNITS, 'absolute pressure', { min: 0, minExclusive: true }),
+        ),
+        altitudeM: z.optional(numberField({ ...LIMITS.siteAltitudeM, unit: 'm' })),
+      })
+      .check((ctx) => {
+        if (ctx.value.barometricPressure !== undefined && ctx.value.altitudeM !== undefined) {
+          ctx.issues.push({
+            code: 'custom',
+            path: ['altitudeM'],
+            message: 'give barometricPressure or altitudeM, not both',
+            input: ctx.value,
+          });
+        }
+      }),
+  ),
 };
 
 const heater = z.strictObject({
   service: z.literal('heater'),
   ...common,
   outletTemperature: temperature,
-  heatLossPercent: numberField({ ...LIMITS.heatLossPercent, unit: '%' }).default(0),
-  designMarginPercent: numberField({ ...LIMITS.designMarginPercent, unit: '%' }).default(0),
-  supply: supply.optional(),
-  heaterRatingsKw: z
-    .array(numberField({ ...LIMITS.heaterRatingKw, minExclusive: true, unit: 'kW' }), {
-      error: 'must be a list of ratings in kW',
-    })
-    .min(1, { error: 'give at least one rating' })
-    .max(500, { error: 'at most 500 ratings' })
-    .optional(),
+  heatLossPercent: z._default(numberField({ ...LIMITS.heatLossPercent, unit: '%' }), 0),
+  designMarginPercent: z._default(numberField({ ...LIMITS.designMarginPercent, unit: '%' }), 0),
+  supply: z.optional(supply),
+  heaterRatingsKw: z.optional(
+    z
+      .array(numberField({ ...LIMITS.heaterRatingKw, minExclusive: true, unit: 'kW' }), {
+        error: 'must be a list of ratings in kW',
+      })
+      .check(z.minLength(1, { error: 'give at least one rating' }), z.maxLength(500, { error: 'at most 500 ratings' })),
+  ),
 });
 
 const compressor = z
@@ -149,35 +153,43 @@ const compressor = z
     service: z.literal('compressor'),
     ...common,
     dischargePressure: pressure,
-    isentropicEfficiency: efficiency(
-      LIMITS.isentropicEfficiency,
-      'isentropic (adiabatic) efficiency per stage; machines reach about 0.50-0.90, 1 is the reversible reference',
-    ).optional(),
-    polytropicEfficiency: efficiency(
-      LIMITS.polytropicEfficiency,
-      'polytropic efficiency per stage; machines reach about 0.70-0.90, 1 is the reversible reference',
-    ).optional(),
-    stages: numberField({ ...LIMITS.stages, integer: true }).default(1),
-    intercoolerOutletTemperature: temperature.optional(),
-    aftercoolerOutletTemperature: temperature.optional(),
-    interstagePressureDropPercent: numberField({ ...LIMITS.interstagePressureDropPercent, unit: '%' }).default(0),
-    mechanicalEfficiency: efficiency(LIMITS.mechanicalEfficiency, 'mechanical (bearings, seals, gear)').default(
+    isentropicEfficiency: z.optional(
+      efficiency(
+        LIMITS.isentropicEfficiency,
+        'isentropic (adiabatic) efficiency per stage; machines reach about 0.50-0.90, 1 is the reversible reference',
+      ),
+    ),
+    polytropicEfficiency: z.optional(
+      efficiency(
+        LIMITS.polytropicEfficiency,
+        'polytropic efficiency per stage; machines reach about 0.70-0.90, 1 is the reversible reference',
+      ),
+    ),
+    stages: z._default(numberField({ ...LIMITS.stages, integer: true }), 1),
+    intercoolerOutletTemperature: z.optional(temperature),
+    aftercoolerOutletTemperature: z.optional(temperature),
+    interstagePressureDropPercent: z._default(numberField({ ...LIMITS.interstagePressureDropPercent, unit: '%' }), 0),
+    mechanicalEfficiency: z._default(
+      efficiency(LIMITS.mechanicalEfficiency, 'mechanical (bearings, seals, gear)'),
       DEFAULT_MECHANICAL_EFFICIENCY,
     ),
-    method: z
-      .enum(['constant-k', 'variable-cp'], { error: 'method must be "constant-k" or "variable-cp"' })
-      .default('variable-cp'),
-    dischargeTemperatureLimit: temperatureField(
-      TEMPERATURE_UNITS,
-      LIMITS.dischargeTemperatureLimitK.min,
-      LIMITS.dischargeTemperatureLimitK.max,
-      'the range of discharge-temperature limits for process compressors',
-    ).optional(),
-    k: numberField({ ...LIMITS.k, minExclusive: true, hint: 'ratio of specific heats override' }).optional(),
-    cpJPerKgK: numberField({ ...LIMITS.cpJPerKgK, unit: 'J/(kg K)' }).optional(),
-    motorEfficiency: efficiency(LIMITS.motorEfficiency, 'motor efficiency at this load').optional(),
-    motorPowerFactor: efficiency(LIMITS.motorPowerFactor, 'motor power factor at this load').optional(),
-    supply: supply.optional(),
+    method: z._default(
+      z.enum(['constant-k', 'variable-cp'], { error: 'method must be "constant-k" or "variable-cp"' }),
+      'variable-cp',
+    ),
+    dischargeTemperatureLimit: z.optional(
+      temperatureField(
+        TEMPERATURE_UNITS,
+        LIMITS.dischargeTemperatureLimitK.min,
+        LIMITS.dischargeTemperatureLimitK.max,
+        'the range of discharge-temperature limits for process compressors',
+      ),
+    ),
+    k: z.optional(numberField({ ...LIMITS.k, minExclusive: true, hint: 'ratio of specific heats override' })),
+    cpJPerKgK: z.optional(numberField({ ...LIMITS.cpJPerKgK, unit: 'J/(kg K)' })),
+    motorEfficiency: z.optional(efficiency(LIMITS.motorEfficiency, 'motor efficiency at this load')),
+    motorPowerFactor: z.optional(efficiency(LIMITS.motorPowerFactor, 'motor power factor at this load')),
+    supply: z.optional(supply),
   })
   .check((ctx) => {
     const c = ctx.value;

@@ -1,4 +1,5 @@
-import { z } from 'zod';
+import * as z from 'zod/mini';
+import '@/lib/validation/english-messages';
 
 export const quoteStatuses = ['draft', 'sent', 'won', 'lost'] as const;
 
@@ -6,42 +7,54 @@ export const quoteCreateSchema = z.object({
   accountId: z.uuid({ message: 'Choose the customer account.' }),
   title: z
     .string()
-    .trim()
-    .min(3, { message: 'Title needs 3 to 160 characters.' })
-    .max(160, { message: 'Title needs 3 to 160 characters.' }),
-  notes: z.string().trim().max(4000, { message: 'Notes are limited to 4000 characters.' }).optional(),
-  sizingIds: z.array(z.uuid()).max(200).default([]),
+    .check(
+      z.trim(),
+      z.minLength(3, { message: 'Title needs 3 to 160 characters.' }),
+      z.maxLength(160, { message: 'Title needs 3 to 160 characters.' }),
+    ),
+  notes: z.optional(
+    z.string().check(z.trim(), z.maxLength(4000, { message: 'Notes are limited to 4000 characters.' })),
+  ),
+  sizingIds: z._default(z.array(z.uuid()).check(z.maxLength(200)), []),
 });
 export type QuoteCreateInput = z.output<typeof quoteCreateSchema>;
 
 export const quoteItemSchema = z.object({
   quoteId: z.uuid(),
   sizingId: z.uuid({ message: 'Choose a saved sizing.' }),
-  quantity: z.coerce
-    .number()
-    .int({ message: 'Quantity is a whole number.' })
-    .min(1, { message: 'Quantity must be 1 to 1000.' })
-    .max(1000, { message: 'Quantity must be 1 to 1000.' })
-    .default(1),
+  quantity: z._default(
+    z.coerce
+      .number()
+      .check(
+        z.refine(Number.isInteger, { message: 'Quantity is a whole number.' }),
+        z.gte(1, { message: 'Quantity must be 1 to 1000.' }),
+        z.lte(1000, { message: 'Quantity must be 1 to 1000.' }),
+      ),
+    1,
+  ),
 });
 
 /** A line's unit price in the account's currency; empty clears it. */
 export const quoteLinePriceSchema = z.object({
   quoteId: z.uuid(),
   itemId: z.uuid(),
-  unitPrice: z
-    .string()
-    .trim()
-    .transform((v) => v.replace(/,/g, ''))
-    .pipe(
+  unitPrice: z.pipe(
+    z.pipe(
+      z.string().check(z.trim()),
+      z.transform((v) => v.replace(/,/g, '')),
+    ),
+    z.pipe(
       z.union([
         z.literal(''),
-        z.string().regex(/^\d{1,12}(\.\d{1,2})?$/, {
-          message: 'Enter the unit price as a number with up to 2 decimals, e.g. 12500 or 12500.50.',
-        }),
+        z.string().check(
+          z.regex(/^\d{1,12}(\.\d{1,2})?$/, {
+            message: 'Enter the unit price as a number with up to 2 decimals, e.g. 12500 or 12500.50.',
+          }),
+        ),
       ]),
-    )
-    .transform((v) => (v === '' ? null : v)),
+      z.transform((v) => (v === '' ? null : v)),
+    ),
+  ),
 });
 
 export const quoteStatusSchema = z.object({ quoteId: z.uuid(), status: z.enum(quoteStatuses) });
@@ -49,8 +62,8 @@ export const quoteIdSchema = z.object({ quoteId: z.uuid() });
 export const quoteItemRemoveSchema = z.object({ quoteId: z.uuid(), itemId: z.uuid() });
 
 export const quoteFilterSchema = z.object({
-  status: z.enum(quoteStatuses).optional().catch(undefined),
-  accountId: z.uuid().optional().catch(undefined),
-  q: z.string().trim().max(100).optional().catch(undefined),
+  status: z.catch(z.optional(z.enum(quoteStatuses)), undefined),
+  accountId: z.catch(z.optional(z.uuid()), undefined),
+  q: z.catch(z.optional(z.string().check(z.trim(), z.maxLength(100))), undefined),
 });
 export type QuoteFilter = z.output<typeof quoteFilterSchema>;

@@ -38,6 +38,18 @@ function demoProblems(s: StartSettings): string[] {
 }
 
 /**
+ * A start whose settings ask for more than the build carries: Clerk's client code is in a build only when
+ * NEXT_PUBLIC_CLERK_PUBLISHABLE_KEY was set while building (next.config.ts), so Clerk keys at start need it.
+ */
+export function buildProblems(ctx: { clerk: boolean; clerkInBuild: boolean }): string[] {
+  return ctx.clerk && !ctx.clerkInBuild
+    ? [
+        'The Clerk keys are set, but this build was made without NEXT_PUBLIC_CLERK_PUBLISHABLE_KEY and carries no Clerk sign-in: build again with it set.',
+      ]
+    : [];
+}
+
+/**
  * One line per setting that still holds a committed development value or points at a local fake, for a
  * production start; none otherwise. `server` adds what only the web server needs.
  */

@@ -4,7 +4,7 @@ import { db } from '@/db';
 import { clerkEnabled, env } from '@/lib/env';
 import { logger } from '@/lib/log/logger';
 import { peerHeaderTrusted } from './client-address';
-import { isProductionStart, productionProblems } from './production-check';
+import { buildProblems, isProductionStart, productionProblems } from './production-check';
 
 /** Problems with the database role the app connects as: it must own no schema or table, and not be a superuser. */
 async function roleProblems(): Promise<string[]> {
@@ -30,11 +30,14 @@ async function roleProblems(): Promise<string[]> {
 
 /** Refuses to go on, one clear line per problem, when a production start still has development settings. */
 export async function refuseUnsafeStart(opts: { server: boolean }): Promise<void> {
-  const problems = productionProblems(env, {
-    clerk: clerkEnabled,
-    server: opts.server,
-    peerHeader: peerHeaderTrusted(),
-  });
+  // The web server's code is built by Next, which fixes DUTYWISE_CLERK_BUILD (next.config.ts); the job worker
+  // shows no pages and is not built, so the question does not arise there.
+  // eslint-disable-next-line no-restricted-properties -- a literal in the built server
+  const clerkInBuild = !opts.server || process.env.DUTYWISE_CLERK_BUILD === 'on';
+  const problems = [
+    ...buildProblems({ clerk: clerkEnabled, clerkInBuild }),
+    ...productionProblems(env, { clerk: clerkEnabled, server: opts.server, peerHeader: peerHeaderTrusted() }),
+  ];
   if (isProductionStart(env) && !env.DEMO_MODE) problems.push(...(await roleProblems()));
   if (!problems.length) return;
   for (const line of problems) console.error(`Dutywise refuses to start: ${line}`);

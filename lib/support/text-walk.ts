@@ -16,12 +16,39 @@ export function windowSize(tableRows: number, want: number): number {
   return Math.round(Math.min(50_000, Math.max(2_000, want * 20, tableRows / 250)));
 }
 
+/** Rows a second window walks: enough, at the density seen, for the matches still missing (half as many again). */
+const MAX_SECOND_WINDOW = 60_000;
+export function secondWindowSize(missing: number, density: number): number | null {
+  if (density <= 0) return null;
+  const rows = Math.ceil((missing / density) * 1.5);
+  return rows <= MAX_SECOND_WINDOW ? Math.max(rows, 500) : null;
+}
+
+type Walk = { examined: number; found: number; ids: string[]; lastKey: string; lastId: string };
+
+/** Reads `rows` sizings in sort order after `after` and tests each against the text and filters. */
+async function walk(tx: Tx, q: SQL, filters: SQL[], sort: SortSpec, after: SQL | null, rows: number, want: number) {
+  const res = await tx.execute<Walk>(sql`
+    with w as (
+      select s.id, ${sort.key} as k, ${sort.keyText} as key_text, (s.search_vector @@ ${q} and ${allOf(filters)}) as hit
+      from sizings s where ${allOf([after])} order by ${orderOf(sort)} limit ${rows})
+    select (select count(*) from w)::int as examined, (select count(*) from w where hit)::int as found,
+      array(select id from w where hit order by ${orderOf(sort, 'w')} limit ${want}) as ids,
+      (select key_text from w order by ${orderOf(sort, 'w')} offset ${rows - 1} limit 1) as "lastKey",
+      (select id from w order by ${orderOf(sort, 'w')} offset ${rows - 1} limit 1) as "lastId"`);
+  return res.rows[0]!;
+}
+
+const pastRow = (sort: SortSpec, w: Walk) =>
+  sql`(${sort.key}, s.id) ${sort.desc ? sql`<` : sql`>`} (${w.lastKey}::${sort.cast}, ${w.lastId}::uuid)`;
+
 /**
  * The first `want` sizings whose title or notes match `textQuery`, in the sort order, after `after`.
  * PostgreSQL estimates "stainless & sheath" as if the two words were unrelated and, believing it rare, reads
  * all forty thousand matches through the text index to sort them. So the look-up first reads a bounded
- * window of sizings in sort order and tests each; only when that window holds too few does it ask the text
- * index for the matches beyond it, and then there are few of them. Either way the work stays bounded.
+ * window of sizings in sort order and tests each; when that holds too few, a second window sized from the
+ * matches per row just seen usually finds the rest; only for rare text (or a second window that falls short)
+ * does it ask the text index for the matches beyond, and then there are few of them. The work stays bounded.
  */
 export async function textMatches(
   tx: Tx,
@@ -34,22 +61,23 @@ export async function textMatches(
 ): Promise<TextMatches> {
   const q = sql`to_tsquery('simple', ${textQuery})`;
   const windowRows = windowSize(tableRows, want);
-  const res = await tx.execute<{ examined: number; found: number; ids: string[]; lastKey: string; lastId: string }>(sql`
-    with w as (
-      select s.id, ${sort.key} as k, ${sort.keyText} as key_text, (s.search_vector @@ ${q} and ${allOf(filters)}) as hit
-      from sizings s where ${allOf([after])} order by ${orderOf(sort)} limit ${windowRows})
-    select (select count(*) from w)::int as examined, (select count(*) from w where hit)::int as found,
-      array(select id from w where hit order by ${orderOf(sort, 'w')} limit ${want}) as ids,
-      (select key_text from w order by ${orderOf(sort, 'w')} offset ${windowRows - 1} limit 1) as "lastKey",
-      (select id from w order by ${orderOf(sort, 'w')} offset ${windowRows - 1} limit 1) as "lastId"`);
-  const r = res.rows[0]!;
-  const density = r.examined ? r.found / r.examined : null;
-  if (r.found >= want || r.examined < windowRows) return { ids: r.ids, density };
-  // Beyond the window: every remaining match, found through the text index (and any filter index).
-  const beyond = sql`(${sort.key}, s.id) ${sort.desc ? sql`<` : sql`>`} (${r.lastKey}::${sort.cast}, ${r.lastId}::uuid)`;
+  const first = await walk(tx, q, filters, sort, after, windowRows, want);
+  const density = first.examined ? first.found / first.examined : null;
+  if (first.found >= want || first.examined < windowRows) return { ids: first.ids, density };
+  let ids = first.ids;
+  let last = first;
+  const second = secondWindowSize(want - first.found, density ?? 0);
+  if (second !== null) {
+    const more = await walk(tx, q, filters, sort, allOf([after, pastRow(sort, first)]), second, want - first.found);
+    ids = [...ids, ...more.ids];
+    if (ids.length >= want || more.examined < second) return { ids, density };
+    last = more;
+  }
+  // Beyond the windows: every remaining match, found through the text index (and any filter index).
   const rest = await tx.execute<{ id: string }>(sql`
     with m as materialized (
-      select s.id, ${sort.key} as k from sizings s where ${allOf([sql`s.search_vector @@ ${q}`, ...filters, after, beyond])})
-    select id from m order by ${orderOf(sort, 'm')} limit ${want - r.found}`);
-  return { ids: [...r.ids, ...rest.rows.map((x) => x.id)], density };
+      select s.id, ${sort.key} as k from sizings s
+      where ${allOf([sql`s.search_vector @@ ${q}`, ...filters, after, pastRow(sort, last)])})
+    select id from m order by ${orderOf(sort, 'm')} limit ${want - ids.length}`);
+  return { ids: [...ids, ...rest.rows.map((x) => x.id)], density };
 }

@@ -1,4 +1,5 @@
-import { z } from 'zod';
+import * as z from 'zod/mini';
+import '@/lib/validation/english-messages';
 import type { UserRole } from '@/lib/auth/roles';
 
 // Listed here rather than imported from the database enum so this schema stays light in the browser;
@@ -27,12 +28,12 @@ export const unitSystemSchema = z.object({
 export type UnitSystemInput = z.output<typeof unitSystemSchema>;
 
 export const staffInviteSchema = z.object({
-  email: z.email({ message: 'Enter a valid e-mail address.' }).max(254),
+  email: z.email({ message: 'Enter a valid e-mail address.' }).check(z.maxLength(254)),
   role: z.enum(staffRoleValues, { message: 'Choose sales engineer, support or admin.' }),
 });
 export type StaffInviteInput = z.output<typeof staffInviteSchema>;
 
 /** The people page's search, from the URL. */
 export const peopleSearchSchema = z.object({
-  q: z.string().trim().max(100).optional().catch(undefined),
+  q: z.catch(z.optional(z.string().check(z.trim(), z.maxLength(100))), undefined),
 });

@@ -10,6 +10,7 @@
 set -uo pipefail
 cd "$(dirname "${BASH_SOURCE[0]}")/../.."
 export NEXT_TELEMETRY_DISABLED=1
+mkdir -p .data # the sections' server logs; the clusters live where db/postgres.sh puts them
 [ -f node_modules/.package-lock.json ] || npm ci --no-audit --no-fund
 offset="${TEST_PORT_OFFSET:-0}"
 export PG_DATA_DIR="$PWD/.data/pg-test" PG_PORT=$((55433 + offset))

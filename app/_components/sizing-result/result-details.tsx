@@ -19,15 +19,24 @@ import { WarningsList } from './warnings-list';
 // is shown: they sit below the figures and would otherwise more than double the page's first-load JavaScript.
 const ResultCharts = dynamic(() => import('./charts/result-charts').then((m) => m.ResultCharts), { ssr: false });
 
-type Props = { result: SizingResult; input: SizingInput; system: UnitSystem; stale: boolean };
+type Figures = { result: SizingResult; input: SizingInput; system: UnitSystem };
 
 /** The full breakdown under the form: figures, pictures, warnings and basis; printable on its own. */
-export const ResultDetails = memo(function ResultDetails({ result, input, system, stale }: Props) {
+export function ResultDetails({ stale, ...figures }: Figures & { stale: boolean }) {
+  // Dimming a result that is being recomputed must not redraw the tables and charts: only the frame changes.
   return (
     <div
       data-testid="result-details"
       className={`mt-6 grid gap-6 transition-opacity xl:grid-cols-2 print:mt-0 print:block print:space-y-4 ${stale ? 'opacity-55' : ''}`}
     >
+      <DetailCards {...figures} />
+    </div>
+  );
+}
+
+const DetailCards = memo(function DetailCards({ result, input, system }: Figures) {
+  return (
+    <>
       <DetailCard title="Duty point" id="detail-duty-point" className="hidden print:block">
         <DutyPointTable input={input} />
       </DetailCard>
@@ -61,6 +70,6 @@ export const ResultDetails = memo(function ResultDetails({ result, input, system
           <PreliminaryStatement result={result} />
         </div>
       </DetailCard>
-    </div>
+    </>
   );
 });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { DEV_DEFAULTS } from '@/lib/env';
-import { productionProblems, type StartSettings } from '@/lib/security/production-check';
+import { buildProblems, productionProblems, type StartSettings } from '@/lib/security/production-check';
 
 // A deployment's settings with nothing wrong; each case below spoils one of them.
 const good: StartSettings = {
@@ -86,5 +86,19 @@ describe('a production start refuses development settings, one line each', () =>
         ctx,
       ),
     ).toEqual([]);
+  });
+});
+
+describe('a start refuses Clerk keys on a build made without Clerk', () => {
+  it('names the build setting when Clerk is configured but the build left it out', () => {
+    expect(buildProblems({ clerk: true, clerkInBuild: false })).toEqual([
+      expect.stringMatching(/build was made without NEXT_PUBLIC_CLERK_PUBLISHABLE_KEY/),
+    ]);
+  });
+
+  it('accepts a build that carries Clerk, and local identity on either build', () => {
+    expect(buildProblems({ clerk: true, clerkInBuild: true })).toEqual([]);
+    expect(buildProblems({ clerk: false, clerkInBuild: false })).toEqual([]);
+    expect(buildProblems({ clerk: false, clerkInBuild: true })).toEqual([]);
   });
 });

@@ -4,18 +4,19 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import Link from 'next/link';
 import { useState, useTransition } from 'react';
 import { useForm } from 'react-hook-form';
-import type { z } from 'zod';
 import { showActionErrors } from '@/app/_components/action-errors';
 import { SelectField } from '@/app/_components/select-field';
 import { TextField } from '@/app/_components/text-field';
 import { TextareaField } from '@/app/_components/textarea-field';
 import type { SizingInput } from '@/lib/engine';
 import { sizingMetaSchema } from '@/lib/sizings/schema';
+import * as z from 'zod/mini';
+import '@/lib/validation/english-messages';
 import type { AccountSite, QuoteOption, ReopenedSizing } from '../_lib/account-types';
 import { saveSizingAction } from '../actions';
 import { SaveOutcome, type Saved } from './save-outcome';
 
-const metaForm = sizingMetaSchema.pick({ title: true, equipmentTag: true, notes: true, quoteId: true });
+const metaForm = z.pick(sizingMetaSchema, { title: true, equipmentTag: true, notes: true, quoteId: true });
 type MetaValues = z.input<typeof metaForm>;
 
 type Props = {

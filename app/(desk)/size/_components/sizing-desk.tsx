@@ -1,6 +1,6 @@
 'use client';
 
-import { useEffect, useMemo, useRef, useState } from 'react';
+import { useDeferredValue, useEffect, useMemo, useRef, useState } from 'react';
 import { FormProvider, useForm } from 'react-hook-form';
 import { ResultDetails } from '@/app/_components/sizing-result/result-details';
 import type { UnitSystem } from '@/lib/units';
@@ -83,6 +83,13 @@ export function SizingDesk({
   const errors = validation.ok ? (server?.fields ?? {}) : validation.issues.fields;
   const issues = validation.ok ? server : validation.issues;
   const fresh = live.state === 'ready';
+  // The breakdown and its charts follow the headline in a render of their own, which React may interrupt for the
+  // next keystroke: a new result or a unit switch shows its figures first, then redraws the charts.
+  const details = {
+    result: useDeferredValue(live.result),
+    input: useDeferredValue(live.input),
+    system: useDeferredValue(units.system),
+  };
   const accent = values.service === 'heater' ? 'copper' : 'tide';
   const startOver = () => {
     const fresh = defaultValues(units.system);
@@ -156,12 +163,12 @@ export function SizingDesk({
               />
             </aside>
           </div>
-          {live.result && live.input && (live.state === 'ready' || live.state === 'recomputing') && (
+          {details.result && details.input && (live.state === 'ready' || live.state === 'recomputing') && (
             <ResultDetails
-              result={live.result}
-              input={live.input}
-              system={units.system}
-              stale={live.state === 'recomputing'}
+              result={details.result}
+              input={details.input}
+              system={details.system}
+              stale={live.state === 'recomputing' || details.result !== live.result}
             />
           )}
           <ResultSummaryBar live={live} />

@@ -15,7 +15,9 @@ function useDebounced<T>(value: T, delayMs: number): T {
   return settled;
 }
 
-export const DEBOUNCE_MS = 300;
+// Long enough to let a typed number settle (keys come about 150-250 ms apart), short enough that the answer
+// lands within 400 ms of the last key.
+export const DEBOUNCE_MS = 250;
 
 export type LiveState = 'invalid' | 'computing' | 'recomputing' | 'ready' | 'error';
 
@@ -29,7 +31,7 @@ export type LiveResult = {
 };
 
 /**
- * The calculate API, called once the form has been valid and unchanged for 300 ms. Queries are keyed on
+ * The calculate API, called once the form has been valid and unchanged for DEBOUNCE_MS. Queries are keyed on
  * the normalised input, so an input seen before is answered from cache and an old answer can never
  * stand in for a newer input without being marked as such.
  */

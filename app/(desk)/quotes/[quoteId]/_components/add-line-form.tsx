@@ -4,7 +4,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import type { z } from 'zod';
+import type * as z from 'zod/mini';
 import { showActionErrors } from '@/app/_components/action-errors';
 import { FormError } from '@/app/_components/form-errors';
 import { SelectField } from '@/app/_components/select-field';
