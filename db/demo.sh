@@ -27,13 +27,14 @@ PG_DATA_DIR="$PWD/.data/pg-demo" PG_PORT=55432 bash db/postgres.sh start --db du
 npx tsx db/migrate.mts
 npx tsx --require ./db/script-preload.cjs db/seed.ts
 
+# Each background process is node itself (not an npx wrapper), so stopping the demo stops it.
 pids=()
 cleanup() { for p in "${pids[@]}"; do kill "$p" 2>/dev/null || true; done; wait 2>/dev/null || true; }
 trap cleanup EXIT INT TERM
 
 mkdir -p .data
 STRIPE_FAKE_STATE="$PWD/.data/stripe-fake.json" STRIPE_WEBHOOK_URL="http://localhost:$port/api/webhooks/stripe" \
-  npx tsx mocks/start-fakes.mts > .data/fakes.log 2>&1 &
+  node --import tsx mocks/start-fakes.mts > .data/fakes.log 2>&1 &
 pids+=($!)
 
 # Rebuild only when a tracked source is newer than the last build.
