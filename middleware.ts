@@ -94,9 +94,12 @@ export default async function middleware(req: NextRequest, event: NextFetchEvent
 
 // Public machine endpoints that need no identity (the calculate API, health, payment events) skip the
 // middleware: it costs more than the calculation itself under load, and each handler checks what it needs.
+// The batch upload routes skip it too: Next 15.5 hands a large body that passed through Node-runtime middleware
+// to the route intermittently "disturbed" (a 500 before the handler; vercel/next.js#83453, fixed only in 16).
+// Those handlers sign the caller in, answer 503 when the database is down and bound the body themselves.
 export const config = {
   runtime: 'nodejs',
   matcher: [
-    '/((?!_next/static|_next/image|favicon.ico|api/v1/calculate|api/v1/openapi|api/v1/batch/template|api/health|api/ready|api/webhooks/|.*\\.(?:png|svg|ico|woff2?)$).*)',
+    '/((?!_next/static|_next/image|favicon.ico|api/v1/calculate|api/v1/openapi|api/v1/batch/|api/health|api/ready|api/webhooks/|.*\\.(?:png|svg|ico|woff2?)$).*)',
   ],
 };

@@ -117,18 +117,14 @@ export function officeActors(office: Office): Actor[] {
         f.set('file', new File([csv], 'enquiry.csv', { type: 'text/csv' }));
         return f;
       };
-      // Sent with its length, as browsers and curl send forms: a streamed (chunked) multipart body is refused by
-      // the framework's request adapter before the handler runs (a known gap, see the README).
-      const post = async (path: string, form: FormData) => {
-        const encoded = new Response(form);
-        const body = Buffer.from(await encoded.arrayBuffer());
-        return fetch(`${office.base}${path}`, {
+      // Streamed as Node's fetch sends a FormData (no length), as scripts upload.
+      const post = async (path: string, body: FormData) =>
+        fetch(`${office.base}${path}`, {
           method: 'POST',
-          headers: { cookie: uploader.cookie, 'content-type': encoded.headers.get('content-type') ?? '' },
+          headers: { cookie: uploader.cookie },
           body,
           signal: AbortSignal.timeout(60_000),
         });
-      };
       await expectOk(await post('/api/v1/batch/preview', form()), 'batch preview');
       const commit = form();
       commit.set('target', JSON.stringify({ accountId: uploader.accountId }));
