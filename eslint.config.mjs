@@ -53,7 +53,15 @@ const config = [
   prettier,
   {
     // Scripts, fakes and tests run outside Next and read their own process environment.
-    files: ['lib/env.ts', 'db/**', 'mocks/**', 'tests/**', 'drizzle.config.ts', 'next.config.ts', 'server.mjs'],
+    files: [
+      'lib/env.ts',
+      'db/**',
+      'mocks/**',
+      'tests/**',
+      'drizzle.config.ts',
+      'next.config.ts',
+      'lib/server/serve.mjs',
+    ],
     rules: { 'no-restricted-properties': 'off', 'no-console': 'off' },
   },
   {

@@ -48,7 +48,7 @@ fi
 node --require ./db/script-preload.cjs --import tsx lib/jobs/worker.mts > .data/job-worker.log 2>&1 &
 pids+=($!)
 
-node server.mjs --port "$port" &
+node lib/server/serve.mjs --port "$port" &
 pids+=($!)
 
 for _ in $(seq 1 60); do curl -fs "http://localhost:$port/api/health" >/dev/null 2>&1 && break; sleep 1; done

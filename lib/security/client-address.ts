@@ -1,6 +1,6 @@
 import { BlockList, isIP } from 'node:net';
 
-// Who is asking, as far as the network can tell. server.mjs writes the socket's own address into PEER_HEADER on
+// Who is asking, as far as the network can tell. lib/server/serve.mjs writes the socket's own address into PEER_HEADER on
 // every request (overwriting anything a client sent), and marks the process so this module knows the header is
 // real. The X-Forwarded-For chain is believed only hop by hop from that socket address leftwards, while each hop
 // is one of TRUSTED_PROXIES: the right-most hop that is not a trusted proxy is the client. A client therefore
@@ -9,7 +9,7 @@ export const PEER_HEADER = 'x-dutywise-peer';
 
 const marker = globalThis as { __dutywisePeerHeader?: boolean };
 
-/** True when this process was started by server.mjs, so PEER_HEADER carries the socket address. */
+/** True when this process was started by lib/server/serve.mjs, so PEER_HEADER carries the socket address. */
 export function peerHeaderTrusted(): boolean {
   return marker.__dutywisePeerHeader === true;
 }
@@ -52,9 +52,9 @@ function trusted(list: BlockList, addr: string): boolean {
 }
 
 /**
- * The client's address for this request. Without server.mjs (next dev, tests calling handlers directly) there is
+ * The client's address for this request. Without lib/server/serve.mjs (next dev, tests calling handlers directly) there is
  * no socket address to start from, and the right-most X-Forwarded-For hop stands in: Next fills that header from
- * the socket when a client sent none. A production start refuses to run without server.mjs.
+ * the socket when a client sent none. A production start refuses to run without lib/server/serve.mjs.
  */
 export function clientAddress(headers: Headers, proxies: BlockList): string {
   const chain = (headers.get('x-forwarded-for') ?? '').split(',').map(normaliseAddress).filter(Boolean);

@@ -89,6 +89,8 @@ export function productionProblems(s: StartSettings, ctx: { clerk: boolean; serv
     out.push((err as Error).message);
   }
   if (ctx.server && !ctx.peerHeader)
-    out.push('Start the app with `npm start` (server.mjs): plain `next start` cannot tell a client from its headers.');
+    out.push(
+      'Start the app with `npm start` (lib/server/serve.mjs): plain `next start` cannot tell a client from its headers.',
+    );
   return out;
 }

@@ -64,8 +64,8 @@ if [ "${BENCH_SKIP_LOAD:-0}" != 1 ]; then
   (unset NEXT_DIST_DIR; npx next build tests/bench/floor-app) > .data/bench-floor-build.log 2>&1 || { cat .data/bench-floor-build.log; exit 1; }
   app_port=$((3200 + offset)) floor_port=$((3300 + offset))
   # node itself, not an npx wrapper, so the pid is the server's (its CPU is read from /proc) and the kill reaches it
-  # server.mjs, as in production (plain `next start` is refused there); demo mode accepts the local defaults
-  DEMO_MODE=on RATE_LIMIT_CALCULATE_PER_MIN=100000000 LOG_LEVEL=warn node server.mjs --port "$app_port" > .data/bench-app.log 2>&1 &
+  # lib/server/serve.mjs, as in production (plain `next start` is refused there); demo mode accepts the local defaults
+  DEMO_MODE=on RATE_LIMIT_CALCULATE_PER_MIN=100000000 LOG_LEVEL=warn node lib/server/serve.mjs --port "$app_port" > .data/bench-app.log 2>&1 &
   app_pid=$!
   env -u NEXT_DIST_DIR node node_modules/next/dist/bin/next start tests/bench/floor-app -p "$floor_port" \
     --keepAliveTimeout 120000 > .data/bench-floor.log 2>&1 &
@@ -84,7 +84,7 @@ if [ "$only" != soak ] && [ "${BENCH_SKIP_BROWSER:-0}" != 1 ]; then
   build_app
   browser_port=$((3205 + offset))
   # A fresh server with the deployment's own limits; APP_URL is the address the browser uses.
-  APP_URL="http://127.0.0.1:$browser_port" DEMO_MODE=on LOG_LEVEL=warn node server.mjs --port "$browser_port" \
+  APP_URL="http://127.0.0.1:$browser_port" DEMO_MODE=on LOG_LEVEL=warn node lib/server/serve.mjs --port "$browser_port" \
     > .data/bench-browser.log 2>&1 &
   browser_pid=$!
   wait_healthy "$browser_port"
@@ -98,7 +98,7 @@ if [ "$only" != browser ] && [ "${BENCH_SKIP_SOAK:-0}" != 1 ]; then
   [ -f .next-bench/BUILD_ID ] || npx next build || exit 1
   soak=$((3250 + offset))
   # A fresh server with the deployment's own limits, so memory and connections are the soak's alone.
-  DEMO_MODE=on LOG_LEVEL=warn node server.mjs --port "$soak" > .data/bench-soak.log 2>&1 &
+  DEMO_MODE=on LOG_LEVEL=warn node lib/server/serve.mjs --port "$soak" > .data/bench-soak.log 2>&1 &
   soak_pid=$!
   wait_healthy "$soak"
   BENCH_APP_URL="http://127.0.0.1:$soak" BENCH_APP_PID=$soak_pid node_script tests/bench/soak.bench.ts || fail=1

@@ -20,9 +20,9 @@ test.beforeAll(async () => {
   test.setTimeout(240_000);
   pg.start();
   pg.migrate();
-  // server.mjs, as the journeys' own app: a production start is refused without it. Demo mode accepts the private
+  // lib/server/serve.mjs, as the journeys' own app: a production start is refused without it. Demo mode accepts the private
   // cluster's owner role and the local fakes.
-  app = spawn('node', ['server.mjs', '--port', String(e2ePorts.faultApp)], {
+  app = spawn('node', ['lib/server/serve.mjs', '--port', String(e2ePorts.faultApp)], {
     cwd: root,
     stdio: 'ignore',
     env: {

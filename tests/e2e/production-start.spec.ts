@@ -29,11 +29,11 @@ const deployment: Record<string, string> = {
   LOG_LEVEL: 'warn',
 };
 
-/** Starts server.mjs; resolves with its exit code and stderr, or 'listening' once it answers. */
+/** Starts lib/server/serve.mjs; resolves with its exit code and stderr, or 'listening' once it answers. */
 function start(
   env: Record<string, string>,
 ): Promise<{ outcome: number | 'listening'; stderr: string; stop: () => void }> {
-  const child = spawn('node', ['server.mjs', '--port', String(e2ePorts.probe)], {
+  const child = spawn('node', ['lib/server/serve.mjs', '--port', String(e2ePorts.probe)], {
     cwd: root,
     env: env as NodeJS.ProcessEnv,
     stdio: 'pipe',

@@ -4,7 +4,7 @@ import { describe, expect, it, vi } from 'vitest';
 vi.hoisted(() => {
   process.env.RATE_LIMIT_SIGN_IN_PER_MIN = '4';
   process.env.RATE_LIMIT_SIGN_IN_FAILURES = '3';
-  // As under server.mjs: x-dutywise-peer is the socket's address, which a client cannot choose.
+  // As under lib/server/serve.mjs: x-dutywise-peer is the socket's address, which a client cannot choose.
   (globalThis as { __dutywisePeerHeader?: boolean }).__dutywisePeerHeader = true;
 });
 

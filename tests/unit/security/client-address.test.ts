@@ -5,7 +5,7 @@ const marker = globalThis as { __dutywisePeerHeader?: boolean };
 const h = (peer: string, xff?: string) =>
   new Headers({ [PEER_HEADER]: peer, ...(xff ? { 'x-forwarded-for': xff } : {}) });
 
-describe('the client address under server.mjs', () => {
+describe('the client address under lib/server/serve.mjs', () => {
   beforeEach(() => void (marker.__dutywisePeerHeader = true));
   afterEach(() => void delete marker.__dutywisePeerHeader);
 

@@ -3,7 +3,7 @@
 // that name; lib/security/client-address.ts starts from it and believes X-Forwarded-For only hop by hop through
 // TRUSTED_PROXIES. `npm start`, the demo and the browser tests run this; a production start refuses plain
 // `next start`, which cannot tell the client's address from a header the client wrote.
-//   node server.mjs [--port N]        (PORT, default 3000; BIND_ADDRESS, default every interface)
+//   node lib/server/serve.mjs [--port N]        (PORT, default 3000; BIND_ADDRESS, default every interface)
 import { createServer } from 'node:http';
 import { fileURLToPath } from 'node:url';
 import next from 'next';
@@ -18,7 +18,7 @@ process.env.NODE_ENV = 'production';
 globalThis.__dutywisePeerHeader = true;
 const app = next({
   dev: false,
-  dir: fileURLToPath(new URL('.', import.meta.url)),
+  dir: fileURLToPath(new URL('../..', import.meta.url)),
   port,
   hostname: bindAddress ?? 'localhost',
 });
