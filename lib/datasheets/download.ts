@@ -27,6 +27,21 @@ export class DatasheetIntegrityError extends Error {
   }
 }
 
+/**
+ * The stored bytes of an issued document, checked against the SHA-256 recorded when it was issued; missing or
+ * altered bytes are logged and refused (`what` names the document in the message, e.g. "DS26-0501 rev. A").
+ */
+export async function readIssuedBytes(
+  store: BlobStore,
+  stored: { blobKey: string; sha256: string },
+  what: string,
+): Promise<Buffer> {
+  const blob = await store.get(stored.blobKey);
+  if (blob && sha256Hex(blob.bytes) === stored.sha256) return blob.bytes;
+  logger.error({ blobKey: stored.blobKey, found: Boolean(blob), what }, 'issued document bytes missing or altered');
+  throw new DatasheetIntegrityError(`The stored file of ${what} is missing or does not match its recorded SHA-256.`);
+}
+
 /** '<number>-rev<letter>.pdf', the name a download is saved under. */
 export function downloadFileName(number: string, revision: string): string {
   return `${number}-rev${revision}.pdf`;
@@ -62,16 +77,7 @@ export async function getRevisionDownload(
     if (user.accountId !== row.accountId) return { status: 'not-found' };
     if (!(await getEntitlement(row.accountId)).unlocked) return { status: 'locked', message: LOCKED_MESSAGE };
   }
-  const blob = await (opts.store ?? getBlobStore()).get(row.blobKey);
-  if (!blob || sha256Hex(blob.bytes) !== row.sha256) {
-    logger.error(
-      { revisionId: row.id, blobKey: row.blobKey, found: Boolean(blob) },
-      'issued datasheet bytes missing or altered',
-    );
-    throw new DatasheetIntegrityError(
-      `The stored file of ${row.number} rev. ${row.revision} is missing or does not match its recorded SHA-256.`,
-    );
-  }
+  const bytes = await readIssuedBytes(opts.store ?? getBlobStore(), row, `${row.number} rev. ${row.revision}`);
   await db.transaction(async (tx) => {
     await writeAudit(tx, {
       actor: user,
@@ -84,7 +90,7 @@ export async function getRevisionDownload(
   });
   return {
     status: 'ok',
-    bytes: blob.bytes,
+    bytes,
     fileName: downloadFileName(row.number, row.revision),
     sha256: row.sha256,
     number: row.number,

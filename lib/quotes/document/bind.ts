@@ -4,8 +4,8 @@ import { db } from '@/db';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { assertAccountAccess } from '@/lib/auth/guards';
 import { can } from '@/lib/auth/roles';
-import { getBlobStore, sha256Hex, type BlobStore } from '@/lib/blob';
-import { DatasheetIntegrityError } from '@/lib/datasheets/download';
+import { getBlobStore, type BlobStore } from '@/lib/blob';
+import { readIssuedBytes } from '@/lib/datasheets/download';
 import { AppError } from '@/lib/errors';
 import { enforce } from '@/lib/ratelimit/limit';
 import { commitBind, type BeforeBindCommit } from './bind-commit';
@@ -25,12 +25,10 @@ async function datasheetBytes(source: QuoteSource, store: BlobStore): Promise<Ma
   const out = new Map<string, Buffer>();
   for (const l of source.lines) {
     if (!l.datasheet || out.has(l.datasheet.id)) continue;
-    const blob = await store.get(l.datasheet.blobKey);
-    if (!blob || sha256Hex(blob.bytes) !== l.datasheet.sha256)
-      throw new DatasheetIntegrityError(
-        `The stored file of ${l.datasheet.number} rev. ${l.datasheet.revision} is missing or does not match its recorded SHA-256.`,
-      );
-    out.set(l.datasheet.id, blob.bytes);
+    out.set(
+      l.datasheet.id,
+      await readIssuedBytes(store, l.datasheet, `${l.datasheet.number} rev. ${l.datasheet.revision}`),
+    );
   }
   return out;
 }

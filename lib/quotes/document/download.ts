@@ -7,14 +7,13 @@ import { writeAudit } from '@/lib/audit/write';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { can, isStaff } from '@/lib/auth/roles';
 import { getEntitlement } from '@/lib/billing/entitlements';
-import { getBlobStore, sha256Hex, type BlobStore } from '@/lib/blob';
-import { DatasheetIntegrityError } from '@/lib/datasheets/download';
+import { getBlobStore, type BlobStore } from '@/lib/blob';
+import { readIssuedBytes } from '@/lib/datasheets/download';
 import { AppError } from '@/lib/errors';
+import type { PdfDownload } from '@/lib/http/pdf-download';
 
-export type QuoteDocumentDownload =
-  | { status: 'ok'; bytes: Buffer; fileName: string; sha256: string }
-  | { status: 'locked'; message: string }
-  | { status: 'not-found' };
+/** The same outcomes as a datasheet download. */
+export type QuoteDocumentDownload = PdfDownload;
 
 export const QUOTE_PDF_LOCKED_MESSAGE =
   'Quote PDFs carry the datasheets issued to your account, so they unlock with an active subscription. Subscribe on the billing page (/billing) to download them.';
@@ -49,11 +48,7 @@ export async function getQuoteDocumentDownload(
     if (user.accountId !== row.accountId || row.status === 'draft') return { status: 'not-found' };
     if (!(await getEntitlement(row.accountId)).unlocked) return { status: 'locked', message: QUOTE_PDF_LOCKED_MESSAGE };
   }
-  const blob = await (opts.store ?? getBlobStore()).get(row.blobKey);
-  if (!blob || sha256Hex(blob.bytes) !== row.sha256)
-    throw new DatasheetIntegrityError(
-      `The stored file of ${row.number} edition ${row.edition} is missing or does not match its recorded SHA-256.`,
-    );
+  const bytes = await readIssuedBytes(opts.store ?? getBlobStore(), row, `${row.number} edition ${row.edition}`);
   await db.transaction(async (tx) => {
     await writeAudit(tx, {
       actor: user,
@@ -64,5 +59,5 @@ export async function getQuoteDocumentDownload(
       detail: { quote: row.number, edition: row.edition, sha256: row.sha256 },
     });
   });
-  return { status: 'ok', bytes: blob.bytes, fileName: `${row.number}-edition${row.edition}.pdf`, sha256: row.sha256 };
+  return { status: 'ok', bytes, fileName: `${row.number}-edition${row.edition}.pdf`, sha256: row.sha256 };
 }
