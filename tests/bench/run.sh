@@ -94,8 +94,8 @@ fi
 
 if [ "$only" != browser ] && [ "${BENCH_SKIP_SOAK:-0}" != 1 ]; then
   echo "== soak: mixed office load for ${SOAK_SECONDS:-600} s (production build, default limits)"
-  export NEXT_DIST_DIR=.next-bench
-  [ -f .next-bench/BUILD_ID ] || npx next build || exit 1
+  # The build the other sections made, or the last one when the soak runs alone.
+  if [ -f .next-bench/BUILD_ID ]; then export NEXT_DIST_DIR=.next-bench; else build_app; fi
   soak=$((3250 + offset))
   # A fresh server with the deployment's own limits, so memory and connections are the soak's alone.
   DEMO_MODE=on LOG_LEVEL=warn node lib/server/serve.mjs --port "$soak" > .data/bench-soak.log 2>&1 &

@@ -6,6 +6,14 @@ import { BillingPanel } from './_components/billing-panel';
 
 export const metadata: Metadata = { title: 'Subscription' };
 
+/** Why a download link sent the visitor here (`?locked=`), in words. */
+const lockedNotices: Record<string, string> = {
+  datasheet:
+    'That datasheet is locked: datasheets issued to your account download while a subscription is active. Choose a plan below and the link works straight away.',
+  'quote-pdf':
+    'That quote PDF is locked: it carries the datasheets issued to your account, which download while a subscription is active. Choose a plan below and the link works straight away.',
+};
+
 export default async function BillingPage({
   searchParams,
 }: {
@@ -13,6 +21,7 @@ export default async function BillingPage({
 }) {
   const user = await requirePageUser('/billing', 'billing:manage');
   const sp = await searchParams;
+  const lockedNotice = typeof sp.locked === 'string' ? lockedNotices[sp.locked] : undefined;
   const checkout = sp.checkout === 'success' ? 'success' : sp.checkout === 'cancelled' ? 'cancelled' : null;
   const entitlement = user.accountId ? await getEntitlement(user.accountId) : null;
   return (
@@ -22,24 +31,13 @@ export default async function BillingPage({
         A subscription unlocks downloads of every datasheet issued to your account and lets your team run and save
         sizings.
       </p>
-      {sp.locked === 'datasheet' && entitlement && !entitlement.unlocked && (
+      {lockedNotice && entitlement && !entitlement.unlocked && (
         <p
           className="mt-4 rounded-md border border-copper-100 bg-copper-50 p-3 text-sm"
           role="status"
-          data-testid="datasheet-locked"
+          data-testid={`${sp.locked}-locked`}
         >
-          That datasheet is locked: datasheets issued to your account download while a subscription is active. Choose a
-          plan below and the link works straight away.
-        </p>
-      )}
-      {sp.locked === 'quote-pdf' && entitlement && !entitlement.unlocked && (
-        <p
-          className="mt-4 rounded-md border border-copper-100 bg-copper-50 p-3 text-sm"
-          role="status"
-          data-testid="quote-pdf-locked"
-        >
-          That quote PDF is locked: it carries the datasheets issued to your account, which download while a
-          subscription is active. Choose a plan below and the link works straight away.
+          {lockedNotice}
         </p>
       )}
       {entitlement ? (

@@ -59,3 +59,6 @@ export async function listQuoteEditions(user: CurrentUser, quoteId: string): Pro
   await getQuote(user, quoteId);
   return listEditions(db, quoteId);
 }
+
+/** The editions of a quote the caller has already read with `getQuote` (the quote page), without reading it again. */
+export const listEditionsOfReadQuote = (quote: { id: string }): Promise<QuoteEdition[]> => listEditions(db, quote.id);

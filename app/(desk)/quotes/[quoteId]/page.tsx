@@ -5,7 +5,7 @@ import { orNotFound, uuidOrNotFound } from '@/app/_components/route-guards';
 import { requirePageUser } from '@/lib/auth/guards';
 import { can, isStaff } from '@/lib/auth/roles';
 import { downloadAccess } from '@/lib/datasheets/queries';
-import { listQuoteEditions } from '@/lib/quotes/document/editions';
+import { listEditionsOfReadQuote } from '@/lib/quotes/document/editions';
 import { getQuote } from '@/lib/quotes/queries';
 import type { QuoteStatus } from '@/db/schema/enums';
 import { listSizings } from '@/lib/sizings/queries';
@@ -27,7 +27,7 @@ export default async function QuotePage({ params }: { params: Promise<{ quoteId:
   const quote = await orNotFound(getQuote(user, quoteId));
   const mayManage = can(user.role, 'quote:manage');
   const editable = mayManage && quote.status === 'draft';
-  const [editions, access] = await Promise.all([listQuoteEditions(user, quoteId), downloadAccess(user)]);
+  const [editions, access] = await Promise.all([listEditionsOfReadQuote(quote), downloadAccess(user)]);
   const onQuote = new Set(quote.lines.map((l) => l.sizingId));
   const addable = editable
     ? (await listSizings(user, { accountId: quote.accountId, limit: 500 }))
