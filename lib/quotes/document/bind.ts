@@ -74,12 +74,11 @@ export async function bindQuoteDocument(
     const boundAt = new Date();
     const cover = await renderCoverPdf(coverModel(source, edition, boundAt, pageCounts), boundAt);
     const order = source.lines.flatMap((l) => (l.datasheet ? [sheets.get(l.datasheet.id)!] : []));
-    const bytes = await bindPdfs(cover, order, {
+    const { bytes, pageCount } = await bindPdfs(cover, order, {
       title: `${source.number} Edition ${edition} ${source.title}`,
       subject: `Quote for ${source.accountName}`,
       boundAt,
     });
-    const pageCount = await pdfPageCount(bytes);
     const out = await commitBind(
       { user, source, contentKey, edition, pageCount, boundAt },
       bytes,

@@ -9,12 +9,13 @@ export async function pdfPageCount(bytes: Uint8Array): Promise<number> {
 /**
  * One PDF: the cover's pages, then every page of each datasheet in the order given. Pages are copied object for object
  * from the stored bytes, so each datasheet reads exactly as it was issued (its own running head, footer and page numbers).
+ * Returns the bytes with their page count, so nothing parses them again to count.
  */
 export async function bindPdfs(
   cover: Uint8Array,
   datasheets: Uint8Array[],
   meta: { title: string; subject: string; boundAt: Date },
-): Promise<Buffer> {
+): Promise<{ bytes: Buffer; pageCount: number }> {
   const out = await PDFDocument.create({ updateMetadata: false });
   for (const part of [cover, ...datasheets]) {
     const src = await PDFDocument.load(part, { updateMetadata: false });
@@ -28,5 +29,5 @@ export async function bindPdfs(
   out.setProducer('Dutywise');
   out.setCreationDate(meta.boundAt);
   out.setModificationDate(meta.boundAt);
-  return Buffer.from(await out.save());
+  return { bytes: Buffer.from(await out.save()), pageCount: out.getPageCount() };
 }
