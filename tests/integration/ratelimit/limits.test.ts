@@ -19,7 +19,9 @@ const body = heaterJson({
   pressure: { value: 101.325, unit: 'kPa' },
   outletC: 80,
 });
-const addr = () => `198.51.100.${Math.floor(Math.random() * 250) + 1}`;
+// A new address on every call: a random pick could land on one an earlier test used up (refused with 429).
+let addrs = Math.floor(Math.random() * 250);
+const addr = () => `198.51.100.${(addrs++ % 250) + 1}`;
 const calc = (ip: string, post = calculatePost, spoofed = `203.0.113.${Math.floor(Math.random() * 250)}`) =>
   post(
     new Request('http://localhost/api/v1/calculate', {

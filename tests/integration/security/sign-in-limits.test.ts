@@ -13,7 +13,14 @@ import { POST as signIn } from '@/app/api/auth/sign-in/route';
 import { hashPassword } from '@/lib/auth/local/passwords';
 import { makeUser } from '../helpers/fixtures';
 
-const peer = () => `192.0.2.${Math.floor(Math.random() * 250) + 1}`;
+// Every call gets an address no other call in this file has: a random pick could land on the address the first
+// test used up, and that attempt would be refused as rate limited. 198.18.0.0/15 is reserved for benchmarking
+// (RFC 2544), whose upper half (198.19) no other test file uses.
+let peers = Math.floor(Math.random() * 60_000);
+const peer = () => {
+  peers += 1;
+  return `198.19.${(peers >> 8) & 255}.${peers & 255}`;
+};
 const spoof = () =>
   `${Math.floor(Math.random() * 223) + 1}.${Math.floor(Math.random() * 255)}.0.${Math.floor(Math.random() * 255)}`;
 
