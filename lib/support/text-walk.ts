@@ -1,6 +1,6 @@
 import 'server-only';
 import { sql, type SQL } from 'drizzle-orm';
-import type { Tx } from '@/db';
+import type { Queryable } from '@/db';
 import { allOf } from './filters';
 import { orderOf, type SortSpec } from './keyset';
 
@@ -26,16 +26,29 @@ export function secondWindowSize(missing: number, density: number): number | nul
 
 type Walk = { examined: number; found: number; ids: string[]; lastKey: string; lastId: string };
 
-/** Reads `rows` sizings in sort order after `after` and tests each against the text and filters. */
-async function walk(tx: Tx, q: SQL, filters: SQL[], sort: SortSpec, after: SQL | null, rows: number, want: number) {
-  const res = await tx.execute<Walk>(sql`
+/**
+ * Reads `rows` sizings in sort order after `after` and tests each against the text and filters, in one pass
+ * over them: the rows arrive in index order and are numbered as they come, so nothing is sorted again but
+ * the hits that are kept.
+ */
+async function walk(
+  conn: Queryable,
+  q: SQL,
+  filters: SQL[],
+  sort: SortSpec,
+  after: SQL | null,
+  rows: number,
+  want: number,
+) {
+  const res = await conn.execute<Walk>(sql`
     with w as (
-      select s.id, ${sort.key} as k, ${sort.keyText} as key_text, (s.search_vector @@ ${q} and ${allOf(filters)}) as hit
+      select s.id, ${sort.key} as k, (s.search_vector @@ ${q} and ${allOf(filters)}) as hit,
+        row_number() over (order by ${orderOf(sort)}) as rn
       from sizings s where ${allOf([after])} order by ${orderOf(sort)} limit ${rows})
-    select (select count(*) from w)::int as examined, (select count(*) from w where hit)::int as found,
-      array(select id from w where hit order by ${orderOf(sort, 'w')} limit ${want}) as ids,
-      (select key_text from w order by ${orderOf(sort, 'w')} offset ${rows - 1} limit 1) as "lastKey",
-      (select id from w order by ${orderOf(sort, 'w')} offset ${rows - 1} limit 1) as "lastId"`);
+    select count(*)::int as examined, count(*) filter (where hit)::int as found,
+      coalesce((array_agg(id order by rn) filter (where hit))[1:${want}], '{}') as ids,
+      max(k::text) filter (where rn = ${rows}) as "lastKey", max(id::text) filter (where rn = ${rows}) as "lastId"
+    from w`);
   return res.rows[0]!;
 }
 
@@ -51,7 +64,7 @@ const pastRow = (sort: SortSpec, w: Walk) =>
  * does it ask the text index for the matches beyond, and then there are few of them. The work stays bounded.
  */
 export async function textMatches(
-  tx: Tx,
+  conn: Queryable,
   textQuery: string,
   filters: SQL[],
   sort: SortSpec,
@@ -61,20 +74,20 @@ export async function textMatches(
 ): Promise<TextMatches> {
   const q = sql`to_tsquery('simple', ${textQuery})`;
   const windowRows = windowSize(tableRows, want);
-  const first = await walk(tx, q, filters, sort, after, windowRows, want);
+  const first = await walk(conn, q, filters, sort, after, windowRows, want);
   const density = first.examined ? first.found / first.examined : null;
   if (first.found >= want || first.examined < windowRows) return { ids: first.ids, density };
   let ids = first.ids;
   let last = first;
   const second = secondWindowSize(want - first.found, density ?? 0);
   if (second !== null) {
-    const more = await walk(tx, q, filters, sort, allOf([after, pastRow(sort, first)]), second, want - first.found);
+    const more = await walk(conn, q, filters, sort, allOf([after, pastRow(sort, first)]), second, want - first.found);
     ids = [...ids, ...more.ids];
     if (ids.length >= want || more.examined < second) return { ids, density };
     last = more;
   }
   // Beyond the windows: every remaining match, found through the text index (and any filter index).
-  const rest = await tx.execute<{ id: string }>(sql`
+  const rest = await conn.execute<{ id: string }>(sql`
     with m as materialized (
       select s.id, ${sort.key} as k from sizings s
       where ${allOf([sql`s.search_vector @@ ${q}`, ...filters, after, pastRow(sort, last)])})
