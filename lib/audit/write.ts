@@ -1,5 +1,5 @@
 import 'server-only';
-import type { Tx } from '@/db';
+import type { Db, Tx } from '@/db';
 import { auditLog } from '@/db/schema';
 
 export type AuditInput = {
@@ -11,8 +11,11 @@ export type AuditInput = {
   detail?: Record<string, unknown>;
 };
 
-/** Records an audit entry inside the caller's transaction, so the change and its record commit together. */
-export async function writeAudit(tx: Tx, entry: AuditInput): Promise<void> {
+/**
+ * Records an audit entry inside the caller's transaction, so the change and its record commit together; a
+ * look-up that changes nothing passes the pool itself.
+ */
+export async function writeAudit(tx: Tx | Db, entry: AuditInput): Promise<void> {
   await tx.insert(auditLog).values({
     actorUserId: entry.actor?.id ?? null,
     actorRole: entry.actor?.role ?? null,

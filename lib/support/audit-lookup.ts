@@ -12,5 +12,6 @@ export async function auditLookup(
   detail: Record<string, unknown>,
   accountId?: string | null,
 ) {
-  await db.transaction((tx) => writeAudit(tx, { actor: user, action, entityType, entityId, accountId, detail }));
+  // One insert is atomic on its own: no transaction round trips around it.
+  await writeAudit(db, { actor: user, action, entityType, entityId, accountId, detail });
 }

@@ -1,6 +1,6 @@
 import 'server-only';
 import { sql, type SQL } from 'drizzle-orm';
-import type { Tx } from '@/db';
+import type { Queryable } from '@/db';
 import type { Branch } from './branches';
 import { allOf } from './filters';
 
@@ -30,16 +30,21 @@ function matchingIds(branches: Branch[] | null, filters: SQL[]): SQL {
  * How many sizings match: exact up to EXACT_COUNT_UP_TO, otherwise PostgreSQL's own estimate from its
  * planner statistics (the rows EXPLAIN expects), which costs a plan and no scan, or `floor` if that is higher.
  */
-export async function countMatches(tx: Tx, branches: Branch[] | null, filters: SQL[], floor = 0): Promise<MatchCount> {
+export async function countMatches(
+  conn: Queryable,
+  branches: Branch[] | null,
+  filters: SQL[],
+  floor = 0,
+): Promise<MatchCount> {
   const ids = matchingIds(branches, filters);
-  const plan = await tx.execute<{ 'QUERY PLAN': [{ Plan: { 'Plan Rows': number } }] }>(
+  const plan = await conn.execute<{ 'QUERY PLAN': [{ Plan: { 'Plan Rows': number } }] }>(
     sql`explain (format json) ${ids}`,
   );
   // The planner multiplies word frequencies as if words were unrelated; a sample says otherwise.
   const estimate = Math.max(plan.rows[0]?.['QUERY PLAN'][0].Plan['Plan Rows'] ?? 0, floor);
   if (estimate > TRUST_ESTIMATE_ABOVE) return { total: roundAbout(estimate), estimated: true };
   // A sizing matched by two branches appears twice in the union; count each once.
-  const res = await tx.execute<{ n: number; raw: number }>(
+  const res = await conn.execute<{ n: number; raw: number }>(
     sql`select count(distinct id)::int as n, count(*)::int as raw from (${ids} limit ${EXACT_COUNT_UP_TO + 1}) t`,
   );
   const { n, raw } = res.rows[0] ?? { n: 0, raw: 0 };

@@ -1,6 +1,6 @@
 import 'server-only';
 import { sql } from 'drizzle-orm';
-import type { Tx } from '@/db';
+import type { Queryable } from '@/db';
 import { escapeLike } from './terms';
 
 /** Beyond this many matching customers the text is too vague to page customer by customer. */
@@ -11,11 +11,11 @@ export const PER_CUSTOMER_UP_TO = 200;
  * before the sizings: PostgreSQL cannot know how many sizings an unknown set of customers has, and guessing
  * high makes it read every sizing newest first in search of ones that do not exist.
  */
-export async function customersNamed(tx: Tx, text: string, close: boolean): Promise<string[]> {
+export async function customersNamed(conn: Queryable, text: string, close: boolean): Promise<string[]> {
   const match = close
     ? sql`${text} <% a.name and not a.name ilike ${`%${escapeLike(text)}%`}`
     : sql`a.name ilike ${text.length >= 3 ? `%${escapeLike(text)}%` : `${escapeLike(text)}%`}`;
-  const res = await tx.execute<{ id: string }>(
+  const res = await conn.execute<{ id: string }>(
     sql`select a.id from accounts a where ${match} limit ${PER_CUSTOMER_UP_TO + 1}`,
   );
   return res.rows.map((r) => r.id);

@@ -1,6 +1,6 @@
 import 'server-only';
 import { sql } from 'drizzle-orm';
-import type { Tx } from '@/db';
+import type { Db, Queryable } from '@/db';
 import { escapeLike, type LookupTerms } from './terms';
 
 // Close spellings tried for a word no sizing uses; trigram similarity above the transaction's threshold.
@@ -16,13 +16,13 @@ const EXPAND_PREFIX_UP_TO = 8;
  * begins none is replaced by the closest words in use (`regeneraton` becomes regeneration | regenerator).
  * Checked against the short word list in one round trip, so a misspelt title costs no scan of the sizings.
  */
-export async function textSearchQuery(tx: Tx, terms: LookupTerms): Promise<string | null> {
+export async function textSearchQuery(conn: Queryable, terms: LookupTerms): Promise<string | null> {
   if (!terms.words.length) return null;
   const rows = sql.join(
     terms.words.map((w, i) => sql`(${i}::int, ${w}::text, ${`${escapeLike(w)}%`}::text)`),
     sql`, `,
   );
-  const res = await tx.execute<{ i: number; begun: string[]; near: string[] | null }>(sql`
+  const res = await conn.execute<{ i: number; begun: string[]; near: string[] | null }>(sql`
     select v.i, b.begun,
       case when cardinality(b.begun) = 0 and length(v.w) >= 3 then array(
         select word from search_words where word % v.w order by similarity(word, v.w) desc, word limit ${CORRECTIONS_PER_WORD}
@@ -42,19 +42,26 @@ export async function textSearchQuery(tx: Tx, terms: LookupTerms): Promise<strin
   return [...parts, ...terms.numbers].join(' & ');
 }
 
-// Tags whose spelling is closest to the text: a strict threshold first, a looser one when that finds few.
+// Tags whose spelling is closest to the text: those at least STRICT alike when there are a few of them,
+// otherwise down to the connection's floor (TRIGRAM_SIMILARITY in db/index.ts).
 const CLOSE_TAGS = 20;
-const TAG_THRESHOLDS = ['0.5', '0.4'];
+const STRICT = '0.5';
+const ENOUGH_STRICT = 3;
 
-/** The tags in use spelt most like the text, best first; searched in the narrow tag list, not in the sizings. */
-export async function closeTags(tx: Tx, text: string): Promise<string[]> {
-  let tags: string[] = [];
-  for (const threshold of TAG_THRESHOLDS) {
-    await tx.execute(sql`select set_config('pg_trgm.similarity_threshold', ${threshold}, true)`);
-    const res = await tx.execute<{ tag: string }>(sql`
-      select tag from search_tags where tag % ${text} order by similarity(tag, ${text}) desc, tag limit ${CLOSE_TAGS}`);
-    tags = res.rows.map((r) => r.tag);
-    if (tags.length >= 3) break;
-  }
-  return tags;
+const closestTags = (conn: Queryable, text: string) =>
+  conn.execute<{ tag: string }>(sql`
+    select tag from search_tags where tag % ${text} order by similarity(tag, ${text}) desc, tag limit ${CLOSE_TAGS}`);
+
+/**
+ * The tags in use spelt most like the text, best first; searched in the narrow tag list, not in the sizings.
+ * The strict pass sets its own floor for `%`, which its trigram index then serves: on half a million tags,
+ * filtering the floor's matches afterwards would recheck ten times as many.
+ */
+export async function closeTags(conn: Queryable & Pick<Db, 'transaction'>, text: string): Promise<string[]> {
+  const strict = await conn.transaction(async (tx) => {
+    await tx.execute(sql`select set_config('pg_trgm.similarity_threshold', ${STRICT}, true)`);
+    return closestTags(tx, text);
+  });
+  if (strict.rows.length >= ENOUGH_STRICT) return strict.rows.map((r) => r.tag);
+  return (await closestTags(conn, text)).rows.map((r) => r.tag);
 }

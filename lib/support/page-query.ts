@@ -1,6 +1,6 @@
 import 'server-only';
 import { sql, type SQL } from 'drizzle-orm';
-import type { Tx } from '@/db';
+import type { Queryable } from '@/db';
 import type { Branch } from './branches';
 import { allOf, idArray } from './filters';
 import { afterCondition, orderOf, type Cursor, type SortSpec } from './keyset';
@@ -49,7 +49,7 @@ const perAccount = (ids: string[]) => sql`unnest(${idArray(ids)}) as acct(id)`;
  * its own index; the union of those holds the overall first `limit`. No text (`branches` null): filters only.
  */
 export async function keyedPage(
-  tx: Tx,
+  conn: Queryable,
   branches: Branch[] | null,
   filters: SQL[],
   sort: SortSpec,
@@ -70,14 +70,14 @@ export async function keyedPage(
   const hits = branches
     ? sql`select id, k from (${sql.join(branches.map(one), sql` union `)}) u order by ${orderOf(sort, 'u')} limit ${limit}`
     : one(null);
-  const res = await tx.execute<Row>(sql`with h as (${hits})
+  const res = await conn.execute<Row>(sql`with h as (${hits})
     select ${columns}, ${sort.keyText} as "sortKey" from h ${joins} order by ${orderOf(sort, 'h')}`);
   return split(res.rows);
 }
 
 /** Up to `limit` rows from `offset` in relevance order: each branch's newest matches, scored, best first. */
 export async function relevancePage(
-  tx: Tx,
+  conn: Queryable,
   branches: Branch[],
   filters: SQL[],
   offset: number,
@@ -94,7 +94,7 @@ export async function relevancePage(
           order by x.created_at desc, x.id desc limit ${RELEVANCE_POOL})`
         : sql`(${pool(b, b.where)})`,
   );
-  const res = await tx.execute<Row>(sql`with h as (
+  const res = await conn.execute<Row>(sql`with h as (
       select id, max(score) as score, max(created_at) as created_at from (${sql.join(pools, sql` union all `)}) p
       group by id order by score desc, created_at desc, id desc limit ${limit} offset ${offset})
     select ${columns}, '' as "sortKey" from h ${joins} order by h.score desc, h.created_at desc, h.id desc`);

@@ -1,6 +1,6 @@
 import 'server-only';
 import { sql, type SQL } from 'drizzle-orm';
-import { db, type Tx } from '@/db';
+import { db, type Queryable } from '@/db';
 import type { CurrentUser } from '@/lib/auth/current-user';
 import { accountScope } from '@/lib/auth/guards';
 import { closeBranches, exactBranches, type Branch } from './branches';
@@ -11,7 +11,7 @@ import { afterCondition, decodeCursor, encodeCursor, SORTS, type Cursor, type So
 import { closeTags, textSearchQuery } from './lexicon';
 import { keyedPage, RELEVANCE_POOL, relevancePage, type SupportHit } from './page-query';
 import type { SupportSearch } from './schema';
-import { parseLookupText } from './terms';
+import { parseLookupText, type LookupTerms } from './terms';
 import { textMatches } from './text-walk';
 import { effectiveSort, paddedDocumentNumber } from './numbers';
 import { lookupScope } from './scope';
@@ -45,28 +45,41 @@ type Plan = {
   floor: number;
 };
 
-async function exactMatches(tx: Tx, q: string): Promise<Branch[]> {
-  const terms = parseLookupText(q);
-  return exactBranches(terms, await textSearchQuery(tx, terms), await customersNamed(tx, terms.text, false));
+async function exactMatches(terms: LookupTerms): Promise<Branch[]> {
+  const [textQuery, customers] = await Promise.all([textSearchQuery(db, terms), customersNamed(db, terms.text, false)]);
+  return exactBranches(terms, textQuery, customers);
 }
 
-async function closeMatches(tx: Tx, q: string): Promise<Branch[]> {
-  const terms = parseLookupText(q);
-  return closeBranches(terms, await closeTags(tx, terms.text), await customersNamed(tx, terms.text, true));
+async function closeMatches(terms: LookupTerms): Promise<Branch[]> {
+  const [tags, customers] = await Promise.all([closeTags(db, terms.text), customersNamed(db, terms.text, true)]);
+  return closeBranches(terms, tags, customers);
 }
 
-async function fetchRows(tx: Tx, p: Plan, limit: number) {
+// The planner's row count of sizings sizes the text walk's windows and scales "about N"; it moves slowly, so
+// one read a minute serves every look-up.
+const TABLE_ROWS_FOR_MS = 60_000;
+let tableRowsRead: { rows: number; at: number } | null = null;
+async function sizingsRowEstimate(conn: Queryable): Promise<number> {
+  if (tableRowsRead && Date.now() - tableRowsRead.at < TABLE_ROWS_FOR_MS) return tableRowsRead.rows;
+  const res = await conn.execute<{ rows: number }>(
+    sql`select greatest(reltuples, 0)::float8 as rows from pg_class where oid = 'sizings'::regclass`,
+  );
+  tableRowsRead = { rows: res.rows[0]?.rows ?? 0, at: Date.now() };
+  return tableRowsRead.rows;
+}
+
+async function fetchRows(conn: Queryable, p: Plan, limit: number) {
   const sort = p.sort ?? SORTS.newest;
   for (const b of p.branches ?? []) {
     if (!b.textQuery || b.ids) continue;
     const want = p.sort ? limit : RELEVANCE_POOL;
     const after = p.sort ? afterCondition(sort, p.cursor) : null;
-    const m = await textMatches(tx, b.textQuery, p.filters, sort, after, want, p.tableRows);
+    const m = await textMatches(conn, b.textQuery, p.filters, sort, after, want, p.tableRows);
     b.ids = m.ids;
     if (m.density !== null) p.floor = Math.max(p.floor, m.density * p.tableRows);
   }
-  if (p.sort) return keyedPage(tx, p.branches, p.filters, p.sort, p.cursor, limit);
-  return relevancePage(tx, p.branches ?? [], p.filters, p.cursor.offset ?? 0, limit);
+  if (p.sort) return keyedPage(conn, p.branches, p.filters, p.sort, p.cursor, limit);
+  return relevancePage(conn, p.branches ?? [], p.filters, p.cursor.offset ?? 0, limit);
 }
 
 /**
@@ -76,57 +89,55 @@ async function fetchRows(tx: Tx, p: Plan, limit: number) {
  * spellings of tags and customers are tried as well. Scoped by `accountScope(user)`.
  */
 export async function searchSizings(user: CurrentUser, f: SupportSearch): Promise<SupportResults> {
-  return db.transaction(async (tx) => {
-    // Trigram threshold for correcting words (tags set their own); no JIT, which costs short queries more
-    // than it saves.
-    const setup = await tx.execute<{ rows: number }>(sql`select set_config('pg_trgm.similarity_threshold', '0.4', true),
-      set_config('pg_trgm.word_similarity_threshold', '0.6', true), set_config('jit', 'off', true),
-      (select greatest(reltuples, 0)::float8 from pg_class where oid = 'sizings'::regclass) as rows`);
-    // No sort chosen: best match while text is typed, newest otherwise. A short document number ("DS26-501")
-    // is looked up as its padded form.
-    const chosen = effectiveSort(f.sort, f.q);
-    const sort = chosen === 'relevance' ? (f.q ? null : SORTS.newest) : SORTS[chosen];
-    if (f.q) f = { ...f, q: paddedDocumentNumber(f.q) ?? f.q };
-    const cursor = decodeCursor(f.cursor, sort);
-    const first = !cursor.after && !cursor.offset;
-    const filters = filterConditions(accountScope(user), f);
-    // Sales engineers look across their own customers only.
-    const mine = lookupScope(user);
-    if (mine) filters.push(mine);
-    const tableRows = setup.rows[0]?.rows ?? 0;
-    const p: Plan = { branches: null, filters, sort, cursor, close: false, tableRows, floor: 0 };
-    if (f.q) {
-      p.close = cursor.close === true;
-      p.branches = await exactMatches(tx, f.q);
-      if (p.close) p.branches.push(...(await closeMatches(tx, f.q)));
-    }
-    let rows = await fetchRows(tx, p, f.pageSize + 1);
-    if (f.q && first && !p.close && rows.length < CLOSE_BELOW && f.q.trim().length >= 3) {
-      p.close = true;
-      p.branches = [...(p.branches ?? []), ...(await closeMatches(tx, f.q))];
-      rows = await fetchRows(tx, p, f.pageSize + 1);
-    }
-    const more = rows.length > f.pageSize;
-    const page = rows.slice(0, f.pageSize);
-    const last = page.at(-1);
-    const next: Cursor | null =
-      !more || !last
-        ? null
-        : sort
-          ? { after: { key: last.sortKey, id: last.hit.id }, close: p.close }
-          : { offset: (cursor.offset ?? 0) + f.pageSize, close: p.close };
-    const count =
-      first && !more
-        ? { total: page.length, estimated: false }
-        : await countMatches(tx, p.branches, p.filters, p.floor);
-    return {
-      hits: page.map((r) => r.hit),
-      total: count.total,
-      totalIsEstimate: count.estimated,
-      closeMatches: p.close,
-      nextCursor: next ? encodeCursor(next) : null,
-      page: f.page,
-      pageSize: f.pageSize,
-    };
-  });
+  // Read-only, so no transaction: each statement reads its own snapshot, and the page and its count may
+  // differ by a sizing saved in between. The session settings it relies on (trigram floors, no JIT) are the
+  // connection's own (db/index.ts).
+  // No sort chosen: best match while text is typed, newest otherwise. A short document number ("DS26-501")
+  // is looked up as its padded form.
+  const chosen = effectiveSort(f.sort, f.q);
+  const sort = chosen === 'relevance' ? (f.q ? null : SORTS.newest) : SORTS[chosen];
+  if (f.q) f = { ...f, q: paddedDocumentNumber(f.q) ?? f.q };
+  const cursor = decodeCursor(f.cursor, sort);
+  const first = !cursor.after && !cursor.offset;
+  const filters = filterConditions(accountScope(user), f);
+  // Sales engineers look across their own customers only.
+  const mine = lookupScope(user);
+  if (mine) filters.push(mine);
+  const terms = f.q ? parseLookupText(f.q) : null;
+  const tableRows = terms?.words.length ? await sizingsRowEstimate(db) : 0;
+  const p: Plan = { branches: null, filters, sort, cursor, close: false, tableRows, floor: 0 };
+  if (terms) {
+    p.close = cursor.close === true;
+    p.branches = await exactMatches(terms);
+    if (p.close) p.branches.push(...(await closeMatches(terms)));
+  }
+  let rows = await fetchRows(db, p, f.pageSize + 1);
+  // Close spellings when the text as typed found almost nothing; a document number that found its record
+  // is an answer, not a near miss.
+  const numberFound = terms?.numberPrefix && rows.length > 0;
+  if (terms && first && !p.close && !numberFound && rows.length < CLOSE_BELOW && terms.text.length >= 3) {
+    p.close = true;
+    p.branches = [...(p.branches ?? []), ...(await closeMatches(terms))];
+    rows = await fetchRows(db, p, f.pageSize + 1);
+  }
+  const more = rows.length > f.pageSize;
+  const page = rows.slice(0, f.pageSize);
+  const last = page.at(-1);
+  const next: Cursor | null =
+    !more || !last
+      ? null
+      : sort
+        ? { after: { key: last.sortKey, id: last.hit.id }, close: p.close }
+        : { offset: (cursor.offset ?? 0) + f.pageSize, close: p.close };
+  const count =
+    first && !more ? { total: page.length, estimated: false } : await countMatches(db, p.branches, p.filters, p.floor);
+  return {
+    hits: page.map((r) => r.hit),
+    total: count.total,
+    totalIsEstimate: count.estimated,
+    closeMatches: p.close,
+    nextCursor: next ? encodeCursor(next) : null,
+    page: f.page,
+    pageSize: f.pageSize,
+  };
 }

@@ -49,7 +49,10 @@ describe('support look-up by text', () => {
       .values({ number: qn, accountId: acct.id, title: `Quote ${word()}` })
       .returning();
     await db.insert(quoteItems).values({ quoteId: quote!.id, sizingId: c });
-    expect(await ids(support, q({ q: sn.toLowerCase() }))).toEqual([a]);
+    const bySizingNumber = await searchSizings(support, q({ q: sn.toLowerCase() }));
+    expect(bySizingNumber.hits.map((h) => h.id)).toEqual([a]);
+    // A number that found its record is the answer: no close spellings of tags or customers are mixed in.
+    expect(bySizingNumber.closeMatches).toBe(false);
     expect(await ids(support, q({ q: ds.slice(0, -2) }))).toContain(b);
     expect(await ids(support, q({ q: qn }))).toEqual([c]);
   });
