@@ -3,7 +3,7 @@ import { getTableName } from 'drizzle-orm';
 import { pool } from '@/db';
 import { rateLimitCounters } from '@/db/schema';
 import { logger } from '@/lib/log/logger';
-import { GroupedSpender } from './grouped-spend';
+import { groupedSpender } from './grouped-spend';
 
 // One budget per caller of the calculate API: a signed-in person, an API key, or (anonymous) a client address.
 // The counters are shared by every instance (lib/ratelimit/grouped-spend.ts), spent in grouped round trips:
@@ -20,7 +20,7 @@ const scopeWords: Record<LimitScope, string> = {
   address: 'per client address',
 };
 
-const spender = new GroupedSpender(pool, getTableName(rateLimitCounters));
+const spend = groupedSpender(pool, getTableName(rateLimitCounters));
 
 // A caller over its limit is refused in memory until its window ends, so a flood costs no database writes.
 const MAX_BLOCKED = 10_000;
@@ -61,7 +61,7 @@ export async function spendCallerBudget(budget: CallerBudget): Promise<LimitOutc
   const until = refusedInMemory(key, budget.perMinute, Date.now());
   if (until !== null) return decision(budget.perMinute + 1, until);
   try {
-    const spent = await spender.spend(key, 1, WINDOW_S * 1000);
+    const spent = await spend(key, 1, WINDOW_S * 1000);
     if (spent.consumed > budget.perMinute) remember(key, spent.expire, budget.perMinute);
     return decision(spent.consumed, spent.expire);
   } catch (err) {

@@ -1,12 +1,12 @@
 import 'server-only';
 import type { Pool } from 'pg';
+import { groupWhileBusy } from '@/db/grouped';
 
-// Spends rate-limit points in shared round trips ("group commit"). The first spend goes out at once; while a
-// statement is on its way, every further spend (of any key) waits for it and then goes out with the others in
-// one upsert. A lone request pays what a single upsert costs; fifty at once pay for about two statements,
-// not fifty. The counters are the same rows of the same table that rate-limiter-flexible's PostgreSQL store
-// keeps (key, points, expire in epoch ms; a window starts at the first point spent and resets once expired),
-// so every instance of the app shares them and sees the others' counts.
+// Spends rate-limit points in shared round trips (db/grouped.ts): the spends that arrive while an upsert is on
+// its way go out together in the next one, one row per key. The counters are the same rows of the same table
+// that rate-limiter-flexible's PostgreSQL store keeps (key, points, expire in epoch ms; a window starts at the
+// first point spent and resets once expired), so every instance of the app shares them and sees the others'
+// counts.
 
 export type Spent = {
   /** The key's points in its window once this spend is counted (earlier spends in the same batch included). */
@@ -15,71 +15,44 @@ export type Spent = {
   expire: number;
 };
 
-type Waiter = { points: number; resolve: (s: Spent) => void; reject: (e: unknown) => void };
-type Pending = { durationMs: number; waiters: Waiter[] };
+type Spend = { key: string; points: number; durationMs: number };
 
-export class GroupedSpender {
-  private pending = new Map<string, Pending>();
-  private inFlight = false;
+/** A spender over `table` on `pool`: `spend(key, points, durationMs)` adds to the key's counter. */
+export function groupedSpender(pool: Pool, table: string) {
+  const text = `insert into ${table} (key, points, expire)
+      select * from unnest($1::varchar[], $2::int[], $3::bigint[])
+    on conflict (key) do update set
+      points = case when ${table}.expire <= $4 then excluded.points else ${table}.points + excluded.points end,
+      expire = case when ${table}.expire <= $4 then excluded.expire else ${table}.expire end
+    returning key, points, expire`;
 
-  constructor(
-    private readonly pool: Pool,
-    private readonly table: string,
-  ) {}
-
-  /** Adds `points` to `key`'s counter (a new window of `durationMs` when none is open). */
-  spend(key: string, points: number, durationMs: number): Promise<Spent> {
-    return new Promise<Spent>((resolve, reject) => {
-      const entry = this.pending.get(key) ?? { durationMs, waiters: [] };
-      entry.waiters.push({ points, resolve, reject });
-      this.pending.set(key, entry);
-      if (!this.inFlight) this.flush();
-    });
-  }
-
-  private flush(): void {
-    if (!this.pending.size) return;
-    const batch = this.pending;
-    this.pending = new Map();
-    this.inFlight = true;
-    const keys = [...batch.keys()];
+  const run = async (spends: Spend[]): Promise<Spent[]> => {
     const now = Date.now();
-    const sums = keys.map((k) => batch.get(k)!.waiters.reduce((n, w) => n + w.points, 0));
-    const expires = keys.map((k) => now + batch.get(k)!.durationMs);
-    const t = this.table;
-    this.pool
-      .query<{ key: string; points: number; expire: string }>({
-        name: `grouped-spend-${t}`,
-        text: `insert into ${t} (key, points, expire)
-            select * from unnest($1::varchar[], $2::int[], $3::bigint[])
-          on conflict (key) do update set
-            points = case when ${t}.expire <= $4 then excluded.points else ${t}.points + excluded.points end,
-            expire = case when ${t}.expire <= $4 then excluded.expire else ${t}.expire end
-          returning key, points, expire`,
-        values: [keys, sums, expires, now],
-      })
-      .then(
-        (res) => {
-          for (const row of res.rows) {
-            const { waiters } = batch.get(row.key)!;
-            // The batch's points were added together; hand them out in the order they were asked for.
-            let consumed = row.points - waiters.reduce((n, w) => n + w.points, 0);
-            for (const w of waiters) {
-              consumed += w.points;
-              w.resolve({ consumed, expire: Number(row.expire) });
-            }
-            batch.delete(row.key);
-          }
-          for (const { waiters } of batch.values())
-            for (const w of waiters) w.reject(new Error('rate-limit counter missing from the upsert'));
-        },
-        (err) => {
-          for (const { waiters } of batch.values()) for (const w of waiters) w.reject(err);
-        },
-      )
-      .finally(() => {
-        this.inFlight = false;
-        this.flush();
-      });
-  }
+    // One row per key (an upsert may not touch a row twice): the points of its spends added up.
+    const perKey = new Map<string, { points: number; expire: number }>();
+    for (const s of spends) {
+      const k = perKey.get(s.key) ?? { points: 0, expire: now + s.durationMs };
+      k.points += s.points;
+      perKey.set(s.key, k);
+    }
+    const keys = [...perKey.keys()];
+    const res = await pool.query<{ key: string; points: number; expire: string }>({
+      name: `grouped-spend-${table}`,
+      text,
+      values: [keys, keys.map((k) => perKey.get(k)!.points), keys.map((k) => perKey.get(k)!.expire), now],
+    });
+    // Each key's new total less what this batch added is where its spends start counting from, in call order.
+    const running = new Map(
+      res.rows.map((r) => [r.key, { at: r.points - perKey.get(r.key)!.points, expire: r.expire }]),
+    );
+    return spends.map((s) => {
+      const r = running.get(s.key);
+      if (!r) throw new Error('rate-limit counter missing from the upsert');
+      r.at += s.points;
+      return { consumed: r.at, expire: Number(r.expire) };
+    });
+  };
+
+  const spendOne = groupWhileBusy(run);
+  return (key: string, points: number, durationMs: number) => spendOne({ key, points, durationMs });
 }

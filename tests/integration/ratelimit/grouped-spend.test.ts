@@ -10,7 +10,7 @@ import { eq, getTableName } from 'drizzle-orm';
 import { POST as calculatePost } from '@/app/api/v1/calculate/route';
 import { db, pool } from '@/db';
 import { rateLimitCounters } from '@/db/schema';
-import { GroupedSpender } from '@/lib/ratelimit/grouped-spend';
+import { groupedSpender } from '@/lib/ratelimit/grouped-spend';
 import { heaterJson } from '../helpers/heater-json';
 
 const table = getTableName(rateLimitCounters);
@@ -25,10 +25,10 @@ const body = heaterJson({
 
 describe('rate-limit points spent in grouped round trips', () => {
   it('counts every spend once and hands each its own running total, whatever the grouping', async () => {
-    const spender = new GroupedSpender(pool, table);
+    const spend = groupedSpender(pool, table);
     const [a, b] = [key(), key()];
     const spends = await Promise.all(
-      Array.from({ length: 40 }, (_, i) => spender.spend(i % 4 === 0 ? b : a, i % 4 === 0 ? 1 : 1 + (i % 2), 60_000)),
+      Array.from({ length: 40 }, (_, i) => spend(i % 4 === 0 ? b : a, i % 4 === 0 ? 1 : 1 + (i % 2), 60_000)),
     );
     // Key a got 30 spends: 20 of 2 points and 10 of 1 (50 in all); key b 10 spends of 1 point.
     const totalsA = spends.filter((_, i) => i % 4 !== 0).map((s) => s.consumed);
@@ -42,10 +42,10 @@ describe('rate-limit points spent in grouped round trips', () => {
   });
 
   it('starts a new window once the old one has expired', async () => {
-    const spender = new GroupedSpender(pool, table);
+    const spend = groupedSpender(pool, table);
     const k = key();
     await db.insert(rateLimitCounters).values({ key: k, points: 99, expire: Date.now() - 1_000 });
-    const spent = await spender.spend(k, 1, 60_000);
+    const spent = await spend(k, 1, 60_000);
     expect(spent.consumed).toBe(1);
     expect(spent.expire).toBeGreaterThan(Date.now() + 55_000);
   });
