@@ -1,5 +1,6 @@
 import 'server-only';
-import type { Db, Tx } from '@/db';
+import { db, type Tx } from '@/db';
+import { groupWhileBusy } from '@/db/grouped';
 import { auditLog } from '@/db/schema';
 
 export type AuditInput = {
@@ -11,18 +12,30 @@ export type AuditInput = {
   detail?: Record<string, unknown>;
 };
 
+const row = (entry: AuditInput) => ({
+  actorUserId: entry.actor?.id ?? null,
+  actorRole: entry.actor?.role ?? null,
+  action: entry.action,
+  entityType: entry.entityType,
+  entityId: entry.entityId,
+  accountId: entry.accountId ?? null,
+  detail: entry.detail ?? null,
+});
+
+/** Records an audit entry inside the caller's transaction, so the change and its record commit together. */
+export async function writeAudit(tx: Tx, entry: AuditInput): Promise<void> {
+  await tx.insert(auditLog).values(row(entry));
+}
+
+const insertGrouped = groupWhileBusy(async (entries: AuditInput[]) => {
+  await db.insert(auditLog).values(entries.map(row));
+  return entries.map(() => undefined);
+});
+
 /**
- * Records an audit entry inside the caller's transaction, so the change and its record commit together; a
- * look-up that changes nothing passes the pool itself.
+ * Records an audit entry of something that changed nothing (a look-up, a record opened), on its own: entries
+ * made while another is being written go together in one insert (db/grouped.ts). Resolves once it is stored.
  */
-export async function writeAudit(tx: Tx | Db, entry: AuditInput): Promise<void> {
-  await tx.insert(auditLog).values({
-    actorUserId: entry.actor?.id ?? null,
-    actorRole: entry.actor?.role ?? null,
-    action: entry.action,
-    entityType: entry.entityType,
-    entityId: entry.entityId,
-    accountId: entry.accountId ?? null,
-    detail: entry.detail ?? null,
-  });
+export function recordAudit(entry: AuditInput): Promise<void> {
+  return insertGrouped(entry);
 }

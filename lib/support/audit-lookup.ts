@@ -1,6 +1,5 @@
 import 'server-only';
-import { db } from '@/db';
-import { writeAudit } from '@/lib/audit/write';
+import { recordAudit } from '@/lib/audit/write';
 import type { CurrentUser } from '@/lib/auth/current-user';
 
 /** Look-ups change nothing but are still recorded: who searched or opened what, and when. */
@@ -12,6 +11,5 @@ export async function auditLookup(
   detail: Record<string, unknown>,
   accountId?: string | null,
 ) {
-  // One insert is atomic on its own: no transaction round trips around it.
-  await writeAudit(db, { actor: user, action, entityType, entityId, accountId, detail });
+  await recordAudit({ actor: user, action, entityType, entityId, accountId, detail });
 }
