@@ -76,7 +76,7 @@ export function exactBranches(t: LookupTerms, textQuery: string | null, customer
   return out;
 }
 
-/** Close spellings: the tags in use nearest the text (closeTags in ./lexicon.ts), customers by word similarity. */
+/** Close spellings: the tags in use nearest the text (closeTagsSql in ./lexicon.ts), customers by word similarity. */
 export function closeBranches(t: LookupTerms, tags: string[], customers: string[]): Branch[] {
   const out: Branch[] = [];
   if (tags.length)

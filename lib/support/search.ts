@@ -5,10 +5,10 @@ import type { CurrentUser } from '@/lib/auth/current-user';
 import { accountScope } from '@/lib/auth/guards';
 import { closeBranches, exactBranches, type Branch } from './branches';
 import { countMatches } from './count';
-import { customersNamed } from './customers';
+import { customersNamedSql } from './customers';
 import { filterConditions } from './filters';
 import { afterCondition, decodeCursor, encodeCursor, SORTS, type Cursor, type SortSpec } from './keyset';
-import { closeTags, textSearchQuery } from './lexicon';
+import { closeTagsSql, textQueryFrom, wordChoices, type WordChoice } from './lexicon';
 import { keyedPage, RELEVANCE_POOL, relevancePage, type SupportHit } from './page-query';
 import type { SupportSearch } from './schema';
 import { parseLookupText, type LookupTerms } from './terms';
@@ -45,14 +45,22 @@ type Plan = {
   floor: number;
 };
 
+/** The branches for the text as typed; its words and its customers are looked up in one round trip. */
 async function exactMatches(terms: LookupTerms): Promise<Branch[]> {
-  const [textQuery, customers] = await Promise.all([textSearchQuery(db, terms), customersNamed(db, terms.text, false)]);
-  return exactBranches(terms, textQuery, customers);
+  const words = wordChoices(terms);
+  const res = await db.execute<{ words: WordChoice[] | null; customers: string[] }>(sql`
+    select ${words ? sql`(select json_agg(c) from (${words}) c)` : sql`null::json`} as words,
+      array(${customersNamedSql(terms.text, false)}) as customers`);
+  const row = res.rows[0]!;
+  return exactBranches(terms, row.words ? textQueryFrom(terms, row.words) : null, row.customers);
 }
 
+/** The branches for close spellings: the nearest tags in use and the customers, in one round trip. */
 async function closeMatches(terms: LookupTerms): Promise<Branch[]> {
-  const [tags, customers] = await Promise.all([closeTags(db, terms.text), customersNamed(db, terms.text, true)]);
-  return closeBranches(terms, tags, customers);
+  const res = await db.execute<{ tags: string[]; customers: string[] }>(sql`
+    select (${closeTagsSql(terms.text)}) as tags, array(${customersNamedSql(terms.text, true)}) as customers`);
+  const row = res.rows[0]!;
+  return closeBranches(terms, row.tags, row.customers);
 }
 
 // The planner's row count of sizings sizes the text walk's windows and scales "about N"; it moves slowly, so
