@@ -15,13 +15,8 @@ import { heaterJson } from '../helpers/heater-json';
 
 const table = getTableName(rateLimitCounters);
 const key = () => `test.grouped:${randomUUID()}`;
-const body = heaterJson({
-  gas: 'air',
-  flowKgH: 100,
-  inletC: 20,
-  pressure: { value: 101.325, unit: 'kPa' },
-  outletC: 80,
-});
+// Air, 100 kg/h, 20 to 80 °C at one atmosphere: the helper's defaults.
+const body = heaterJson();
 
 describe('rate-limit points spent in grouped round trips', () => {
   it('counts every spend once and hands each its own running total, whatever the grouping', async () => {

@@ -12,13 +12,8 @@ import { rateLimitCounters } from '@/db/schema';
 import { purgeExpiredCounters } from '@/lib/ratelimit/store';
 import { heaterJson } from '../helpers/heater-json';
 
-const body = heaterJson({
-  gas: 'air',
-  flowKgH: 100,
-  inletC: 20,
-  pressure: { value: 101.325, unit: 'kPa' },
-  outletC: 80,
-});
+// Air, 100 kg/h, 20 to 80 °C at one atmosphere: the helper's defaults.
+const body = heaterJson();
 // A new address on every call: a random pick could land on one an earlier test used up (refused with 429).
 let addrs = Math.floor(Math.random() * 250);
 const addr = () => `198.51.100.${(addrs++ % 250) + 1}`;
